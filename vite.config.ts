@@ -1,0 +1,43 @@
+import { fileURLToPath } from 'node:url';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+import { defineConfig } from 'vitest/config';
+
+const odexShim = fileURLToPath(new URL('./node_modules/odex/src/odex.js', import.meta.url));
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias: { odex: odexShim } },
+  worker: { format: 'es' },
+  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 1500 },
+  server: { proxy: { '/api': 'http://127.0.0.1:3000' } },
+  test: {
+    server: { deps: { inline: ['kysely'] } },
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          environment: 'node',
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'cli/**/*.test.ts', 'workers/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: { name: 'api', environment: 'node', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000 },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'browser',
+          environment: 'node',
+          include: ['tests/browser/**/*.test.ts'],
+          globalSetup: ['tests/browser/global-setup.ts'],
+          testTimeout: 120_000,
+          hookTimeout: 180_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
