@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { Email, GivenPassword, Id, NewPassword, PersonName } from './fields.ts';
+import { Membership, WorkspaceName } from './workspace.ts';
+
+/** POST /api/auth/signup — creates the account and a workspace it administers. */
+export const SignUpInput = z.object({
+  name: PersonName,
+  email: Email,
+  password: NewPassword,
+  workspaceName: WorkspaceName,
+});
+export type SignUpInput = z.infer<typeof SignUpInput>;
+
+/** POST /api/auth/signin */
+export const SignInInput = z.object({ email: Email, password: GivenPassword });
+export type SignInInput = z.infer<typeof SignInInput>;
+
+/** POST /api/auth/password */
+export const PasswordChangeInput = z.object({ currentPassword: GivenPassword, newPassword: NewPassword });
+export type PasswordChangeInput = z.infer<typeof PasswordChangeInput>;
+
+/** POST /api/auth/reset/request */
+export const ResetRequestInput = z.object({ email: Email });
+export type ResetRequestInput = z.infer<typeof ResetRequestInput>;
+
+/** POST /api/auth/reset/confirm */
+export const ResetConfirmInput = z.object({ token: z.string().min(1, 'Required').max(200), password: NewPassword });
+export type ResetConfirmInput = z.infer<typeof ResetConfirmInput>;
+
+export const User = z.object({ id: Id, name: z.string(), email: z.string() });
+export type User = z.infer<typeof User>;
+
+/** GET /api/auth/me, and the answer to sign-up, sign-in and accepting an invitation. */
+export const Me = z.object({ user: User, memberships: z.array(Membership) });
+export type Me = z.infer<typeof Me>;
