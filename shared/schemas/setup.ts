@@ -1,0 +1,180 @@
+import { z } from 'zod';
+import {
+  cubicMeters,
+  kilograms,
+  meters,
+  metersPerSecond,
+  newtons,
+  newtonSecondsPerMeter,
+  newtonsPerMeter,
+  pascals,
+  squareMeters,
+} from '../units.ts';
+
+/**
+ * One corner of a vehicle, as stored, exchanged and read by `npm run sim --setup`.
+ * A plain JSON document in SI units. Positions are measured from the static ride position;
+ * travel is positive in compression (wheel towards body).
+ */
+
+type Points = ReadonlyArray<readonly [number, number]>;
+
+/** Shared check for (abscissa, force) tables: abscissa strictly rising, force never falling. */
+function checkMonotoneTable(pts: Points, ctx: z.RefinementCtx, what: string, unit: string) {
+  for (let i = 1; i < pts.length; i++) {
+    if (!(pts[i][0] > pts[i - 1][0])) {
+      ctx.addIssue({ code: 'custom', path: [i, 0], message: `${what} must rise strictly from point to point (${pts[i][0]} ${unit} after ${pts[i - 1][0]} ${unit})` });
+    }
+    if (pts[i][1] < pts[i - 1][1]) {
+      ctx.addIssue({ code: 'custom', path: [i, 1], message: `force must not fall as ${what} rises (${pts[i][1]} N after ${pts[i - 1][1]} N)` });
+    }
+  }
+}
+
+/**
+ * Force-velocity table for one direction, measured at the damper: `[piston velocity m/s, force N]`,
+ * both ≥ 0, velocities strictly increasing, forces never decreasing. The curve starts at the
+ * origin: a first point at 0 m/s must have 0 N, and when the first point is above 0 m/s the
+ * segment from (0, 0) to it is implied. Read piecewise linearly, extrapolated past the last
+ * point with the last segment's slope.
+ */
+export const DamperCurve = z
+  .array(z.tuple([metersPerSecond.nonnegative().max(20), newtons.nonnegative().max(1e6)]))
+  .min(1)
+  .max(64)
+  .superRefine((pts, ctx) => {
+    checkMonotoneTable(pts, ctx, 'velocity', 'm/s');
+    if (pts[0][0] === 0 && pts[0][1] !== 0) {
+      ctx.addIssue({ code: 'custom', path: [0, 1], message: 'a damper makes no force at rest: the point at 0 m/s must have 0 N' });
+    }
+    if (pts[pts.length - 1][0] <= 0) {
+      ctx.addIssue({ code: 'custom', path: [0, 0], message: 'needs at least one point above 0 m/s' });
+    }
+  });
+export type DamperCurve = z.infer<typeof DamperCurve>;
+
+/**
+ * Gas charge pushing the rod out. Give `force` (the rod force at the static ride position),
+ * or `pressure` with `rodArea` (force = pressure × rodArea there). With `polytropic`, the
+ * force stiffens as the rod enters: F = p0·A·(V0 / (V0 − A·x))^n, x damper compression from
+ * static; that needs `rodArea`.
+ */
+export const GasCharge = z
+  .strictObject({
+    /** Rod force at the static ride position, N. */
+    force: newtons.nonnegative().max(1e5).optional(),
+    /** Gas pressure at the static ride position, Pa (absolute charge acting on the rod). */
+    pressure: pascals.nonnegative().max(1e8).optional(),
+    /** Rod cross-section area, m². */
+    rodArea: squareMeters.positive().max(0.01).optional(),
+    /** Stiffening of the charge with rod entry. */
+    polytropic: z
+      .strictObject({
+        /** Gas volume at the static ride position, m³. */
+        volume: cubicMeters.positive().max(0.01),
+        /** Polytropic exponent n, 1 (isothermal) to 1.4 (adiabatic air/nitrogen). */
+        exponent: z.number().min(1).max(1.4),
+      })
+      .optional(),
+  })
+  .superRefine((g, ctx) => {
+    if (g.force === undefined && g.pressure === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['force'], message: 'give the gas force, or the pressure with the rod area' });
+    }
+    if (g.force !== undefined && g.pressure !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['pressure'], message: 'give either the gas force or the pressure, not both' });
+    }
+    if (g.pressure !== undefined && g.rodArea === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['rodArea'], message: 'a gas pressure needs the rod area' });
+    }
+    if (g.polytropic !== undefined && g.rodArea === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['rodArea'], message: 'polytropic stiffening needs the rod area' });
+    }
+  });
+export type GasCharge = z.infer<typeof GasCharge>;
+
+/** The damper: one table per direction plus an optional gas charge. */
+export const Damper = z.strictObject({
+  /** Force resisting compression (wheel moving towards the body), at the damper. */
+  compression: DamperCurve,
+  /** Force resisting extension (rebound), at the damper. */
+  rebound: DamperCurve,
+  gas: GasCharge.optional(),
+});
+export type Damper = z.infer<typeof Damper>;
+
+/**
+ * Force law of an end stop once engaged, as a function of its deflection δ (travel beyond the
+ * clearance), at the wheel. `table`: `[δ m, force N]` points, from an implied (0, 0),
+ * piecewise linear and extrapolated with the last slope. `polynomial`: coefficients c1, c2, …
+ * of F(δ) = c1·δ + c2·δ² + … (c1 in N/m, c2 in N/m², …), all ≥ 0 so the law is progressive.
+ */
+export const StopLaw = z.discriminatedUnion('kind', [
+  z.strictObject({
+    kind: z.literal('table'),
+    points: z
+      .array(z.tuple([meters.positive().max(1), newtons.nonnegative().max(1e7)]))
+      .min(1)
+      .max(64)
+      .superRefine((pts, ctx) => checkMonotoneTable(pts, ctx, 'deflection', 'm')),
+  }),
+  z.strictObject({
+    kind: z.literal('polynomial'),
+    coefficients: z
+      .array(z.number().nonnegative().max(1e15))
+      .min(1)
+      .max(6)
+      .refine((c) => c.some((x) => x > 0), 'at least one coefficient must be above 0'),
+  }),
+]);
+export type StopLaw = z.infer<typeof StopLaw>;
+
+/** A bump stop (engages in compression) or rebound stop (engages in extension), at the wheel. */
+export const EndStop = z.strictObject({
+  /** Free wheel travel from the static position before the stop touches, m. */
+  clearance: meters.nonnegative().max(1),
+  law: StopLaw,
+});
+export type EndStop = z.infer<typeof EndStop>;
+
+/** Wheel travel available from the static position, m. */
+export const Stroke = z.strictObject({
+  /** Towards the body (bump), m. */
+  compression: meters.positive().max(1),
+  /** Away from the body (rebound), m. */
+  extension: meters.positive().max(1),
+});
+export type Stroke = z.infer<typeof Stroke>;
+
+export const Setup = z.strictObject({
+  /** Display name, e.g. "Pipit front, baseline". */
+  name: z.string().trim().min(1).max(120),
+  /** The corner's share of the body mass, kg. */
+  sprungMass: kilograms.positive().max(5000),
+  /** Wheel, hub, brake and the moving part of the links, kg. */
+  unsprungMass: kilograms.positive().max(1000),
+  /** Coil spring rate at the spring, N/m; the wheel rate is springRate × motionRatio². */
+  springRate: newtonsPerMeter.positive().max(1e7),
+  /** Damper and spring travel per unit wheel travel (dimensionless), default 1. */
+  motionRatio: z.number().min(0.1).max(3).default(1),
+  /** Tyre vertical rate, N/m. */
+  tyreRate: newtonsPerMeter.positive().max(1e8),
+  /** Tyre vertical damping, N·s/m, default 0. */
+  tyreDamping: newtonSecondsPerMeter.nonnegative().max(1e5).default(0),
+  /**
+   * Length over which the tyre averages the road (a simple enveloping filter), m.
+   * Omit for point contact.
+   */
+  tyreFootprint: meters.positive().max(1).optional(),
+  damper: Damper,
+  bumpStop: EndStop.optional(),
+  reboundStop: EndStop.optional(),
+  /** Wheel travel available from static, used for the stroke-used figures. */
+  stroke: Stroke.optional(),
+  /** Free text. */
+  notes: z.string().max(4000).optional(),
+});
+/** A parsed setup (branded SI numbers, defaults filled). */
+export type Setup = z.infer<typeof Setup>;
+/** What a file or form may contain before parsing (plain numbers, defaults optional). */
+export type SetupInput = z.input<typeof Setup>;
