@@ -8,6 +8,7 @@ import {
   newtonSecondsPerMeter,
   newtonsPerMeter,
   pascals,
+  asNewtonSecondsPerMeter,
   squareMeters,
 } from '../units.ts';
 
@@ -160,7 +161,7 @@ export const Setup = z.strictObject({
   /** Tyre vertical rate, N/m. */
   tyreRate: newtonsPerMeter.positive().max(1e8),
   /** Tyre vertical damping, N·s/m, default 0. */
-  tyreDamping: newtonSecondsPerMeter.nonnegative().max(1e5).default(0),
+  tyreDamping: newtonSecondsPerMeter.nonnegative().max(1e5).default(asNewtonSecondsPerMeter(0)),
   /**
    * Length over which the tyre averages the road (a simple enveloping filter), m.
    * Omit for point contact.
