@@ -16,7 +16,7 @@ export function symmetricHistogram(x: Float64Array, halfWidth: number, bins: num
     counts[k]++;
   }
   const edges = new Array<number>(bins + 1);
-  for (let k = 0; k <= bins; k++) edges[k] = -halfWidth + (2 * halfWidth * k) / bins;
+  for (let k = 0; k <= bins; k++) edges[k] = halfWidth * ((2 * k) / bins - 1);
   return { edges, counts };
 }
 
