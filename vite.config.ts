@@ -19,7 +19,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           environment: 'node',
-          include: ['tests/lint/**/*.test.ts', 'shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'cli/**/*.test.ts', 'workers/**/*.test.ts'],
+          include: ['tests/lint/**/*.test.ts', 'tests/reference/**/*.test.ts', 'shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'cli/**/*.test.ts', 'workers/**/*.test.ts'],
         },
       },
       {
