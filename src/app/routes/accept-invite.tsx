@@ -1,0 +1,91 @@
+import { Link, useNavigate, useParams } from 'react-router';
+import type { Me } from '../../../shared/schemas/account.ts';
+import { Button } from '../../components/ui/button.tsx';
+import { Notice } from '../../components/ui/notice.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
+import { useMe } from '../../features/auth/api/get-me.ts';
+import { useInvitation } from '../../features/auth/api/invitation.ts';
+import { useSignOut } from '../../features/auth/api/sign-out.ts';
+import { AcceptAsNewAccount, AcceptAsSignedIn } from '../../features/auth/components/accept-invitation-form.tsx';
+import { AuthLayout } from '../layouts/auth-layout.tsx';
+import { landingPath } from './landing.ts';
+
+const linkClass = 'font-medium text-accent underline decoration-accent/40 underline-offset-2 hover:decoration-accent';
+
+export function AcceptInviteRoute() {
+  const { token = '' } = useParams();
+  const navigate = useNavigate();
+  const invitation = useInvitation(token);
+  const me = useMe();
+  const signOut = useSignOut();
+
+  if (invitation.isPending || me.isPending) {
+    return (
+      <AuthLayout title="Invitation">
+        <Loading what="the invitation" />
+      </AuthLayout>
+    );
+  }
+  if (invitation.isError) {
+    const dead = invitation.error.code === 'gone' || invitation.error.code === 'not_found';
+    return (
+      <AuthLayout title="Invitation">
+        <Notice tone="signal" title={dead ? 'This invitation no longer works' : 'The invitation did not load'}>
+          {dead ? 'It has been used, withdrawn, or it expired (links work for 7 days). Ask the workspace admin to send a new one.' : invitation.error.message}
+        </Notice>
+      </AuthLayout>
+    );
+  }
+
+  const inv = invitation.data;
+  const signedInAs = me.data?.user.email;
+  const onAccepted = (joined: Me) => {
+    const target = joined.memberships.find((m) => m.workspaceName === inv.workspaceName);
+    navigate(target ? `/w/${target.workspaceId}` : landingPath(joined), { replace: true });
+  };
+
+  let body;
+  if (!inv.accountExists) {
+    body = (
+      <>
+        {signedInAs && <Notice className="mb-4">You are signed in as {signedInAs}. Accepting creates a new account for {inv.email} and signs you in as it.</Notice>}
+        <AcceptAsNewAccount token={token} email={inv.email} onAccepted={onAccepted} />
+      </>
+    );
+  } else if (signedInAs === inv.email) {
+    body = <AcceptAsSignedIn token={token} onAccepted={onAccepted} />;
+  } else if (signedInAs) {
+    body = (
+      <Notice tone="signal" title={`This invitation is for ${inv.email}`}>
+        <p>You are signed in as {signedInAs}. Sign out, then sign in as {inv.email} to accept.</p>
+        <Button size="sm" className="mt-2" busy={signOut.isPending} onClick={() => signOut.mutate()}>
+          Sign out
+        </Button>
+      </Notice>
+    );
+  } else {
+    body = (
+      <p className="text-sm">
+        {inv.email} already has a Ridewright account.{' '}
+        <Link to={`/signin?next=${encodeURIComponent(`/invite/${token}`)}`} className={linkClass}>
+          Sign in to accept
+        </Link>
+        .
+      </p>
+    );
+  }
+
+  return (
+    <AuthLayout
+      title={`Join ${inv.workspaceName}`}
+      intro={
+        <>
+          {inv.invitedBy} invited <strong className="text-ink">{inv.email}</strong> to this workspace as {inv.role === 'admin' || inv.role === 'engineer' ? 'an' : 'a'}{' '}
+          <strong className="text-ink">{inv.role}</strong>.
+        </>
+      }
+    >
+      {body}
+    </AuthLayout>
+  );
+}

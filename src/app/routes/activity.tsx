@@ -1,0 +1,44 @@
+import { Button } from '../../components/ui/button.tsx';
+import { EmptyState } from '../../components/ui/empty-state.tsx';
+import { Notice } from '../../components/ui/notice.tsx';
+import { PageHeader } from '../../components/ui/page-header.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
+import { useAudit } from '../../features/activity/api/get-audit.ts';
+import { AuditTable } from '../../features/activity/components/audit-table.tsx';
+import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+export function ActivityRoute() {
+  const workspace = useWorkspace();
+  const audit = useAudit(workspace.id);
+
+  let body;
+  if (!workspace.can('admin')) body = <Notice>Only admins can read the activity log of a workspace.</Notice>;
+  else if (audit.isPending) body = <Loading what="activity" />;
+  else if (audit.isError) body = <Notice tone="danger">{audit.error.message}</Notice>;
+  else {
+    const entries = audit.data.pages.flatMap((p) => p.entries);
+    body =
+      entries.length === 0 ? (
+        <EmptyState title="No changes recorded yet" />
+      ) : (
+        <>
+          <AuditTable entries={entries} />
+          <div className="mt-3 flex items-center gap-3 text-sm text-ink-faint">
+            <span className="figures">{entries.length}</span> entries shown
+            {audit.hasNextPage && (
+              <Button size="sm" busy={audit.isFetchingNextPage} onClick={() => void audit.fetchNextPage()}>
+                Show older
+              </Button>
+            )}
+          </div>
+        </>
+      );
+  }
+
+  return (
+    <>
+      <PageHeader title="Activity" detail="Every change made in this workspace: who made it, what it was, and when." />
+      {body}
+    </>
+  );
+}

@@ -1,0 +1,48 @@
+import { PageHeader, Section } from '../../components/ui/page-header.tsx';
+import { Notice } from '../../components/ui/notice.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
+import { useMe } from '../../features/auth/api/get-me.ts';
+import { useMembers } from '../../features/team/api/get-members.ts';
+import { InvitationsTable } from '../../features/team/components/invitations-table.tsx';
+import { InviteForm } from '../../features/team/components/invite-form.tsx';
+import { MembersTable } from '../../features/team/components/members-table.tsx';
+import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+export function TeamRoute() {
+  const workspace = useWorkspace();
+  const me = useMe().data;
+  const members = useMembers(workspace.id);
+  const isAdmin = workspace.can('admin');
+
+  return (
+    <>
+      <PageHeader
+        title="Team"
+        detail={
+          isAdmin
+            ? 'Invite people by e-mail, set what each person may do, and remove access.'
+            : 'Who works in this workspace. Admins manage members and roles.'
+        }
+      />
+      {isAdmin && (
+        <Section title="Invite someone">
+          <InviteForm workspaceId={workspace.id} />
+        </Section>
+      )}
+      <Section title="Members">
+        {members.isPending ? (
+          <Loading what="members" />
+        ) : members.isError ? (
+          <Notice tone="danger">{members.error.message}</Notice>
+        ) : (
+          <MembersTable workspaceId={workspace.id} members={members.data.members} currentUserId={me?.user.id ?? ''} canManage={isAdmin} />
+        )}
+      </Section>
+      {isAdmin && members.data && members.data.invitations.length > 0 && (
+        <Section title="Waiting for an answer">
+          <InvitationsTable workspaceId={workspace.id} invitations={members.data.invitations} />
+        </Section>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { OutboxResponse } from '../../../../shared/schemas/outbox.ts';
+import { api } from '../../../lib/api-client.ts';
+
+export const getOutbox = () => api.get('/api/outbox', OutboxResponse);
+
+/** Mail the local sink caught; refreshed every few seconds while the page is open. */
+export const outboxQueryOptions = () =>
+  queryOptions({ queryKey: ['outbox'], queryFn: getOutbox, staleTime: 0, refetchInterval: 5_000 });
+
+export const useOutbox = () => useQuery(outboxQueryOptions());
