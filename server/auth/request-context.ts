@@ -1,0 +1,46 @@
+import type { Request } from 'express';
+import type { Role } from '../../shared/schemas/workspace.ts';
+
+/** The signed-in caller, set by `requireUser`. */
+export interface SessionUser {
+  id: string;
+  name: string;
+  email: string;
+  sessionVersion: number;
+}
+
+/** The caller's membership of the workspace in the path, set by `requireMember`. */
+export interface WorkspaceContext {
+  workspaceId: string;
+  workspaceName: string;
+  role: Role;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Request {
+      user?: SessionUser;
+      workspace?: WorkspaceContext;
+    }
+  }
+}
+
+/** The caller on a route declared with access other than 'public'. */
+export function userOf(req: Request): SessionUser {
+  if (!req.user) throw new Error(`route ${req.method} ${req.path} reads the user but is not behind requireUser`);
+  return req.user;
+}
+
+/** The caller's workspace membership on a route declared with a role. */
+export function workspaceOf(req: Request): WorkspaceContext {
+  if (!req.workspace) throw new Error(`route ${req.method} ${req.path} reads the workspace but declares no role`);
+  return req.workspace;
+}
+
+/** A named `:param` of the route path (Express 5 types params as string | string[] because of splats). */
+export function pathParam(req: Request, name: string): string {
+  const value = req.params[name];
+  if (typeof value !== 'string') throw new Error(`route ${req.method} ${req.path} has no :${name}`);
+  return value;
+}

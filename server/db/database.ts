@@ -1,0 +1,41 @@
+import { mkdirSync } from 'node:fs';
+import { dirname } from 'node:path';
+import SQLite from 'better-sqlite3';
+import { Kysely, SqliteDialect, type Transaction } from 'kysely';
+import type { AuditLogTable } from './audit-log-table.ts';
+import type { OutboxMessageTable } from './outbox-message-table.ts';
+import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
+import type { UserTable } from './user-table.ts';
+import type { MembershipTable, WorkspaceTable } from './workspace-table.ts';
+
+/**
+ * Every table, keyed by its SQL name. A feature that adds a migration adds its table
+ * interface (in `server/db/<name>-table.ts`) here too.
+ */
+export interface Database {
+  user: UserTable;
+  workspace: WorkspaceTable;
+  membership: MembershipTable;
+  invitation: InvitationTable;
+  password_reset: PasswordResetTable;
+  audit_log: AuditLogTable;
+  outbox_message: OutboxMessageTable;
+}
+
+export type Db = Kysely<Database>;
+/** What repositories take as their first argument: the database or an open transaction. */
+export type Queryable = Kysely<Database> | Transaction<Database>;
+
+/**
+ * Opens (creating if needed) the SQLite file at `path`, or an in-memory database for `:memory:`.
+ * WAL lets readers run beside the writer; the busy timeout makes a second process wait instead
+ * of failing at once.
+ */
+export function openDatabase(path: string): Db {
+  if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
+  const sqlite = new SQLite(path);
+  sqlite.pragma('journal_mode = WAL');
+  sqlite.pragma('foreign_keys = ON');
+  sqlite.pragma('busy_timeout = 5000');
+  return new Kysely<Database>({ dialect: new SqliteDialect({ database: sqlite }) });
+}

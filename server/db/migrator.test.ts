@@ -1,0 +1,34 @@
+import { readdirSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { sql } from 'kysely';
+import { describe, expect, it } from 'vitest';
+import { openDatabase } from './database.ts';
+import { createMigrator, migrateToLatest, migrations } from './migrator.ts';
+
+describe('migrator', () => {
+  it('lists every file in migrations/', () => {
+    const dir = fileURLToPath(new URL('../../migrations/', import.meta.url));
+    const files = readdirSync(dir)
+      .filter((f) => f.endsWith('.ts') && !f.endsWith('.test.ts'))
+      .map((f) => f.replace(/\.ts$/, ''));
+    expect(Object.keys(migrations).sort()).toEqual(files.sort());
+  });
+
+  it('migrates a fresh database up, then all the way down', async () => {
+    const db = openDatabase(':memory:');
+    const up = await migrateToLatest(db);
+    expect(up.error).toBeUndefined();
+    expect(up.results?.map((r) => r.status)).toEqual(Object.keys(migrations).map(() => 'Success'));
+    const fk = await sql<{ foreign_keys: number }>`pragma foreign_keys`.execute(db);
+    expect(fk.rows[0]?.foreign_keys).toBe(1);
+    const again = await migrateToLatest(db);
+    expect(again.results).toEqual([]);
+
+    const { NO_MIGRATIONS } = await import('kysely');
+    const down = await createMigrator(db).migrateTo(NO_MIGRATIONS);
+    expect(down.error).toBeUndefined();
+    const tables = await sql<{ name: string }>`select name from sqlite_master where type = 'table' and name not like 'kysely_%' and name not like 'sqlite_%'`.execute(db);
+    expect(tables.rows).toEqual([]);
+    await db.destroy();
+  });
+});

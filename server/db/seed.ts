@@ -1,0 +1,20 @@
+import { loadConfig } from '../config.ts';
+import { openDatabase } from './database.ts';
+import { migrateToLatest } from './migrator.ts';
+import { DEMO_WORKSPACE_NAME } from './seed/demo-people.ts';
+import { seedDemo } from './seed/seed-demo.ts';
+
+// `npm run seed`: the demo workspace, only when the database has no users yet.
+const config = loadConfig(process.env);
+const db = openDatabase(config.dbPath);
+try {
+  const { error } = await migrateToLatest(db);
+  if (error) throw error;
+  const { seeded } = await seedDemo(db);
+  console.log(seeded ? `seeded demo workspace "${DEMO_WORKSPACE_NAME}" in ${config.dbPath}` : `${config.dbPath} already has users; nothing seeded`);
+} catch (err) {
+  console.error('seed failed:', err);
+  process.exitCode = 1;
+} finally {
+  await db.destroy();
+}

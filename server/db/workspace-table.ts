@@ -1,0 +1,19 @@
+import type { Insertable, Selectable } from 'kysely';
+import type { Role } from '../../shared/schemas/workspace.ts';
+
+export interface WorkspaceTable {
+  id: string;
+  name: string;
+  created_at: string;
+}
+export type WorkspaceRow = Selectable<WorkspaceTable>;
+export type NewWorkspaceRow = Insertable<WorkspaceTable>;
+
+export interface MembershipTable {
+  workspace_id: string;
+  user_id: string;
+  role: Role;
+  created_at: string;
+}
+export type MembershipRow = Selectable<MembershipTable>;
+export type NewMembershipRow = Insertable<MembershipTable>;

@@ -1,0 +1,49 @@
+import type { Express } from 'express';
+import pino, { type Logger } from 'pino';
+import type { Db } from './db/database.ts';
+import type { Mailer } from './mail/mailer.ts';
+
+/** How the app serves the client outside /api. */
+export type ClientServing =
+  /** Built files from `distDir` with the SPA fallback; a plain page when index.html is missing. */
+  | { kind: 'static'; distDir: string }
+  /** Something else mounts after the API (e.g. Vite's middleware in development). */
+  | { kind: 'custom'; mount: (app: Express) => void }
+  /** API only (tests). */
+  | { kind: 'none' };
+
+/** Everything the app needs from outside; built by main.ts, dev tooling and the test helpers. */
+export interface AppDeps {
+  db: Db;
+  /** HS256 key for session tokens. */
+  secret: Uint8Array;
+  /** Base of links in e-mails, without a trailing slash. */
+  publicUrl: string;
+  mailer: Mailer;
+  demoMode: boolean;
+  /** True while the local mail sink runs: enables GET /api/outbox. */
+  outboxEnabled: boolean;
+  /** Current time; tests pass a clock they can move to check expiry. */
+  clock: () => Date;
+  logger: Logger;
+  /** Requests per 15 minutes per address on the sensitive public routes; 0 disables. */
+  rateLimit: number;
+  /** Express `trust proxy` setting. */
+  trustProxy: boolean | number | string;
+  client: ClientServing;
+}
+
+export type AppOptions = Pick<AppDeps, 'db' | 'secret' | 'publicUrl' | 'mailer'> & Partial<AppDeps>;
+
+export function resolveDeps(options: AppOptions): AppDeps {
+  return {
+    demoMode: false,
+    outboxEnabled: false,
+    clock: () => new Date(),
+    logger: pino({ level: 'silent' }),
+    rateLimit: 100,
+    trustProxy: false,
+    client: { kind: 'none' },
+    ...options,
+  };
+}

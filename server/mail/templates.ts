@@ -1,0 +1,38 @@
+import type { Role } from '../../shared/schemas/workspace.ts';
+import type { MailMessage } from './mailer.ts';
+
+// Plain-text mails in the product's own words. Each template returns everything but the recipient.
+type Template = Omit<MailMessage, 'to'>;
+
+const roleWords: Record<Role, string> = {
+  viewer: 'a viewer (you can read everything, change nothing)',
+  engineer: 'an engineer (you can build setups, roads, runs and studies)',
+  lead: 'a lead (an engineer who also approves target sheets and picks baselines)',
+  admin: 'an administrator (you also manage members and roles)',
+};
+
+const footer = '\n-- \nRidewright, the ride and damping workbench.\nIf this message was not meant for you, ignore it: nothing happens until the link is used.\n';
+
+const when = (d: Date) => d.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
+
+export function invitationMail(args: { workspaceName: string; invitedBy: string; role: Role; link: string; expiresAt: Date }): Template {
+  return {
+    subject: `${args.invitedBy} asks you to join "${args.workspaceName}" on Ridewright`,
+    text:
+      `Hello,\n\n${args.invitedBy} would like you on the "${args.workspaceName}" workspace as ${roleWords[args.role]}.\n\n` +
+      `Open this link to accept (it works once, until ${when(args.expiresAt)}):\n\n${args.link}\n\n` +
+      `If you have no Ridewright account yet, the page lets you create one.\n` +
+      footer,
+  };
+}
+
+export function passwordResetMail(args: { name: string; link: string; expiresAt: Date }): Template {
+  return {
+    subject: 'Choose a new Ridewright password',
+    text:
+      `Hello ${args.name},\n\nSomeone (we hope you) asked to set a new password for this address.\n\n` +
+      `Open this link to choose one (it works once, until ${when(args.expiresAt)}):\n\n${args.link}\n\n` +
+      `Your current password keeps working until a new one is saved.\n` +
+      footer,
+  };
+}
