@@ -1,0 +1,10 @@
+import type { MatrixEntries } from '../helpers/route-matrix.ts';
+import { platformEntries } from './platform-entries.ts';
+
+/**
+ * Every matrix entry. A feature that registers routes adds `tests/api/matrix/<feature>-entries.ts`
+ * and spreads it here; the route × role test fails for any route without an entry.
+ */
+export const allEntries: MatrixEntries = {
+  ...platformEntries,
+};
