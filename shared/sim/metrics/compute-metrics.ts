@@ -1,9 +1,9 @@
 import type { Metrics } from '../../schemas/metrics.ts';
 import type { TraceColumns } from '../trace.ts';
-import { comfortGrading, vdv, wkFilter } from './iso2631.ts';
+import { comfortGrading, rmsAndVdv, wkFilter } from './iso2631.ts';
 import { niceHalfWidth, symmetricHistogram, velocityBands } from './histogram.ts';
 import { createWelch, defaultSegmentLength } from './spectra.ts';
-import { countAbove, dot, extremes, rms } from './stats.ts';
+import { countAbove, dot, summary } from './stats.ts';
 
 export interface MetricOptions {
   /** Start of the analysed part, s; earlier samples only warm the Wk filter. */
@@ -31,7 +31,7 @@ export function firstSample(trace: TraceColumns, settleTime: number): number {
   return from;
 }
 
-/** Ride and grip figures of one trace; one pass per column, nothing allocated per sample. */
+/** Ride and grip figures of one trace; a few passes per column, nothing allocated per sample. */
 export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metrics {
   const { dt } = trace;
   const from = firstSample(trace, opts.settleTime);
@@ -39,20 +39,20 @@ export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metric
   const analysedTime = n * dt;
   const fz0 = opts.staticTyreLoad;
 
-  const accel = extremes(trace.bodyAccel, from);
-  const accelRms = rms(trace.bodyAccel, from);
+  const accel = summary(trace.bodyAccel, from);
+  const accelRms = accel.rms;
   // The filter runs from the first sample so it has settled by `from`.
-  const weighted = wkFilter(trace.bodyAccel, dt);
-  const aw = rms(weighted, from);
+  const weighted = rmsAndVdv(wkFilter(trace.bodyAccel, dt), dt, from);
+  const aw = weighted.rms;
 
-  const load = extremes(trace.tyreLoad, from);
-  const loadRms = rms(trace.tyreLoad, from, fz0);
+  const load = summary(trace.tyreLoad, from, fz0);
+  const loadRms = load.rms;
   const inContact = countAbove(trace.tyreLoad, 0, from);
 
-  const travel = extremes(trace.travel, from);
+  const travel = summary(trace.travel, from);
 
   const v = trace.damperVelocity;
-  const vPeak = extremes(v, from).peak;
+  const vel = summary(v, from);
   const bands = opts.velocityBands ?? { low: 0.05, high: 0.25 };
   const energy = dot(trace.damperForce, v, from) * dt;
 
@@ -62,20 +62,20 @@ export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metric
     bodyAccelPeak: accel.peak,
     bodyAccelCrest: accelRms > 0 ? accel.peak / accelRms : 0,
     bodyAccelWkRms: aw,
-    vdv: vdv(weighted, dt, from),
+    vdv: weighted.vdv,
     comfort: comfortGrading(aw),
     tyreLoadStatic: fz0,
     tyreLoadRms: loadRms,
     tyreLoadRatio: loadRms / fz0,
     tyreLoadMin: Math.max(0, load.min),
     liftOffFraction: (n - inContact) / n,
-    travelRms: rms(trace.travel, from),
+    travelRms: travel.rms,
     travelMaxCompression: travel.max,
     travelMaxExtension: -travel.min,
     bumpStopTime: countAbove(trace.bumpStopForce, 0, from) * dt,
     reboundStopTime: countAbove(trace.reboundStopForce, 0, from) * dt,
-    damperVelocityRms: rms(v, from),
-    damperVelocityHistogram: symmetricHistogram(v, niceHalfWidth(vPeak), opts.histogramBins ?? 40, from),
+    damperVelocityRms: vel.rms,
+    damperVelocityHistogram: symmetricHistogram(v, niceHalfWidth(vel.peak), opts.histogramBins ?? 40, from),
     damperVelocityBands: velocityBands(v, bands.low, bands.high, from),
     damperPowerMean: energy / analysedTime,
     damperEnergy: energy,

@@ -37,11 +37,13 @@ export function velocityBands(v: Float64Array, low: number, high: number, from =
   let nLow = 0;
   let nHigh = 0;
   let nComp = 0;
+  // Conditional adds rather than branches: velocities alternate bands often.
   for (let i = from; i < v.length; i++) {
-    const a = Math.abs(v[i]);
-    if (a < low) nLow++;
-    else if (a >= high) nHigh++;
-    if (v[i] > 0) nComp++;
+    const x = v[i];
+    const a = Math.abs(x);
+    nLow += a < low ? 1 : 0;
+    nHigh += a >= high ? 1 : 0;
+    nComp += x > 0 ? 1 : 0;
   }
   const n = v.length - from;
   if (n <= 0) return { lowEdge: low, highEdge: high, low: 0, mid: 0, high: 0, compression: 0 };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { comfortGrading, vdv, wkDigitalResponse, wkFilter, wkResponse } from './iso2631.ts';
+import { comfortGrading, rmsAndVdv, vdv, wkDigitalResponse, wkFilter, wkResponse } from './iso2631.ts';
 
 describe('Wk digital filter against the analog weighting', () => {
   const rel = (f: number, fs: number) => Math.abs(wkDigitalResponse(f, 1 / fs) / wkResponse(f) - 1);
@@ -34,6 +34,15 @@ describe('vibration dose value', () => {
     const A = 1.7;
     const x = Float64Array.from({ length: T / dt }, (_, i) => A * Math.sin(2 * Math.PI * 2 * i * dt));
     expect(vdv(x, dt)).toBeCloseTo(A * ((3 * T) / 8) ** 0.25, 6);
+  });
+
+  it('rmsAndVdv matches the separate RMS and VDV', () => {
+    const x = Float64Array.from({ length: 500 }, (_, i) => Math.sin(i / 7) + 0.2 * Math.cos(i / 3));
+    const both = rmsAndVdv(x, 0.01, 50);
+    expect(both.vdv).toBeCloseTo(vdv(x, 0.01, 50), 12);
+    let s = 0;
+    for (let i = 50; i < 500; i++) s += x[i] * x[i];
+    expect(both.rms).toBeCloseTo(Math.sqrt(s / 450), 12);
   });
 
   it('ignores samples before `from`', () => {

@@ -117,23 +117,48 @@ export function wkDigitalResponse(fHz: number, dt: number): number {
 
 /**
  * Wk-weighted copy of an acceleration sampled every `dt`, filtered from rest (transposed
- * direct form II per stage). Discard the first second or so: the 0.4 Hz high-pass settles with
- * a time constant near 0.6 s.
+ * direct form II, the four sections fused into one pass with coefficients in locals: this runs
+ * on every trace). Discard the first second or so: the 0.4 Hz high-pass settles with a time
+ * constant near 0.6 s.
  */
 export function wkFilter(x: Float64Array, dt: number, out: Float64Array = new Float64Array(x.length)): Float64Array {
-  if (out !== x) out.set(x);
-  for (const q of wkDigitalStages(dt)) {
-    let s1 = 0;
-    let s2 = 0;
-    for (let i = 0; i < out.length; i++) {
-      const u = out[i];
-      const y = q.b0 * u + s1;
-      s1 = q.b1 * u - q.a1 * y + s2;
-      s2 = q.b2 * u - q.a2 * y;
-      out[i] = y;
-    }
+  const [p, q, r, u] = wkDigitalStages(dt);
+  const pb0 = p.b0, pb1 = p.b1, pb2 = p.b2, pa1 = p.a1, pa2 = p.a2;
+  const qb0 = q.b0, qb1 = q.b1, qb2 = q.b2, qa1 = q.a1, qa2 = q.a2;
+  const rb0 = r.b0, rb1 = r.b1, rb2 = r.b2, ra1 = r.a1, ra2 = r.a2;
+  const ub0 = u.b0, ub1 = u.b1, ub2 = u.b2, ua1 = u.a1, ua2 = u.a2;
+  let p1 = 0, p2 = 0, q1 = 0, q2 = 0, r1 = 0, r2 = 0, u1 = 0, u2 = 0;
+  const n = x.length;
+  for (let i = 0; i < n; i++) {
+    const v0 = x[i];
+    const v1 = pb0 * v0 + p1;
+    p1 = pb1 * v0 - pa1 * v1 + p2;
+    p2 = pb2 * v0 - pa2 * v1;
+    const v2 = qb0 * v1 + q1;
+    q1 = qb1 * v1 - qa1 * v2 + q2;
+    q2 = qb2 * v1 - qa2 * v2;
+    const v3 = rb0 * v2 + r1;
+    r1 = rb1 * v2 - ra1 * v3 + r2;
+    r2 = rb2 * v2 - ra2 * v3;
+    const v4 = ub0 * v3 + u1;
+    u1 = ub1 * v3 - ua1 * v4 + u2;
+    u2 = ub2 * v3 - ua2 * v4;
+    out[i] = v4;
   }
   return out;
+}
+
+/** Weighted RMS `aw` and VDV of a Wk-filtered signal over samples [from, end), in one pass. */
+export function rmsAndVdv(weighted: Float64Array, dt: number, from = 0): { rms: number; vdv: number } {
+  let s2 = 0;
+  let s4 = 0;
+  for (let i = from; i < weighted.length; i++) {
+    const a2 = weighted[i] * weighted[i];
+    s2 += a2;
+    s4 += a2 * a2;
+  }
+  const n = weighted.length - from;
+  return { rms: n > 0 ? Math.sqrt(s2 / n) : 0, vdv: Math.pow(s4 * dt, 0.25) };
 }
 
 /** Vibration dose value (∫ a⁴ dt)^¼ over samples [from, end), m/s^1.75. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { countAbove, dot, extremes, mean, rms } from './stats.ts';
+import { countAbove, dot, extremes, mean, rms, summary } from './stats.ts';
 
 const x = Float64Array.from([10, -10, 3, -4, 0, 5]);
 
@@ -20,7 +20,12 @@ describe('stats over a sample range', () => {
     expect(dot(x, x, 4)).toBe(25);
   });
 
+  it('summary gives the same RMS and extremes in one pass', () => {
+    expect(summary(x, 1, 2)).toEqual({ ...extremes(x, 1), rms: expect.closeTo(rms(x, 1, 2), 12) });
+  });
+
   it('returns zeros on an empty range', () => {
+    expect(summary(x, 6)).toEqual({ min: 0, max: 0, peak: 0, rms: 0 });
     expect(rms(x, 6)).toBe(0);
     expect(extremes(x, 6)).toEqual({ min: 0, max: 0, peak: 0 });
   });

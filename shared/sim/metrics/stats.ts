@@ -30,6 +30,27 @@ export interface Extremes {
   peak: number;
 }
 
+/** RMS about `about` plus the extremes, in one pass. */
+export interface Summary extends Extremes {
+  rms: number;
+}
+
+export function summary(x: Float64Array, from = 0, about = 0): Summary {
+  let min = Infinity;
+  let max = -Infinity;
+  let sum = 0;
+  for (let i = from; i < x.length; i++) {
+    const v = x[i];
+    min = v < min ? v : min;
+    max = v > max ? v : max;
+    const d = v - about;
+    sum += d * d;
+  }
+  const n = x.length - from;
+  if (n <= 0) return { min: 0, max: 0, peak: 0, rms: 0 };
+  return { min, max, peak: Math.max(-min, max), rms: Math.sqrt(sum / n) };
+}
+
 export function extremes(x: Float64Array, from = 0): Extremes {
   let min = Infinity;
   let max = -Infinity;
