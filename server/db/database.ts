@@ -4,6 +4,8 @@ import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type Transaction } from 'kysely';
 import type { AuditLogTable } from './audit-log-table.ts';
 import type { OutboxMessageTable } from './outbox-message-table.ts';
+import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
+import type { ShareLinkTable } from './share-link-table.ts';
 import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
 import type { UserTable } from './user-table.ts';
 import type { MembershipTable, WorkspaceTable } from './workspace-table.ts';
@@ -20,6 +22,10 @@ export interface Database {
   password_reset: PasswordResetTable;
   audit_log: AuditLogTable;
   outbox_message: OutboxMessageTable;
+  setup: SetupTable;
+  setup_revision: SetupRevisionTable;
+  vehicle: VehicleTable;
+  share_link: ShareLinkTable;
 }
 
 export type Db = Kysely<Database>;

@@ -1,5 +1,6 @@
 import { type Kysely, type Migration, type MigrationResultSet, Migrator } from 'kysely';
 import * as m0001 from '../../migrations/0001_init.ts';
+import * as m0002 from '../../migrations/0002_setups.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -8,6 +9,7 @@ import * as m0001 from '../../migrations/0001_init.ts';
  */
 export const migrations: Record<string, Migration> = {
   '0001_init': m0001,
+  '0002_setups': m0002,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {
