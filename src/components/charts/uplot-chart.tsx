@@ -1,0 +1,100 @@
+/**
+ * `<UChart>`: the one uPlot wrapper of the app.
+ *
+ * Usage:
+ * ```tsx
+ * const theme = useChartTheme();
+ * const options = useMemo<ChartOptions>(() => ({
+ *   height: 240,
+ *   scales: { x: linearX },                       // or logLogScales() for a PSD
+ *   axes: [themedAxis(theme, { label: 'Time', unit: 's' }), themedAxis(theme, { label: 'Body acceleration', unit: 'm/s²' })],
+ *   series: [{ label: 'Time' }, themedSeries({ label: 'Body', unit: 'm/s²', color: seriesColor(theme, 0) })],
+ *   cursor: syncedCursor(),                        // stacked time charts share one cursor
+ * }), [theme]);
+ * <UChart options={options} data={[t, a]} exportName="body-acceleration" onReady={(u) => (ref.current = u)} />
+ * ```
+ * - Memoise `options`: a new options object re-creates the chart; a new `data` array only calls
+ *   `setData` on the existing one.
+ * - Width follows the container (ResizeObserver); height comes from `options.height` (260 px default).
+ * - Clicking a legend entry toggles its series (uPlot's own legend).
+ * - `exportName` adds a small "Save PNG" button; `exportPng(chart)` does the same from code.
+ */
+import { useEffect, useMemo, useRef } from 'react';
+import uPlot from 'uplot';
+import 'uplot/dist/uPlot.min.css';
+import './uplot-chart.css';
+import { readChartTheme, type ChartTheme } from './chart-theme.ts';
+import { exportPng } from './export-png.ts';
+
+export type ChartOptions = Omit<uPlot.Options, 'width' | 'height'> & { height?: number };
+
+export interface UChartProps {
+  options: ChartOptions;
+  data: uPlot.AlignedData;
+  className?: string;
+  /** Called with the chart after each (re)creation, e.g. to keep a ref for hooks or export. */
+  onReady?: (chart: uPlot) => void;
+  /** Rescale axes to the new data on every update (default). Off keeps the user's zoom. */
+  resetScales?: boolean;
+  /** Shows a "Save PNG" button that downloads `<exportName>.png`. */
+  exportName?: string;
+  /** Accessible name of the chart region. */
+  label?: string;
+}
+
+const DEFAULT_HEIGHT = 260;
+
+/** The theme read once per mounted component (tokens do not change while the page is open). */
+export function useChartTheme(): ChartTheme {
+  return useMemo(() => readChartTheme(), []);
+}
+
+export function UChart({ options, data, className = '', onReady, resetScales = true, exportName, label }: UChartProps) {
+  const hostRef = useRef<HTMLDivElement>(null);
+  const chartRef = useRef<uPlot | null>(null);
+  const dataRef = useRef(data);
+  const onReadyRef = useRef(onReady);
+  dataRef.current = data;
+  onReadyRef.current = onReady;
+
+  useEffect(() => {
+    const host = hostRef.current;
+    if (!host) return;
+    const { height = DEFAULT_HEIGHT, ...rest } = options;
+    const width = Math.max(120, Math.floor(host.clientWidth));
+    const chart = new uPlot({ ...rest, width, height }, dataRef.current, host);
+    chartRef.current = chart;
+    onReadyRef.current?.(chart);
+
+    const observer = new ResizeObserver(() => {
+      const w = Math.max(120, Math.floor(host.clientWidth));
+      if (w !== chart.width) chart.setSize({ width: w, height });
+    });
+    observer.observe(host);
+    return () => {
+      observer.disconnect();
+      chart.destroy();
+      if (chartRef.current === chart) chartRef.current = null;
+    };
+  }, [options]);
+
+  useEffect(() => {
+    const chart = chartRef.current;
+    if (chart && chart.data !== data) chart.setData(data, resetScales);
+  }, [data, resetScales]);
+
+  return (
+    <div className={`rw-chart relative ${className}`} role="figure" aria-label={label}>
+      {exportName && (
+        <button
+          type="button"
+          className="absolute right-0 top-0 z-10 rounded border border-rule bg-paper-raised px-1.5 py-0.5 text-xs text-ink-soft hover:text-ink"
+          onClick={() => chartRef.current && exportPng(chartRef.current, exportName, label)}
+        >
+          Save PNG
+        </button>
+      )}
+      <div ref={hostRef} className="w-full" />
+    </div>
+  );
+}
