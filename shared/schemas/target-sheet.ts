@@ -1,0 +1,165 @@
+import { z } from 'zod';
+import { Id, IsoDateTime } from './fields.ts';
+
+/**
+ * Damper target sheets: the forces a damper must make at chosen piston speeds, per direction,
+ * with a tolerance band, and the checks of measured dampers against them. SI units (m/s, N).
+ */
+
+export const targetSheetStatuses = ['draft', 'in_review', 'released', 'returned'] as const;
+/** draft → in_review → released (final) or returned (with a reason) → draft. */
+export const TargetSheetStatus = z.enum(targetSheetStatuses);
+export type TargetSheetStatus = z.infer<typeof TargetSheetStatus>;
+
+/**
+ * `TS-<workspace code>-<year>-<sequence>`, e.g. `TS-TBMW-2026-0007` (see
+ * shared/target-sheet/sheet-number.ts).
+ */
+export const SheetNumber = z.string().regex(/^TS-[A-Z0-9]{2,6}-\d{4}-\d{4,6}$/, 'a sheet number reads like TS-ABCD-2026-0001');
+export type SheetNumber = z.infer<typeof SheetNumber>;
+
+/** One reference point: the force to make at a piston speed and how far it may stray. */
+export const TargetPoint = z.object({
+  /** Piston speed, m/s. */
+  velocity: z.number().positive().max(20),
+  /** Target force magnitude in this direction, N. */
+  force: z.number().nonnegative().max(1e6),
+  /** Band half-width as a percentage of the force (10 means ±10 %). */
+  tolPct: z.number().min(0).max(100),
+  /** Smallest band half-width, N: governs at low force where a percentage is too tight. */
+  floorN: z.number().nonnegative().max(1e5),
+});
+export type TargetPoint = z.infer<typeof TargetPoint>;
+
+/** Reference points of one direction, speeds strictly rising. */
+export const TargetPoints = z
+  .array(TargetPoint)
+  .min(1)
+  .max(32)
+  .superRefine((pts, ctx) => {
+    for (let i = 1; i < pts.length; i++) {
+      if (!(pts[i].velocity > pts[i - 1].velocity)) {
+        ctx.addIssue({ code: 'custom', path: [i, 'velocity'], message: `speeds must rise from point to point (${pts[i].velocity} m/s after ${pts[i - 1].velocity} m/s)` });
+      }
+    }
+  });
+export type TargetPoints = z.infer<typeof TargetPoints>;
+
+/** The editable body of a sheet (what a draft save sends). */
+export const TargetSheetContent = z.object({
+  compression: TargetPoints,
+  rebound: TargetPoints,
+  /** Static gas force of the damper, N (stated on the sheet; the targets exclude it). */
+  gasForce: z.number().nonnegative().max(1e5),
+  notes: z.string().max(4000),
+});
+export type TargetSheetContent = z.infer<typeof TargetSheetContent>;
+
+export const PersonRef = z.object({ id: Id, name: z.string() });
+export type PersonRef = z.infer<typeof PersonRef>;
+
+/** Another sheet named by id and number (for supersession links). */
+export const SheetRef = z.object({ id: Id, number: SheetNumber });
+export type SheetRef = z.infer<typeof SheetRef>;
+
+export const TargetSheet = TargetSheetContent.extend({
+  id: Id,
+  number: SheetNumber,
+  workspaceId: Id,
+  /** The setup revision the targets were taken from. */
+  setupId: Id,
+  setupRevision: z.number().int().positive(),
+  setupName: z.string(),
+  status: TargetSheetStatus,
+  /** Why a lead sent it back; set while `returned`, kept (for the record) after reopening. */
+  returnReason: z.string().nullable(),
+  author: PersonRef,
+  /** The lead or admin who released or returned it last. */
+  approver: PersonRef.nullable(),
+  createdAt: IsoDateTime,
+  updatedAt: IsoDateTime,
+  submittedAt: IsoDateTime.nullable(),
+  /** When it was released or returned. */
+  decidedAt: IsoDateTime.nullable(),
+  /** The released sheet this one replaces. */
+  supersedes: SheetRef.nullable(),
+  /** The sheet that replaced this one (set on a released sheet; nothing else changes). */
+  supersededBy: SheetRef.nullable(),
+});
+export type TargetSheet = z.infer<typeof TargetSheet>;
+
+/** A change of status, as asked for (POST …/transition). */
+export const TargetSheetTransitionInput = z.object({
+  to: TargetSheetStatus,
+  /** Required when returning a sheet. */
+  reason: z.string().trim().max(2000).optional(),
+});
+export type TargetSheetTransitionInput = z.infer<typeof TargetSheetTransitionInput>;
+
+/** One entry of a sheet's history. */
+export const TargetSheetEvent = z.object({
+  from: TargetSheetStatus.nullable(),
+  to: TargetSheetStatus,
+  by: PersonRef,
+  at: IsoDateTime,
+  reason: z.string().nullable(),
+});
+export type TargetSheetEvent = z.infer<typeof TargetSheetEvent>;
+
+/** Why a point passed or failed. */
+export const PointVerdict = z.enum(['within', 'below', 'above', 'not-measured']);
+export type PointVerdict = z.infer<typeof PointVerdict>;
+
+/** One reference point checked against a measured damper. */
+export const PointCheck = z.object({
+  velocity: z.number().positive(),
+  target: z.number(),
+  /** Band edges, N (lower may fall below 0 where the floor governs). */
+  lower: z.number(),
+  upper: z.number(),
+  /** Measured force interpolated at this speed, N; null when the speed was not measured. */
+  measured: z.number().nullable(),
+  /** measured − target, N. */
+  deviation: z.number().nullable(),
+  /** 100·deviation/target; null when not measured or the target is 0. */
+  deviationPct: z.number().nullable(),
+  pass: z.boolean(),
+  verdict: PointVerdict,
+});
+export type PointCheck = z.infer<typeof PointCheck>;
+
+export const DirectionCheck = z.object({ points: z.array(PointCheck), pass: z.boolean() });
+export type DirectionCheck = z.infer<typeof DirectionCheck>;
+
+/** One physical damper checked against a sheet. */
+export const DamperCheck = z.object({
+  /** Serial or name of the measured unit. */
+  label: z.string().min(1).max(120),
+  compression: DirectionCheck,
+  rebound: DirectionCheck,
+  pass: z.boolean(),
+});
+export type DamperCheck = z.infer<typeof DamperCheck>;
+
+/** All dampers of one upload against one sheet. */
+export const ConformityReport = z.object({
+  dampers: z.array(DamperCheck).min(1),
+  /** `pass` only when every point of every damper passes. */
+  verdict: z.enum(['pass', 'fail']),
+  passed: z.number().int().nonnegative(),
+  failed: z.number().int().nonnegative(),
+  /** How measured forces were read at the reference speeds, for the UI. */
+  method: z.string(),
+});
+export type ConformityReport = z.infer<typeof ConformityReport>;
+
+/** A stored conformity check (listed per sheet). */
+export const ConformityRecord = z.object({
+  id: Id,
+  sheetId: Id,
+  createdAt: IsoDateTime,
+  createdBy: PersonRef,
+  fileNames: z.array(z.string()),
+  report: ConformityReport,
+});
+export type ConformityRecord = z.infer<typeof ConformityRecord>;
