@@ -4,6 +4,7 @@ import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type Transaction } from 'kysely';
 import type { AuditLogTable } from './audit-log-table.ts';
 import type { OutboxMessageTable } from './outbox-message-table.ts';
+import type { RunTable } from './run-table.ts';
 import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
 import type { ShareLinkTable } from './share-link-table.ts';
 import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
@@ -26,6 +27,7 @@ export interface Database {
   setup_revision: SetupRevisionTable;
   vehicle: VehicleTable;
   share_link: ShareLinkTable;
+  run: RunTable;
 }
 
 export type Db = Kysely<Database>;

@@ -1,6 +1,7 @@
 import { type Kysely, type Migration, type MigrationResultSet, Migrator } from 'kysely';
 import * as m0001 from '../../migrations/0001_init.ts';
 import * as m0002 from '../../migrations/0002_setups.ts';
+import * as m0004 from '../../migrations/0004_runs.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -10,6 +11,7 @@ import * as m0002 from '../../migrations/0002_setups.ts';
 export const migrations: Record<string, Migration> = {
   '0001_init': m0001,
   '0002_setups': m0002,
+  '0004_runs': m0004,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {
