@@ -4,6 +4,7 @@ import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type Transaction } from 'kysely';
 import type { AuditLogTable } from './audit-log-table.ts';
 import type { OutboxMessageTable } from './outbox-message-table.ts';
+import type { DynoFileTable, RoadTable } from './road-dyno-tables.ts';
 import type { RunTable } from './run-table.ts';
 import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
 import type { ShareLinkTable } from './share-link-table.ts';
@@ -27,6 +28,8 @@ export interface Database {
   setup_revision: SetupRevisionTable;
   vehicle: VehicleTable;
   share_link: ShareLinkTable;
+  road: RoadTable;
+  dyno_file: DynoFileTable;
   run: RunTable;
 }
 

@@ -1,6 +1,7 @@
 import { type Kysely, type Migration, type MigrationResultSet, Migrator } from 'kysely';
 import * as m0001 from '../../migrations/0001_init.ts';
 import * as m0002 from '../../migrations/0002_setups.ts';
+import * as m0003 from '../../migrations/0003_roads_dyno.ts';
 import * as m0004 from '../../migrations/0004_runs.ts';
 
 /**
@@ -11,6 +12,7 @@ import * as m0004 from '../../migrations/0004_runs.ts';
 export const migrations: Record<string, Migration> = {
   '0001_init': m0001,
   '0002_setups': m0002,
+  '0003_roads_dyno': m0003,
   '0004_runs': m0004,
 };
 
