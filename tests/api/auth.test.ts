@@ -1,0 +1,126 @@
+import request from 'supertest';
+import { afterAll, describe, expect, it } from 'vitest';
+import { ErrorBody } from '../../shared/errors.ts';
+import { Me } from '../../shared/schemas/account.ts';
+import { SESSION_COOKIE } from '../../server/auth/session.ts';
+import { browserLike, cookieValue, signedIn } from './helpers/agents.ts';
+import { uniqueEmail } from './helpers/people.ts';
+import { createTestApp } from './helpers/test-app.ts';
+
+const t = await createTestApp();
+afterAll(() => t.close());
+
+const count = async (table: 'user' | 'workspace' | 'membership' | 'audit_log') =>
+  Number((await t.db.selectFrom(table).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n);
+
+async function signUp(email = uniqueEmail('owner'), password = 'a sound password') {
+  const b = await browserLike(t.url);
+  const res = await b.post('/api/auth/signup', { name: 'Wren Castell', email, password, workspaceName: 'Castell bench' });
+  return { b, res, email, password };
+}
+
+describe('sign-up', () => {
+  it('creates the account, a workspace it administers, a session and an audit entry', async () => {
+    const { b, res, email } = await signUp();
+    expect(res.status).toBe(201);
+    const me = Me.parse(res.body);
+    expect(me.user).toMatchObject({ name: 'Wren Castell', email });
+    expect(me.memberships).toEqual([{ workspaceId: expect.any(String), workspaceName: 'Castell bench', role: 'admin' }]);
+    const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+    expect(cookie).toMatch(/HttpOnly/);
+    expect(cookie).toMatch(/SameSite=Lax/);
+    expect(cookie).not.toMatch(/Secure/); // plain http on loopback
+    expect(Me.parse((await b.get('/api/auth/me').expect(200)).body).user.email).toBe(email);
+    const audit = await t.db.selectFrom('audit_log').selectAll().where('workspace_id', '=', me.memberships[0].workspaceId).execute();
+    expect(audit.map((a) => [a.action, a.actor_id])).toEqual([['workspace.created', me.user.id]]);
+  });
+
+  it('stores the e-mail lower-cased and refuses the same address twice with 409', async () => {
+    const email = uniqueEmail('dup');
+    expect((await signUp(`  ${email.toUpperCase()} `)).res.status).toBe(201);
+    const users = await count('user');
+    const again = await signUp(email);
+    expect(again.res.status).toBe(409);
+    expect(ErrorBody.parse(again.res.body).error.fields).toEqual([{ path: 'email', message: expect.any(String) }]);
+    expect(await count('user')).toBe(users);
+  });
+
+  it('answers a bad body with 400, naming every bad field, and saves nothing', async () => {
+    const before = await Promise.all([count('user'), count('workspace'), count('membership'), count('audit_log')]);
+    const b = await browserLike(t.url);
+    const res = await b.post('/api/auth/signup', { name: '', email: 'not-an-address', password: 'short', workspaceName: 42 }).expect(400);
+    const body = ErrorBody.parse(res.body);
+    expect(body.error.code).toBe('bad_request');
+    expect(body.error.fields?.map((f) => f.path).sort()).toEqual(['email', 'name', 'password', 'workspaceName']);
+    expect(await Promise.all([count('user'), count('workspace'), count('membership'), count('audit_log')])).toEqual(before);
+  });
+});
+
+describe('sign-in and sign-out', () => {
+  it('signs in with the right password and gives the same 401 for a wrong password or an unknown address', async () => {
+    const { email, password } = await signUp();
+    const ok = await signedIn(t.url, email.toUpperCase(), password);
+    expect(Me.parse((await ok.get('/api/auth/me').expect(200)).body).user.email).toBe(email);
+
+    const b = await browserLike(t.url);
+    const wrong = await b.post('/api/auth/signin', { email, password: 'not the password' }).expect(401);
+    const unknown = await b.post('/api/auth/signin', { email: uniqueEmail('nobody'), password: 'not the password' }).expect(401);
+    expect(wrong.body).toEqual(unknown.body);
+    expect(ErrorBody.parse(wrong.body).error.code).toBe('unauthenticated');
+    expect(cookieValue(wrong.headers['set-cookie'], SESSION_COOKIE)).toBeUndefined();
+    await b.get('/api/auth/me').expect(401);
+  });
+
+  it('ends the session on sign-out, and a copy of the old cookie no longer works', async () => {
+    const { email, password } = await signUp();
+    const a = await browserLike(t.url);
+    const signin = await a.post('/api/auth/signin', { email, password }).expect(200);
+    const stolen = `${SESSION_COOKIE}=${cookieValue(signin.headers['set-cookie'], SESSION_COOKIE)}`;
+    const other = await signedIn(t.url, email, password);
+    await request(t.url).get('/api/auth/me').set('Cookie', stolen).expect(200);
+    const res = await a.post('/api/auth/signout').expect(204);
+    expect(String(res.headers['set-cookie'])).toMatch(new RegExp(`${SESSION_COOKIE}=;`));
+    await a.get('/api/auth/me').expect(401);
+    // Sign-out bumps the session version: the other device is signed out too.
+    await other.get('/api/auth/me').expect(401);
+    await request(t.url).get('/api/auth/me').set('Cookie', stolen).expect(401);
+  });
+
+  it('answers GET /api/auth/me with 401 and a CSRF cookie when signed out', async () => {
+    const res = await request(t.url).get('/api/auth/me').expect(401);
+    expect(ErrorBody.parse(res.body).error.code).toBe('unauthenticated');
+    expect(cookieValue(res.headers['set-cookie'], 'rw_csrf')).toMatch(/^[A-Za-z0-9_-]{20,}$/);
+  });
+
+  it('ignores a session token signed with another key', async () => {
+    const { issueSessionToken } = await import('../../server/auth/session.ts');
+    const { email, password } = await signUp();
+    const a = await signedIn(t.url, email, password);
+    const me = Me.parse((await a.get('/api/auth/me')).body);
+    const forged = await issueSessionToken(new TextEncoder().encode('another-key-another-key-another-key'), { userId: me.user.id, sessionVersion: 0 }, new Date());
+    await request(t.url).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`).expect(401);
+  });
+});
+
+describe('password change', () => {
+  it('needs the current password, then keeps this session and ends the others', async () => {
+    const { email, password } = await signUp();
+    const here = await signedIn(t.url, email, password);
+    const elsewhere = await signedIn(t.url, email, password);
+
+    const wrong = await here.post('/api/auth/password', { currentPassword: 'not it at all', newPassword: 'a newer password' }).expect(400);
+    expect(ErrorBody.parse(wrong.body).error.fields).toEqual([{ path: 'currentPassword', message: expect.any(String) }]);
+    await elsewhere.get('/api/auth/me').expect(200);
+
+    const tooShort = await here.post('/api/auth/password', { currentPassword: password, newPassword: 'short' }).expect(400);
+    expect(ErrorBody.parse(tooShort.body).error.fields?.map((f) => f.path)).toEqual(['newPassword']);
+
+    await here.post('/api/auth/password', { currentPassword: password, newPassword: 'a newer password' }).expect(204);
+    await here.get('/api/auth/me').expect(200);
+    await elsewhere.get('/api/auth/me').expect(401);
+    await (await browserLike(t.url)).post('/api/auth/signin', { email, password }).expect(401);
+    await signedIn(t.url, email, 'a newer password');
+    const entry = await t.db.selectFrom('audit_log').selectAll().where('action', '=', 'account.password_changed').where('entity_id', '=', Me.parse((await here.get('/api/auth/me')).body).user.id).executeTakeFirst();
+    expect(entry?.workspace_id).toBeNull();
+  });
+});
