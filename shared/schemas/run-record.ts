@@ -74,7 +74,8 @@ export const SaveRunInput = z.strictObject({
   setup: Setup,
   /** The road library entry the road came from, if any. */
   roadId: Id.nullable().optional(),
-  road: Road,
+  /** The road as run; may be left out when `roadId` names it (keeps long measured profiles off the wire). */
+  road: Road.optional(),
   speed: z.number().positive().max(100),
   duration: z.number().positive().max(600),
   seed: z.number().int().min(0).max(4294967295).optional(),
@@ -82,7 +83,7 @@ export const SaveRunInput = z.strictObject({
   result: RunResult,
   traces: StoredTraces,
   spectra: StoredSpectra.optional(),
-});
+}).refine((r) => r.road !== undefined || Boolean(r.roadId), { path: ['road'], message: 'give the road, or the roadId of a library road' });
 export type SaveRunInput = z.infer<typeof SaveRunInput>;
 export type SaveRunInputIn = z.input<typeof SaveRunInput>;
 

@@ -1,5 +1,6 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { platformEntries } from './platform-entries.ts';
+import { runsEntries } from './runs-entries.ts';
 
 /**
  * Every matrix entry. A feature that registers routes adds `tests/api/matrix/<feature>-entries.ts`
@@ -7,4 +8,5 @@ import { platformEntries } from './platform-entries.ts';
  */
 export const allEntries: MatrixEntries = {
   ...platformEntries,
+  ...runsEntries,
 };
