@@ -43,6 +43,17 @@ function readCookie(name: string): string | undefined {
   return undefined;
 }
 
+/**
+ * The token for the CSRF header. The server sets its cookie on GET /api/config and
+ * /api/auth/me; a page opened straight from an e-mail link may not have called either yet.
+ */
+async function csrfToken(): Promise<string | undefined> {
+  const existing = readCookie(CSRF_COOKIE);
+  if (existing || typeof document === 'undefined') return existing;
+  await fetch('/api/config', { credentials: 'same-origin' }).catch(() => undefined);
+  return readCookie(CSRF_COOKIE);
+}
+
 type Query = Record<string, string | number | boolean | undefined>;
 
 export interface RequestOptions<S extends z.ZodType | undefined> {
@@ -92,7 +103,7 @@ export async function request<S extends z.ZodType | undefined = undefined>(
     body = JSON.stringify(options.body);
   }
   if (method !== 'GET') {
-    const token = readCookie(CSRF_COOKIE);
+    const token = await csrfToken();
     if (token) headers[CSRF_HEADER] = token;
   }
 

@@ -31,9 +31,9 @@ export function AppShell() {
         signingOut={signOut.isPending}
         onSignOut={() => signOut.mutate(undefined, { onSettled: () => navigate('/signin', { replace: true }) })}
       />
-      <div className="min-w-0 flex-1">
+      <main className="min-w-0 flex-1">
         <Outlet />
-      </div>
+      </main>
     </div>
   );
 }

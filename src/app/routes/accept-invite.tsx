@@ -7,6 +7,7 @@ import { useMe } from '../../features/auth/api/get-me.ts';
 import { useInvitation } from '../../features/auth/api/invitation.ts';
 import { useSignOut } from '../../features/auth/api/sign-out.ts';
 import { AcceptAsNewAccount, AcceptAsSignedIn } from '../../features/auth/components/accept-invitation-form.tsx';
+import { withArticle } from '../../features/team/components/role-words.ts';
 import { AuthLayout } from '../layouts/auth-layout.tsx';
 import { landingPath } from './landing.ts';
 
@@ -80,8 +81,7 @@ export function AcceptInviteRoute() {
       title={`Join ${inv.workspaceName}`}
       intro={
         <>
-          {inv.invitedBy} invited <strong className="text-ink">{inv.email}</strong> to this workspace as {inv.role === 'admin' || inv.role === 'engineer' ? 'an' : 'a'}{' '}
-          <strong className="text-ink">{inv.role}</strong>.
+          {inv.invitedBy} invited <strong className="text-ink">{inv.email}</strong> to this workspace as <strong className="text-ink">{withArticle(inv.role)}</strong>.
         </>
       }
     >

@@ -5,7 +5,7 @@ import { Loading } from '../../components/ui/spinner.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { useAudit } from '../../features/activity/api/get-audit.ts';
 import { useMembers } from '../../features/team/api/get-members.ts';
-import { roleWords } from '../../features/team/components/role-words.ts';
+import { roleWords, withArticle } from '../../features/team/components/role-words.ts';
 import { formatDateTime } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { navEntries } from '../sections.ts';
@@ -50,7 +50,7 @@ export function WorkspaceHomeRoute() {
 
   return (
     <>
-      <PageHeader eyebrow="Overview" title={workspace.name} detail={<>You are {workspace.role === 'admin' || workspace.role === 'engineer' ? 'an' : 'a'} {workspace.role} here: {roleWords[workspace.role]}.</>} />
+      <PageHeader title="Overview" detail={`You are ${withArticle(workspace.role)} here. ${roleWords[workspace.role]}`} />
       <div className="grid grid-cols-1 gap-8 lg:grid-cols-[2fr_1fr]">
         <Section title="On this bench">
           <ul className="grid grid-cols-1 gap-3 sm:grid-cols-2">

@@ -35,7 +35,7 @@ export function DataTable<T>({ table, caption, rowLabel }: { table: TanTable<T>;
                   {header.column.getCanSort() ? (
                     <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
                       {content}
-                      <span aria-hidden="true" className="text-ink-faint">
+                      <span aria-hidden="true" className={sorted ? 'text-accent' : 'text-ink-faint/50'}>
                         {sorted === 'asc' ? '↑' : sorted === 'desc' ? '↓' : '↕'}
                       </span>
                     </button>

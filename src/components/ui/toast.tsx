@@ -27,7 +27,7 @@ function ToastCard({ item, onDone }: { item: ToastItem; onDone: (id: number) => 
   }, [item.id, onDone]);
   return (
     <li className={`pointer-events-auto flex items-start gap-3 rounded border border-rule border-l-4 bg-paper-raised px-3 py-2 text-sm shadow-lift ${toneClass[item.tone]}`}>
-      <span className="flex-1">{item.text}</span>
+      <span className="min-w-0 flex-1 [overflow-wrap:anywhere]">{item.text}</span>
       <button type="button" onClick={() => onDone(item.id)} className="text-ink-faint hover:text-ink" aria-label="Dismiss">
         ×
       </button>

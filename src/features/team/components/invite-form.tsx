@@ -52,7 +52,7 @@ export function InviteForm({ workspaceId }: { workspaceId: string }) {
         </div>
       </div>
       <p className="mt-2 text-xs text-ink-faint">
-        A <strong className="font-medium text-ink-soft">{watch('role')}</strong> {roleWords[watch('role')]}. The link in the e-mail works for 7 days.
+        {roleWords[watch('role')]} The link in the e-mail works for 7 days.
       </p>
       <FormError message={formError} />
     </form>

@@ -7,7 +7,7 @@ import { useToast } from '../../../components/ui/toast.tsx';
 import { formatDate } from '../../../lib/format.ts';
 import { useChangeRole, useRemoveMember } from '../api/members.ts';
 import { RemoveMemberButton } from './member-row-actions.tsx';
-import { roleWords } from './role-words.ts';
+import { roleWords, withArticle } from './role-words.ts';
 
 const column = createColumnHelper<Member>();
 
@@ -67,7 +67,7 @@ export function MembersTable({ workspaceId, members, currentUserId, canManage }:
                 changeRole.mutate(
                   { userId: info.row.original.userId, role },
                   {
-                    onSuccess: (m) => toast.show(`${m.name} is now ${m.role === 'admin' || m.role === 'engineer' ? 'an' : 'a'} ${m.role}.`),
+                    onSuccess: (m) => toast.show(`${m.name} is now ${withArticle(m.role)}.`),
                     onError: (error) => toast.show(error.message, 'danger'),
                   },
                 )
