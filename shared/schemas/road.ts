@@ -129,7 +129,7 @@ export const MeasuredRoad = z.strictObject({
     }),
   /** Remove nothing, the mean, or a least-squares straight line; default `linear`. */
   detrend: z.enum(['none', 'mean', 'linear']).optional(),
-  /** Resampling step, m; default the median spacing of the points, at most 0.05. */
+  /** Resampling step, m; default the median spacing of the points. */
   spacing: meters.positive().max(10).optional(),
 });
 

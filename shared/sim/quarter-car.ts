@@ -1,0 +1,187 @@
+import type { Setup } from '../schemas/setup.ts';
+import type { LinearCorner } from './linear/linear-corner.ts';
+import { compileDamperForce, compileGasChange, equivalentDampingLeastSquares, staticGasForce, type EquivalentDamping } from './damper.ts';
+import { compileStop } from './stops.ts';
+
+/** Standard gravity used throughout, m/s² (model.md). */
+export const GRAVITY = 9.81;
+
+/**
+ * Two-mass corner. States are [zs, vs, zu, vu]: body and wheel displacement (m, positive up)
+ * and velocity (m/s), all measured from static equilibrium. Travel x = zu − zs is positive in
+ * compression; the damper moves MR·x and its force acts at the wheel times MR. The spring and
+ * the tyre are linear; the tyre only pushes (its force is clipped at zero: lift-off).
+ */
+
+/** The corner at rest on a flat road. */
+export interface StaticState {
+  /** Fz0 = (ms + mu)·g, N. */
+  tyreLoad: number;
+  /** Tyre compression at rest, m. */
+  tyreDeflection: number;
+  /** Gas force at the damper at rest, N. */
+  gasForce: number;
+  /** Spring force at the wheel at rest (body weight less the gas share), N. */
+  springForceAtWheel: number;
+  /** Spring compression at rest measured at the wheel, m (at the spring: × motionRatio). */
+  springDeflection: number;
+  /** How far the body sits below where it would float without gravity, m. */
+  bodySag: number;
+  /** The same for the wheel, m. */
+  wheelSag: number;
+}
+
+export type StaticOutcome = { ok: true; state: StaticState } | { ok: false; reason: string };
+
+/** Wheel rate ks = springRate·MR², N/m. */
+export const wheelRate = (setup: Setup): number => setup.springRate * setup.motionRatio ** 2;
+
+/**
+ * Static equilibrium. Positions are defined from the static ride position (stop clearances
+ * and gas pressure are given there), so the spring carries what the gas does not; stops
+ * touch at most with zero force. Fails when the gas alone would lift the body.
+ */
+export function staticEquilibrium(setup: Setup): StaticOutcome {
+  const ms = setup.sprungMass;
+  const mu = setup.unsprungMass;
+  const tyreLoad = (ms + mu) * GRAVITY;
+  const gas = staticGasForce(setup.damper.gas);
+  const springForceAtWheel = ms * GRAVITY - setup.motionRatio * gas;
+  if (springForceAtWheel < 0) {
+    return {
+      ok: false,
+      reason: `damper.gas: the gas force at the wheel (${(setup.motionRatio * gas).toFixed(0)} N) exceeds the body weight on this corner (${(ms * GRAVITY).toFixed(0)} N)`,
+    };
+  }
+  const springDeflection = springForceAtWheel / wheelRate(setup);
+  const tyreDeflection = tyreLoad / setup.tyreRate;
+  return {
+    ok: true,
+    state: {
+      tyreLoad,
+      tyreDeflection,
+      gasForce: gas,
+      springForceAtWheel,
+      springDeflection,
+      bodySag: springDeflection + tyreDeflection,
+      wheelSag: tyreDeflection,
+    },
+  };
+}
+
+/** Forces and accelerations at one instant, filled in place by `CornerModel.evaluate`. */
+export interface CornerForces {
+  bodyAccel: number;
+  wheelAccel: number;
+  travel: number;
+  damperVelocity: number;
+  /** At the damper, N, positive resisting compression. */
+  damperForce: number;
+  /** At the wheel, N ≥ 0. */
+  bumpStopForce: number;
+  reboundStopForce: number;
+  /** Contact force, N ≥ 0. */
+  tyreLoad: number;
+}
+
+export const newCornerForces = (): CornerForces => ({
+  bodyAccel: 0,
+  wheelAccel: 0,
+  travel: 0,
+  damperVelocity: 0,
+  damperForce: 0,
+  bumpStopForce: 0,
+  reboundStopForce: 0,
+  tyreLoad: 0,
+});
+
+/** Number of regime switches watched by the integrator: tyre contact, bump stop, rebound stop. */
+export const SWITCH_COUNT = 3;
+
+export interface CornerModel {
+  setup: Setup;
+  statics: StaticState;
+  /** Evaluates the equations of motion; allocates nothing. */
+  evaluate(zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, out: CornerForces): void;
+  /**
+   * Writes one value per regime switch whose sign tells the regime: [tyre force before
+   * clipping (N; > 0 in contact), bump-stop engagement (m; > 0 touching), rebound-stop
+   * engagement (m)]. An absent stop reads −1 everywhere, so it never switches.
+   */
+  switches(zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, out: Float64Array): void;
+}
+
+/** Compiles a setup into its equations of motion (after `staticEquilibrium` succeeded). */
+export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
+  const ms = setup.sprungMass;
+  const mu = setup.unsprungMass;
+  const mr = setup.motionRatio;
+  const ks = wheelRate(setup);
+  const kt = setup.tyreRate;
+  const ct = setup.tyreDamping;
+  const fz0 = statics.tyreLoad;
+  const dt0 = statics.tyreDeflection;
+  const damper = compileDamperForce(setup.damper);
+  const gasChange = compileGasChange(setup.damper.gas);
+  const bump = compileStop(setup.bumpStop, 'bump');
+  const rebound = compileStop(setup.reboundStop, 'rebound');
+
+  return {
+    setup,
+    statics,
+    evaluate(zs, vs, zu, vu, zRoad, vRoad, out) {
+      const x = zu - zs;
+      const vd = mr * (vu - vs);
+      const fd = damper(vd);
+      const fb = bump === null ? 0 : bump(x);
+      const fr = rebound === null ? 0 : rebound(x);
+      // Gas preload is already in the static balance; only its change with stroke acts here.
+      const fg = gasChange === null ? 0 : gasChange(mr * x);
+      // Suspension force on the body beyond its static share (up positive).
+      const fs = ks * x + mr * (fd + fg) + fb - fr;
+      const ft = kt * (dt0 + zRoad - zu) + ct * (vRoad - vu);
+      const tyre = ft > 0 ? ft : 0;
+      out.bodyAccel = fs / ms;
+      out.wheelAccel = (tyre - fz0 - fs) / mu;
+      out.travel = x;
+      out.damperVelocity = vd;
+      out.damperForce = fd;
+      out.bumpStopForce = fb;
+      out.reboundStopForce = fr;
+      out.tyreLoad = tyre;
+    },
+    switches(zs, _vs, zu, vu, zRoad, vRoad, out) {
+      const x = zu - zs;
+      out[0] = kt * (dt0 + zRoad - zu) + ct * (vRoad - vu);
+      out[1] = setup.bumpStop ? x - setup.bumpStop.clearance : -1;
+      out[2] = setup.reboundStop ? -x - setup.reboundStop.clearance : -1;
+    },
+  };
+}
+
+/**
+ * Rate the polytropic gas adds at static, at the wheel, N/m: d/dx of MR·F(MR·x) at x = 0,
+ * MR²·n·F0·A/V0. Zero for a constant gas force.
+ */
+export function gasRateAtWheel(setup: Setup): number {
+  const gas = setup.damper.gas;
+  if (!gas?.polytropic || gas.rodArea === undefined) return 0;
+  return (setup.motionRatio ** 2 * gas.polytropic.exponent * staticGasForce(gas) * gas.rodArea) / gas.polytropic.volume;
+}
+
+/**
+ * The corner reduced to linear elements at the wheel for the modal and frequency-response
+ * analysis: ks = springRate·MR² (plus the gas rate at static), c = c_eq·MR² with c_eq from the
+ * damper curves (least squares over 0–0.3 m/s unless another definition is passed in).
+ */
+export function linearCorner(setup: Setup, equivalent: EquivalentDamping = equivalentDampingLeastSquares(setup.damper)): LinearCorner {
+  const mr2 = setup.motionRatio ** 2;
+  return {
+    sprungMass: setup.sprungMass,
+    unsprungMass: setup.unsprungMass,
+    wheelRate: wheelRate(setup) + gasRateAtWheel(setup),
+    wheelDamping: equivalent.coefficient * mr2,
+    tyreRate: setup.tyreRate,
+    tyreDamping: setup.tyreDamping,
+  };
+}

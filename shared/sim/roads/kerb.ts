@@ -1,0 +1,13 @@
+import type { KerbRoad } from '../../schemas/road.ts';
+import { atSpeed, type RoadExcitation } from './excitation.ts';
+import { eventProfile, ramp } from './event-shape.ts';
+
+/**
+ * Kerb step up or down with a straight ramp. The ramp makes the road's slope jump at both of
+ * its ends; the integrator restarts there. A short ramp at speed gives a large road velocity,
+ * which the tyre damping passes straight on: a tyre footprint in the setup softens it.
+ */
+export function kerbExcitation(road: KerbRoad, speed: number, duration: number, footprint?: number): RoadExcitation {
+  const profile = eventProfile(ramp(road.height, road.rampLength, road.at), footprint);
+  return atSpeed(profile, speed, duration, { kind: 'kerb', name: road.name, distance: speed * duration });
+}
