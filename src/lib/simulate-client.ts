@@ -46,7 +46,8 @@ export function simulatePool(): WorkerPool<SimulateApi> {
 /** Runs one request in a worker. Cancelling (the signal) stops the computation itself, not just the wait. */
 export async function simulate(request: RunRequestInput, options: SimulateOptions = {}): Promise<SimulateResult> {
   const { signal, spectra, response } = options;
-  const outcome = await simulatePool().run((api) => api.simulate(request, { spectra, response }), { signal });
+  // Comlink's Remote<> rewrites the return type structurally; the value is the worker's SimulateOutcome.
+  const outcome = await simulatePool().run((api) => api.simulate(request, { spectra, response }) as unknown as Promise<SimulateOutcome>, { signal });
   if (outcome.status === 'done') return outcome.value;
   if (outcome.status === 'cancelled') return { ok: false, cancelled: true, reason: 'cancelled' };
   return { ok: false, reason: `The simulation stopped: ${outcome.reason}` };

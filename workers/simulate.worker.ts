@@ -1,0 +1,23 @@
+import * as Comlink from 'comlink';
+import type { RunRequestInput } from '../shared/schemas/run.ts';
+import { simulateJob, transferablesOf, type SimulateExtras, type SimulateOutcome } from '../shared/runs/simulate-job.ts';
+
+/**
+ * Comlink shell around `simulateJob` (shared/runs/simulate-job.ts): the request is validated
+ * there with the shared RunRequest schema, failures come back as values with their reason, and
+ * the Float64Array columns are transferred, not copied.
+ */
+const api = {
+  simulate(input: RunRequestInput, extras?: SimulateExtras): SimulateOutcome {
+    const outcome = simulateJob(input, extras);
+    return outcome.ok ? Comlink.transfer(outcome, transferablesOf(outcome)) : outcome;
+  },
+  /** Answers once the module (and the simulation code) has loaded: used to warm a fresh worker. */
+  ping(): 'ready' {
+    return 'ready';
+  },
+};
+
+export type SimulateApi = typeof api;
+
+Comlink.expose(api);
