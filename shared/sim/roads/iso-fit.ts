@@ -1,21 +1,19 @@
 import { isoClasses, type IsoClass } from '../../schemas/road.ts';
 import { defaultSegmentLength, welchPsd } from '../metrics/spectra.ts';
-
-/** ISO 8608 reference spatial frequency n0, cycle/m. */
-export const N0 = 0.1;
+import { ISO_N0, isoClassRoughness } from './iso8608.ts';
 
 /**
- * Class bounds on Gd(n0) in m³ (ISO 8608:2016, from memory): geometric means 16·4^k × 10⁻⁶ for
- * A..H, each class spanning a factor 4 (half to twice its mean).
+ * Class bounds on Gd(n0) in m³ (ISO 8608:2016, from memory): around the geometric means
+ * (16·4^k × 10⁻⁶ for A..H), each class spanning a factor 4, from half to twice its mean.
  */
 export function isoClassBounds(className: IsoClass): { lower: number; mean: number; upper: number } {
-  const mean = 16e-6 * 4 ** isoClasses.indexOf(className);
+  const mean = isoClassRoughness[className];
   return { lower: mean / 2, mean, upper: mean * 2 };
 }
 
 /** The class whose band holds gdn0 (m³); values beyond A or H fall into A or H. */
 export function classOf(gdn0: number): IsoClass {
-  const k = Math.round(Math.log(gdn0 / 16e-6) / Math.log(4));
+  const k = Math.round(Math.log(gdn0 / isoClassRoughness.A) / Math.log(4));
   return isoClasses[Math.min(isoClasses.length - 1, Math.max(0, k))];
 }
 
@@ -63,7 +61,7 @@ export function fitIso8608(profile: { dx: number; z: Float64Array }, opts: IsoFi
     const n = freq[k];
     if (n < nMin || n > nMax || !(psd[k] > 0)) continue;
     const w = 1 / n;
-    const x = Math.log(n / N0);
+    const x = Math.log(n / ISO_N0);
     const y = Math.log(psd[k]);
     sw += w;
     sx += w * x;
