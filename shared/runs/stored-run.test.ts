@@ -37,7 +37,7 @@ describe('stored traces', () => {
       trace.tyreLoad[i] = 3400 + 100 * Math.cos(i / 7);
     }
     trace.travel[123_456] = 0.07;
-    const stored = toStoredTraces(trace);
+    const stored = toStoredTraces(trace, 2);
     expect(StoredTraces.safeParse(stored).success).toBe(true);
     expect(stored.length).toBe(2000);
     expect(stored.fullLength).toBe(n);
@@ -47,6 +47,11 @@ describe('stored traces', () => {
     expect(Math.max(...back.columns.travel)).toBeCloseTo(0.07, 6);
     expect(Math.max(...back.columns.tyreLoad)).toBeCloseTo(3500, 1);
     expect(back.columns.time[1999]).toBeLessThan(600);
+    // the load distribution counts every analysed sample of the full run once
+    const h = stored.tyreLoadHistogram;
+    expect(h.counts.reduce((a, b) => a + b, 0)).toBe(n - 1000);
+    expect(h.edges[0]).toBeCloseTo(3300, 6);
+    expect(h.edges[h.edges.length - 1]).toBeCloseTo(3500, 6);
   });
 
   it('averages spectra above the bin cap and keeps their area', () => {

@@ -11,10 +11,14 @@ import {
 import type { Spectra } from '../sim/metrics/compute-metrics.ts';
 import type { TraceColumns } from '../sim/trace.ts';
 import { decodeColumns, encodeColumns } from './float-codec.ts';
+import { rangeHistogram } from './range-histogram.ts';
 import { thinColumns } from './thin-trace.ts';
 
-/** Thinned, encoded time histories of a run, ready to save. */
-export function toStoredTraces(trace: TraceColumns, cap = TRACE_POINT_CAP): StoredTraces {
+/** Bins of the stored tyre load distribution. */
+export const TYRE_LOAD_BINS = 40;
+
+/** Thinned, encoded time histories of a run, ready to save; `settleTime` starts the load distribution. */
+export function toStoredTraces(trace: TraceColumns, settleTime: number, cap = TRACE_POINT_CAP): StoredTraces {
   const source = storedTraceColumns.slice(1).map((name) => trace[name as Exclude<StoredTraceColumn, 'time'>]);
   const thinned = thinColumns(source, trace.dt, cap);
   return {
@@ -22,6 +26,7 @@ export function toStoredTraces(trace: TraceColumns, cap = TRACE_POINT_CAP): Stor
     fullLength: trace.bodyAccel.length,
     length: thinned.time.length,
     data: encodeColumns([thinned.time, ...thinned.columns]),
+    tyreLoadHistogram: rangeHistogram(trace.tyreLoad, TYRE_LOAD_BINS, Math.min(trace.tyreLoad.length - 1, Math.round(settleTime / trace.dt))),
   };
 }
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { Id, IsoDateTime } from './fields.ts';
 import { Road } from './road.ts';
-import { ComfortLabel } from './metrics.ts';
+import { ComfortLabel, Histogram } from './metrics.ts';
 import { EquivalentDampingChoice, RunRequest, RunResult } from './run.ts';
 import { Setup } from './setup.ts';
 
@@ -35,6 +35,11 @@ export const StoredTraces = z
     /** Points per stored column. */
     length: z.number().int().min(2).max(TRACE_POINT_CAP),
     data: base64,
+    /**
+     * Tyre load distribution over the analysed part, from the full trace: the thinned columns
+     * keep each bucket's extremes and would over-count the tails.
+     */
+    tyreLoadHistogram: Histogram,
   })
   .refine((t) => t.data.length === Math.ceil((storedTraceColumns.length * t.length * 4) / 3) * 4, {
     path: ['data'],

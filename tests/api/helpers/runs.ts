@@ -69,7 +69,7 @@ export function saveBody(fixture: { setupId: string; revisionNumber: number }, s
       speed,
       duration,
       result: outcome.result,
-      traces: toStoredTraces(outcome.trace),
+      traces: toStoredTraces(outcome.trace, outcome.result.settleTime),
       spectra: toStoredSpectra(spectra),
     };
     cache.set(key, base);
