@@ -81,6 +81,8 @@ export const units = {
   bar: via('bar', paToBar, barToPa),
   Pa: scale('Pa', 1),
   cm3: via('cm³', m3ToCm3, cm3ToM3),
+  W: scale('W', 1),
+  J: scale('J', 1),
   ratio: scale('', 1),
   percent: scale('%', 100),
 } satisfies Record<string, DisplayUnit>;
