@@ -2,10 +2,12 @@ import type { AppDeps } from '../deps.ts';
 import { auditRoutes } from './audit.ts';
 import { authRoutes } from './auth.ts';
 import { configRoutes } from './config.ts';
+import { dynoFileRoutes } from './dyno-files.ts';
 import { invitationRoutes } from './invitations.ts';
 import { memberRoutes } from './members.ts';
 import { outboxRoutes } from './outbox.ts';
 import type { RouteDef, RouteModule } from './registry.ts';
+import { roadRoutes } from './roads.ts';
 import { runRoutes } from './runs.ts';
 import { workspaceRoutes } from './workspaces.ts';
 
@@ -13,7 +15,7 @@ import { workspaceRoutes } from './workspaces.ts';
  * Every route module of the API. A feature adds its module here (one line); the app mounts
  * whatever is listed, and tests/api/route-matrix.test.ts fails until the new routes have matrix entries.
  */
-export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes];
+export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes];
 
 export function allRoutes(deps: AppDeps): RouteDef[] {
   return routeModules.flatMap((m) => m(deps));

@@ -45,6 +45,7 @@ describe('what each demo role sees and may do', () => {
     await page.waitForURL(`**/w/${workspaceId}/activity`);
     await page.getByRole('table', { name: /Changes made in this workspace/ }).waitFor();
     expect(await page.getByRole('cell', { name: /seeded/i }).count()).toBeGreaterThan(0);
+    await screenshot(page, 'activity-admin-1280');
     await context.close();
   });
 

@@ -24,7 +24,9 @@ export function ActivityRoute() {
         <>
           <AuditTable entries={entries} />
           <div className="mt-3 flex items-center gap-3 text-sm text-ink-faint">
-            <span className="figures">{entries.length}</span> entries shown
+            <span>
+              <span className="figures text-ink-soft">{entries.length}</span> {entries.length === 1 ? 'entry' : 'entries'} shown
+            </span>
             {audit.hasNextPage && (
               <Button size="sm" busy={audit.isFetchingNextPage} onClick={() => void audit.fetchNextPage()}>
                 Show older

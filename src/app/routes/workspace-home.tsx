@@ -51,7 +51,7 @@ export function WorkspaceHomeRoute() {
   return (
     <>
       <PageHeader title="Overview" detail={`You are ${withArticle(workspace.role)} here. ${roleWords[workspace.role]}`} />
-      <div className="grid grid-cols-1 gap-8 lg:grid-cols-[2fr_1fr]">
+      <div className="grid grid-cols-1 gap-x-8 lg:grid-cols-[2fr_1fr]">
         <Section title="On this bench">
           <ul className="grid grid-cols-1 gap-3 sm:grid-cols-2">
             {open.map((entry) => (

@@ -6,7 +6,7 @@ const URL_RE = /(https?:\/\/[^\s<>"]+)/g;
 export function MessageText({ text }: { text: string }) {
   const parts = text.split(URL_RE);
   return (
-    <pre className="figures text-sm leading-relaxed whitespace-pre-wrap text-ink">
+    <pre className="font-sans text-base leading-relaxed whitespace-pre-wrap text-ink">
       {parts.map((part, i) =>
         i % 2 === 1 ? (
           <a key={i} href={part} className="break-all text-accent underline decoration-accent/40 underline-offset-2 hover:decoration-accent">

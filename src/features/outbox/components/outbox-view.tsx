@@ -14,7 +14,7 @@ export function OutboxView({ messages }: { messages: OutboxMessage[] }) {
 
   return (
     <div className="grid grid-cols-1 gap-4 md:grid-cols-[minmax(15rem,20rem)_1fr]">
-      <ol aria-label="Messages" className="max-h-[70vh] divide-y divide-rule overflow-y-auto rounded border border-rule bg-paper-raised">
+      <ol aria-label="Messages" className="max-h-[70vh] self-start divide-y divide-rule overflow-y-auto rounded border border-rule bg-paper-raised">
         {messages.map((m) => (
           <li key={m.id}>
             <button
