@@ -9,12 +9,15 @@ export function symmetricHistogram(x: Float64Array, halfWidth: number, bins: num
   if (!(halfWidth > 0)) throw new Error(`symmetricHistogram: halfWidth must be positive, got ${halfWidth}`);
   const counts = new Array<number>(bins).fill(0);
   const scale = bins / (2 * halfWidth);
+  const counts32 = new Int32Array(bins);
+  const top = bins - 1;
   for (let i = from; i < x.length; i++) {
-    let k = Math.floor((x[i] + halfWidth) * scale);
-    if (k < 0) k = 0;
-    else if (k >= bins) k = bins - 1;
-    counts[k]++;
+    // Clamp in floating point before truncating, so far outliers cannot overflow int32.
+    let t = (x[i] + halfWidth) * scale;
+    t = t < 0 ? 0 : t > top ? top : t;
+    counts32[t | 0]++;
   }
+  for (let k = 0; k < bins; k++) counts[k] = counts32[k];
   const edges = new Array<number>(bins + 1);
   for (let k = 0; k <= bins; k++) edges[k] = halfWidth * ((2 * k) / bins - 1);
   return { edges, counts };
