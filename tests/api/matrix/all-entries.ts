@@ -1,5 +1,6 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { platformEntries } from './platform-entries.ts';
+import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
 
 /**
@@ -9,4 +10,5 @@ import { runsEntries } from './runs-entries.ts';
 export const allEntries: MatrixEntries = {
   ...platformEntries,
   ...runsEntries,
+  ...roadsDynoEntries,
 };

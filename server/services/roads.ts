@@ -1,0 +1,213 @@
+import { randomUUID } from 'node:crypto';
+import { parseMeasuredCsv } from '../../shared/road-library/measured-csv.ts';
+import { roadFigures } from '../../shared/road-library/road-figures.ts';
+import {
+  type CreateRoadInput,
+  type MeasuredUploadFields,
+  RoadDetail,
+  RoadFigures,
+  type RoadListItem,
+  type RoadsResponse,
+  type RoadSource,
+  type UpdateRoadInput,
+} from '../../shared/schemas/road-record.ts';
+import { Road } from '../../shared/schemas/road.ts';
+import type { Db } from '../db/database.ts';
+import { fieldsOf } from '../errors.ts';
+import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from '../repositories/roads.ts';
+import { recordAudit } from './audit.ts';
+import { fail, ok, type Outcome } from './outcome.ts';
+import type { Actor } from './setups.ts';
+
+type Ws = { workspaceId: string };
+
+const noRoad = () => fail('not_found', 'No such road in this workspace.');
+
+function toListItem(r: RoadListRow): RoadListItem {
+  return {
+    id: r.id,
+    name: r.name,
+    kind: r.kind as RoadListItem['kind'],
+    source: r.source,
+    figures: RoadFigures.parse(JSON.parse(r.summary)),
+    createdBy: { id: r.created_by, name: r.created_by_name },
+    createdAt: r.created_at,
+    changedBy: { id: r.updated_by, name: r.updated_by_name },
+    changedAt: r.updated_at,
+  };
+}
+
+function toDetail(r: RoadDetailRow): RoadDetail {
+  const definition = Road.safeParse(JSON.parse(r.definition));
+  if (!definition.success) throw new Error(`stored road ${r.id} no longer matches the road schema: ${definition.error.issues[0]?.message}`);
+  return { ...toListItem(r), definition: definition.data };
+}
+
+/** Figures of a road, or a 400 naming the definition field at fault (e.g. too many samples). */
+function figuresOrFail(road: Road): Outcome<RoadFigures> {
+  const out = roadFigures(road);
+  if (!out.ok) {
+    const [path, ...rest] = out.reason.split(': ');
+    return rest.length ? fail('bad_request', 'The road definition needs attention.', [{ path: path.replace(/^road\./, 'definition.'), message: rest.join(': ') }]) : fail('bad_request', out.reason);
+  }
+  return ok(out.figures);
+}
+
+export async function listRoadLibrary(db: Db, ws: Ws): Promise<RoadsResponse> {
+  return { roads: (await listRoads(db, ws.workspaceId)).map(toListItem) };
+}
+
+export async function getRoad(db: Db, ws: Ws, roadId: string): Promise<Outcome<RoadDetail>> {
+  const row = await findRoad(db, ws.workspaceId, roadId);
+  return row ? ok(toDetail(row)) : noRoad();
+}
+
+const kindWords: Record<Road['kind'], string> = {
+  iso8608: 'ISO 8608 random road',
+  measured: 'measured profile',
+  sine: 'sine road',
+  sweep: 'swept sine',
+  bump: 'bump',
+  pothole: 'pothole',
+  kerb: 'kerb',
+};
+
+/**
+ * Saves a road with its figures. `source` says whether it was typed in or uploaded; the summary
+ * (length, step, fitted ISO class) is computed here so lists never recompute it.
+ */
+export async function saveNewRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, now: Date): Promise<Outcome<RoadDetail>> {
+  const figures = figuresOrFail(input.definition);
+  if (!figures.ok) return figures;
+  const id = randomUUID();
+  const at = now.toISOString();
+  return db.transaction().execute(async (trx) => {
+    await insertRoad(trx, {
+      id,
+      workspace_id: ws.workspaceId,
+      name: input.name,
+      definition: JSON.stringify({ ...input.definition, name: input.name }),
+      source,
+      summary: JSON.stringify(figures.value),
+      created_by: actor.id,
+      created_at: at,
+      updated_by: actor.id,
+      updated_at: at,
+    });
+    await recordAudit(trx, {
+      workspaceId: ws.workspaceId,
+      actorId: actor.id,
+      action: source === 'measured' ? 'road.uploaded' : 'road.created',
+      entityType: 'road',
+      entityId: id,
+      summary: `${actor.name} ${source === 'measured' ? 'uploaded' : 'added'} the ${kindWords[input.definition.kind]} "${input.name}".`,
+      at: now,
+    });
+    const row = await findRoad(trx, ws.workspaceId, id);
+    if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
+    return ok(toDetail(row));
+  });
+}
+
+export function createRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
+  return saveNewRoad(db, ws, actor, input, input.definition.kind === 'measured' ? 'measured' : 'defined', now);
+}
+
+/** Rename or redefine a road; runs that drove it keep their own copy of the old definition. */
+export async function updateRoad(db: Db, ws: Ws, actor: Actor, roadId: string, input: UpdateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
+  return db.transaction().execute(async (trx) => {
+    const row = await findRoad(trx, ws.workspaceId, roadId);
+    if (!row) return noRoad();
+    const current = toDetail(row);
+    const name = input.name ?? current.name;
+    const definition = input.definition ?? current.definition;
+    let summary = row.summary;
+    if (input.definition) {
+      if (current.source === 'measured' && input.definition.kind !== 'measured') {
+        return fail('bad_request', 'A measured road stays measured; add a new road for a different kind.', [{ path: 'definition.kind', message: 'must stay measured' }]);
+      }
+      const figures = figuresOrFail(input.definition);
+      if (!figures.ok) return figures;
+      summary = JSON.stringify(figures.value);
+    }
+    const at = now.toISOString();
+    await updateRoadRow(trx, ws.workspaceId, roadId, {
+      name,
+      definition: JSON.stringify({ ...definition, name }),
+      summary,
+      source: definition.kind === 'measured' ? 'measured' : 'defined',
+      updated_by: actor.id,
+      updated_at: at,
+    });
+    const what = [input.name !== undefined && input.name !== current.name ? `renamed "${current.name}" to "${name}"` : '', input.definition ? `changed the definition of "${name}"` : '']
+      .filter(Boolean)
+      .join(' and ');
+    await recordAudit(trx, {
+      workspaceId: ws.workspaceId,
+      actorId: actor.id,
+      action: 'road.updated',
+      entityType: 'road',
+      entityId: roadId,
+      summary: `${actor.name} ${what || `saved "${name}" unchanged`}.`,
+      at: now,
+    });
+    const updated = await findRoad(trx, ws.workspaceId, roadId);
+    if (!updated) throw new Error(`road ${roadId} vanished inside its own transaction`);
+    return ok(toDetail(updated));
+  });
+}
+
+/** Removes a road from the library; saved runs keep the road they drove (their own JSON copy). */
+export async function deleteRoad(db: Db, ws: Ws, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
+  return db.transaction().execute(async (trx) => {
+    const row = await findRoad(trx, ws.workspaceId, roadId);
+    if (!row) return noRoad();
+    await deleteRoadRow(trx, ws.workspaceId, roadId);
+    await recordAudit(trx, {
+      workspaceId: ws.workspaceId,
+      actorId: actor.id,
+      action: 'road.deleted',
+      entityType: 'road',
+      entityId: roadId,
+      summary: `${actor.name} removed the road "${row.name}" from the library.`,
+      at: now,
+    });
+    return ok(null);
+  });
+}
+
+/** Largest measured profile file accepted, bytes (about 500 000 rows of two short numbers). */
+export const MEASURED_MAX_BYTES = 8 * 1024 * 1024;
+
+/**
+ * A measured profile from an uploaded CSV: parsed (line-numbered errors, nothing saved when the
+ * file is bad), checked against the road schema, then saved with its figures.
+ */
+export async function uploadMeasuredRoad(
+  db: Db,
+  ws: Ws,
+  actor: Actor,
+  file: { text: string; filename: string },
+  fields: MeasuredUploadFields,
+  now: Date,
+): Promise<Outcome<RoadDetail>> {
+  const parsed = parseMeasuredCsv(file.text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit });
+  if (!parsed.ok) {
+    return fail(
+      'bad_request',
+      `${file.filename} was not saved: ${parsed.errors[0].line !== undefined ? `line ${parsed.errors[0].line}: ` : ''}${parsed.errors[0].message}`,
+      parsed.errors.map((e) => ({ path: e.line !== undefined ? `line ${e.line}` : 'file', message: e.message })),
+    );
+  }
+  const definition = Road.safeParse({
+    kind: 'measured',
+    name: fields.name,
+    points: parsed.points,
+    ...(fields.detrend ? { detrend: fields.detrend } : {}),
+    ...(fields.spacing ? { spacing: fields.spacing } : {}),
+  });
+  if (!definition.success) {
+    return fail('bad_request', `${file.filename} was not saved: the profile does not make a valid road.`, fieldsOf(definition.error));
+  }
+  return saveNewRoad(db, ws, actor, { name: fields.name, definition: definition.data }, 'measured', now);
+}
