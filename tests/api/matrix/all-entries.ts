@@ -2,6 +2,7 @@ import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
+import { setupsEntries } from './setups-entries.ts';
 
 /**
  * Every matrix entry. A feature that registers routes adds `tests/api/matrix/<feature>-entries.ts`
@@ -11,4 +12,5 @@ export const allEntries: MatrixEntries = {
   ...platformEntries,
   ...runsEntries,
   ...roadsDynoEntries,
+  ...setupsEntries,
 };
