@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { Id, IsoDateTime } from './fields.ts';
+import { PersonRef } from './setup-record.ts';
 
 /**
  * Damper target sheets: the forces a damper must make at chosen piston speeds, per direction,
@@ -54,9 +55,6 @@ export const TargetSheetContent = z.object({
   notes: z.string().max(4000),
 });
 export type TargetSheetContent = z.infer<typeof TargetSheetContent>;
-
-export const PersonRef = z.object({ id: Id, name: z.string() });
-export type PersonRef = z.infer<typeof PersonRef>;
 
 /** Another sheet named by id and number (for supersession links). */
 export const SheetRef = z.object({ id: Id, number: SheetNumber });

@@ -1,3 +1,4 @@
+import type { StudyCompromise } from '../schemas/study-result.ts';
 import { dominates, paretoFront } from './pareto.ts';
 
 /** A figure judged by the compromise. */
@@ -21,30 +22,10 @@ export interface CompromisePoint {
 }
 
 /** How the winner compares with one neighbour on the Pareto front. */
-export interface NeighbourComparison {
-  index: number;
-  /** Per weighed objective: winner and neighbour raw values, and 100·(winner − other)/|other| (null if other is 0). */
-  deltas: { objective: number; winner: number; other: number; pct: number | null }[];
-  sentence: string;
-}
+export type NeighbourComparison = Extract<StudyCompromise, { ok: true }>['neighbours'][number];
 
-export type CompromiseResult =
-  | {
-      ok: true;
-      winner: number;
-      score: number;
-      /** Score of every point; null where left out (infeasible or a figure missing). */
-      scores: (number | null)[];
-      /** Range of each weighed objective's cost over the scored points (`max` goals negated). */
-      ranges: { objective: number; min: number; max: number }[];
-      /** Other points with the same score. */
-      tiedWith: number[];
-      /** Indices of the non-dominated scored points (weighed objectives only). */
-      front: number[];
-      neighbours: NeighbourComparison[];
-      explanation: string[];
-    }
-  | { ok: false; reason: 'no-points' | 'no-feasible-point' | 'no-weight'; explanation: string[] };
+/** The answer: the winner with scores, front and explanation, or why there is none. */
+export type CompromiseResult = StudyCompromise;
 
 const fmt = (x: number, digits = 3) => String(Number(x.toPrecision(digits)));
 const pctText = (x: number) => `${Math.abs(x) < 0.05 ? Math.abs(x).toFixed(2) : Math.abs(x).toFixed(1)} %`;

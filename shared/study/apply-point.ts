@@ -1,0 +1,75 @@
+import type { EquivalentDampingChoice } from '../schemas/run.ts';
+import { Setup, type DamperCurve, type SetupInput } from '../schemas/setup.ts';
+import type { StudyPointValues } from '../schemas/study-result.ts';
+import { equivalentDampingLeastSquares, equivalentDampingSecant } from '../sim/damper.ts';
+import { linearCorner } from '../sim/quarter-car.ts';
+
+export type ApplyPointResult = { ok: true; setup: Setup; notes: string[] } | { ok: false; message: string };
+
+const scaleCurve = (curve: DamperCurve, s: number): [number, number][] => curve.map(([v, f]) => [v, f * s]);
+
+/**
+ * Classic body damping ratio of a setup, ζ ≈ c/(2·√(ks·ms)) with c and ks at the wheel, exactly
+ * as the modal figures state it (shared/sim/linear/modal.ts): c = c_eq·MR² from the chosen
+ * equivalent-coefficient definition (default least squares over 0–0.3 m/s), ks = springRate·MR²
+ * plus the gas rate at static.
+ */
+export function classicBodyDampingRatio(setup: Setup, choice?: EquivalentDampingChoice): number {
+  const eq =
+    choice?.method === 'secant'
+      ? equivalentDampingSecant(setup.damper, choice.referenceSpeed)
+      : equivalentDampingLeastSquares(setup.damper, { maxSpeed: choice?.method === 'least-squares' ? choice.maxSpeed : undefined });
+  const c = linearCorner(setup, eq);
+  return c.wheelDamping / (2 * Math.sqrt(c.wheelRate * c.sprungMass));
+}
+
+/**
+ * The base setup with a point's swept values applied, in this order:
+ * 1. `springRate` (at the spring, N/m), `tyreRate`, `unsprungMass` replace the setup's values;
+ *    `gasForce` sets the static gas force (a charge given by pressure keeps its rod area and
+ *    stiffening, its pressure set to force/area; 0 removes the charge).
+ * 2. `damperScale` multiplies every force of both curves; `compressionScale` and `reboundScale`
+ *    multiply one direction's forces (speeds unchanged).
+ * 3. `targetBodyDampingRatio` then scales both curves by one factor so the classic estimate
+ *    (`classicBodyDampingRatio`) equals it; the curve shapes and the compression/rebound split
+ *    are kept. The equivalent coefficient is linear in force, so one factor reaches it exactly.
+ * `speed` belongs to the run, not the setup, and is ignored here. The result is parsed by the
+ * setup schema, so a value it refuses comes back as a failure naming the field.
+ */
+export function applyPoint(base: Setup, values: StudyPointValues, opts: { equivalentDamping?: EquivalentDampingChoice } = {}): ApplyPointResult {
+  const next: SetupInput = structuredClone(base) as SetupInput;
+  const notes: string[] = [];
+  if (values.springRate !== undefined) next.springRate = values.springRate;
+  if (values.tyreRate !== undefined) next.tyreRate = values.tyreRate;
+  if (values.unsprungMass !== undefined) next.unsprungMass = values.unsprungMass;
+  if (values.gasForce !== undefined) {
+    const gas = base.damper.gas;
+    if (values.gasForce === 0) next.damper.gas = undefined;
+    else if (gas?.pressure !== undefined && gas.rodArea !== undefined) next.damper.gas = { ...gas, pressure: values.gasForce / gas.rodArea };
+    else next.damper.gas = { ...(gas ?? {}), force: values.gasForce };
+  }
+  const both = values.damperScale ?? 1;
+  const c = both * (values.compressionScale ?? 1);
+  const r = both * (values.reboundScale ?? 1);
+  next.damper.compression = scaleCurve(base.damper.compression, c);
+  next.damper.rebound = scaleCurve(base.damper.rebound, r);
+
+  let parsed = Setup.safeParse(next);
+  if (!parsed.success) return failure(parsed.error);
+  if (values.targetBodyDampingRatio !== undefined) {
+    const now = classicBodyDampingRatio(parsed.data, opts.equivalentDamping);
+    if (!(now > 0)) return { ok: false, message: 'damper: the curves make no force over the fit range, so no scaling reaches a damping ratio' };
+    const s = values.targetBodyDampingRatio / now;
+    next.damper.compression = scaleCurve(parsed.data.damper.compression, s);
+    next.damper.rebound = scaleCurve(parsed.data.damper.rebound, s);
+    notes.push(`curves scaled ×${s.toFixed(3)} to reach body damping ratio ${values.targetBodyDampingRatio}`);
+    parsed = Setup.safeParse(next);
+    if (!parsed.success) return failure(parsed.error);
+  }
+  return { ok: true, setup: parsed.data, notes };
+}
+
+function failure(error: { issues: { path: PropertyKey[]; message: string }[] }): ApplyPointResult {
+  const i = error.issues[0];
+  return { ok: false, message: `${i.path.map(String).join('.')}: ${i.message}` };
+}

@@ -1,0 +1,60 @@
+import type { StudyDefinition } from '../schemas/study.ts';
+import type { StudyPointResult, StudyPointValues, StudyRunOutcome, StudyViolation } from '../schemas/study-result.ts';
+import { aggregateFigures } from './aggregate.ts';
+
+const pct = (x: number) => `${(100 * x).toFixed(1)} %`;
+const where = (run: StudyRunOutcome, roadName: (i: number) => string) => `on ${roadName(run.roadIndex)} at ${run.speed} m/s`;
+
+/**
+ * Limits checked run by run: a point is feasible only when every road and speed meets every
+ * limit, whatever the aggregation chosen for the figures. A limit that needs a figure the run
+ * lacks (stroke used without a stroke in the setup) fails as not checkable rather than passing.
+ */
+export function runViolations(def: Pick<StudyDefinition, 'constraints'>, run: StudyRunOutcome, roadName: (i: number) => string = (i) => `road ${i + 1}`): StudyViolation[] {
+  const at = { roadIndex: run.roadIndex, speed: run.speed };
+  if (!run.figures) return [{ kind: 'runFailed', limit: null, value: null, ...at, message: `the run ${where(run, roadName)} failed: ${run.error ?? 'no reason given'}` }];
+  const f = run.figures;
+  const c = def.constraints;
+  const out: StudyViolation[] = [];
+  if (c.maxStrokeUsed !== undefined) {
+    if (f.strokeUsed === undefined) {
+      out.push({ kind: 'notCheckable', limit: c.maxStrokeUsed, value: null, ...at, message: 'the setup gives no available stroke, so stroke used cannot be checked' });
+    } else if (f.strokeUsed > c.maxStrokeUsed) {
+      out.push({ kind: 'maxStrokeUsed', limit: c.maxStrokeUsed, value: f.strokeUsed, ...at, message: `uses ${pct(f.strokeUsed)} of the stroke ${where(run, roadName)} (limit ${pct(c.maxStrokeUsed)})` });
+    }
+  }
+  if (c.maxLiftOffFraction !== undefined && f.liftOffFraction !== undefined && f.liftOffFraction > c.maxLiftOffFraction) {
+    out.push({ kind: 'maxLiftOffFraction', limit: c.maxLiftOffFraction, value: f.liftOffFraction, ...at, message: `wheel off the road ${pct(f.liftOffFraction)} of the time ${where(run, roadName)} (limit ${pct(c.maxLiftOffFraction)})` });
+  }
+  if (c.minTyreLoad !== undefined && f.tyreLoadMin !== undefined && f.tyreLoadMin < c.minTyreLoad) {
+    out.push({ kind: 'minTyreLoad', limit: c.minTyreLoad, value: f.tyreLoadMin, ...at, message: `tyre load falls to ${Math.round(f.tyreLoadMin)} N ${where(run, roadName)} (limit ${Math.round(c.minTyreLoad)} N)` });
+  }
+  return out;
+}
+
+/**
+ * One point's result from its runs: figures aggregated over the successful runs, the objective
+ * values in the definition's order, and feasibility with every reason. Pass `setupError` when
+ * the swept values could not make a valid setup (the point then has no runs).
+ */
+export function evaluatePoint(
+  def: Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'>,
+  point: { index: number; values: StudyPointValues },
+  runs: readonly StudyRunOutcome[],
+  opts: { setupError?: string; roadName?: (i: number) => string } = {},
+): StudyPointResult {
+  const violations: StudyViolation[] = opts.setupError
+    ? [{ kind: 'setupInvalid', limit: null, value: null, roadIndex: null, speed: null, message: opts.setupError }]
+    : runs.flatMap((r) => runViolations(def, r, opts.roadName));
+  const ok = runs.flatMap((r) => (r.figures ? [r.figures] : []));
+  const figures = aggregateFigures(ok, def.aggregate);
+  return {
+    index: point.index,
+    values: point.values,
+    runs: [...runs],
+    figures,
+    objectives: def.objectives.map((o) => figures[o.figure] ?? null),
+    feasible: violations.length === 0 && runs.length > 0,
+    violations,
+  };
+}

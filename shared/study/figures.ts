@@ -1,0 +1,71 @@
+import type { Metrics } from '../schemas/metrics.ts';
+import type { StudyFigureKey, StudyFigures } from '../schemas/study.ts';
+
+/** Which chart family a figure belongs to; `comfort` and `grip` feed the trade-off chart. */
+export type FigureFamily = 'comfort' | 'grip' | 'travel' | 'damper';
+
+export interface FigureInfo {
+  /** Words for tables, charts and explanations. */
+  label: string;
+  /** SI unit ('' for ratios). */
+  unit: string;
+  /** `min`: lower is better; `max`: higher is better. "Worst" aggregation follows it. */
+  goal: 'min' | 'max';
+  family: FigureFamily;
+}
+
+/**
+ * Words, units and sense of every study figure. Damper power and energy are neither good nor
+ * bad in themselves; they are treated as lower-is-better so "worst" means the most dissipated.
+ */
+export const studyFigureInfo: Record<StudyFigureKey, FigureInfo> = {
+  bodyAccelRms: { label: 'body acceleration RMS', unit: 'm/s²', goal: 'min', family: 'comfort' },
+  bodyAccelPeak: { label: 'peak body acceleration', unit: 'm/s²', goal: 'min', family: 'comfort' },
+  bodyAccelCrest: { label: 'body acceleration crest factor', unit: '', goal: 'min', family: 'comfort' },
+  bodyAccelWkRms: { label: 'Wk-weighted body acceleration', unit: 'm/s²', goal: 'min', family: 'comfort' },
+  vdv: { label: 'vibration dose value', unit: 'm/s^1.75', goal: 'min', family: 'comfort' },
+  tyreLoadRms: { label: 'dynamic tyre load RMS', unit: 'N', goal: 'min', family: 'grip' },
+  tyreLoadRatio: { label: 'tyre load variation', unit: '', goal: 'min', family: 'grip' },
+  tyreLoadMin: { label: 'minimum tyre load', unit: 'N', goal: 'max', family: 'grip' },
+  liftOffFraction: { label: 'time off the road', unit: '', goal: 'min', family: 'grip' },
+  travelRms: { label: 'suspension travel RMS', unit: 'm', goal: 'min', family: 'travel' },
+  travelMaxCompression: { label: 'largest compression', unit: 'm', goal: 'min', family: 'travel' },
+  travelMaxExtension: { label: 'largest extension', unit: 'm', goal: 'min', family: 'travel' },
+  strokeUsedCompression: { label: 'compression stroke used', unit: '', goal: 'min', family: 'travel' },
+  strokeUsedExtension: { label: 'extension stroke used', unit: '', goal: 'min', family: 'travel' },
+  strokeUsed: { label: 'stroke used', unit: '', goal: 'min', family: 'travel' },
+  bumpStopTime: { label: 'time on the bump stop', unit: 's', goal: 'min', family: 'travel' },
+  reboundStopTime: { label: 'time on the rebound stop', unit: 's', goal: 'min', family: 'travel' },
+  damperVelocityRms: { label: 'damper speed RMS', unit: 'm/s', goal: 'min', family: 'damper' },
+  damperPowerMean: { label: 'mean damper power', unit: 'W', goal: 'min', family: 'damper' },
+  damperEnergy: { label: 'damper energy', unit: 'J', goal: 'min', family: 'damper' },
+};
+
+/** The single-number figures of one run's metrics, plus `strokeUsed` (the larger way, when a stroke is given). */
+export function figuresFromMetrics(m: Metrics): StudyFigures {
+  const f: StudyFigures = {
+    bodyAccelRms: m.bodyAccelRms,
+    bodyAccelPeak: m.bodyAccelPeak,
+    bodyAccelCrest: m.bodyAccelCrest,
+    bodyAccelWkRms: m.bodyAccelWkRms,
+    vdv: m.vdv,
+    tyreLoadRms: m.tyreLoadRms,
+    tyreLoadRatio: m.tyreLoadRatio,
+    tyreLoadMin: m.tyreLoadMin,
+    liftOffFraction: m.liftOffFraction,
+    travelRms: m.travelRms,
+    travelMaxCompression: m.travelMaxCompression,
+    travelMaxExtension: m.travelMaxExtension,
+    bumpStopTime: m.bumpStopTime,
+    reboundStopTime: m.reboundStopTime,
+    damperVelocityRms: m.damperVelocityRms,
+    damperPowerMean: m.damperPowerMean,
+    damperEnergy: m.damperEnergy,
+  };
+  if (m.strokeUsedCompression !== undefined) f.strokeUsedCompression = m.strokeUsedCompression;
+  if (m.strokeUsedExtension !== undefined) f.strokeUsedExtension = m.strokeUsedExtension;
+  if (m.strokeUsedCompression !== undefined || m.strokeUsedExtension !== undefined) {
+    f.strokeUsed = Math.max(m.strokeUsedCompression ?? 0, m.strokeUsedExtension ?? 0);
+  }
+  return f;
+}
