@@ -128,11 +128,19 @@ export function equivalentDampingSecant(damper: Damper, referenceSpeed = 0.1): E
   };
 }
 
-/** Knots of a table from an implied origin, ready for fast lookup in the equations of motion. */
+/**
+ * Segments of a table from an implied origin, ready for fast lookup in the equations of motion.
+ * Each segment is anchored at its left end, so the first one gives exactly 0 N at 0 m/s:
+ * anchoring at the right end left a rounding-sized force at rest that differed between
+ * compression and rebound, a jump odex's stability check could not step across.
+ */
 interface CompiledTable {
+  /** Right end of segment i (the table's velocities). */
   v: Float64Array;
-  f: Float64Array;
-  /** Slope of the segment that ends at knot i (index 0: the segment from the origin). */
+  /** Left end of segment i and the force there. */
+  v0: Float64Array;
+  f0: Float64Array;
+  /** Slope of segment i. */
   s: Float64Array;
 }
 
@@ -140,30 +148,30 @@ function compileTable(table: Table): CompiledTable {
   const pts = table[0][0] === 0 ? table.slice(1) : table;
   const n = pts.length;
   const v = new Float64Array(n);
-  const f = new Float64Array(n);
+  const v0 = new Float64Array(n);
+  const f0 = new Float64Array(n);
   const s = new Float64Array(n);
-  let v0 = 0;
-  let f0 = 0;
+  let vl = 0;
+  let fl = 0;
   for (let i = 0; i < n; i++) {
     v[i] = pts[i][0];
-    f[i] = pts[i][1];
-    s[i] = (f[i] - f0) / (v[i] - v0);
-    v0 = v[i];
-    f0 = f[i];
+    v0[i] = vl;
+    f0[i] = fl;
+    s[i] = (pts[i][1] - fl) / (pts[i][0] - vl);
+    vl = pts[i][0];
+    fl = pts[i][1];
   }
-  return { v, f, s };
+  return { v, v0, f0, s };
 }
 
 /** Lookup on a compiled table: the segment ending at the first knot at or above `x`. */
 function compiledLookup(t: CompiledTable): (x: number) => number {
-  const v = t.v;
-  const f = t.f;
-  const s = t.s;
+  const { v, v0, f0, s } = t;
   const last = v.length - 1;
   return (x) => {
     let i = 0;
     while (i < last && x > v[i]) i++;
-    return f[i] + s[i] * (x - v[i]);
+    return f0[i] + s[i] * (x - v0[i]);
   };
 }
 

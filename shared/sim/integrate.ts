@@ -60,8 +60,16 @@ export interface IntegrationStats {
   integrateMs: number;
 }
 
+/** The integrated states on the output grid (m, m/s; from static equilibrium, up positive). */
+export interface StateColumns {
+  bodyDisplacement: Float64Array;
+  bodyVelocity: Float64Array;
+  wheelDisplacement: Float64Array;
+  wheelVelocity: Float64Array;
+}
+
 export type IntegrationOutcome =
-  | { ok: true; trace: TraceColumns; stats: IntegrationStats }
+  | { ok: true; trace: TraceColumns; states: StateColumns; stats: IntegrationStats }
   | { ok: false; reason: string };
 
 export const DEFAULT_TOLERANCE = 1e-4;
@@ -93,6 +101,8 @@ function wheelHopHz(model: CornerModel): number {
 
 /** Regime-switch values closer to zero than this count as "on the boundary" (N for the tyre, m for stops). */
 const SWITCH_DEADBAND = [1e-9, 1e-12, 1e-12];
+/** A step shorter than this (relative to t) counts as stalled. */
+const STALL_STEP = 1e-13;
 /** Restarts allowed per run before switch tracking is abandoned (a chattering contact). */
 const MAX_EVENTS = 20_000;
 
@@ -103,6 +113,12 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
   const T = opts.duration;
   const nOut = Math.floor(T / dt + 1e-9) + 1;
   const trace = allocateTrace(nOut, dt);
+  const states: StateColumns = {
+    bodyDisplacement: new Float64Array(nOut),
+    bodyVelocity: new Float64Array(nOut),
+    wheelDisplacement: new Float64Array(nOut),
+    wheelVelocity: new Float64Array(nOut),
+  };
   const forces = newCornerForces();
   const rb = new Float64Array(2);
   const sw = new Float64Array(SWITCH_COUNT);
@@ -134,6 +150,10 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
     trace.bumpStopForce[i] = forces.bumpStopForce;
     trace.reboundStopForce[i] = forces.reboundStopForce;
     trace.road[i] = rb[0];
+    states.bodyDisplacement[i] = zs;
+    states.bodyVelocity[i] = vs;
+    states.wheelDisplacement[i] = zu;
+    states.wheelVelocity[i] = vu;
   };
 
   /** Sign of each switch at a state (0 inside the deadband). */
@@ -178,6 +198,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
   let eventAt = -1;
   let events = 0;
   let lastStep = 0;
+  let stalled = false;
 
   // Grid times are i·dt, compared with a hair of slack so a sample landing on a step end
   // (or on the run's end) is not lost to rounding.
@@ -189,6 +210,10 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
       stepStart = x;
       stateAtStart = y.slice();
       return;
+    }
+    if (x - xOld <= STALL_STEP * Math.max(1, x)) {
+      stalled = true;
+      return false;
     }
     signsAt(x, y[0], y[1], y[2], y[3], now);
     if (events < MAX_EVENTS) {
@@ -233,6 +258,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
     const end = target > t + slack && target < nextBreak ? target : nextBreak;
     solver.initialStepSize = lastStep > 0 ? Math.min(lastStep, hMax) : 1e-4;
     eventAt = -1;
+    stalled = false;
     const res = solver.solve(rhs, t, y, end, solOut);
     segments++;
     steps += res.nAccept;
@@ -243,6 +269,16 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
       t = stepStart;
       y = stateAtStart;
       target = eventAt;
+      continue;
+    }
+    if (res.outcome === Outcome.EarlyReturn && stalled && solver.stabilityCheckCount > 0) {
+      // odex's step-size heuristics (its stability check and dense-output error estimate)
+      // can starve the step on a right-hand side that is rough at the rounding level, which
+      // happens only once the motion has died out far below the tolerances. Go on without them.
+      solver.stabilityCheckCount = 0;
+      solver.denseOutputErrorEstimator = false;
+      t = stepStart;
+      y = stateAtStart;
       continue;
     }
     if (res.outcome !== Outcome.Converged) {
@@ -263,6 +299,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
   return {
     ok: true,
     trace,
+    states,
     stats: { steps, rejectedSteps: rejected, rhsEvaluations: evals, segments, integrateMs: performance.now() - started },
   };
 }

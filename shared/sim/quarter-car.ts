@@ -120,7 +120,6 @@ export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
   const kt = setup.tyreRate;
   const ct = setup.tyreDamping;
   const fz0 = statics.tyreLoad;
-  const dt0 = statics.tyreDeflection;
   const damper = compileDamperForce(setup.damper);
   const gasChange = compileGasChange(setup.damper.gas);
   const bump = compileStop(setup.bumpStop, 'bump');
@@ -139,20 +138,24 @@ export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
       const fg = gasChange === null ? 0 : gasChange(mr * x);
       // Suspension force on the body beyond its static share (up positive).
       const fs = ks * x + mr * (fd + fg) + fb - fr;
-      const ft = kt * (dt0 + zRoad - zu) + ct * (vRoad - vu);
-      const tyre = ft > 0 ? ft : 0;
+      // Tyre force change from static, clipped where the total would go negative. Written
+      // relative to Fz0 (kt × static deflection = Fz0) so that near rest no rounding noise of Fz0
+      // enters the wheel acceleration: that noise once starved odex dense-output error
+      // estimate into ever smaller steps.
+      const dyn = kt * (zRoad - zu) + ct * (vRoad - vu);
+      const change = dyn > -fz0 ? dyn : -fz0;
       out.bodyAccel = fs / ms;
-      out.wheelAccel = (tyre - fz0 - fs) / mu;
+      out.wheelAccel = (change - fs) / mu;
       out.travel = x;
       out.damperVelocity = vd;
       out.damperForce = fd;
       out.bumpStopForce = fb;
       out.reboundStopForce = fr;
-      out.tyreLoad = tyre;
+      out.tyreLoad = fz0 + change;
     },
     switches(zs, _vs, zu, vu, zRoad, vRoad, out) {
       const x = zu - zs;
-      out[0] = kt * (dt0 + zRoad - zu) + ct * (vRoad - vu);
+      out[0] = fz0 + kt * (zRoad - zu) + ct * (vRoad - vu);
       out[1] = setup.bumpStop ? x - setup.bumpStop.clearance : -1;
       out[2] = setup.reboundStop ? -x - setup.reboundStop.clearance : -1;
     },

@@ -23,6 +23,17 @@ export class Solver {
   denseOutput: boolean;
   denseComponents: number[] | undefined;
   interpolationFormulaDegree: number;
+  uRound: number;
+  stabilityCheckCount: number;
+  stabilityCheckTableLines: number;
+  denseOutputErrorEstimator: boolean;
+  stepSizeReductionFactor: number;
+  stepSizeFac1: number;
+  stepSizeFac2: number;
+  stepSizeFac3: number;
+  stepSizeFac4: number;
+  stepSafetyFactor1: number;
+  stepSafetyFactor2: number;
   relativeTolerance: number | number[];
   absoluteTolerance: number | number[];
   debug: boolean;
