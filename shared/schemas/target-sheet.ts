@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { Id, IsoDateTime } from './fields.ts';
+import { DynoPeakPoints } from './dyno.ts';
+import { DynoUploadFields } from './dyno-file.ts';
 import { PersonRef } from './setup-record.ts';
 
 /**
@@ -161,3 +163,93 @@ export const ConformityRecord = z.object({
   report: ConformityReport,
 });
 export type ConformityRecord = z.infer<typeof ConformityRecord>;
+
+/** GET …/target-sheets — newest change first. */
+export const TargetSheetsResponse = z.object({ sheets: z.array(TargetSheet) });
+export type TargetSheetsResponse = z.infer<typeof TargetSheetsResponse>;
+
+/** A sheet with its history of status changes (oldest first). */
+export const TargetSheetDetail = z.object({ sheet: TargetSheet, history: z.array(TargetSheetEvent) });
+export type TargetSheetDetail = z.infer<typeof TargetSheetDetail>;
+
+/**
+ * Answer to a status change: the sheet, its history, who was e-mailed and, on release, the
+ * caution that released targets change parts fitted to vehicles.
+ */
+export const TargetSheetTransitionResult = TargetSheetDetail.extend({
+  /** How many people the change was e-mailed to. */
+  notified: z.number().int().nonnegative(),
+  notice: z.string().nullable(),
+});
+export type TargetSheetTransitionResult = z.infer<typeof TargetSheetTransitionResult>;
+
+const ReferenceSpeeds = z
+  .array(z.number().positive().max(20))
+  .min(1, 'Give at least one reference speed')
+  .max(32, 'At most 32 reference speeds')
+  .refine((v) => new Set(v).size === v.length, 'Each reference speed once');
+
+/** POST …/target-sheets — targets read off one revision's damper curve. */
+export const CreateTargetSheetInput = z.object({
+  setupId: Id,
+  revision: z.number().int().positive(),
+  /** Reference piston speeds, m/s; the shared default spread when left out. */
+  speeds: ReferenceSpeeds.optional(),
+  /** Band for every point (editable per point afterwards). */
+  tolPct: z.number().min(0).max(100).optional(),
+  floorN: z.number().nonnegative().max(1e5).optional(),
+});
+export type CreateTargetSheetInput = z.infer<typeof CreateTargetSheetInput>;
+
+/** POST …/:sheetId/return */
+export const ReturnTargetSheetInput = z.object({
+  reason: z.string().trim().min(1, 'Say why the sheet is sent back').max(2000, 'At most 2000 characters'),
+});
+export type ReturnTargetSheetInput = z.infer<typeof ReturnTargetSheetInput>;
+
+/**
+ * POST …/:sheetId/supersede — a new draft that replaces a released sheet. With `revision` the
+ * targets are read again from that revision of the same setup at the sheet's speeds and bands;
+ * without it the released targets are copied as they stand.
+ */
+export const SupersedeTargetSheetInput = z.object({ revision: z.number().int().positive().optional() });
+export type SupersedeTargetSheetInput = z.infer<typeof SupersedeTargetSheetInput>;
+
+/** One measured damper of a stored check: its label, file and the peak points read from it. */
+export const MeasuredDamper = z.object({
+  label: z.string(),
+  fileName: z.string(),
+  peaks: DynoPeakPoints,
+  warnings: z.array(z.string()),
+});
+export type MeasuredDamper = z.infer<typeof MeasuredDamper>;
+
+/** A stored check with the measured points behind it (for the band plot). */
+export const ConformityRecordDetail = ConformityRecord.extend({
+  measured: z.array(MeasuredDamper),
+  /** The sheet's status when the check was made (a check of a draft is not a release check). */
+  sheetStatus: TargetSheetStatus,
+});
+export type ConformityRecordDetail = z.infer<typeof ConformityRecordDetail>;
+
+/** GET …/:sheetId/checks — newest first. */
+export const ConformityChecksResponse = z.object({ checks: z.array(ConformityRecordDetail) });
+export type ConformityChecksResponse = z.infer<typeof ConformityChecksResponse>;
+
+/** Most dyno files in one conformity upload (one file per physical damper). */
+export const DYNO_CHECK_MAX_FILES = 12;
+
+const blankToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
+
+/**
+ * Form fields beside the `file` parts of POST …/:sheetId/checks (multipart text). The reading
+ * options apply to every file; `label` is repeated once per file in the same order (a blank or
+ * missing label takes the file name without its extension).
+ */
+export const DynoCheckFields = DynoUploadFields.extend({
+  label: z.preprocess(
+    (v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]),
+    z.array(z.preprocess(blankToUndefined, z.string().trim().max(120, 'A damper label has at most 120 characters').optional())),
+  ),
+});
+export type DynoCheckFields = z.infer<typeof DynoCheckFields>;
