@@ -31,7 +31,9 @@ export function resampleMeasured(road: MeasuredRoad): ResampleOutcome {
   const length = pts[pts.length - 1][0] - x0;
   const gaps: number[] = [];
   for (let i = 1; i < pts.length; i++) gaps.push(pts[i][0] - pts[i - 1][0]);
-  const dx = road.spacing ?? median(gaps);
+  // The default step is the median spacing, nudged so a whole number of steps spans the
+  // profile (evenly spaced points then land exactly on the grid).
+  const dx = road.spacing ?? length / Math.max(1, Math.round(length / median(gaps)));
   const n = Math.floor(length / dx + 1e-9) + 1;
   if (n > MAX_SAMPLES) {
     return { ok: false, reason: `road.spacing: ${dx} m over ${length.toFixed(1)} m makes more than ${MAX_SAMPLES} samples` };
