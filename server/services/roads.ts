@@ -1,5 +1,4 @@
 import { randomUUID } from 'node:crypto';
-import { parseMeasuredCsv } from '../../shared/road-library/measured-csv.ts';
 import { roadFigures } from '../../shared/road-library/road-figures.ts';
 import {
   type CreateRoadInput,
@@ -12,6 +11,7 @@ import {
   type UpdateRoadInput,
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
+import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
 import type { Db } from '../db/database.ts';
 import { fieldsOf } from '../errors.ts';
 import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from '../repositories/roads.ts';
@@ -176,8 +176,9 @@ export async function deleteRoad(db: Db, ws: Ws, actor: Actor, roadId: string, n
   });
 }
 
-/** Largest measured profile file accepted, bytes (about 500 000 rows of two short numbers). */
+/** Largest measured profile file accepted, bytes, and its rows (about 500 000 rows of two short numbers). */
 export const MEASURED_MAX_BYTES = 8 * 1024 * 1024;
+export const MEASURED_MAX_ROWS = 500_000;
 
 /**
  * A measured profile from an uploaded CSV: parsed (line-numbered errors, nothing saved when the
@@ -191,18 +192,12 @@ export async function uploadMeasuredRoad(
   fields: MeasuredUploadFields,
   now: Date,
 ): Promise<Outcome<RoadDetail>> {
-  const parsed = parseMeasuredCsv(file.text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit });
-  if (!parsed.ok) {
-    return fail(
-      'bad_request',
-      `${file.filename} was not saved: ${parsed.errors[0].line !== undefined ? `line ${parsed.errors[0].line}: ` : ''}${parsed.errors[0].message}`,
-      parsed.errors.map((e) => ({ path: e.line !== undefined ? `line ${e.line}` : 'file', message: e.message })),
-    );
-  }
+  const parsed = parseMeasuredCsv(file.text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit, maxRows: MEASURED_MAX_ROWS });
+  if (!parsed.ok) return fail('bad_request', `${file.filename} was not saved: ${parsed.reason}`, parsed.issues);
   const definition = Road.safeParse({
     kind: 'measured',
     name: fields.name,
-    points: parsed.points,
+    points: parsed.profile.points,
     ...(fields.detrend ? { detrend: fields.detrend } : {}),
     ...(fields.spacing ? { spacing: fields.spacing } : {}),
   });

@@ -92,7 +92,7 @@ const blankToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v
  */
 export const MeasuredUploadFields = z.object({
   name: RoadName,
-  /** Units when the header names none; a unit in the header wins. */
+  /** Units of the columns; when given they win over units in the header. The elevation unit must come from one or the other. */
   distanceUnit: z.preprocess(blankToUndefined, ElevationUnit.optional()),
   elevationUnit: z.preprocess(blankToUndefined, ElevationUnit.optional()),
   detrend: z.preprocess(blankToUndefined, z.enum(['none', 'mean', 'linear']).optional()),

@@ -84,9 +84,9 @@ describe('road library', () => {
   });
 
   it.each([
-    ['text in a number column', 'distance [m],elevation [mm]\n0,0\n0.25,1.2\n0.5,bump\n', 4, /'bump' is not a number/],
-    ['a line cut short', 'distance [m],elevation [mm]\n0,0\n0.25\n0.5,1\n', 3, /cut short/],
-    ['wrong columns', 'time [s],force [N]\n0,0\n1,1\n', 1, /columns not recognised/],
+    ['text in a number column', 'distance [m],elevation [mm]\n0,0\n0.25,1.2\n0.5,bump\n', 4, /"bump" is not a number/],
+    ['a line cut short', 'distance [m],elevation [mm]\n0,0\n0.25\n0.5,1\n', 3, /expected 2 columns, found 1/],
+    ['wrong columns', 'time [s],force [N]\n0,0\n1,1\n', 1, /header must name a distance column/],
     ['distance going back', 'distance [m],elevation [mm]\n0,0\n0.5,1\n0.25,1\n', 4, /does not rise/],
   ])('refuses a measured CSV with %s, naming the line, and saves nothing', async (_what, csv, line, message) => {
     const before = await roadCount();
