@@ -54,7 +54,8 @@ export function readCsvRows(text: string, maxRows: number): CsvRows {
   let line = 1;
   let rowStart = 0;
   const lineAt = (pos: number) => {
-    for (; scanned < pos; scanned++) if (text[scanned] === newline) line++;
+    for (let nl = text.indexOf(newline, scanned); nl !== -1 && nl < pos; nl = text.indexOf(newline, nl + 1)) line++;
+    scanned = Math.max(scanned, pos);
     return line;
   };
   Papa.parse<string[]>(text, {
