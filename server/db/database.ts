@@ -8,6 +8,7 @@ import type { DynoFileTable, RoadTable } from './road-dyno-tables.ts';
 import type { RunTable } from './run-table.ts';
 import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
 import type { ShareLinkTable } from './share-link-table.ts';
+import type { StudyPointTable, StudyTable } from './study-tables.ts';
 import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from './target-sheet-tables.ts';
 import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
 import type { UserTable } from './user-table.ts';
@@ -32,6 +33,8 @@ export interface Database {
   road: RoadTable;
   dyno_file: DynoFileTable;
   run: RunTable;
+  study: StudyTable;
+  study_point: StudyPointTable;
   target_sheet: TargetSheetTable;
   target_sheet_event: TargetSheetEventTable;
   dyno_check: DynoCheckTable;

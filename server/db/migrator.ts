@@ -3,6 +3,7 @@ import * as m0001 from '../../migrations/0001_init.ts';
 import * as m0002 from '../../migrations/0002_setups.ts';
 import * as m0003 from '../../migrations/0003_roads_dyno.ts';
 import * as m0004 from '../../migrations/0004_runs.ts';
+import * as m0005 from '../../migrations/0005_studies.ts';
 import * as m0006 from '../../migrations/0006_target_sheets.ts';
 
 /**
@@ -15,6 +16,7 @@ export const migrations: Record<string, Migration> = {
   '0002_setups': m0002,
   '0003_roads_dyno': m0003,
   '0004_runs': m0004,
+  '0005_studies': m0005,
   '0006_target_sheets': m0006,
 };
 
