@@ -3,6 +3,7 @@ import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
 import { setupsEntries } from './setups-entries.ts';
+import { targetSheetsEntries } from './target-sheets-entries.ts';
 
 /**
  * Every matrix entry. A feature that registers routes adds `tests/api/matrix/<feature>-entries.ts`
@@ -13,4 +14,5 @@ export const allEntries: MatrixEntries = {
   ...runsEntries,
   ...roadsDynoEntries,
   ...setupsEntries,
+  ...targetSheetsEntries,
 };
