@@ -10,9 +10,14 @@ import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
 import { buildRoad } from './roads/index.ts';
 import type { TraceColumns } from './trace.ts';
 
+/**
+ * A failed run says where it failed: `input` (the request, the setup's statics or the road
+ * cannot be used, e.g. a field out of range or a measured road too short for the run) or
+ * `integration` (the numbers were valid but the motion could not be integrated).
+ */
 export type RunOutcome =
   | { ok: true; result: RunResult; trace: TraceColumns }
-  | { ok: false; reason: string; issues?: FieldIssue[] };
+  | { ok: false; stage: 'input' | 'integration'; reason: string; issues?: FieldIssue[] };
 
 export const DEFAULT_OUTPUT_RATE = 500;
 /** Settling time for inputs that start with a transient, s (at most a quarter of the run). */
@@ -38,28 +43,28 @@ export function runCorner(input: RunRequestInput): RunOutcome {
   const parsed = RunRequest.safeParse(input);
   if (!parsed.success) {
     const issues = fieldIssues(parsed.error);
-    return { ok: false, reason: `${issues[0].path}: ${issues[0].message}`, issues };
+    return { ok: false, stage: 'input', reason: `${issues[0].path}: ${issues[0].message}`, issues };
   }
   const req = parsed.data;
   const { setup, speed, duration } = req;
 
   const statics = staticEquilibrium(setup);
-  if (!statics.ok) return { ok: false, reason: `setup.${statics.reason}` };
+  if (!statics.ok) return { ok: false, stage: 'input', reason: `setup.${statics.reason}` };
 
   const road: Road = req.road.kind === 'iso8608' && req.seed !== undefined ? { ...req.road, seed: req.seed } : req.road;
   const built = buildRoad(road, speed, duration, setup.tyreFootprint);
-  if (!built.ok) return { ok: false, reason: built.reason };
+  if (!built.ok) return { ok: false, stage: 'input', reason: built.reason };
 
   const tolerance = req.tolerance ?? DEFAULT_TOLERANCE;
   const outputRate = req.outputRate ?? DEFAULT_OUTPUT_RATE;
-  const integrated = integrateCorner(cornerModel(setup, statics.state), built.road, { duration, outputRate, tolerance });
-  if (!integrated.ok) return { ok: false, reason: integrated.reason };
-  const { trace, stats } = integrated;
-
   const settleTime = req.settleTime ?? defaultSettle(road, duration);
   if (duration - settleTime < 4 / outputRate) {
-    return { ok: false, reason: 'settleTime: leaves too little of the run to analyse' };
+    return { ok: false, stage: 'input', reason: 'settleTime: leaves too little of the run to analyse' };
   }
+  const integrated = integrateCorner(cornerModel(setup, statics.state), built.road, { duration, outputRate, tolerance });
+  if (!integrated.ok) return { ok: false, stage: 'integration', reason: integrated.reason };
+  const { trace, stats } = integrated;
+
   const metrics = computeMetrics(trace, {
     settleTime,
     staticTyreLoad: statics.state.tyreLoad,

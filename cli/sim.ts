@@ -1,0 +1,149 @@
+/**
+ * Headless runner: one corner over one road, the same code the browser workers run.
+ *
+ *   npm run --silent sim -- --setup S.json --road R.json --speed 20 --duration 60
+ *                           [--seed 7] [--traces out.csv] [--tolerance 1e-4] [--rate 500]
+ *
+ * Prints exactly one JSON object on stdout (modal figures, metrics, road, timing). Exit status:
+ * 0 done, 2 bad input (the message on stderr names the field, file or CSV line), 1 the
+ * simulation itself failed.
+ *
+ * A measured road file may name a CSV file instead of listing points:
+ *   { "kind": "measured", "csv": "lane.csv", "elevationUnit": "mm", "detrend": "linear" }
+ * The path is relative to the road file; units come from the CSV header or these keys.
+ */
+import { readFileSync, writeFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { parseMeasuredCsv, type LengthUnit } from '../shared/sim/roads/measured-csv.ts';
+import { runCorner } from '../shared/sim/run-corner.ts';
+import type { TraceColumns } from '../shared/sim/trace.ts';
+
+class InputError extends Error {}
+
+function readJson(path: string, what: string): unknown {
+  let text: string;
+  try {
+    text = readFileSync(path, 'utf8');
+  } catch {
+    throw new InputError(`--${what}: cannot read ${path}`);
+  }
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    throw new InputError(`--${what}: ${path} is not valid JSON (${(e as Error).message})`);
+  }
+}
+
+function numberArg(value: string | undefined, name: string, required: boolean): number | undefined {
+  if (value === undefined) {
+    if (required) throw new InputError(`--${name} is required`);
+    return undefined;
+  }
+  const n = Number(value);
+  if (value.trim() === '' || !Number.isFinite(n)) throw new InputError(`--${name}: "${value}" is not a number`);
+  return n;
+}
+
+/** Replaces a measured road's `csv` reference by the points read from that file. */
+function resolveCsvRoad(road: unknown, roadPath: string): unknown {
+  if (typeof road !== 'object' || road === null || !('csv' in road)) return road;
+  const { csv, elevationUnit, distanceUnit, ...rest } = road as Record<string, unknown>;
+  if (typeof csv !== 'string') throw new InputError('road.csv: must be a file path');
+  const unit = (u: unknown, field: string): LengthUnit | undefined => {
+    if (u === undefined) return undefined;
+    if (u === 'm' || u === 'mm') return u;
+    throw new InputError(`road.${field}: must be "m" or "mm"`);
+  };
+  const csvPath = resolve(dirname(roadPath), csv);
+  let text: string;
+  try {
+    text = readFileSync(csvPath, 'utf8');
+  } catch {
+    throw new InputError(`road.csv: cannot read ${csvPath}`);
+  }
+  const parsed = parseMeasuredCsv(text, { elevationUnit: unit(elevationUnit, 'elevationUnit'), distanceUnit: unit(distanceUnit, 'distanceUnit') });
+  if (!parsed.ok) throw new InputError(`road.csv ${csv}: ${parsed.reason}`);
+  return { ...rest, points: parsed.profile.points };
+}
+
+function writeTraces(path: string, trace: TraceColumns) {
+  const cols: Array<[string, Float64Array]> = [
+    ['road_m', trace.road],
+    ['body_accel_m_s2', trace.bodyAccel],
+    ['travel_m', trace.travel],
+    ['tyre_load_N', trace.tyreLoad],
+    ['damper_velocity_m_s', trace.damperVelocity],
+    ['damper_force_N', trace.damperForce],
+    ['bump_stop_force_N', trace.bumpStopForce],
+    ['rebound_stop_force_N', trace.reboundStopForce],
+  ];
+  const lines = [['time_s', ...cols.map(([n]) => n)].join(',')];
+  for (let i = 0; i < trace.bodyAccel.length; i++) {
+    lines.push([(i * trace.dt).toFixed(6), ...cols.map(([, c]) => c[i].toPrecision(9))].join(','));
+  }
+  writeFileSync(path, lines.join('\n') + '\n');
+}
+
+function main(argv: string[]): number {
+  const { values } = parseArgs({
+    args: argv,
+    options: {
+      setup: { type: 'string' },
+      road: { type: 'string' },
+      speed: { type: 'string' },
+      duration: { type: 'string' },
+      seed: { type: 'string' },
+      traces: { type: 'string' },
+      tolerance: { type: 'string' },
+      rate: { type: 'string' },
+    },
+    strict: true,
+    allowPositionals: false,
+  });
+  if (!values.setup) throw new InputError('--setup is required');
+  if (!values.road) throw new InputError('--road is required');
+  const setup = readJson(values.setup, 'setup');
+  const road = resolveCsvRoad(readJson(values.road, 'road'), values.road);
+
+  const outcome = runCorner({
+    // Shapes are checked inside runCorner, which names the offending field.
+    setup: setup as never,
+    road: road as never,
+    speed: numberArg(values.speed, 'speed', true)!,
+    duration: numberArg(values.duration, 'duration', true)!,
+    seed: numberArg(values.seed, 'seed', false),
+    tolerance: numberArg(values.tolerance, 'tolerance', false),
+    outputRate: numberArg(values.rate, 'rate', false),
+  });
+  if (!outcome.ok) {
+    process.stderr.write(`sim: ${outcome.reason}\n`);
+    return outcome.stage === 'input' ? 2 : 1;
+  }
+  const { result, trace } = outcome;
+  if (values.traces) writeTraces(values.traces, trace);
+  const report = {
+    setup: result.setupName,
+    speed: result.speed,
+    duration: result.duration,
+    settleTime: result.settleTime,
+    road: result.road,
+    statics: result.statics,
+    modal: result.modal,
+    metrics: result.metrics,
+    timing: result.timing,
+  };
+  process.stdout.write(JSON.stringify(report, null, 2) + '\n');
+  return 0;
+}
+
+try {
+  process.exitCode = main(process.argv.slice(2));
+} catch (e) {
+  if (e instanceof InputError || (e as { code?: string }).code?.startsWith('ERR_PARSE_ARGS')) {
+    process.stderr.write(`sim: ${(e as Error).message}\n`);
+    process.exitCode = 2;
+  } else {
+    throw e;
+  }
+}
