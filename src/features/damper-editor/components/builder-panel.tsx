@@ -1,0 +1,73 @@
+import { useState } from 'react';
+import { CurveParameters, curveFromParameters, type DamperShape, damperShapes } from '../../../../shared/sim/damper-builder.ts';
+import { curveForce } from '../../../../shared/sim/damper.ts';
+import type { Damper, DamperCurve } from '../../../../shared/schemas/setup.ts';
+import { Button } from '../../../components/ui/button.tsx';
+import { Field, Input, Select } from '../../../components/ui/field.tsx';
+import type { Direction } from '../model/draft.ts';
+
+type Texts = { lowSpeedSlope: string; kneeVelocity: string; highSpeedSlope: string; shape: DamperShape };
+
+const KNEE_GUESS = 0.1;
+
+/** Starting values read off the current curve: slopes below and above a 0.1 m/s knee. */
+function guess(curve: DamperCurve): Texts {
+  const low = curveForce(curve, KNEE_GUESS) / KNEE_GUESS;
+  const high = (curveForce(curve, 0.3) - curveForce(curve, KNEE_GUESS)) / (0.3 - KNEE_GUESS);
+  const round = (x: number) => String(Math.max(0, Math.round(x / 10) * 10));
+  return { lowSpeedSlope: round(low), kneeVelocity: String(KNEE_GUESS), highSpeedSlope: round(high), shape: 'digressive' };
+}
+
+const shapeWords: Record<DamperShape, string> = {
+  digressive: 'digressive (slope falls above the knee)',
+  linear: 'linear above the knee',
+  progressive: 'progressive (slope grows above the knee)',
+};
+
+/**
+ * The parametric builder for one direction: a bleed slope up to the knee, then a valve slope
+ * that falls, holds or grows (shared/sim/damper-builder.ts). "Fill" replaces that direction's
+ * table with the law sampled at the usual dyno speeds plus the knee.
+ */
+export function BuilderPanel({ direction, damper, onFill }: { direction: Direction; damper: Damper; onFill: (curve: DamperCurve) => void }) {
+  const [texts, setTexts] = useState<Texts>(() => guess(damper[direction]));
+  const parsed = CurveParameters.safeParse({
+    lowSpeedSlope: Number(texts.lowSpeedSlope),
+    kneeVelocity: Number(texts.kneeVelocity),
+    highSpeedSlope: Number(texts.highSpeedSlope),
+    shape: texts.shape,
+  });
+  const errorOf = (key: keyof Texts) => (parsed.success ? undefined : parsed.error.issues.find((i) => i.path[0] === key)?.message);
+  const set = (key: keyof Texts) => (e: { target: { value: string } }) => setTexts((t) => ({ ...t, [key]: e.target.value }));
+  const title = direction === 'compression' ? 'Compression' : 'Rebound';
+  return (
+    <fieldset className="grid gap-2 rounded border border-rule p-3" aria-label={`${title} builder`}>
+      <legend className="px-1 text-sm font-semibold text-ink">{title}</legend>
+      <div className="grid grid-cols-2 gap-2">
+        <Field label="Low-speed slope [N·s/m]" error={errorOf('lowSpeedSlope')}>
+          <Input inputMode="decimal" className="figures text-right" value={texts.lowSpeedSlope} onChange={set('lowSpeedSlope')} />
+        </Field>
+        <Field label="Knee velocity [m/s]" error={errorOf('kneeVelocity')}>
+          <Input inputMode="decimal" className="figures text-right" value={texts.kneeVelocity} onChange={set('kneeVelocity')} />
+        </Field>
+        <Field label="High-speed slope [N·s/m]" error={errorOf('highSpeedSlope')}>
+          <Input inputMode="decimal" className="figures text-right" value={texts.highSpeedSlope} onChange={set('highSpeedSlope')} />
+        </Field>
+        <Field label="Shape above the knee">
+          <Select value={texts.shape} onChange={set('shape')}>
+            {damperShapes.map((s) => (
+              <option key={s} value={s}>
+                {shapeWords[s]}
+              </option>
+            ))}
+          </Select>
+        </Field>
+      </div>
+      <div>
+        <Button size="sm" variant="secondary" disabled={!parsed.success} onClick={() => parsed.success && onFill(curveFromParameters(parsed.data))}>
+          Fill the {direction} table
+        </Button>
+      </div>
+    </fieldset>
+  );
+}

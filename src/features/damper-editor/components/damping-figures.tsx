@@ -1,0 +1,44 @@
+import { Figure } from '../../../components/ui/figure.tsx';
+import type { DampingFigures } from '../model/figures.ts';
+
+function Row({ label, children, note }: { label: string; children: React.ReactNode; note?: string }) {
+  return (
+    <div className="flex items-baseline justify-between gap-3 border-b border-rule/60 py-1 last:border-0">
+      <dt className="text-sm text-ink-soft">
+        {label}
+        {note && <span className="block text-2xs text-ink-faint">{note}</span>}
+      </dt>
+      <dd className="text-right">{children}</dd>
+    </div>
+  );
+}
+
+/** The figures that follow the curve as it is edited. */
+export function DampingFiguresPanel({ figures, motionRatio }: { figures: DampingFigures; motionRatio: number }) {
+  return (
+    <section aria-label="Damping figures" className="rounded border border-rule bg-paper-raised px-3 py-2">
+      <h3 className="text-sm font-semibold text-ink">Equivalent damping</h3>
+      <p className="mb-1 text-2xs text-ink-faint">Linear coefficient: {figures.definition}.</p>
+      <dl>
+        <Row label="At the damper">
+          <Figure value={figures.atDamper} unit="Nspm" label="equivalent coefficient at the damper" />
+        </Row>
+        <Row label="Compression / rebound">
+          <Figure value={figures.compression} unit="Nspm" label="compression coefficient" /> <span className="text-ink-faint">/</span>{' '}
+          <Figure value={figures.rebound} unit="Nspm" label="rebound coefficient" />
+        </Row>
+        <Row label="At the wheel" note={`× MR² (MR ${motionRatio})`}>
+          <Figure value={figures.atWheel} unit="Nspm" label="equivalent coefficient at the wheel" />
+        </Row>
+        <Row label="Body damping ratio ζ" note="estimate c / (2√(ks·ms))">
+          <Figure value={figures.classicZeta} label="body damping ratio, single-mass estimate" />
+        </Row>
+        {figures.exactZeta !== null && (
+          <Row label="Body damping ratio ζ" note="body mode of the two-mass corner">
+            <Figure value={figures.exactZeta} label="body damping ratio, two-mass corner" />
+          </Row>
+        )}
+      </dl>
+    </section>
+  );
+}

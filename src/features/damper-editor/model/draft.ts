@@ -1,0 +1,94 @@
+import { Damper, type DamperCurve } from '../../../../shared/schemas/setup.ts';
+
+/**
+ * What the points tables hold while someone types: text per cell, so "0." or an empty cell can
+ * sit there without being thrown away. The damper is emitted only when every cell parses and
+ * the whole damper passes the setup schema; until then the cells show what is wrong.
+ */
+
+export type Direction = 'compression' | 'rebound';
+export const directions: readonly Direction[] = ['compression', 'rebound'];
+
+export interface DraftRow {
+  /** Stable key for React while rows are added and removed. */
+  key: number;
+  velocity: string;
+  force: string;
+}
+
+export type DraftCurves = Record<Direction, DraftRow[]>;
+
+/** Problems by cell: `errors[direction][row]` has a message per column. */
+export type CellErrors = Record<Direction, Array<{ velocity?: string; force?: string }>>;
+
+let nextKey = 1;
+const newKey = () => nextKey++;
+
+/** Short text for a number in a cell: enough digits to round-trip what a person would type. */
+export function cellText(x: number): string {
+  return Number(x.toPrecision(6)).toString();
+}
+
+export function draftFromCurve(curve: DamperCurve): DraftRow[] {
+  return curve.map(([v, f]) => ({ key: newKey(), velocity: cellText(v), force: cellText(f) }));
+}
+
+export function draftFromDamper(damper: Damper): DraftCurves {
+  return { compression: draftFromCurve(damper.compression), rebound: draftFromCurve(damper.rebound) };
+}
+
+export function emptyRow(after?: DraftRow): DraftRow {
+  if (!after) return { key: newKey(), velocity: '', force: '' };
+  const v = Number(after.velocity);
+  return { key: newKey(), velocity: Number.isFinite(v) ? cellText(v * 2) : '', force: after.force };
+}
+
+const readCell = (text: string): number | undefined => {
+  const t = text.trim().replace(',', '.');
+  if (t === '' || !/^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/.test(t)) return undefined;
+  const x = Number(t);
+  return Number.isFinite(x) ? x : undefined;
+};
+
+export type DraftOutcome = { ok: true; damper: Damper; errors: CellErrors } | { ok: false; errors: CellErrors; general: string[] };
+
+/**
+ * Reads the tables into a damper (gas charge from `base`), with every problem placed on its
+ * cell: text that is not a number, then the setup schema's own rules (speeds rising, force not
+ * falling, nothing at rest).
+ */
+export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>): DraftOutcome {
+  const errors: CellErrors = { compression: draft.compression.map(() => ({})), rebound: draft.rebound.map(() => ({})) };
+  const general: string[] = [];
+  const curves = {} as Record<Direction, [number, number][]>;
+  let unreadable = false;
+  for (const d of directions) {
+    if (draft[d].length === 0) general.push(`${d}: add at least one point`);
+    curves[d] = draft[d].map((row, i) => {
+      const v = readCell(row.velocity);
+      const f = readCell(row.force);
+      if (v === undefined) errors[d][i].velocity = row.velocity.trim() === '' ? 'enter a speed' : 'not a number';
+      if (f === undefined) errors[d][i].force = row.force.trim() === '' ? 'enter a force' : 'not a number';
+      if (v === undefined || f === undefined) unreadable = true;
+      return [v ?? 0, f ?? 0];
+    });
+  }
+  if (unreadable || general.length) return { ok: false, errors, general };
+  const parsed = Damper.safeParse({ compression: curves.compression, rebound: curves.rebound, ...(base.gas ? { gas: base.gas } : {}) });
+  if (parsed.success) return { ok: true, damper: parsed.data, errors };
+  for (const issue of parsed.error.issues) {
+    const [d, row, col] = issue.path;
+    if ((d === 'compression' || d === 'rebound') && typeof row === 'number' && errors[d][row]) {
+      const key = col === 0 ? 'velocity' : 'force';
+      errors[d][row][key] ??= issue.message;
+    } else general.push(`${issue.path.join('.') || 'damper'}: ${issue.message}`);
+  }
+  return { ok: false, errors, general };
+}
+
+/** True when the draft, read, is exactly `damper` (no re-seeding needed when the parent echoes our value). */
+export function draftMatches(draft: DraftCurves, damper: Damper): boolean {
+  return directions.every(
+    (d) => draft[d].length === damper[d].length && draft[d].every((row, i) => readCell(row.velocity) === damper[d][i][0] && readCell(row.force) === damper[d][i][1]),
+  );
+}
