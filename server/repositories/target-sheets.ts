@@ -1,3 +1,4 @@
+import { sql } from 'kysely';
 import type { Queryable } from '../db/database.ts';
 import type { NewDynoCheckRow, NewTargetSheetRow, TargetSheetEventTable, TargetSheetPatch } from '../db/target-sheet-tables.ts';
 
@@ -56,7 +57,8 @@ export function listSheetEvents(db: Queryable, sheetId: string) {
     .select(['e.from_status', 'e.to_status', 'e.actor_id', 'u.name as actor_name', 'e.reason', 'e.at'])
     .where('e.sheet_id', '=', sheetId)
     .orderBy('e.at')
-    .orderBy('e.id')
+    // several steps can share a timestamp (a seed, a fixed clock): insertion order breaks ties
+    .orderBy(sql`e.rowid`)
     .execute();
 }
 
