@@ -12,6 +12,7 @@ import { runRoutes } from './runs.ts';
 import { setupRoutes } from './setups.ts';
 import { shareLinkRoutes } from './share-links.ts';
 import { sharedRoutes } from './shared.ts';
+import { studyRoutes } from './studies.ts';
 import { targetSheetRoutes } from './target-sheets.ts';
 import { vehicleRoutes } from './vehicles.ts';
 import { workspaceRoutes } from './workspaces.ts';
@@ -20,7 +21,7 @@ import { workspaceRoutes } from './workspaces.ts';
  * Every route module of the API. A feature adds its module here (one line); the app mounts
  * whatever is listed, and tests/api/route-matrix.test.ts fails until the new routes have matrix entries.
  */
-export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, targetSheetRoutes];
+export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes];
 
 export function allRoutes(deps: AppDeps): RouteDef[] {
   return routeModules.flatMap((m) => m(deps));

@@ -5,6 +5,7 @@ import type { ShareLinkViewRow } from '../repositories/share-links.ts';
 import { analyseSetup, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
 import { type Actor, insertNewSetup } from './setups.ts';
+import { studyShare } from './study-share.ts';
 
 /** How a link's object is described, shown and copied. Each shareable kind supplies one. */
 export interface ShareableKind {
@@ -60,4 +61,4 @@ const setupRevision: ShareableKind = {
 };
 
 /** Kinds that can be shared today; a study joins by adding its entry. */
-export const shareableKinds: Partial<Record<ShareObjectType, ShareableKind>> = { setup_revision: setupRevision };
+export const shareableKinds: Partial<Record<ShareObjectType, ShareableKind>> = { setup_revision: setupRevision, study: studyShare };

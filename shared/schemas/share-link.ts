@@ -3,6 +3,7 @@ import { Id, IsoDateTime } from './fields.ts';
 import { ModalResult } from './modal.ts';
 import { PersonRef } from './setup-record.ts';
 import { Setup } from './setup.ts';
+import { SharedStudy } from './study-record.ts';
 
 /**
  * Read-only share links. A link names exactly one object (a setup revision, or a study); its
@@ -72,8 +73,8 @@ export const SharedSetupRevision = z.object({
 });
 export type SharedSetupRevision = z.infer<typeof SharedSetupRevision>;
 
-/** Every kind of shared object; a study view joins this union when studies can be shared. */
-export const SharedObject = z.discriminatedUnion('objectType', [SharedSetupRevision]);
+/** Every kind of shared object (the study view is in study-record.ts). */
+export const SharedObject = z.discriminatedUnion('objectType', [SharedSetupRevision, SharedStudy]);
 export type SharedObject = z.infer<typeof SharedObject>;
 
 /** POST /api/shared/:token/copy */

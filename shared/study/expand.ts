@@ -79,3 +79,21 @@ export function expandStudy(def: Pick<StudyDefinition, 'axes' | 'roads' | 'speed
   if (!def.axes.some((ax) => ax.parameter === 'speed')) add(baseJobs, -1, def.speeds, jobs.length);
   return { points, jobs, baseJobs };
 }
+
+/** The swept values of point `index` (sweep order: first axis outer, second inner), without expanding the whole study. */
+export function pointValuesAt(axes: StudyDefinition['axes'], index: number): StudyPointValues | undefined {
+  const [first, second] = axes;
+  const inner = second ? second.steps : 1;
+  if (!Number.isInteger(index) || index < 0 || index >= first.steps * inner) return undefined;
+  const values: StudyPointValues = { [first.parameter]: sweepValues(first)[Math.floor(index / inner)] };
+  if (second) values[second.parameter] = sweepValues(second)[index % inner];
+  return values;
+}
+
+/** Points and runs a definition asks for (the base setup's runs included). */
+export function plannedCounts(def: Pick<StudyDefinition, 'axes' | 'roads' | 'speeds'>): { points: number; runs: number } {
+  const points = def.axes.reduce((n, a) => n * a.steps, 1);
+  const sweptSpeed = def.axes.some((a) => a.parameter === 'speed');
+  const perPoint = def.roads.length * (sweptSpeed ? 1 : def.speeds.length);
+  return { points, runs: points * perPoint + (sweptSpeed ? 0 : perPoint) };
+}

@@ -3,6 +3,7 @@ import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
 import { setupsEntries } from './setups-entries.ts';
+import { studiesEntries } from './studies-entries.ts';
 import { targetSheetsEntries } from './target-sheets-entries.ts';
 
 /**
@@ -14,5 +15,6 @@ export const allEntries: MatrixEntries = {
   ...runsEntries,
   ...roadsDynoEntries,
   ...setupsEntries,
+  ...studiesEntries,
   ...targetSheetsEntries,
 };

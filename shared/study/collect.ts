@@ -1,0 +1,108 @@
+import type { FieldIssue } from '../errors.ts';
+import type { Road } from '../schemas/road.ts';
+import type { StudyDefinition } from '../schemas/study.ts';
+import type { StudyPointResult, StudyRunOutcome } from '../schemas/study-result.ts';
+import { roadLabel } from '../runs/road-label.ts';
+import { evaluatePoint } from './evaluate-point.ts';
+import type { ExpandedStudy, StudyJob } from './expand.ts';
+
+/**
+ * Turning runs into point results, the same way in the browser (as a run goes) and on the
+ * server (when the browser saves them): runs are grouped by point, a point is judged once all
+ * its runs are in, and an upload is checked against the jobs the definition expands to.
+ */
+
+/** Names of the study's roads for tables and limit messages: the entry's name, else the road's own label. */
+export function studyRoadNames(def: Pick<StudyDefinition, 'roads'>, roads: readonly Road[]): string[] {
+  return def.roads.map((entry, i) => entry.name ?? (roads[i] ? roadLabel(roads[i], entry.seed) : `road ${i + 1}`));
+}
+
+/** The jobs of each point (index −1: the base), in run order. */
+export function jobsByPoint(expanded: ExpandedStudy): Map<number, StudyJob[]> {
+  const map = new Map<number, StudyJob[]>();
+  for (const job of [...expanded.jobs, ...expanded.baseJobs]) {
+    const list = map.get(job.pointIndex);
+    if (list) list.push(job);
+    else map.set(job.pointIndex, [job]);
+  }
+  return map;
+}
+
+type Def = Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'>;
+
+/**
+ * A saved point checked against its expected jobs: one run per (road, speed) of the point, no
+ * more, no fewer. Returns the judged point, or the problems by field path under `prefix`.
+ */
+export function judgeUploadedPoint(
+  def: Def,
+  expanded: ExpandedStudy,
+  expectedJobs: Map<number, StudyJob[]>,
+  upload: { index: number; runs: readonly StudyRunOutcome[]; setupError?: string },
+  roadNames: readonly string[],
+  prefix: string,
+): { ok: true; point: StudyPointResult } | { ok: false; issues: FieldIssue[] } {
+  const jobs = expectedJobs.get(upload.index);
+  if (!jobs) {
+    const why = upload.index === -1 ? 'this study sweeps speed, so it has no base-setup runs' : `the study has points 0 to ${expanded.points.length - 1}`;
+    return { ok: false, issues: [{ path: `${prefix}.index`, message: `No point ${upload.index}: ${why}.` }] };
+  }
+  const issues: FieldIssue[] = [];
+  if (upload.runs.length !== jobs.length) issues.push({ path: `${prefix}.runs`, message: `Point ${upload.index} has ${jobs.length} runs (roads × speeds); ${upload.runs.length} were sent.` });
+  const seen = new Set<string>();
+  upload.runs.forEach((run, k) => {
+    const key = `${run.roadIndex}|${run.speed}`;
+    if (!jobs.some((j) => j.roadIndex === run.roadIndex && j.speed === run.speed)) {
+      issues.push({ path: `${prefix}.runs.${k}`, message: `Point ${upload.index} has no run on road ${run.roadIndex + 1} at ${run.speed} m/s.` });
+    } else if (seen.has(key)) {
+      issues.push({ path: `${prefix}.runs.${k}`, message: `The run on road ${run.roadIndex + 1} at ${run.speed} m/s is sent twice.` });
+    }
+    seen.add(key);
+    if (run.figures === null && !run.error) issues.push({ path: `${prefix}.runs.${k}.error`, message: 'A run without figures must say why it failed.' });
+  });
+  if (issues.length) return { ok: false, issues };
+  const values = upload.index === -1 ? {} : expanded.points[upload.index].values;
+  // Runs in the job order, whatever order they came in.
+  const order = (r: StudyRunOutcome) => jobs.findIndex((j) => j.roadIndex === r.roadIndex && j.speed === r.speed);
+  const runs = [...upload.runs].sort((a, b) => order(a) - order(b));
+  const point = evaluatePoint(def, { index: upload.index, values }, runs, { setupError: upload.setupError, roadName: (i) => roadNames[i] ?? `road ${i + 1}` });
+  return { ok: true, point };
+}
+
+/**
+ * Collects job outcomes as they arrive and hands back each point once all its runs are in.
+ * Used by the browser runner; `points()` lists the finished ones in sweep order.
+ */
+export function createPointCollector(def: Def, expanded: ExpandedStudy, roadNames: readonly string[]) {
+  const expected = jobsByPoint(expanded);
+  const pending = new Map<number, { runs: StudyRunOutcome[]; setupError?: string }>();
+  const done = new Map<number, StudyPointResult>();
+  return {
+    /** Adds one run; returns the point when it was the point's last. */
+    add(pointIndex: number, run: StudyRunOutcome, setupError?: string): StudyPointResult | null {
+      const jobs = expected.get(pointIndex);
+      if (!jobs || done.has(pointIndex)) throw new Error(`collector: unexpected run for point ${pointIndex}`);
+      const entry = pending.get(pointIndex) ?? { runs: [] };
+      entry.runs.push(run);
+      if (setupError) entry.setupError = setupError;
+      pending.set(pointIndex, entry);
+      if (entry.runs.length < jobs.length) return null;
+      pending.delete(pointIndex);
+      const judged = judgeUploadedPoint(def, expanded, expected, { index: pointIndex, ...entry }, roadNames, 'point');
+      if (!judged.ok) throw new Error(`collector: ${judged.issues[0].message}`);
+      done.set(pointIndex, judged.point);
+      return judged.point;
+    },
+    /** Finished points of the sweep (not the base), in sweep order. */
+    points(): StudyPointResult[] {
+      return [...done.values()].filter((p) => p.index >= 0).sort((a, b) => a.index - b.index);
+    },
+    base(): StudyPointResult | null {
+      return done.get(-1) ?? null;
+    },
+    /** Runs of the finished points, for saving. */
+    finishedRuns(pointIndex: number) {
+      return done.get(pointIndex)?.runs;
+    },
+  };
+}
