@@ -1,0 +1,95 @@
+import type { Setup } from '../../../../shared/schemas/setup.ts';
+import { type DisplayUnit, units } from '../../../lib/format.ts';
+import { rodDiameter, stopCoefficient } from './setup-units.ts';
+
+/** One difference between two revisions, in the order the setup page lists fields. */
+export interface DiffRow {
+  path: string;
+  label: string;
+  /** Display unit of both values; absent for words. */
+  unit?: DisplayUnit;
+  before: number | string | undefined;
+  after: number | string | undefined;
+}
+
+interface Described {
+  label: string;
+  unit?: DisplayUnit;
+  order: number;
+}
+
+/** Scalar fields in page order, with their display units. */
+const scalarFields: Array<[string, string, DisplayUnit | undefined]> = [
+  ['name', 'Name', undefined],
+  ['sprungMass', 'Sprung mass', units.kg],
+  ['unsprungMass', 'Unsprung mass', units.kg],
+  ['springRate', 'Spring rate', units.Npermm],
+  ['motionRatio', 'Motion ratio', units.ratio],
+  ['tyreRate', 'Tyre rate', units.Npermm],
+  ['tyreDamping', 'Tyre damping', units.Nspm],
+  ['tyreFootprint', 'Tyre footprint', units.mm],
+  ['damper.gas.force', 'Gas force', units.N],
+  ['damper.gas.pressure', 'Gas pressure', units.bar],
+  ['damper.gas.rodArea', 'Rod diameter', rodDiameter],
+  ['damper.gas.polytropic.volume', 'Gas volume', units.cm3],
+  ['damper.gas.polytropic.exponent', 'Polytropic exponent', units.ratio],
+  ['bumpStop.clearance', 'Bump stop clearance', units.mm],
+  ['bumpStop.law.kind', 'Bump stop law', undefined],
+  ['reboundStop.clearance', 'Rebound stop clearance', units.mm],
+  ['reboundStop.law.kind', 'Rebound stop law', undefined],
+  ['stroke.compression', 'Stroke, compression', units.mm],
+  ['stroke.extension', 'Stroke, extension', units.mm],
+  ['notes', 'Notes', undefined],
+];
+const scalarIndex = new Map(scalarFields.map(([path, label, unit], i) => [path, { label, unit, order: i * 1000 }]));
+const orderOf = (path: string) => scalarIndex.get(path)?.order ?? Number.MAX_SAFE_INTEGER;
+
+const directionWord = { compression: 'Compression', rebound: 'Rebound' } as const;
+const stopWord = { bumpStop: 'Bump stop', reboundStop: 'Rebound stop' } as const;
+
+function describe(path: string): Described {
+  const scalar = scalarIndex.get(path);
+  if (scalar) return scalar;
+  let m = /^damper\.(compression|rebound)\.(\d+)\.([01])$/.exec(path);
+  if (m) {
+    const dir = m[1] as keyof typeof directionWord;
+    const i = Number(m[2]);
+    // curves sit between the gas and the stops, compression first
+    const order = orderOf('damper.gas.force') - 500 + (dir === 'rebound' ? 250 : 0) + i * 2 + Number(m[3]);
+    return m[3] === '0' ? { label: `${directionWord[dir]} point ${i + 1}, speed`, unit: units.mps, order } : { label: `${directionWord[dir]} point ${i + 1}, force`, unit: units.N, order };
+  }
+  m = /^(bumpStop|reboundStop)\.law\.points\.(\d+)\.([01])$/.exec(path);
+  if (m) {
+    const stop = m[1] as keyof typeof stopWord;
+    const order = orderOf(`${stop}.law.kind`) + 10 + Number(m[2]) * 2 + Number(m[3]);
+    return m[3] === '0' ? { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, deflection`, unit: units.mm, order } : { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, force`, unit: units.N, order };
+  }
+  m = /^(bumpStop|reboundStop)\.law\.coefficients\.(\d+)$/.exec(path);
+  if (m) {
+    const k = Number(m[2]) + 1;
+    return { label: `${stopWord[m[1] as keyof typeof stopWord]} coefficient c${k}`, unit: stopCoefficient(k), order: orderOf(`${m[1]}.law.kind`) + 10 + k };
+  }
+  return { label: path, order: Number.MAX_SAFE_INTEGER };
+}
+
+/** Every leaf of a document as `dotted.path → value` (tuples by index). */
+export function flatten(value: unknown, prefix = '', out = new Map<string, number | string>()): Map<string, number | string> {
+  if (typeof value === 'number' || typeof value === 'string') out.set(prefix, value);
+  else if (Array.isArray(value)) value.forEach((v, i) => flatten(v, prefix ? `${prefix}.${i}` : String(i), out));
+  else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
+  return out;
+}
+
+/**
+ * Field-by-field difference from revision A to revision B: a row for every leaf that differs,
+ * appears or disappears (a curve point added, a stop removed), in page order.
+ */
+export function diffSetups(a: Setup, b: Setup): DiffRow[] {
+  const fa = flatten(a);
+  const fb = flatten(b);
+  const paths = [...new Set([...fa.keys(), ...fb.keys()])].filter((p) => fa.get(p) !== fb.get(p));
+  return paths
+    .map((path) => ({ path, ...describe(path), before: fa.get(path), after: fb.get(path) }))
+    .sort((x, y) => x.order - y.order || x.path.localeCompare(y.path))
+    .map(({ order: _order, ...row }) => row);
+}
