@@ -3,7 +3,7 @@ import { dirname } from 'node:path';
 import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type Transaction } from 'kysely';
 import type { AuditLogTable } from './audit-log-table.ts';
-import type { OutboxMessageTable } from './outbox-message-table.ts';
+import type { OutboxMessageTable, OutboxRecipientTable } from './outbox-message-table.ts';
 import type { DynoFileTable, RoadTable } from './road-dyno-tables.ts';
 import type { RunTable } from './run-table.ts';
 import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
@@ -26,6 +26,7 @@ export interface Database {
   password_reset: PasswordResetTable;
   audit_log: AuditLogTable;
   outbox_message: OutboxMessageTable;
+  outbox_recipient: OutboxRecipientTable;
   setup: SetupTable;
   setup_revision: SetupRevisionTable;
   vehicle: VehicleTable;

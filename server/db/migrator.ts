@@ -5,6 +5,7 @@ import * as m0003 from '../../migrations/0003_roads_dyno.ts';
 import * as m0004 from '../../migrations/0004_runs.ts';
 import * as m0005 from '../../migrations/0005_studies.ts';
 import * as m0006 from '../../migrations/0006_target_sheets.ts';
+import * as m0007 from '../../migrations/0007_outbox_audience.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -18,6 +19,7 @@ export const migrations: Record<string, Migration> = {
   '0004_runs': m0004,
   '0005_studies': m0005,
   '0006_target_sheets': m0006,
+  '0007_outbox_audience': m0007,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

@@ -9,6 +9,14 @@ export interface OutboxMessageTable {
   subject: string;
   text_body: string;
   html_body: string | null;
+  /** The workspace the message is about (invitation, sheet mail); null for account mail (reset). */
+  workspace_id: string | null;
 }
 export type OutboxMessageRow = Selectable<OutboxMessageTable>;
 export type NewOutboxMessageRow = Insertable<OutboxMessageTable>;
+
+/** One envelope recipient of an outbox message, lower-cased (migrations/0007_outbox_audience.ts). */
+export interface OutboxRecipientTable {
+  message_id: string;
+  address: string;
+}

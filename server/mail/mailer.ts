@@ -7,7 +7,12 @@ export interface MailMessage {
   subject: string;
   text: string;
   html?: string;
+  /** The workspace the message is about; its admins may read it in the demo outbox. Leave out for account mail. */
+  workspaceId?: string;
 }
+
+/** Carries `MailMessage.workspaceId` to the local sink (server/mail/sink.ts). */
+export const WORKSPACE_HEADER = 'X-Ridewright-Workspace';
 
 /** Sends mail; never throws: a failed send is logged and reported as false. */
 export interface Mailer {
@@ -32,9 +37,9 @@ export function createMailer(target: MailTarget, from: string, logger: Logger): 
         })
       : nodemailer.createTransport({ host: '127.0.0.1', port: target.port, secure: false, ignoreTLS: true });
   return {
-    async send(message) {
+    async send({ workspaceId, ...message }) {
       try {
-        await transport.sendMail({ from, ...message });
+        await transport.sendMail({ from, ...message, ...(workspaceId ? { headers: { [WORKSPACE_HEADER]: workspaceId } } : {}) });
         return true;
       } catch (err) {
         logger.error({ err, to: message.to, subject: message.subject }, 'mail not sent');

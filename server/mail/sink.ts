@@ -4,6 +4,7 @@ import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Db } from '../db/database.ts';
 import { insertOutboxMessage } from '../repositories/outbox-messages.ts';
+import { WORKSPACE_HEADER } from './mailer.ts';
 
 export interface MailSink {
   port: number;
@@ -27,10 +28,13 @@ export async function startMailSink({ db, port = 0, clock = () => new Date() }: 
     disabledCommands: ['STARTTLS'],
     size: 2 * 1024 * 1024,
     logger: false,
-    onData(stream, _session, callback) {
+    onData(stream, session, callback) {
+      // The envelope, not the To: header, says who receives it; the outbox filters on it.
+      const recipients = [...new Set(session.envelope.rcptTo.map((r) => r.address.trim().toLowerCase()))];
       simpleParser(stream)
         .then(async (mail) => {
-          await insertOutboxMessage(db, {
+          const about = mail.headers.get(WORKSPACE_HEADER.toLowerCase());
+          await insertOutboxMessage(db, recipients, {
             id: randomUUID(),
             received_at: clock().toISOString(),
             from_address: addresses(mail.from),
@@ -38,6 +42,7 @@ export async function startMailSink({ db, port = 0, clock = () => new Date() }: 
             subject: mail.subject ?? '',
             text_body: mail.text ?? '',
             html_body: typeof mail.html === 'string' ? mail.html : null,
+            workspace_id: typeof about === 'string' && about !== '' ? about : null,
           });
           callback();
         })

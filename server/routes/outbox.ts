@@ -1,6 +1,7 @@
 import type { OutboxResponse } from '../../shared/schemas/outbox.ts';
 import { HttpError } from '../errors.ts';
-import { listOutboxMessages } from '../repositories/outbox-messages.ts';
+import { userOf } from '../auth/request-context.ts';
+import { listOutboxMessagesFor } from '../repositories/outbox-messages.ts';
 import type { RouteModule } from './registry.ts';
 
 const OUTBOX_LIMIT = 200;
@@ -11,9 +12,10 @@ export const outboxRoutes: RouteModule = (deps) => [
     method: 'get',
     path: '/api/outbox',
     access: { anyWorkspace: 'admin' },
-    handler: async (_req, res) => {
+    handler: async (req, res) => {
       if (!deps.outboxEnabled) throw new HttpError('not_found', 'There is no local outbox: mail goes to a real SMTP server.');
-      const rows = await listOutboxMessages(deps.db, OUTBOX_LIMIT);
+      const me = userOf(req);
+      const rows = await listOutboxMessagesFor(deps.db, { userId: me.id, email: me.email }, OUTBOX_LIMIT);
       const body: OutboxResponse = {
         messages: rows.map((r) => ({
           id: r.id,

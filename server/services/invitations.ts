@@ -59,7 +59,7 @@ export async function createInvitation(deps: Deps, ws: WorkspaceContext, actor: 
     });
   });
   const link = `${deps.publicUrl}/invite/${token}`;
-  await deps.mailer.send({ to: input.email, ...invitationMail({ workspaceName: ws.workspaceName, invitedBy: actor.name, role: input.role, link, expiresAt }) });
+  await deps.mailer.send({ to: input.email, workspaceId: ws.workspaceId, ...invitationMail({ workspaceName: ws.workspaceName, invitedBy: actor.name, role: input.role, link, expiresAt }) });
   return ok(toInvitation(row));
 }
 

@@ -46,6 +46,6 @@ export async function mailSheetDecision(
     template = action === 'release' ? sheetReleasedMail(common) : sheetReturnedMail({ ...common, reason: facts.reason ?? '' });
   }
   if (!template) return 0;
-  const sent = await Promise.all(to.map((r) => deps.mailer.send({ to: r.email, ...template })));
+  const sent = await Promise.all(to.map((r) => deps.mailer.send({ to: r.email, workspaceId: ws.workspaceId, ...template })));
   return sent.filter(Boolean).length;
 }
