@@ -1,0 +1,11 @@
+import { useMutation } from '@tanstack/react-query';
+import { CreatedShareLink } from '../../../../shared/schemas/share-link.ts';
+import { api } from '../../../lib/api-client.ts';
+
+/** A read-only link to a study, through the workspace's share links (the token is in this answer only). */
+export const shareStudy = (workspaceId: string, studyId: string) =>
+  api.post(`/api/workspaces/${encodeURIComponent(workspaceId)}/share-links`, { objectType: 'study', objectId: studyId }, CreatedShareLink);
+
+export function useShareStudy(workspaceId: string, studyId: string) {
+  return useMutation({ mutationFn: () => shareStudy(workspaceId, studyId) });
+}

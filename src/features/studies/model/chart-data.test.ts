@@ -1,0 +1,104 @@
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { StudyDefinition } from '../../../../shared/schemas/study.ts';
+import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
+import { expandStudy } from '../../../../shared/study/expand.ts';
+import { figureLines, heatGrid, tradeOffColumns } from './chart-data.ts';
+import { pointsCsv } from './points-csv.ts';
+import { studyView } from './study-view.ts';
+
+const def = StudyDefinition.parse({
+  name: 'Grid',
+  base: { setupId: 's', revisionId: 'r' },
+  axes: [
+    { parameter: 'damperScale', from: 0.5, to: 1.5, steps: 3 },
+    { parameter: 'springRate', from: 20000, to: 30000, steps: 2 },
+  ],
+  roads: [{ source: 'inline', road: { kind: 'iso8608', class: 'C', seed: 7 } }],
+  speeds: [20, 30],
+  objectives: [
+    { figure: 'bodyAccelWkRms', weight: 1 },
+    { figure: 'tyreLoadRatio', weight: 1 },
+  ],
+});
+
+/** Invented figures: comfort gets worse and grip better as damping rises; point 5 breaks a limit. */
+function point(index: number, values: StudyPointResult['values']): StudyPointResult {
+  const d = values.damperScale ?? 1;
+  const s = (values.springRate ?? 25000) / 25000;
+  const figures = { bodyAccelWkRms: 0.5 + 0.3 * d + 0.1 * s, tyreLoadRatio: 0.3 - 0.1 * d + 0.02 * s, liftOffFraction: 0.001 };
+  const runs = [20, 30].map((speed) => ({ roadIndex: 0, speed, figures: { ...figures, bodyAccelWkRms: figures.bodyAccelWkRms * (speed / 25) } }));
+  const feasible = index !== 5;
+  return {
+    index,
+    values,
+    runs,
+    figures,
+    objectives: [figures.bodyAccelWkRms, figures.tyreLoadRatio],
+    feasible,
+    violations: feasible ? [] : [{ kind: 'maxStrokeUsed', limit: 0.9, value: 0.95, roadIndex: 0, speed: 30, message: 'uses 95.0 % of the stroke on road 1 at 30 m/s (limit 90.0 %)' }],
+  };
+}
+
+const points = expandStudy(def).points.map((p) => point(p.index, p.values));
+const base = point(-1, {});
+
+describe('study chart data', () => {
+  it('trade-off columns: one x per point sorted by comfort, each point in exactly one of the limit series, the front joined', () => {
+    const view = studyView(def, points, base, true);
+    const c = tradeOffColumns(view, 2);
+    expect(c.x).toHaveLength(7);
+    expect([...c.x].sort((a, b) => a - b)).toEqual(c.x);
+    c.x.forEach((_, i) => {
+      const inFeasible = c.feasible[i] !== null;
+      const inInfeasible = c.infeasible[i] !== null;
+      const isBase = c.base[i] !== null;
+      expect(Number(inFeasible) + Number(inInfeasible) + Number(isBase)).toBe(1);
+    });
+    expect(c.pointAt.filter((_, i) => c.infeasible[i] !== null)).toEqual([5]);
+    expect(c.pointAt.filter((_, i) => c.base[i] !== null)).toEqual([-1]);
+    expect(c.pointAt.filter((_, i) => c.baseline[i] !== null)).toEqual([2]);
+    // the winner is on the front, and the front holds only feasible points
+    const best = c.pointAt.find((_, i) => c.best[i] !== null);
+    expect(c.pointAt.filter((_, i) => c.front[i] !== null)).toContain(best);
+    expect(c.pointAt.filter((_, i) => c.front[i] !== null)).not.toContain(5);
+  });
+
+  it('a running study has no front or winner yet', () => {
+    const c = tradeOffColumns(studyView(def, points.slice(0, 3), null, false), null);
+    expect(c.front.every((v) => v === null)).toBe(true);
+    expect(c.best.every((v) => v === null)).toBe(true);
+  });
+
+  it('heat grid: first axis by row, second by column, springs in N/mm, limits marked, gaps for missing points', () => {
+    const g = heatGrid(studyView(def, points.filter((p) => p.index !== 3), base, true), 'bodyAccelWkRms');
+    if (!g) throw new Error('expected a grid');
+    expect(g.xs).toEqual([0.5, 1, 1.5]);
+    expect(g.ys).toEqual([20, 30]);
+    expect(g.index).toEqual([[0, 1], [2, 3], [4, 5]]);
+    expect(g.cells[1][1]).toBeNull();
+    expect(g.cells[0][0]).toBeCloseTo(0.5 + 0.15 + 0.08, 12);
+    expect(g.infeasible[2][1]).toBe(true);
+    expect(g.min).toBeCloseTo(0.73, 12);
+  });
+
+  it('figure lines: one line per road and speed from the runs, the other axis held', () => {
+    const l = figureLines(studyView(def, points, base, true), 'bodyAccelWkRms', 0, 1, ['Class C lane']);
+    expect(l.x).toEqual([0.5, 1, 1.5]);
+    expect(l.lines.map((x) => x.label)).toEqual(['Class C lane · 20 m/s', 'Class C lane · 30 m/s']);
+    expect(l.lines[1].y[2]).toBeCloseTo((0.5 + 0.45 + 0.12) * 1.2, 12);
+  });
+
+  it('CSV: a header naming units, the base first, one row per point with its verdict', () => {
+    const rows = Papa.parse<string[]>(pointsCsv(studyView(def, points, base, true)).trim()).data;
+    expect(rows[0].slice(0, 4)).toEqual(['point', 'description', 'damper scale [×]', 'spring rate [N/mm]']);
+    expect(rows[0]).toContain('Wk-weighted body acceleration [m/s²]');
+    expect(rows[0]).toContain('time off the road [%]');
+    expect(rows).toHaveLength(1 + 7);
+    expect(rows[1][0]).toBe('base');
+    expect(rows[7].slice(0, 6)).toEqual(['5', 'damper ×1.50, spring rate 30 000 N/m', '1.5', '30', 'no', 'uses 95.0 % of the stroke on road 1 at 30 m/s (limit 90.0 %)']);
+    const lift = rows[0].indexOf('time off the road [%]');
+    expect(Number(rows[2][lift])).toBeCloseTo(0.1, 12);
+    expect(rows.slice(2).filter((r) => r[rows[0].indexOf('best compromise')] === 'yes')).toHaveLength(1);
+  });
+});

@@ -1,0 +1,46 @@
+import Papa from 'papaparse';
+import { studyFigureKeys } from '../../../../shared/schemas/study.ts';
+import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
+import { describePoint } from '../../../../shared/study/describe-point.ts';
+import { figureLabel, figureToDisplay, parameterLabel, parameterToDisplay } from './display.ts';
+import type { StudyView } from './study-view.ts';
+
+/**
+ * The points table as CSV: one row per point (the base setup first when it ran), the swept
+ * values and figures in the units the page shows (named in each header), whether the point
+ * meets the limits and why not, its weighted score and whether it is on the front. Plain
+ * numbers, full precision, so a spreadsheet can redo any sum.
+ */
+export function pointsCsv(view: StudyView): string {
+  const { definition: def } = view;
+  const present = studyFigureKeys.filter((k) => [view.base, ...view.points].some((p) => p?.figures[k] !== undefined));
+  const scores = view.compromise?.ok ? view.compromise.scores : null;
+  const front = new Set((view.compromise?.ok ? view.compromise.front : []).map((pos) => view.points[pos]?.index));
+  const best = view.compromise?.ok ? view.points[view.compromise.winner]?.index : undefined;
+  const header = ['point', 'description', ...def.axes.map((a) => parameterLabel(a.parameter)), 'meets limits', 'limits broken', 'score', 'on front', 'best compromise', ...present.map((k) => figureLabel(k))];
+  const row = (p: StudyPointResult, pos: number | null) => [
+    p.index === -1 ? 'base' : p.index,
+    describePoint(def.axes, p.values),
+    ...def.axes.map((a) => (p.values[a.parameter] === undefined ? '' : parameterToDisplay(a.parameter, p.values[a.parameter]!))),
+    p.feasible ? 'yes' : 'no',
+    p.violations.map((v) => v.message).join('; '),
+    pos !== null && scores?.[pos] != null ? scores[pos] : '',
+    front.has(p.index) && p.index >= 0 ? 'yes' : '',
+    p.index === best ? 'yes' : '',
+    ...present.map((k) => (p.figures[k] === undefined ? '' : figureToDisplay(k, p.figures[k]!))),
+  ];
+  const rows = [...(view.base ? [row(view.base, null)] : []), ...view.points.map((p, pos) => row(p, pos))];
+  return `${Papa.unparse([header, ...rows])}\n`;
+}
+
+/** Offers `text` as a download. */
+export function downloadText(text: string, filename: string, type = 'text/csv'): void {
+  const url = URL.createObjectURL(new Blob([text], { type: `${type};charset=utf-8` }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = filename;
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
