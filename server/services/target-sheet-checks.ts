@@ -14,7 +14,7 @@ import { checkConformity } from '../../shared/target-sheet/conformity.ts';
 import { conformityToCsv } from '../../shared/target-sheet/to-csv.ts';
 import { z } from 'zod';
 import type { WorkspaceContext } from '../auth/request-context.ts';
-import type { Db } from '../db/database.ts';
+import type { Db, Queryable } from '../db/database.ts';
 import { type DynoCheckViewRow, findDynoCheck, findSheet, insertDynoCheck, listDynoChecks } from '../repositories/target-sheets.ts';
 import { recordAudit } from './audit.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
@@ -74,26 +74,11 @@ export async function sheetCheckCsv(db: Db, ws: Ws, sheetId: string, checkId: st
   return ok({ fileName: `${sheet.number}-check-${row.created_at.slice(0, 10)}.csv`, csv: conformityToCsv(toRecord(row).report) });
 }
 
-/**
- * Checks one or more measured dampers (one file each, any layout the dyno reader knows) against
- * every reference point of the sheet and keeps the result. Every file is read before anything is
- * saved: one bad file refuses the whole upload, naming the file and line.
- */
-export async function runSheetCheck(
-  db: Db,
-  ws: Ws,
-  actor: Actor,
-  sheetId: string,
-  files: UploadedText[],
-  fields: DynoCheckFields,
-  now: Date,
-): Promise<Outcome<ConformityRecordDetail>> {
-  const row = await findSheet(db, ws.workspaceId, sheetId);
-  if (!row) return noSheet();
+/** The files of an upload read as measured dampers, or the reasons they cannot be. */
+export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): Outcome<{ measured: MeasuredDamper[]; options: Partial<DynoParseOptions> }> {
   if (files.length === 0) return fail('bad_request', 'Choose at least one dyno file.', [{ path: 'file', message: 'Required' }]);
   const { label: labels, ...given } = fields;
   const options = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)) as Partial<DynoParseOptions>;
-
   const problems: { file: string; line?: number; message: string }[] = [];
   const measured: MeasuredDamper[] = [];
   files.forEach((file, i) => {
@@ -115,31 +100,64 @@ export async function runSheetCheck(
     if (seen.has(m.label)) return fail('bad_request', `Two dampers are labelled "${m.label}"; give each its own label. Nothing was saved.`, [{ path: 'label', message: `"${m.label}" twice` }]);
     seen.add(m.label);
   }
+  return ok({ measured, options });
+}
 
+/**
+ * Checks one or more measured dampers (one file each, any layout the dyno reader knows) against
+ * every reference point of the sheet and keeps the result. Every file is read before anything is
+ * saved: one bad file refuses the whole upload, naming the file and line.
+ */
+export async function runSheetCheck(
+  db: Db,
+  ws: Ws,
+  actor: Actor,
+  sheetId: string,
+  files: UploadedText[],
+  fields: DynoCheckFields,
+  now: Date,
+): Promise<Outcome<ConformityRecordDetail>> {
+  if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
+  const read = readCheckFiles(files, fields);
+  if (!read.ok) return read;
+  return db.transaction().execute((trx) => storeSheetCheckIn(trx, ws, actor, sheetId, files, read.value, now));
+}
+
+/** Checks already-read dampers against the sheet and keeps the result, inside an open transaction. */
+export async function storeSheetCheckIn(
+  trx: Queryable,
+  ws: Ws,
+  actor: Actor,
+  sheetId: string,
+  files: UploadedText[],
+  read: { measured: MeasuredDamper[]; options: Partial<DynoParseOptions> },
+  now: Date,
+): Promise<Outcome<ConformityRecordDetail>> {
+  const row = await findSheet(trx, ws.workspaceId, sheetId);
+  if (!row) return noSheet();
+  const { measured, options } = read;
   const sheet = toSheet(row);
   const report = checkConformity(sheet, measured.map((m) => ({ label: m.label, peaks: m.peaks })));
   const id = randomUUID();
-  await db.transaction().execute(async (trx) => {
-    await insertDynoCheck(trx, {
-      id,
-      sheet_id: sheetId,
-      filename: files.map((f) => f.filename).join(', '),
-      content: JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text }))),
-      result: JSON.stringify({ report, measured, sheetStatus: sheet.status, options: DynoParseOptions.parse(options) }),
-      uploaded_by: actor.id,
-      created_at: now.toISOString(),
-    });
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'target_sheet.checked',
-      entityType: 'target_sheet',
-      entityId: sheetId,
-      summary: `${actor.name} checked ${measured.length} damper${measured.length === 1 ? '' : 's'} against ${sheet.number}: ${report.passed} passed, ${report.failed} failed.`,
-      at: now,
-    });
+  await insertDynoCheck(trx, {
+    id,
+    sheet_id: sheetId,
+    filename: files.map((f) => f.filename).join(', '),
+    content: JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text }))),
+    result: JSON.stringify({ report, measured, sheetStatus: sheet.status, options: DynoParseOptions.parse(options) }),
+    uploaded_by: actor.id,
+    created_at: now.toISOString(),
   });
-  const stored = await findDynoCheck(db, sheetId, id);
-  if (!stored) throw new Error(`dyno check ${id} vanished after it was saved`);
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: 'target_sheet.checked',
+    entityType: 'target_sheet',
+    entityId: sheetId,
+    summary: `${actor.name} checked ${measured.length} damper${measured.length === 1 ? '' : 's'} against ${sheet.number}: ${report.passed} passed, ${report.failed} failed.`,
+    at: now,
+  });
+  const stored = await findDynoCheck(trx, sheetId, id);
+  if (!stored) throw new Error(`dyno check ${id} vanished inside its own transaction`);
   return ok(toRecord(stored));
 }

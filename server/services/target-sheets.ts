@@ -151,25 +151,28 @@ async function insertDraft(
  */
 export async function createTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, input: CreateTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
-  return deps.db.transaction().execute(async (trx) => {
-    const read = await revisionDocument(trx, ws.workspaceId, input.setupId, input.revision);
-    if (!read.ok) return read;
-    const tolerance = { tolPct: input.tolPct ?? defaultTolerance.tolPct, floorN: input.floorN ?? defaultTolerance.floorN };
-    const content = targetSheetContentFromSetup(read.value.document, input.speeds ?? defaultReferenceSpeeds, tolerance);
-    const checked = TargetSheetContent.safeParse(content);
-    if (!checked.success) return fail('bad_request', 'The targets read from this revision are not a valid sheet.', fieldsOf(checked.error));
-    const { id, number } = await insertDraft(trx, ws, actor, { setupId: input.setupId, revision: input.revision, content: checked.data, supersedesId: null }, now);
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'target_sheet.created',
-      entityType: 'target_sheet',
-      entityId: id,
-      summary: `${actor.name} drafted target sheet ${number} from "${read.value.setup.name}" revision ${input.revision}.`,
-      at: now,
-    });
-    return ok(await mustDetail(trx, ws.workspaceId, id));
+  return deps.db.transaction().execute((trx) => createTargetSheetIn(trx, ws, actor, input, now));
+}
+
+/** `createTargetSheet` inside an open transaction (the demo seed runs in one). */
+export async function createTargetSheetIn(trx: Queryable, ws: Ws, actor: Actor, input: CreateTargetSheetInput, now: Date): Promise<Outcome<TargetSheetDetail>> {
+  const read = await revisionDocument(trx, ws.workspaceId, input.setupId, input.revision);
+  if (!read.ok) return read;
+  const tolerance = { tolPct: input.tolPct ?? defaultTolerance.tolPct, floorN: input.floorN ?? defaultTolerance.floorN };
+  const content = targetSheetContentFromSetup(read.value.document, input.speeds ?? defaultReferenceSpeeds, tolerance);
+  const checked = TargetSheetContent.safeParse(content);
+  if (!checked.success) return fail('bad_request', 'The targets read from this revision are not a valid sheet.', fieldsOf(checked.error));
+  const { id, number } = await insertDraft(trx, ws, actor, { setupId: input.setupId, revision: input.revision, content: checked.data, supersedesId: null }, now);
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: 'target_sheet.created',
+    entityType: 'target_sheet',
+    entityId: id,
+    summary: `${actor.name} drafted target sheet ${number} from "${read.value.setup.name}" revision ${input.revision}.`,
+    at: now,
   });
+  return ok(await mustDetail(trx, ws.workspaceId, id));
 }
 
 /**
@@ -178,24 +181,28 @@ export async function createTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, i
  */
 export async function saveTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, sheetId: string, content: TargetSheetContent): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
-  return deps.db.transaction().execute(async (trx) => {
-    const row = await findSheet(trx, ws.workspaceId, sheetId);
-    if (!row) return noSheet();
-    if (row.status === 'released') return fail('conflict', `${row.number} is released and cannot change; draft a new sheet that supersedes it.`);
-    if (row.status === 'in_review') return fail('conflict', `${row.number} is in review; a lead must send it back before it can change.`);
-    if (row.status === 'returned') await event(trx, sheetId, 'returned', 'draft', actor, now);
-    await updateSheet(trx, sheetId, { document: JSON.stringify(content), status: 'draft', updated_at: now.toISOString() });
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'target_sheet.edited',
-      entityType: 'target_sheet',
-      entityId: sheetId,
-      summary: `${actor.name} edited target sheet ${row.number}${row.status === 'returned' ? ' (reopened after it was sent back)' : ''}.`,
-      at: now,
-    });
-    return ok(await mustDetail(trx, ws.workspaceId, sheetId));
+  return deps.db.transaction().execute((trx) => saveTargetSheetIn(trx, ws, actor, sheetId, content, now));
+}
+
+/** `saveTargetSheet` inside an open transaction. Only the body's own fields are kept. */
+export async function saveTargetSheetIn(trx: Queryable, ws: Ws, actor: Actor, sheetId: string, content: TargetSheetContent, now: Date): Promise<Outcome<TargetSheetDetail>> {
+  const row = await findSheet(trx, ws.workspaceId, sheetId);
+  if (!row) return noSheet();
+  if (row.status === 'released') return fail('conflict', `${row.number} is released and cannot change; draft a new sheet that supersedes it.`);
+  if (row.status === 'in_review') return fail('conflict', `${row.number} is in review; a lead must send it back before it can change.`);
+  const body = TargetSheetContent.parse(content);
+  if (row.status === 'returned') await event(trx, sheetId, 'returned', 'draft', actor, now);
+  await updateSheet(trx, sheetId, { document: JSON.stringify(body), status: 'draft', updated_at: now.toISOString() });
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: 'target_sheet.edited',
+    entityType: 'target_sheet',
+    entityId: sheetId,
+    summary: `${actor.name} edited target sheet ${row.number}${row.status === 'returned' ? ' (reopened after it was sent back)' : ''}.`,
+    at: now,
   });
+  return ok(await mustDetail(trx, ws.workspaceId, sheetId));
 }
 
 const pastTense: Record<SheetTransition['action'], string> = { submit: 'submitted', release: 'released', return: 'sent back', reopen: 'reopened' };
@@ -214,38 +221,56 @@ export async function moveTargetSheet(
   reason?: string,
 ): Promise<Outcome<TargetSheetTransitionResult>> {
   const now = deps.clock();
-  const at = now.toISOString();
-  const moved = await deps.db.transaction().execute(async (trx) => {
-    const row = await findSheet(trx, ws.workspaceId, sheetId);
-    if (!row) return noSheet();
-    const check = checkTransition(row.status, to, ws.role, reason);
-    if (!check.ok) return fail(check.code, `${row.number}: ${check.message}.`, check.code === 'bad_request' ? [{ path: 'reason', message: check.message }] : undefined);
-    const { action } = check.transition;
-    const why = action === 'return' ? reason!.trim() : null;
-    await updateSheet(trx, sheetId, {
-      status: to,
-      updated_at: at,
-      ...(action === 'submit' ? { submitted_at: at } : {}),
-      ...(action === 'release' ? { decided_by: actor.id, decided_at: at, released_at: at } : {}),
-      ...(action === 'return' ? { decided_by: actor.id, decided_at: at, return_reason: why } : {}),
-    });
-    await event(trx, sheetId, row.status, to, actor, now, why);
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: `target_sheet.${action === 'return' ? 'returned' : action === 'reopen' ? 'reopened' : action === 'submit' ? 'submitted' : 'released'}`,
-      entityType: 'target_sheet',
-      entityId: sheetId,
-      summary: `${actor.name} ${pastTense[action]} target sheet ${row.number}${why ? `: "${why}"` : ''}.`,
-      at: now,
-    });
-    const facts: SheetMailFacts = { sheetId, number: row.number, setupName: row.setup_name, revision: row.revision_number, authorId: row.author_id, reason: why };
-    return ok({ action, facts, detail: await mustDetail(trx, ws.workspaceId, sheetId) });
-  });
+  const moved = await deps.db.transaction().execute((trx) => moveTargetSheetIn(trx, ws, actor, sheetId, to, reason, now));
   if (!moved.ok) return moved;
   const { action, facts, detail } = moved.value;
   const notified = await mailSheetDecision(deps, ws, actor, action, facts);
   return ok({ ...detail, notified, notice: action === 'release' ? sheetCautions.release : null });
+}
+
+/** What a status change did, for the mail that follows it. */
+export interface SheetMove {
+  action: SheetTransition['action'];
+  facts: SheetMailFacts;
+  detail: TargetSheetDetail;
+}
+
+/** `moveTargetSheet` inside an open transaction, without the mail (the demo seed sends none). */
+export async function moveTargetSheetIn(
+  trx: Queryable,
+  ws: Ws,
+  actor: Actor,
+  sheetId: string,
+  to: TargetSheetStatus,
+  reason: string | undefined,
+  now: Date,
+): Promise<Outcome<SheetMove>> {
+  const at = now.toISOString();
+  const row = await findSheet(trx, ws.workspaceId, sheetId);
+  if (!row) return noSheet();
+  const check = checkTransition(row.status, to, ws.role, reason);
+  if (!check.ok) return fail(check.code, `${row.number}: ${check.message}.`, check.code === 'bad_request' ? [{ path: 'reason', message: check.message }] : undefined);
+  const { action } = check.transition;
+  const why = action === 'return' ? reason!.trim() : null;
+  await updateSheet(trx, sheetId, {
+    status: to,
+    updated_at: at,
+    ...(action === 'submit' ? { submitted_at: at } : {}),
+    ...(action === 'release' ? { decided_by: actor.id, decided_at: at, released_at: at } : {}),
+    ...(action === 'return' ? { decided_by: actor.id, decided_at: at, return_reason: why } : {}),
+  });
+  await event(trx, sheetId, row.status, to, actor, now, why);
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: `target_sheet.${action === 'return' ? 'returned' : action === 'reopen' ? 'reopened' : action === 'submit' ? 'submitted' : 'released'}`,
+    entityType: 'target_sheet',
+    entityId: sheetId,
+    summary: `${actor.name} ${pastTense[action]} target sheet ${row.number}${why ? `: "${why}"` : ''}.`,
+    at: now,
+  });
+  const facts: SheetMailFacts = { sheetId, number: row.number, setupName: row.setup_name, revision: row.revision_number, authorId: row.author_id, reason: why };
+  return ok({ action, facts, detail: await mustDetail(trx, ws.workspaceId, sheetId) });
 }
 
 /**
