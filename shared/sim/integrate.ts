@@ -50,6 +50,8 @@ export interface IntegrationOptions {
   tolerance?: number;
   /** Initial [zs, vs, zu, vu] from static equilibrium; default at rest in equilibrium. */
   initial?: readonly [number, number, number, number];
+  /** Also keep the four states on the output grid (`states` in the outcome). */
+  recordStates?: boolean;
 }
 
 export interface IntegrationStats {
@@ -69,7 +71,7 @@ export interface StateColumns {
 }
 
 export type IntegrationOutcome =
-  | { ok: true; trace: TraceColumns; states: StateColumns; stats: IntegrationStats }
+  | { ok: true; trace: TraceColumns; states?: StateColumns; stats: IntegrationStats }
   | { ok: false; reason: string };
 
 export const DEFAULT_TOLERANCE = 1e-4;
@@ -113,12 +115,14 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
   const T = opts.duration;
   const nOut = Math.floor(T / dt + 1e-9) + 1;
   const trace = allocateTrace(nOut, dt);
-  const states: StateColumns = {
-    bodyDisplacement: new Float64Array(nOut),
-    bodyVelocity: new Float64Array(nOut),
-    wheelDisplacement: new Float64Array(nOut),
-    wheelVelocity: new Float64Array(nOut),
-  };
+  const states: StateColumns | undefined = opts.recordStates
+    ? {
+        bodyDisplacement: new Float64Array(nOut),
+        bodyVelocity: new Float64Array(nOut),
+        wheelDisplacement: new Float64Array(nOut),
+        wheelVelocity: new Float64Array(nOut),
+      }
+    : undefined;
   const forces = newCornerForces();
   const rb = new Float64Array(2);
   const sw = new Float64Array(SWITCH_COUNT);
@@ -150,10 +154,12 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
     trace.bumpStopForce[i] = forces.bumpStopForce;
     trace.reboundStopForce[i] = forces.reboundStopForce;
     trace.road[i] = rb[0];
-    states.bodyDisplacement[i] = zs;
-    states.bodyVelocity[i] = vs;
-    states.wheelDisplacement[i] = zu;
-    states.wheelVelocity[i] = vu;
+    if (states) {
+      states.bodyDisplacement[i] = zs;
+      states.bodyVelocity[i] = vs;
+      states.wheelDisplacement[i] = zu;
+      states.wheelVelocity[i] = vu;
+    }
   };
 
   /** Sign of each switch at a state (0 inside the deadband). */
@@ -194,7 +200,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
   // Switch tracking state, shared with the main loop below.
   const now = new Int8Array(SWITCH_COUNT);
   let stepStart = 0;
-  let stateAtStart = [0, 0, 0, 0];
+  const stateAtStart = [0, 0, 0, 0];
   let eventAt = -1;
   let events = 0;
   let lastStep = 0;
@@ -208,7 +214,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
       if (next === 0 && x <= slack) write(0, y[0], y[1], y[2], y[3]);
       signsAt(x, y[0], y[1], y[2], y[3], regime);
       stepStart = x;
-      stateAtStart = y.slice();
+      for (let i = 0; i < 4; i++) stateAtStart[i] = y[i];
       return;
     }
     if (x - xOld <= STALL_STEP * Math.max(1, x)) {
@@ -235,7 +241,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
     }
     lastStep = x - xOld;
     stepStart = x;
-    stateAtStart = y.slice();
+    for (let i = 0; i < 4; i++) stateAtStart[i] = y[i];
   };
 
   const solver = new Solver(4);
@@ -267,7 +273,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
     if (res.outcome === Outcome.EarlyReturn && eventAt > 0) {
       // Resume from the start of the dropped step; the switch time becomes a segment end.
       t = stepStart;
-      y = stateAtStart;
+      y = stateAtStart.slice();
       target = eventAt;
       continue;
     }
@@ -278,7 +284,7 @@ export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: 
       solver.stabilityCheckCount = 0;
       solver.denseOutputErrorEstimator = false;
       t = stepStart;
-      y = stateAtStart;
+      y = stateAtStart.slice();
       continue;
     }
     if (res.outcome !== Outcome.Converged) {

@@ -81,9 +81,9 @@ describe('free decay on a level road', () => {
     const st = statics(s);
     const kw = wheelRate(s);
     const kt = s.tyreRate;
-    const run = integrateCorner(cornerModel(s, st), level, { duration: 4, outputRate: 2000, tolerance: 1e-9, initial: [-0.07, 0, 0, 3] });
+    const run = integrateCorner(cornerModel(s, st), level, { duration: 4, outputRate: 2000, tolerance: 1e-9, initial: [-0.07, 0, 0, 3], recordStates: true });
     if (!run.ok) throw new Error(run.reason);
-    const { bodyDisplacement: zs, bodyVelocity: vs, wheelDisplacement: zu, wheelVelocity: vu } = run.states;
+    const { bodyDisplacement: zs, bodyVelocity: vs, wheelDisplacement: zu, wheelVelocity: vu } = run.states!;
     // Absolute energy: kinetic, spring (preloaded by d0), tyre (only while compressed), gravity, stops.
     const energy = (i: number) => {
       const x = zu[i] - zs[i];
@@ -127,9 +127,9 @@ describe('free decay on a level road', () => {
     const dampedHz = im[bodyIndex] / (2 * Math.PI);
 
     const st = statics(s);
-    const run = integrateCorner(cornerModel(s, st), level, { duration: 6, outputRate: 1000, initial: [0.02, 0, 0.02 * (k / (k + kt)), 0] });
+    const run = integrateCorner(cornerModel(s, st), level, { duration: 6, outputRate: 1000, initial: [0.02, 0, 0.02 * (k / (k + kt)), 0], recordStates: true });
     if (!run.ok) throw new Error(run.reason);
-    const z = run.states.bodyDisplacement;
+    const z = run.states!.bodyDisplacement;
     const dt = run.trace.dt;
     // Upward zero crossings after the wheel-hop part has died out (t > 0.5 s), interpolated.
     const crossings: number[] = [];

@@ -3,7 +3,7 @@ import seedrandom from 'seedrandom';
 import type { Iso8608Road, IsoClass } from '../../schemas/road.ts';
 import type { RoadSummary } from '../../schemas/run.ts';
 import { atSpeed, footprintGain, type RoadExcitation } from './excitation.ts';
-import { gridSpline } from './spline.ts';
+import { gridSpline, type GridSpline } from './spline.ts';
 
 /**
  * ISO 8608 random road (ISO 8608:2016; class values from memory, model.md): displacement PSD
@@ -122,16 +122,38 @@ export function generateIso8608Profile(road: Iso8608Road, options: { footprint?:
 }
 
 /**
- * The road as a time input at `speed`. The profile is shifted so the tyre starts at zero
- * elevation (the corner starts in static equilibrium on a level road, model.md); a constant
- * offset changes nothing else.
+ * Recently built ISO roads, keyed by everything that shapes them. A study drives hundreds of
+ * setups over the same road; generating it once per worker saves an FFT and a spline solve
+ * per run. The profile is a pure function of the key, so a cached one is the same road.
  */
+const splineCache = new Map<string, { at: GridSpline['at']; profile: IsoProfile }>();
+const CACHE_SIZE = 4;
+
+/** Forgets cached roads (the benchmark uses it to time generation from scratch). */
+export function clearIsoRoadCache(): void {
+  splineCache.clear();
+}
+
+function cachedSpline(road: Iso8608Road, footprint: number | undefined) {
+  const key = JSON.stringify([road.class, road.seed, road.nMin, road.nMax, road.waviness, road.length, footprint]);
+  let hit = splineCache.get(key);
+  if (!hit) {
+    const profile = generateIso8608Profile(road, { footprint });
+    // Shifted so the tyre starts at zero elevation: the corner starts in static equilibrium
+    // on a level road (model.md); a constant offset changes nothing else.
+    const z0 = profile.z[0];
+    const shifted = new Float64Array(profile.z.length);
+    for (let i = 0; i < shifted.length; i++) shifted[i] = profile.z[i] - z0;
+    hit = { at: gridSpline(shifted, profile.dx, true).at, profile };
+    if (splineCache.size >= CACHE_SIZE) splineCache.delete(splineCache.keys().next().value as string);
+    splineCache.set(key, hit);
+  }
+  return hit;
+}
+
+/** The road as a time input at `speed` (m/s) for a run of `duration` (s). */
 export function iso8608Excitation(road: Iso8608Road, speed: number, duration: number, footprint?: number): RoadExcitation {
-  const p = generateIso8608Profile(road, { footprint });
-  const z0 = p.z[0];
-  const shifted = new Float64Array(p.z.length);
-  for (let i = 0; i < shifted.length; i++) shifted[i] = p.z[i] - z0;
-  const spline = gridSpline(shifted, p.dx, true);
+  const { at, profile: p } = cachedSpline(road, footprint);
   const summary: RoadSummary = {
     kind: 'iso8608',
     name: road.name,
@@ -143,5 +165,5 @@ export function iso8608Excitation(road: Iso8608Road, speed: number, duration: nu
     spacing: p.dx,
     distance: speed * duration,
   };
-  return atSpeed({ at: spline.at, kinks: [] }, speed, duration, summary);
+  return atSpeed({ at, kinks: [] }, speed, duration, summary);
 }
