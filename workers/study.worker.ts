@@ -1,5 +1,6 @@
 import * as Comlink from 'comlink';
 import { createStudyRunner, type StudyJobOutcome, type StudyRunContext, type StudyRunJob, type StudyRunner } from '../shared/study/run-jobs.ts';
+import { warmUpStudyCode } from '../shared/study/warm-up.ts';
 
 /**
  * Comlink shell around the study runner (shared/study/run-jobs.ts). One message runs a whole
@@ -8,6 +9,13 @@ import { createStudyRunner, type StudyJobOutcome, type StudyRunContext, type Stu
  * run (`key`) keep coming.
  */
 let current: { key: string; runner: StudyRunner } | undefined;
+let warmed = false;
+
+function warmUp(): void {
+  if (warmed) return;
+  warmed = true;
+  warmUpStudyCode();
+}
 
 const api = {
   runBatch(key: string, context: StudyRunContext, jobs: StudyRunJob[]): { outcomes: StudyJobOutcome[]; workerMs: number } {
@@ -16,8 +24,13 @@ const api = {
     const outcomes = jobs.map((job) => current!.runner.run(job));
     return { outcomes, workerMs: performance.now() - started };
   },
-  /** Answers once the module (and the simulation code) has loaded: used to warm a fresh worker. */
+  /**
+   * Answers once the module has loaded, after one short run of the example corner so the
+   * integrator and metrics are compiled before the first real batch (the first batches of a
+   * cold worker otherwise run several times slower).
+   */
   ping(): 'ready' {
+    warmUp();
     return 'ready';
   },
 };

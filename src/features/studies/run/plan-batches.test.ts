@@ -26,12 +26,12 @@ describe('planBatches', () => {
     expect(jobs[21].values.damperScale).toBeCloseTo(0.5 + 1.5 / 19, 12);
   });
 
-  it('gives every worker several batches of at most 24 runs', () => {
-    expect(batchSize(401, 2)).toBe(24);
+  it('gives every worker several batches of at most 12 runs', () => {
+    expect(batchSize(401, 2)).toBe(12);
     expect(batchSize(17, 2)).toBe(2);
     expect(batchSize(1, 8)).toBe(1);
     const plan = planBatches(def, 2);
-    expect(Math.max(...plan.batches.map((b) => b.length))).toBeLessThanOrEqual(24);
+    expect(Math.max(...plan.batches.map((b) => b.length))).toBeLessThanOrEqual(12);
     expect(plan.batches.length).toBeGreaterThanOrEqual(12);
   });
 

@@ -5,7 +5,7 @@ import type { StudyRunJob } from '../../../../shared/study/run-jobs.ts';
 /**
  * The jobs of a study cut into batches for the worker pool. The base setup's runs go first (the
  * trade-off chart marks the base from the start), then the points in sweep order. Batches are
- * large enough that messaging costs nothing next to the runs (a message per 8–24 runs), and
+ * large enough that messaging costs nothing next to the runs (a message per 2–12 runs), and
  * small enough that every worker gets several, so the pool stays busy to the end and progress
  * moves steadily.
  */
@@ -14,7 +14,7 @@ export interface BatchPlan {
   totalRuns: number;
 }
 
-export const MAX_BATCH = 24;
+export const MAX_BATCH = 12;
 
 export function batchSize(totalRuns: number, workers: number): number {
   return Math.max(1, Math.min(MAX_BATCH, Math.ceil(totalRuns / (Math.max(1, workers) * 6))));
