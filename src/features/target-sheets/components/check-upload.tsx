@@ -1,0 +1,115 @@
+import { useId, useRef, useState } from 'react';
+import { DYNO_CHECK_MAX_FILES } from '../../../../shared/schemas/target-sheet.ts';
+import { Button } from '../../../components/ui/button.tsx';
+import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
+import { isApiError } from '../../../lib/api-client.ts';
+import { useUploadCheck } from '../api/upload-check.ts';
+
+const stem = (name: string) => name.replace(/\.[A-Za-z0-9]{1,5}$/, '');
+
+/**
+ * Upload of dyno files against a sheet, one file per physical damper, each with its own label
+ * (the serial on the part). Every file is read on the server before anything is kept; a bad
+ * file is refused by file and line.
+ */
+export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: string; sheetId: string; gasForce: number }) {
+  const upload = useUploadCheck(workspaceId, sheetId);
+  const inputRef = useRef<HTMLInputElement>(null);
+  const fileId = useId();
+  const [files, setFiles] = useState<{ file: File; label: string }[]>([]);
+  const [withGas, setWithGas] = useState(false);
+  const [velocityUnit, setVelocityUnit] = useState<'' | 'm/s' | 'mm/s'>('');
+  const [problem, setProblem] = useState<string>();
+
+  const choose = (list: FileList | null) => {
+    const chosen = [...(list ?? [])].slice(0, DYNO_CHECK_MAX_FILES);
+    setFiles(chosen.map((file) => ({ file, label: stem(file.name) })));
+    setProblem(list && list.length > DYNO_CHECK_MAX_FILES ? `Only the first ${DYNO_CHECK_MAX_FILES} files are kept.` : undefined);
+    upload.reset();
+  };
+
+  const send = () => {
+    if (files.length === 0) return setProblem('Choose one dyno file per damper.');
+    upload.mutate(
+      { files, gasForce: withGas ? gasForce : 0, velocityUnit: velocityUnit || undefined },
+      {
+        onSuccess: () => {
+          setFiles([]);
+          if (inputRef.current) inputRef.current.value = '';
+        },
+      },
+    );
+  };
+
+  const lines = isApiError(upload.error) ? upload.error.fields.filter((f) => f.path.startsWith('line')) : [];
+
+  return (
+    <div className="space-y-3 rounded border border-rule bg-paper-raised px-4 py-3" aria-label="Check dampers against this sheet" role="group">
+      <div className="flex flex-wrap items-end gap-4">
+        <div className="flex flex-col gap-1">
+          <label htmlFor={fileId} className="text-sm font-medium text-ink-soft">
+            Dyno files, one per damper (CSV)
+          </label>
+          <input
+            id={fileId}
+            ref={inputRef}
+            type="file"
+            multiple
+            accept=".csv,.txt,text/csv,text/plain"
+            className="text-sm file:mr-3 file:rounded file:border file:border-rule-strong file:bg-paper file:px-2.5 file:py-1 file:text-sm"
+            onChange={(e) => choose(e.target.files)}
+          />
+        </div>
+        <Field label="Speed unit where a column names none" className="w-56">
+          <Select value={velocityUnit} onChange={(e) => setVelocityUnit(e.target.value as typeof velocityUnit)}>
+            <option value="">m/s (SI)</option>
+            <option value="mm/s">mm/s</option>
+          </Select>
+        </Field>
+        <label className="flex items-center gap-2 pb-2 text-sm">
+          <input type="checkbox" checked={withGas} onChange={(e) => setWithGas(e.target.checked)} />
+          Readings include the gas force (take {gasForce} N out)
+        </label>
+      </div>
+
+      {files.length > 0 && (
+        <ul className="grid gap-2 sm:grid-cols-2" aria-label="Dampers to check">
+          {files.map((f, i) => (
+            <li key={`${f.file.name}-${i}`} className="flex items-center gap-2">
+              <span className="min-w-0 flex-1 truncate text-sm text-ink-soft" title={f.file.name}>
+                {f.file.name}
+              </span>
+              <Input
+                aria-label={`Damper label for ${f.file.name}`}
+                value={f.label}
+                maxLength={120}
+                className="h-8 w-40 text-sm"
+                onChange={(e) => setFiles(files.map((x, j) => (j === i ? { ...x, label: e.target.value } : x)))}
+              />
+            </li>
+          ))}
+        </ul>
+      )}
+
+      <div className="flex items-center gap-3">
+        <Button variant="primary" size="sm" busy={upload.isPending} onClick={send}>
+          Check {files.length > 1 ? `${files.length} dampers` : 'damper'}
+        </Button>
+        <span className="text-xs text-ink-faint">Peak files (speed and force per direction) or raw records (time, displacement, force).</span>
+      </div>
+      {problem && <p className="text-sm text-signal-ink">{problem}</p>}
+      {upload.error && (
+        <div>
+          <FormError message={upload.error.message} />
+          {lines.length > 1 && (
+            <ul className="mt-1 list-inside list-disc text-sm text-danger">
+              {lines.map((l, i) => (
+                <li key={i}>{l.message}</li>
+              ))}
+            </ul>
+          )}
+        </div>
+      )}
+    </div>
+  );
+}
