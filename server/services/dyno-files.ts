@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { fitDamperCurves } from '../../shared/dyno/fit-curve.ts';
-import { summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
+import { type DynoReadOutcome, summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
 import { DynoParseOptions, type DynoDirection } from '../../shared/schemas/dyno.ts';
 import {
   type ApplyDynoFitInput,
@@ -12,7 +12,7 @@ import {
   type DynoUploadFields,
 } from '../../shared/schemas/dyno-file.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import type { Db } from '../db/database.ts';
+import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../errors.ts';
 import { type DynoFileListRow, findDynoFile, insertDynoFile, linkProducedRevision, listDynoFiles } from '../repositories/dyno-files.ts';
 import { findRevision, findSetup, latestRevisionNumber } from '../repositories/setups.ts';
@@ -80,35 +80,46 @@ export async function uploadDynoFile(
       read.errors.map((e) => ({ path: e.line !== undefined ? `line ${e.line}` : 'file', message: e.message })),
     );
   }
+  return db.transaction().execute(async (trx) => ok(await insertDynoRecord(trx, ws, actor, setup, file, read, now)));
+}
+
+/** Inserts a file already read, with its audit entry, in the caller's transaction (the demo seed uses this too). */
+export async function insertDynoRecord(
+  trx: Queryable,
+  ws: Ws,
+  actor: Actor,
+  setup: { id: string; name: string },
+  file: { text: string; filename: string; bytes: number },
+  read: Extract<DynoReadOutcome, { ok: true }>,
+  now: Date,
+): Promise<DynoFileItem> {
   const id = randomUUID();
-  return db.transaction().execute(async (trx) => {
-    await insertDynoFile(trx, {
-      id,
-      workspace_id: ws.workspaceId,
-      setup_id: setupId,
-      produced_revision_id: null,
-      filename: file.filename,
-      bytes: file.bytes,
-      content: file.text,
-      options: JSON.stringify(read.options),
-      summary: JSON.stringify(read.summary),
-      uploaded_by: actor.id,
-      created_at: now.toISOString(),
-    });
-    const points = read.summary.peaks.compression.length + read.summary.peaks.rebound.length;
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'dyno_file.uploaded',
-      entityType: 'dyno_file',
-      entityId: id,
-      summary: `${actor.name} uploaded the dyno file ${file.filename} (${points} points) for "${setup.name}".`,
-      at: now,
-    });
-    const row = await findDynoFile(trx, ws.workspaceId, setupId, id);
-    if (!row) throw new Error(`dyno file ${id} vanished inside its own transaction`);
-    return ok(toItem(row));
+  await insertDynoFile(trx, {
+    id,
+    workspace_id: ws.workspaceId,
+    setup_id: setup.id,
+    produced_revision_id: null,
+    filename: file.filename,
+    bytes: file.bytes,
+    content: file.text,
+    options: JSON.stringify(read.options),
+    summary: JSON.stringify(read.summary),
+    uploaded_by: actor.id,
+    created_at: now.toISOString(),
   });
+  const points = read.summary.peaks.compression.length + read.summary.peaks.rebound.length;
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: 'dyno_file.uploaded',
+    entityType: 'dyno_file',
+    entityId: id,
+    summary: `${actor.name} uploaded the dyno file ${file.filename} (${points} points) for "${setup.name}".`,
+    at: now,
+  });
+  const row = await findDynoFile(trx, ws.workspaceId, setup.id, id);
+  if (!row) throw new Error(`dyno file ${id} vanished inside its own transaction`);
+  return toItem(row);
 }
 
 /** Forces of a fitted table rounded to 0.1 N: finer than any dyno reads, and easier to read back. */

@@ -12,7 +12,7 @@ import {
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
-import type { Db } from '../db/database.ts';
+import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../errors.ts';
 import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from '../repositories/roads.ts';
 import { recordAudit } from './audit.ts';
@@ -44,7 +44,7 @@ function toDetail(r: RoadDetailRow): RoadDetail {
 }
 
 /** Figures of a road, or a 400 naming the definition field at fault (e.g. too many samples). */
-function figuresOrFail(road: Road): Outcome<RoadFigures> {
+export function figuresOrFail(road: Road): Outcome<RoadFigures> {
   const out = roadFigures(road);
   if (!out.ok) {
     const [path, ...rest] = out.reason.split(': ');
@@ -79,34 +79,40 @@ const kindWords: Record<Road['kind'], string> = {
 export async function saveNewRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, now: Date): Promise<Outcome<RoadDetail>> {
   const figures = figuresOrFail(input.definition);
   if (!figures.ok) return figures;
+  return db.transaction().execute(async (trx) => ok(await insertRoadRecord(trx, ws, actor, input, source, figures.value, now)));
+}
+
+/**
+ * Inserts a road with figures already computed, and its audit entry, in the caller's
+ * transaction (the demo seed uses this too).
+ */
+export async function insertRoadRecord(trx: Queryable, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, figures: RoadFigures, now: Date): Promise<RoadDetail> {
   const id = randomUUID();
   const at = now.toISOString();
-  return db.transaction().execute(async (trx) => {
-    await insertRoad(trx, {
-      id,
-      workspace_id: ws.workspaceId,
-      name: input.name,
-      definition: JSON.stringify({ ...input.definition, name: input.name }),
-      source,
-      summary: JSON.stringify(figures.value),
-      created_by: actor.id,
-      created_at: at,
-      updated_by: actor.id,
-      updated_at: at,
-    });
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: source === 'measured' ? 'road.uploaded' : 'road.created',
-      entityType: 'road',
-      entityId: id,
-      summary: `${actor.name} ${source === 'measured' ? 'uploaded' : 'added'} the ${kindWords[input.definition.kind]} "${input.name}".`,
-      at: now,
-    });
-    const row = await findRoad(trx, ws.workspaceId, id);
-    if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
-    return ok(toDetail(row));
+  await insertRoad(trx, {
+    id,
+    workspace_id: ws.workspaceId,
+    name: input.name,
+    definition: JSON.stringify({ ...input.definition, name: input.name }),
+    source,
+    summary: JSON.stringify(figures),
+    created_by: actor.id,
+    created_at: at,
+    updated_by: actor.id,
+    updated_at: at,
   });
+  await recordAudit(trx, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: source === 'measured' ? 'road.uploaded' : 'road.created',
+    entityType: 'road',
+    entityId: id,
+    summary: `${actor.name} ${source === 'measured' ? 'uploaded' : 'added'} the ${kindWords[input.definition.kind]} "${input.name}".`,
+    at: now,
+  });
+  const row = await findRoad(trx, ws.workspaceId, id);
+  if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
+  return toDetail(row);
 }
 
 export function createRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
