@@ -1,10 +1,10 @@
-import type { Road } from '../schemas/road.ts';
+import type { RoadInput } from '../schemas/road.ts';
 
 const mm = (m: number) => `${+(m * 1000).toPrecision(3)} mm`;
 const m = (x: number) => `${+x.toPrecision(3)} m`;
 
 /** A road's own name, or a plain description of it ("ISO 8608 class C, seed 7"). */
-export function roadLabel(road: Road, seed?: number): string {
+export function roadLabel(road: RoadInput, seed?: number): string {
   if (road.name) {
     const reseeded = road.kind === 'iso8608' && seed !== undefined && seed !== road.seed;
     return reseeded ? `${road.name} · seed ${seed}` : road.name;
@@ -28,6 +28,6 @@ export function roadLabel(road: Road, seed?: number): string {
 }
 
 /** The seed a run actually used: the run's own for an ISO road, else the road's; null for other roads. */
-export function effectiveSeed(road: Road, seed?: number): number | null {
+export function effectiveSeed(road: RoadInput, seed?: number): number | null {
   return road.kind === 'iso8608' ? (seed ?? road.seed) : null;
 }

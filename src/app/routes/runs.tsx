@@ -1,0 +1,115 @@
+import { useState } from 'react';
+import { useNavigate, useSearchParams } from 'react-router';
+import { ButtonLink } from '../../components/ui/button.tsx';
+import { EmptyState } from '../../components/ui/empty-state.tsx';
+import { Notice } from '../../components/ui/notice.tsx';
+import { PageHeader, Section } from '../../components/ui/page-header.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
+import { useDeleteRun } from '../../features/runs/api/delete-run.ts';
+import { useRuns } from '../../features/runs/api/get-runs.ts';
+import { ExportButtons, runTitle, SaveRunForm, type SaveTarget } from '../../features/runs/components/run-actions.tsx';
+import { LiveTryout } from '../../features/runs/components/live-tryout.tsx';
+import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
+import { type RunChoice, RunForm } from '../../features/runs/components/run-form.tsx';
+import { RunStatus } from '../../features/runs/components/run-status.tsx';
+import { SavedRunsTable } from '../../features/runs/components/saved-runs-table.tsx';
+import { useSimulation } from '../../features/runs/model/use-simulation.ts';
+import { formatQuantityText } from '../../lib/format.ts';
+import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+/** `/w/:workspaceId/runs`: run a setup revision on a road, read the result, save it; saved runs below. */
+export function RunsRoute() {
+  const workspace = useWorkspace();
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const { state, start, cancel } = useSimulation();
+  const [target, setTarget] = useState<(SaveTarget & { latestRevision: number }) | null>(null);
+  const [trying, setTrying] = useState(false);
+
+  const run = (choice: RunChoice) => {
+    setTarget({ setupId: choice.setupId, revisionNumber: choice.revisionNumber, roadId: choice.roadId, latestRevision: choice.latestRevision });
+    void start(choice);
+  };
+
+  return (
+    <>
+      <PageHeader
+        title="Runs"
+        detail="Drive one setup revision over a road at a speed, and read what it does to the ride, the tyre and the stroke."
+        actions={
+          <ButtonLink to={`/w/${workspace.id}/compare`} size="sm">
+            Compare setups
+          </ButtonLink>
+        }
+      />
+      <RunForm
+        workspaceId={workspace.id}
+        initialSetupId={params.get('setup') ?? undefined}
+        initialRevision={params.get('rev') ? Number(params.get('rev')) : undefined}
+        running={state.status === 'running'}
+        onRun={run}
+        onCancel={cancel}
+      />
+      <RunStatus state={state} />
+
+      {state.status === 'done' && target && (
+        <section aria-label="Result" className="mt-5" data-testid="current-result">
+          <div className="mb-3 flex flex-wrap items-end justify-between gap-3 border-b border-rule pb-2">
+            <div className="min-w-0">
+              <h2 className="text-lg font-semibold">{runTitle(state.view, target.revisionNumber)}</h2>
+              <p className="text-xs text-ink-faint">
+                Computed in this browser in <span className="figures">{formatQuantityText(state.elapsedMs / 1000, 's')}</span> ·{' '}
+                {state.view.result.timing.steps} integrator steps · output {state.view.result.outputRate} samples/s
+              </p>
+            </div>
+            <div className="flex flex-wrap gap-2">
+              <ExportButtons view={state.view} name={runTitle(state.view, target.revisionNumber)} />
+            </div>
+          </div>
+          {target.revisionNumber < target.latestRevision && (
+            <Notice tone="signal" className="mb-3">
+              This is revision {target.revisionNumber}; the setup has a newer revision, r{target.latestRevision}.
+            </Notice>
+          )}
+          {workspace.can('engineer') && (
+            <div className="mb-4">
+              <SaveRunForm workspaceId={workspace.id} view={state.view} target={target} onSaved={(id) => navigate(`/w/${workspace.id}/runs/${id}`)} />
+            </div>
+          )}
+          <details className="mb-5 rounded border border-rule bg-paper/60 px-3 py-2" onToggle={(e) => setTrying((e.target as HTMLDetailsElement).open)}>
+            <summary className="cursor-pointer text-sm font-medium text-accent">Try a change live</summary>
+            {trying && (
+              <div className="mt-2">
+                <LiveTryout key={state.elapsedMs} initial={state.view.setup} road={state.view.road} speed={state.view.result.speed} seed={state.view.seed} />
+              </div>
+            )}
+          </details>
+          <RunDashboard view={state.view} />
+        </section>
+      )}
+
+      <Section title="Saved runs" className="mt-8">
+        <SavedRuns workspaceId={workspace.id} canDelete={workspace.can('engineer')} />
+      </Section>
+    </>
+  );
+}
+
+function SavedRuns({ workspaceId, canDelete }: { workspaceId: string; canDelete: boolean }) {
+  const runs = useRuns(workspaceId);
+  const remove = useDeleteRun(workspaceId);
+  if (runs.isPending) return <Loading what="saved runs" />;
+  if (runs.isError) return <Notice tone="danger">{runs.error.message}</Notice>;
+  if (runs.data.runs.length === 0) return <EmptyState title="No saved runs yet">Run a setup above and save it: it keeps its inputs, figures and traces, so it opens again without running.</EmptyState>;
+  return (
+    <SavedRunsTable
+      workspaceId={workspaceId}
+      runs={runs.data.runs}
+      canDelete={canDelete}
+      deleting={remove.isPending ? remove.variables : undefined}
+      onDelete={(run) => {
+        if (window.confirm(`Delete the saved run “${run.name}”? Its figures and traces go with it.`)) remove.mutate(run.id);
+      }}
+    />
+  );
+}

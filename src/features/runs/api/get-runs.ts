@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { RunList } from '../../../../shared/schemas/run-record.ts';
+import { api } from '../../../lib/api-client.ts';
+import { workspaceKey } from '../../../lib/query-keys.ts';
+
+export const runsKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'runs'] as const;
+
+/** Saved runs of the workspace, or of one setup; newest first. */
+export const getRuns = (workspaceId: string, setupId?: string) =>
+  api.get(`/api/workspaces/${encodeURIComponent(workspaceId)}/runs`, RunList, { query: { setupId } });
+
+export const runsQueryOptions = (workspaceId: string, setupId?: string) =>
+  queryOptions({
+    queryKey: [...runsKey(workspaceId), 'list', { setupId: setupId ?? null }],
+    queryFn: () => getRuns(workspaceId, setupId),
+  });
+
+export const useRuns = (workspaceId: string, setupId?: string) => useQuery(runsQueryOptions(workspaceId, setupId));

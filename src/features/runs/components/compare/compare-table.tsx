@@ -1,0 +1,87 @@
+import { Figure } from '../../../../components/ui/figure.tsx';
+import { betterRules, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
+import { type ComparedRun, differenceText } from '../../model/compare.ts';
+import { Swatch } from './swatch.tsx';
+
+const groups: FigureGroup[] = ['comfort', 'grip', 'package', 'damper', 'modal'];
+
+/**
+ * Every figure side by side: the first run is the reference; the others show their difference
+ * against it. The better value of a ranked row is marked; the rule each row uses is stated.
+ */
+export function CompareTable({ runs }: { runs: ComparedRun[] }) {
+  return (
+    <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
+      <table className="w-full border-collapse text-sm" aria-label="Figures compared">
+        <thead className="border-b border-rule-strong bg-paper-sunk/70 text-left">
+          <tr>
+            <th scope="col" className="h-9 px-3 text-xs font-semibold text-ink-soft">
+              Figure
+            </th>
+            <th scope="col" className="px-2 text-xs font-semibold text-ink-soft">
+              Ranking
+            </th>
+            {runs.map((r, i) => (
+              <th key={r.key} scope="col" className="px-3 text-right text-xs font-semibold text-ink">
+                <span className="inline-flex items-center gap-1.5">
+                  <Swatch slot={r.slot} />
+                  {r.label}
+                  {i === 0 && <span className="font-normal text-ink-faint">(reference)</span>}
+                </span>
+              </th>
+            ))}
+          </tr>
+        </thead>
+        {groups.map((group) => (
+          <tbody key={group} className="[&>tr]:border-b [&>tr]:border-rule/70">
+            <tr className="bg-paper/70">
+              <th colSpan={2 + runs.length} scope="colgroup" className={`px-3 pt-2.5 pb-1 text-left text-xs font-semibold tracking-wide uppercase ${group === 'comfort' ? 'text-comfort' : group === 'grip' ? 'text-grip' : 'text-ink-soft'}`}>
+                {groupTitles[group]}
+              </th>
+            </tr>
+            {figureRows
+              .filter((row) => row.group === group)
+              .map((row) => {
+                const values = runs.map((r) => row.value(r.view.result));
+                const best = bestIndex(row, values);
+                return (
+                  <tr key={row.key} data-row={row.key} className="hover:bg-accent-wash/40">
+                    <th scope="row" className="h-8 px-3 text-left font-normal text-ink">
+                      {row.label}
+                    </th>
+                    <td className="px-2 text-xs whitespace-nowrap text-ink-faint">{betterRules[row.better]}</td>
+                    {runs.map((r, i) => {
+                      const v = values[i];
+                      const diff = i === 0 ? null : differenceText(row, values[0], v);
+                      return (
+                        <td key={r.key} className={`px-3 py-1 text-right align-top ${best === i ? 'bg-ok-wash/70' : ''}`} data-best={best === i || undefined}>
+                          {v === undefined ? (
+                            <span className="text-ink-faint">—</span>
+                          ) : (
+                            <span className="inline-flex items-baseline gap-1">
+                              {best === i && (
+                                <span className="text-2xs font-semibold text-ok" title={`best here: ${betterRules[row.better]}`}>
+                                  best
+                                </span>
+                              )}
+                              <Figure value={v} unit={row.unit} label={`${row.label}, ${r.label}`} className={best === i ? 'font-semibold' : ''} />
+                            </span>
+                          )}
+                          {diff && (
+                            <span className="figures block text-2xs text-ink-faint">
+                              {diff.abs}
+                              {diff.rel ? ` · ${diff.rel}` : ''}
+                            </span>
+                          )}
+                        </td>
+                      );
+                    })}
+                  </tr>
+                );
+              })}
+          </tbody>
+        ))}
+      </table>
+    </div>
+  );
+}

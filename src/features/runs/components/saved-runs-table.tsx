@@ -1,0 +1,76 @@
+import { Link } from 'react-router';
+import type { RunSummary } from '../../../../shared/schemas/run-record.ts';
+import { Button } from '../../../components/ui/button.tsx';
+import { Figure } from '../../../components/ui/figure.tsx';
+import { Tag } from '../../../components/ui/tag.tsx';
+import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
+import { formatDateTime } from '../../../lib/format.ts';
+
+/** Saved runs, newest first; a run of an older revision says so. */
+export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deleting }: { workspaceId: string; runs: RunSummary[]; canDelete: boolean; onDelete: (run: RunSummary) => void; deleting?: string }) {
+  return (
+    <Table caption="Saved runs">
+      <THead>
+        <tr>
+          <Th>Run</Th>
+          <Th>Setup</Th>
+          <Th>Road</Th>
+          <Th numeric>Speed</Th>
+          <Th numeric>aw</Th>
+          <Th numeric>Load var.</Th>
+          <Th numeric>Lift-off</Th>
+          <Th numeric>Body</Th>
+          <Th>Saved</Th>
+          {canDelete && <Th className="w-px" />}
+        </tr>
+      </THead>
+      <TBody>
+        {runs.map((run) => (
+          <Tr key={run.id}>
+            <Td>
+              <Link to={`/w/${workspaceId}/runs/${run.id}`} className="font-medium text-accent hover:underline">
+                {run.name}
+              </Link>
+            </Td>
+            <Td>
+              <span className="whitespace-nowrap">
+                {run.setupName} <span className="figures text-ink-soft">r{run.revisionNumber}</span>
+              </span>
+              {run.latestRevision > run.revisionNumber && (
+                <span className="ml-1.5">
+                  <Tag tone="signal">now r{run.latestRevision}</Tag>
+                </span>
+              )}
+            </Td>
+            <Td className="text-ink-soft">{run.roadName}</Td>
+            <Td numeric>
+              <Figure value={run.speed} unit="kmph" label="speed" />
+            </Td>
+            <Td numeric>
+              <Figure value={run.headline.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
+            </Td>
+            <Td numeric>
+              <Figure value={run.headline.tyreLoadRatio} unit="percent" label="tyre load variation" />
+            </Td>
+            <Td numeric className={run.headline.liftOffFraction > 0 ? '[&_*]:!text-signal-ink' : ''}>
+              <Figure value={run.headline.liftOffFraction} unit="percent" label="lift-off share" />
+            </Td>
+            <Td numeric>
+              <Figure value={run.headline.bodyHz} unit="Hz" label="body frequency" />
+            </Td>
+            <Td className="whitespace-nowrap text-ink-soft">
+              {formatDateTime(run.createdAt)} · {run.createdBy.name}
+            </Td>
+            {canDelete && (
+              <Td>
+                <Button size="sm" variant="quiet" busy={deleting === run.id} onClick={() => onDelete(run)} aria-label={`Delete ${run.name}`}>
+                  Delete
+                </Button>
+              </Td>
+            )}
+          </Tr>
+        ))}
+      </TBody>
+    </Table>
+  );
+}

@@ -1,0 +1,94 @@
+import type { RunResult } from '../../../../shared/schemas/run.ts';
+import type { UnitName } from '../../../lib/format.ts';
+
+/**
+ * Every figure the run pages show, in one table: the dashboard groups them, the comparison
+ * ranks them, the CSV export lists them. Values are SI; `unit` is the display unit.
+ */
+
+export type FigureGroup = 'comfort' | 'grip' | 'package' | 'damper' | 'modal';
+
+/** How two runs are ranked on a row. */
+export type Better = 'lower' | 'higher' | 'unranked';
+
+export interface FigureRow {
+  key: string;
+  group: FigureGroup;
+  label: string;
+  unit?: UnitName;
+  value: (r: RunResult) => number | undefined;
+  better: Better;
+}
+
+export const groupTitles: Record<FigureGroup, string> = {
+  comfort: 'Comfort',
+  grip: 'Grip',
+  package: 'Package',
+  damper: 'Damper',
+  modal: 'Modes',
+};
+
+/** Why a row is ranked the way it is, in the comparison table. */
+export const betterRules: Record<Better, string> = {
+  lower: 'lower is better',
+  higher: 'higher is better',
+  unranked: 'not ranked',
+};
+
+const m = (r: RunResult) => r.metrics;
+
+export const figureRows: FigureRow[] = [
+  { key: 'aw', group: 'comfort', label: 'Wk-weighted RMS (aw)', unit: 'mps2', value: (r) => m(r).bodyAccelWkRms, better: 'lower' },
+  { key: 'vdv', group: 'comfort', label: 'VDV', unit: 'mps175', value: (r) => m(r).vdv, better: 'lower' },
+  { key: 'accelRms', group: 'comfort', label: 'Body acceleration RMS', unit: 'mps2', value: (r) => m(r).bodyAccelRms, better: 'lower' },
+  { key: 'accelPeak', group: 'comfort', label: 'Body acceleration peak', unit: 'mps2', value: (r) => m(r).bodyAccelPeak, better: 'lower' },
+  { key: 'crest', group: 'comfort', label: 'Crest factor', value: (r) => m(r).bodyAccelCrest, better: 'lower' },
+
+  { key: 'loadRatio', group: 'grip', label: 'Tyre load variation (RMS / static)', unit: 'percent', value: (r) => m(r).tyreLoadRatio, better: 'lower' },
+  { key: 'loadRms', group: 'grip', label: 'Dynamic tyre load RMS', unit: 'N', value: (r) => m(r).tyreLoadRms, better: 'lower' },
+  { key: 'loadMin', group: 'grip', label: 'Minimum tyre load', unit: 'N', value: (r) => m(r).tyreLoadMin, better: 'higher' },
+  { key: 'liftOff', group: 'grip', label: 'Time off the road (lift-off)', unit: 'percent', value: (r) => m(r).liftOffFraction, better: 'lower' },
+  { key: 'loadStatic', group: 'grip', label: 'Static tyre load', unit: 'N', value: (r) => m(r).tyreLoadStatic, better: 'unranked' },
+
+  { key: 'travelRms', group: 'package', label: 'Travel RMS', unit: 'mm', value: (r) => m(r).travelRms, better: 'unranked' },
+  { key: 'travelComp', group: 'package', label: 'Deepest compression', unit: 'mm', value: (r) => m(r).travelMaxCompression, better: 'unranked' },
+  { key: 'travelExt', group: 'package', label: 'Deepest extension', unit: 'mm', value: (r) => m(r).travelMaxExtension, better: 'unranked' },
+  { key: 'strokeComp', group: 'package', label: 'Compression stroke used', unit: 'percent', value: (r) => m(r).strokeUsedCompression, better: 'lower' },
+  { key: 'strokeExt', group: 'package', label: 'Extension stroke used', unit: 'percent', value: (r) => m(r).strokeUsedExtension, better: 'lower' },
+  { key: 'bumpTime', group: 'package', label: 'Time on the bump stop', unit: 's', value: (r) => m(r).bumpStopTime, better: 'lower' },
+  { key: 'reboundTime', group: 'package', label: 'Time on the rebound stop', unit: 's', value: (r) => m(r).reboundStopTime, better: 'lower' },
+
+  { key: 'velRms', group: 'damper', label: 'Piston velocity RMS', unit: 'mmps', value: (r) => m(r).damperVelocityRms, better: 'unranked' },
+  { key: 'bandLow', group: 'damper', label: 'Time in the low-speed band', unit: 'percent', value: (r) => m(r).damperVelocityBands.low, better: 'unranked' },
+  { key: 'bandMid', group: 'damper', label: 'Time in the mid-speed band', unit: 'percent', value: (r) => m(r).damperVelocityBands.mid, better: 'unranked' },
+  { key: 'bandHigh', group: 'damper', label: 'Time in the high-speed band', unit: 'percent', value: (r) => m(r).damperVelocityBands.high, better: 'unranked' },
+  { key: 'compShare', group: 'damper', label: 'Time moving in compression', unit: 'percent', value: (r) => m(r).damperVelocityBands.compression, better: 'unranked' },
+  { key: 'power', group: 'damper', label: 'Mean power dissipated', unit: 'W', value: (r) => m(r).damperPowerMean, better: 'unranked' },
+  { key: 'energy', group: 'damper', label: 'Energy dissipated', unit: 'J', value: (r) => m(r).damperEnergy, better: 'unranked' },
+
+  { key: 'bodyHz', group: 'modal', label: 'Body natural frequency', unit: 'Hz', value: (r) => r.modal.body.naturalHz, better: 'unranked' },
+  { key: 'bodyZeta', group: 'modal', label: 'Body damping ratio', value: (r) => r.modal.body.dampingRatio, better: 'unranked' },
+  { key: 'wheelHz', group: 'modal', label: 'Wheel-hop natural frequency', unit: 'Hz', value: (r) => r.modal.wheel.naturalHz, better: 'unranked' },
+  { key: 'wheelZeta', group: 'modal', label: 'Wheel-hop damping ratio', value: (r) => r.modal.wheel.dampingRatio, better: 'unranked' },
+];
+
+export const rowByKey = (key: string): FigureRow => {
+  const row = figureRows.find((r) => r.key === key);
+  if (!row) throw new Error(`no figure row ${key}`);
+  return row;
+};
+
+/**
+ * Index of the best value among runs for a ranked row (ties: the first); null when the row is
+ * unranked, fewer than two values exist, or all values are equal at `digits` significant figures.
+ */
+export function bestIndex(row: FigureRow, values: (number | undefined)[], digits = 3): number | null {
+  if (row.better === 'unranked') return null;
+  const present = values.map((v, i) => [v, i] as const).filter((p): p is readonly [number, number] => p[0] !== undefined && Number.isFinite(p[0]));
+  if (present.length < 2) return null;
+  const shown = present.map(([v]) => Number(v.toPrecision(digits)));
+  if (shown.every((v) => v === shown[0])) return null;
+  let best = present[0];
+  for (const p of present) if (row.better === 'lower' ? p[0] < best[0] : p[0] > best[0]) best = p;
+  return best[1];
+}

@@ -1,0 +1,30 @@
+import { useState } from 'react';
+import { useRoad, useRoadChoices } from '../api/get-road-choices.ts';
+import { initialScenario, INLINE_ROAD, resolveScenario, type ScenarioDraft, type ScenarioErrors } from './scenario.ts';
+
+/** Draft state of a scenario plus what ScenarioFields needs; `resolve()` checks it and sets errors. */
+export function useScenario(workspaceId: string) {
+  const [draft, setDraft] = useState<ScenarioDraft>(initialScenario);
+  const [errors, setErrors] = useState<ScenarioErrors>({});
+  const roads = useRoadChoices(workspaceId);
+  const libraryRoad = useRoad(workspaceId, draft.roadChoice !== INLINE_ROAD ? draft.roadChoice : undefined);
+  const definition = libraryRoad.data?.definition;
+
+  const resolve = () => {
+    const out = resolveScenario(draft, definition);
+    setErrors(out.ok ? {} : out.errors);
+    return out;
+  };
+
+  return {
+    resolve,
+    fieldProps: {
+      draft,
+      onChange: setDraft,
+      errors,
+      libraryRoads: roads.data?.roads,
+      libraryUnavailable: roads.isError,
+      librarySeed: definition?.kind === 'iso8608' ? definition.seed : undefined,
+    },
+  };
+}
