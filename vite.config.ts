@@ -9,7 +9,8 @@ export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias: { odex: odexShim } },
   worker: { format: 'es' },
-  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 1500 },
+  // No data: URIs: the CSP allows fonts and images from 'self' only.
+  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 1500, assetsInlineLimit: 0 },
   server: { proxy: { '/api': 'http://127.0.0.1:3000' } },
   test: {
     server: { deps: { inline: ['kysely'] } },
@@ -25,6 +26,11 @@ export default defineConfig({
       {
         extends: true,
         test: { name: 'api', environment: 'node', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000 },
+      },
+      {
+        extends: true,
+        // Fuzzed inputs and SIGKILL crash safety (server/THREAT-MODEL.md); bounded to a few minutes.
+        test: { name: 'hardening', environment: 'node', include: ['tests/fuzz/**/*.test.ts', 'tests/crash/**/*.test.ts'], testTimeout: 240_000, hookTimeout: 60_000 },
       },
       {
         extends: true,
