@@ -45,6 +45,14 @@ function bodyParserCode(err: unknown): ErrorCode | undefined {
   return undefined;
 }
 
+/** Other 4xx errors that Express middleware raises with `expose` (http-errors), e.g. an aborted body. */
+function clientErrorCode(err: unknown): ErrorCode | undefined {
+  if (typeof err !== 'object' || err === null || (err as { expose?: unknown }).expose !== true) return undefined;
+  const status = Number((err as { status?: unknown }).status);
+  if (!(status >= 400 && status < 500)) return undefined;
+  return status === 413 ? 'payload_too_large' : 'bad_request';
+}
+
 /** The one place errors become responses. Unknown errors are logged and answered without detail. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
@@ -58,6 +66,10 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const bpCode = bodyParserCode(err);
     if (bpCode === 'payload_too_large') return sendError(res, bpCode, 'The request body is too large.');
     if (bpCode) return sendError(res, bpCode, 'The request body is not valid JSON.');
+    // The router cannot decode a path segment such as `%E0%A4%A` (found by tests/fuzz).
+    if (err instanceof URIError) return sendError(res, 'bad_request', 'A part of the address is not valid percent-encoding.');
+    const clientCode = clientErrorCode(err);
+    if (clientCode) return sendError(res, clientCode, `The request was refused: ${String((err as Error).message).slice(0, 200)}`);
     logger.error({ err, url: req.originalUrl, method: req.method }, 'unhandled error');
     sendError(res, 'internal', 'Something went wrong on the server.');
   };

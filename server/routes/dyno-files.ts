@@ -2,6 +2,7 @@ import { ApplyDynoFitInput, type ApplyDynoFitResult, DYNO_MAX_BYTES, type DynoFi
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../errors.ts';
 import { singleTextUpload, uploadedText } from '../middleware/single-upload.ts';
+import { withinUploadQuota } from '../middleware/upload-quota.ts';
 import { applyDynoFit, getDynoFile, listSetupDynoFiles, uploadDynoFile } from '../services/dyno-files.ts';
 import type { RouteModule } from './registry.ts';
 
@@ -21,7 +22,7 @@ export const dynoFileRoutes: RouteModule = (deps) => [
     method: 'post',
     path: base,
     access: 'engineer',
-    before: [singleTextUpload(DYNO_MAX_BYTES)],
+    before: [singleTextUpload(DYNO_MAX_BYTES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = DynoUploadFields.parse(req.body ?? {});
       const file = uploadedText(req.file);

@@ -2,6 +2,7 @@ import { CreateRoadInput, MeasuredUploadFields, type RoadDetail, type RoadsRespo
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../errors.ts';
 import { singleTextUpload, uploadedText } from '../middleware/single-upload.ts';
+import { withinUploadQuota } from '../middleware/upload-quota.ts';
 import { createRoad, deleteRoad, getRoad, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from '../services/roads.ts';
 import type { RouteModule } from './registry.ts';
 
@@ -31,7 +32,7 @@ export const roadRoutes: RouteModule = (deps) => [
     method: 'post',
     path: `${base}/measured`,
     access: 'engineer',
-    before: [singleTextUpload(MEASURED_MAX_BYTES)],
+    before: [singleTextUpload(MEASURED_MAX_BYTES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = MeasuredUploadFields.parse(req.body ?? {});
       const file = uploadedText(req.file);

@@ -18,6 +18,7 @@ import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import type { AppDeps } from '../deps.ts';
 import { unwrap } from '../errors.ts';
 import { textUploads, uploadedTexts } from '../middleware/text-uploads.ts';
+import { withinUploadQuota } from '../middleware/upload-quota.ts';
 import { listSheetChecks, runSheetCheck, sheetCheckCsv } from '../services/target-sheet-checks.ts';
 import {
   createTargetSheet,
@@ -139,7 +140,7 @@ export const targetSheetRoutes: RouteModule = (deps) => [
     method: 'post',
     path: `${one}/checks`,
     access: 'engineer',
-    before: [textUploads(DYNO_MAX_BYTES, DYNO_CHECK_MAX_FILES)],
+    before: [textUploads(DYNO_MAX_BYTES, DYNO_CHECK_MAX_FILES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = DynoCheckFields.parse(req.body ?? {});
       const files = uploadedTexts(req.files);

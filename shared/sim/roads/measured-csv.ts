@@ -88,6 +88,9 @@ export function parseMeasuredCsv(text: string, options: MeasuredCsvOptions = {})
     if (!isNumberText(read(eText)) || (delimiter !== ';' && eText.includes(','))) return fail(line, `elevation "${eText}" is not a number`);
     const dist = Number(read(dText));
     const elev = Number(read(eText));
+    // "1e999" passes the number pattern but is Infinity (found by tests/fuzz/csv-parsers.test.ts).
+    if (!Number.isFinite(dist)) return fail(line, `distance "${dText}" is too large`);
+    if (!Number.isFinite(elev)) return fail(line, `elevation "${eText}" is too large`);
     if (points.length > 0 && !(dist > points[points.length - 1][0])) {
       return fail(line, `distance ${dText} does not rise after ${points[points.length - 1][0]}`);
     }
