@@ -18,6 +18,7 @@ import { StatusBar } from '../../features/target-sheets/components/status-bar.ts
 import { TargetTableEditor } from '../../features/target-sheets/components/target-table-editor.tsx';
 import { TargetTable } from '../../features/target-sheets/components/target-table.tsx';
 import { buttonClass } from '../../components/ui/button.tsx';
+import { formatDateTime } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { NotFoundRoute } from './not-found.tsx';
 
@@ -103,7 +104,7 @@ export function SheetDetailRoute() {
         />
         <p className="mt-1 text-xs text-ink-faint">
           Shaded: the tolerance band. Piston speed and force are signed, compression positive, so rebound is drawn below the axis on the left.
-          {shown ? ` Measured: the check of ${new Date(shown.createdAt).toLocaleString('en-GB')}.` : ' No measured dampers yet.'}
+          {shown ? ` Measured: the check of ${formatDateTime(shown.createdAt)}.` : ' No measured dampers yet.'}
         </p>
       </Section>
 

@@ -15,6 +15,8 @@ export interface BandPlotProps {
   height?: number;
   /** Offers the chart as a PNG download. */
   exportName?: string;
+  /** Legend with values under the cursor (screen); off gives a plain key (print). */
+  liveLegend?: boolean;
 }
 
 /** `#rrggbb` with an alpha, for canvas fills; anything else falls back to the accent's wash. */
@@ -28,7 +30,7 @@ function withAlpha(color: string, alpha: number): string {
  * Target forces with their tolerance band as a shaded area, measured dampers on top. Velocity
  * and force are signed, compression positive: rebound is the lower-left half.
  */
-export function BandPlot({ compression, rebound, measured = [], height = 300, exportName }: BandPlotProps) {
+export function BandPlot({ compression, rebound, measured = [], height = 300, exportName, liveLegend = true }: BandPlotProps) {
   const theme = useChartTheme();
   const columns = useMemo(() => bandPlotColumns({ compression, rebound }, measured.map((m) => m.peaks)), [compression, rebound, measured]);
   const labels = measured.map((m) => m.label).join('\u0000');
@@ -51,9 +53,9 @@ export function BandPlot({ compression, rebound, measured = [], height = 300, ex
       axes: [themedAxis(theme, { label: 'Piston speed, compression positive', unit: 'm/s' }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 60 })],
       series,
       bands: [{ series: [2, 3], fill: withAlpha(theme.accent, 0.16) }],
-      legend: { show: true },
+      legend: { show: true, live: liveLegend },
     };
-  }, [theme, height, labels]);
+  }, [theme, height, labels, liveLegend]);
 
   const data = useMemo(
     () => [columns.x, columns.target, columns.upper, columns.lower, ...columns.measured] as unknown as uPlot.AlignedData,

@@ -1,8 +1,9 @@
 import type { ConformityRecordDetail, DamperCheck } from '../../../../shared/schemas/target-sheet.ts';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
-import { formatDateTime, formatSig } from '../../../lib/format.ts';
+import { formatDateTime } from '../../../lib/format.ts';
 import { checkCsvHref } from '../api/get-checks.ts';
 import { statusWords } from './status-tag.tsx';
+import { speedText } from './target-table.tsx';
 import { VerdictMark } from './verdict-mark.tsx';
 
 const r1 = (v: number) => (Math.round(v * 10) / 10).toString().replace('-', '\u2212');
@@ -31,7 +32,7 @@ function DamperDetail({ damper }: { damper: DamperCheck }) {
           damper[dir].points.map((p) => (
             <Tr key={`${dir}-${p.velocity}`} className={p.pass ? '' : 'bg-danger-wash/50'}>
               <Td>{dir}</Td>
-              <Td numeric>{formatSig(p.velocity, 3)}</Td>
+              <Td numeric>{speedText(p.velocity)}</Td>
               <Td numeric>{r1(p.target)}</Td>
               <Td numeric>
                 {r1(p.lower)} … {r1(p.upper)}

@@ -60,7 +60,7 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
             onChange={(e) => choose(e.target.files)}
           />
         </div>
-        <Field label="Speed unit where a column names none" className="w-56">
+        <Field label="Speed unit if a header names none" className="w-60">
           <Select value={velocityUnit} onChange={(e) => setVelocityUnit(e.target.value as typeof velocityUnit)}>
             <option value="">m/s (SI)</option>
             <option value="mm/s">mm/s</option>

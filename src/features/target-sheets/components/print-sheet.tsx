@@ -34,13 +34,13 @@ export function PrintSheet({ sheet, workspaceId, printedAt }: { sheet: TargetShe
       </p>
 
       <div className="rw-print-block mb-3 grid grid-cols-2 gap-3">
-        <TargetTable title="Compression" points={sheet.compression} />
-        <TargetTable title="Rebound" points={sheet.rebound} />
+        <TargetTable title="Compression" points={sheet.compression} compact />
+        <TargetTable title="Rebound" points={sheet.rebound} compact />
       </div>
 
       <div className="rw-print-block mb-3">
         <h2 className="mb-1 text-[10pt] font-semibold">Targets and band (compression positive, rebound negative)</h2>
-        <BandPlot compression={sheet.compression} rebound={sheet.rebound} height={250} />
+        <BandPlot compression={sheet.compression} rebound={sheet.rebound} height={250} liveLegend={false} />
       </div>
 
       {sheet.notes.trim() && (

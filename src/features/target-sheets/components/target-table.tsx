@@ -1,28 +1,32 @@
 import type { TargetPoint } from '../../../../shared/schemas/target-sheet.ts';
 import { toleranceBand } from '../../../../shared/target-sheet/band.ts';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
-import { formatSig } from '../../../lib/format.ts';
-
-const n = (v: number, digits = 4) => formatSig(v, digits);
+/** A speed as the team typed it (0.025, not 0.0250). */
+export const speedText = (v: number) => String(Number(v.toPrecision(4)));
 
 /**
  * One direction's reference points, read-only: speed, target, tolerance, floor and the band
  * edges they give (the floor governs where the percentage is narrower; marked with *).
  */
-export function TargetTable({ title, points }: { title: string; points: readonly TargetPoint[] }) {
+export function TargetTable({ title, points, compact = false }: { title: string; points: readonly TargetPoint[]; compact?: boolean }) {
+  const head = compact
+    ? ['Speed', 'Target', '±', 'Floor', 'Lower', 'Upper']
+    : ['Speed [m/s]', 'Target [N]', '± [%]', 'Floor [N]', 'Lower [N]', 'Upper [N]'];
   const floorMarked = points.some((p) => toleranceBand(p).floorGoverns);
   return (
     <div className="min-w-0">
-      <h3 className="mb-1 text-sm font-semibold">{title}</h3>
+      <h3 className="mb-1 text-sm font-semibold">
+        {title}
+        {compact && <span className="ml-2 font-normal text-ink-soft">m/s · N · % · N · N · N</span>}
+      </h3>
       <Table caption={`${title} targets`}>
         <THead>
           <tr>
-            <Th numeric>Speed [m/s]</Th>
-            <Th numeric>Target [N]</Th>
-            <Th numeric>± [%]</Th>
-            <Th numeric>Floor [N]</Th>
-            <Th numeric>Lower [N]</Th>
-            <Th numeric>Upper [N]</Th>
+            {head.map((h) => (
+              <Th key={h} numeric>
+                {h}
+              </Th>
+            ))}
           </tr>
         </THead>
         <TBody>
@@ -30,7 +34,7 @@ export function TargetTable({ title, points }: { title: string; points: readonly
             const b = toleranceBand(p);
             return (
               <Tr key={p.velocity}>
-                <Td numeric>{n(p.velocity, 3)}</Td>
+                <Td numeric>{speedText(p.velocity)}</Td>
                 <Td numeric>{Math.round(p.force * 10) / 10}</Td>
                 <Td numeric>{p.tolPct}</Td>
                 <Td numeric>
