@@ -16,7 +16,8 @@ export function singleTextUpload(maxBytes: number): RequestHandler {
         if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError('payload_too_large', `The file is larger than ${Math.round(maxBytes / 1024)} kB; nothing was saved.`));
         return next(new HttpError('bad_request', `The upload was refused (${err.message.toLowerCase()}); send one file in the field "file".`));
       }
-      next(err);
+      // Busboy's own errors (cut-off form, bad boundary, malformed part header) are the client's; found by tests/fuzz.
+      next(new HttpError('bad_request', `The upload could not be read as a form (${String((err as Error)?.message ?? err).toLowerCase()}); nothing was saved.`));
     });
   };
 }

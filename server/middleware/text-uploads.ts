@@ -18,7 +18,8 @@ export function textUploads(maxBytes: number, maxFiles: number): RequestHandler 
         }
         return next(new HttpError('bad_request', `The upload was refused (${err.message.toLowerCase()}); nothing was saved.`));
       }
-      next(err);
+      // Busboy's own errors (cut-off form, bad boundary, malformed part header) are the client's; found by tests/fuzz.
+      next(new HttpError('bad_request', `The upload could not be read as a form (${String((err as Error)?.message ?? err).toLowerCase()}); nothing was saved.`));
     });
   };
 }

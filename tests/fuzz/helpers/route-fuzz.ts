@@ -19,8 +19,12 @@ export interface Mutation {
   text?: { body: string; contentType: string };
   /** Replaces the uploaded file's bytes (upload routes). */
   file?: Buffer;
-  /** Extra multipart fields (upload routes); replaces none of the entry's own. */
+  /** Extra multipart fields (upload routes), sent after the entry's own (a repeated name arrives twice). */
   fields?: Record<string, string>;
+  /** Replaces the value of every field the entry sends (upload routes). */
+  fieldValue?: string;
+  /** Spoils the multipart structure itself (upload routes). */
+  multipart?: 'no-file' | 'wrong-field' | 'two-files';
 }
 
 /** The caller who passes the route's access check, so the fuzzed input reaches the handler. */
@@ -39,11 +43,19 @@ export async function sendMutated(world: RoleWorld, route: RouteDef, valid: Matr
   if (m.text) return r.set('Content-Type', m.text.contentType).send(m.text.body);
   if (m.json) return r.set('Content-Type', 'application/json').send(JSON.stringify(m.json.value) ?? 'null');
   if (valid.customize) {
-    if (m.file) {
-      // Keep the entry's own fields and file name; swap the file's bytes.
-      const attach = r.attach.bind(r);
-      const swapped = m.file;
-      r.attach = ((field: string, _file: unknown, options?: unknown) => attach(field, swapped, options as string)) as typeof r.attach;
+    // Keep the entry's own request but swap what it attaches or fills in.
+    const attach = r.attach.bind(r);
+    const field = r.field.bind(r);
+    r.attach = ((name: string, file: Buffer, options?: string) => {
+      const bytes = m.file ?? file;
+      if (m.multipart === 'no-file') return r;
+      if (m.multipart === 'wrong-field') return attach('upload', bytes, options);
+      if (m.multipart === 'two-files') attach(name, bytes, options);
+      return attach(name, bytes, options);
+    }) as typeof r.attach;
+    if (m.fieldValue !== undefined) {
+      const value = m.fieldValue;
+      r.field = ((name: string) => field(name, value)) as typeof r.field;
     }
     r = valid.customize(r);
     for (const [k, v] of Object.entries(m.fields ?? {})) r = r.field(k, v);
