@@ -1,0 +1,40 @@
+import type { DynoDirectionFit } from '../../../../shared/schemas/dyno.ts';
+import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
+import { formatSig } from '../../../lib/format.ts';
+
+/** How far each measured point sits from the fitted table, in N and in % of the measured force. */
+export function ResidualsTable({ direction, fit }: { direction: 'compression' | 'rebound'; fit: DynoDirectionFit }) {
+  if (!fit.ok) return <p className="text-sm text-danger">{fit.message}</p>;
+  return (
+    <div className="grid gap-1">
+      <Table caption={`${direction === 'compression' ? 'Compression' : 'Rebound'} residuals`}>
+        <THead>
+          <tr>
+            <Th numeric>Velocity [m/s]</Th>
+            <Th numeric>Measured [N]</Th>
+            <Th numeric>Fitted [N]</Th>
+            <Th numeric>Residual [N]</Th>
+            <Th numeric>Residual [%]</Th>
+          </tr>
+        </THead>
+        <TBody>
+          {fit.residuals.map((r, i) => (
+            <Tr key={i}>
+              <Td numeric>{formatSig(r.velocity, 3)}</Td>
+              <Td numeric>{formatSig(r.measured, 4)}</Td>
+              <Td numeric>{formatSig(r.fitted, 4)}</Td>
+              <Td numeric>{formatSig(r.residual, 3)}</Td>
+              <Td numeric className={r.residualPct !== null && Math.abs(r.residualPct) > 10 ? 'text-signal-ink' : ''}>
+                {r.residualPct === null ? '—' : formatSig(r.residualPct, 2)}
+              </Td>
+            </Tr>
+          ))}
+        </TBody>
+      </Table>
+      <p className="text-xs text-ink-faint">
+        RMS {formatSig(fit.rmsResidual, 3)} N{fit.rmsResidualPct !== null && ` (${formatSig(fit.rmsResidualPct, 2)} %)`}, largest {formatSig(fit.maxAbsResidual, 3)} N.
+        {fit.notes.map((n) => ` ${n}.`)}
+      </p>
+    </div>
+  );
+}

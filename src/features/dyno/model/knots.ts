@@ -1,0 +1,34 @@
+import type { DynoPeakPoints } from '../../../../shared/schemas/dyno.ts';
+import { suggestFitKnots } from '../../../../shared/dyno/fit-curve.ts';
+import { DEFAULT_TABLE_VELOCITIES } from '../../../../shared/sim/damper-builder.ts';
+
+/** Fit speeds typed as a list in m/s ("0.05, 0.1, 0.2"): rising, above 0, at most 20. */
+export function readKnots(text: string): { ok: true; knots: number[] } | { ok: false; message: string } {
+  const parts = text
+    .split(/[\s,;]+/)
+    .map((p) => p.trim())
+    .filter(Boolean);
+  if (parts.length === 0) return { ok: false, message: 'give at least one speed' };
+  const knots: number[] = [];
+  for (const p of parts) {
+    const x = Number(p);
+    if (!Number.isFinite(x) || x <= 0 || x > 20) return { ok: false, message: `'${p}' is not a speed above 0 and at most 20 m/s` };
+    if (knots.length && x <= knots[knots.length - 1]) return { ok: false, message: `speeds must rise (${x} after ${knots[knots.length - 1]})` };
+    knots.push(x);
+  }
+  if (knots.length > 64) return { ok: false, message: 'at most 64 speeds' };
+  return { ok: true, knots };
+}
+
+/** Suggested fit speeds covering both directions' measured points (the builder's table speeds kept in range). */
+export function suggestKnots(peaks: DynoPeakPoints): number[] {
+  const all = [...peaks.compression, ...peaks.rebound];
+  const both = suggestFitKnots(all, DEFAULT_TABLE_VELOCITIES);
+  // keep only speeds each direction can fix, so one list serves both
+  const c = new Set(suggestFitKnots(peaks.compression, both));
+  const r = new Set(suggestFitKnots(peaks.rebound, both));
+  const common = both.filter((k) => (peaks.compression.length === 0 || c.has(k)) && (peaks.rebound.length === 0 || r.has(k)));
+  return common.length ? common : both;
+}
+
+export const knotsText = (knots: readonly number[]) => knots.map((k) => Number(k.toPrecision(4)).toString()).join(', ');
