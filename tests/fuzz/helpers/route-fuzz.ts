@@ -55,7 +55,7 @@ export async function sendMutated(world: RoleWorld, route: RouteDef, valid: Matr
     }) as typeof r.attach;
     if (m.fieldValue !== undefined) {
       const value = m.fieldValue;
-      r.field = ((name: string) => field(name, value)) as typeof r.field;
+      r.field = ((name: string) => field(name, value)) as unknown as typeof r.field;
     }
     r = valid.customize(r);
     for (const [k, v] of Object.entries(m.fields ?? {})) r = r.field(k, v);
