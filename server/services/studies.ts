@@ -267,6 +267,8 @@ export function finishStudyRun(db: Db, ws: Ws, actor: Actor, studyId: string, in
     }
     if (points.length === 0) return fail('conflict', 'No point of this study has been saved yet; save points before finishing a run.');
     const status = complete ? 'complete' : 'partial';
+    const compromise = studyBestCompromise(def, points);
+    const winner = compromise.ok ? points[compromise.winner] : undefined;
     const summary: StudyResultsSummary = {
       plannedPoints: row.planned_points,
       savedPoints: points.length,
@@ -277,11 +279,12 @@ export function finishStudyRun(db: Db, ws: Ws, actor: Actor, studyId: string, in
       workers: input.workers ?? null,
       ranBy: { id: actor.id, name: actor.name },
       ranAt: now.toISOString(),
-      compromise: studyBestCompromise(def, points),
+      compromise,
       tradeOff: studyTradeOff(def, points),
+      best: winner ? { pointIndex: winner.index, label: describePoint(def.axes, winner.values) } : null,
     };
     await updateStudyRow(trx, studyId, { status, results: JSON.stringify(summary), updated_at: now.toISOString() });
-    const verdict = summary.compromise.ok ? ` Best compromise: ${describePoint(def.axes, points[summary.compromise.winner].values)}.` : '';
+    const verdict = summary.best ? ` Best compromise: ${summary.best.label}.` : '';
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
       actorId: actor.id,

@@ -69,6 +69,8 @@ export const StudyResultsSummary = z.object({
   ranAt: IsoDateTime,
   compromise: StudyCompromise,
   tradeOff: StudyTradeOff,
+  /** The winning point by sweep index, in words; null when no point meets the limits. */
+  best: z.object({ pointIndex: z.number().int().nonnegative(), label: z.string() }).nullable(),
 });
 export type StudyResultsSummary = z.infer<typeof StudyResultsSummary>;
 

@@ -72,7 +72,12 @@ export async function createStudyFixture(
   author: { id: string; name: string },
   opts: { results?: 'none' | 'first-point' | 'complete'; setup?: { setupId: string; revisionId: string } } = {},
 ): Promise<StudyFixture> {
-  const base = opts.setup ?? (await insertSetup(db, workspaceId, author.id, [exampleSetup()]).then((f) => ({ setupId: f.setupId, revisionId: f.revisionIds[0] })));
+  let base: { setupId: string; revisionId: string };
+  if (opts.setup) base = opts.setup;
+  else {
+    const f = await insertSetup(db, workspaceId, author.id, [exampleSetup()]);
+    base = { setupId: f.setupId, revisionId: f.revisionIds[0] };
+  }
   const ws = { workspaceId };
   const created = await createStudy(db, ws, actorOf(author), { definition: StudyDefinition.parse(studyDefinition(base)) }, new Date());
   if (!created.ok) throw new Error(created.message);

@@ -15,7 +15,7 @@ export const figureUnit: Record<StudyFigureKey, UnitName> = {
   bodyAccelWkRms: 'mps2',
   vdv: 'mps175',
   tyreLoadRms: 'N',
-  tyreLoadRatio: 'ratio',
+  tyreLoadRatio: 'percent',
   tyreLoadMin: 'N',
   liftOffFraction: 'percent',
   travelRms: 'mm',

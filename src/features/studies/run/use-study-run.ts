@@ -44,7 +44,18 @@ export function useStudyRun(opts: { workspaceId: string; studyId: string; save: 
   const optsRef = useRef(opts);
   optsRef.current = opts;
 
-  useEffect(() => () => handle.current?.cancel(), []);
+  // Leaving the page stops the run. The check is deferred a tick because React's strict mode
+  // unmounts and mounts again at once in development; only a real unmount stays unmounted.
+  const mounted = useRef(false);
+  useEffect(() => {
+    mounted.current = true;
+    return () => {
+      mounted.current = false;
+      setTimeout(() => {
+        if (!mounted.current) handle.current?.cancel();
+      }, 0);
+    };
+  }, []);
 
   const start = useCallback((input: StudyRunInput) => {
     if (handle.current) return;

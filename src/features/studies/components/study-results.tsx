@@ -1,0 +1,137 @@
+import { type ReactNode, useMemo, useState } from 'react';
+import { studyFigureKeys, type StudyFigureKey } from '../../../../shared/schemas/study.ts';
+import { describePoint } from '../../../../shared/study/describe-point.ts';
+import { sweepValues } from '../../../../shared/study/expand.ts';
+import { Button } from '../../../components/ui/button.tsx';
+import { Field, Select } from '../../../components/ui/field.tsx';
+import { Section } from '../../../components/ui/page-header.tsx';
+import { figureLabel, parameterLabel, parameterText } from '../model/display.ts';
+import { downloadText, pointsCsv } from '../model/points-csv.ts';
+import type { StudyView } from '../model/study-view.ts';
+import { CompromiseCard } from './compromise-card.tsx';
+import { FigureLinesChart } from './figure-lines-chart.tsx';
+import { HeatMap } from './heat-map.tsx';
+import { PointCard } from './point-card.tsx';
+import { PointsTable } from './points-table.tsx';
+import { TradeOffChart } from './trade-off-chart.tsx';
+
+export interface StudyResultsProps {
+  view: StudyView;
+  roadNames: readonly string[];
+  baselineIndex: number | null;
+  /** Buttons for a point (open as setup, mark as baseline), as the caller's role allows. */
+  pointActions?: (index: number) => ReactNode;
+}
+
+/**
+ * Everything a study shows: the comfort/grip trade-off (the largest thing on the page) with the
+ * best compromise beside it, the 2-D map of any figure, a figure along one parameter, and the
+ * table of all points. Picking a point anywhere highlights it everywhere.
+ */
+export function StudyResults({ view, roadNames, baselineIndex, pointActions }: StudyResultsProps) {
+  const def = view.definition;
+  const [selected, setSelected] = useState<number | null>(null);
+  const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
+  const [mapFigure, setMapFigure] = useState<StudyFigureKey>(def.objectives[0]?.figure ?? def.comfortFigure);
+  const [lineFigure, setLineFigure] = useState<StudyFigureKey>(def.comfortFigure);
+  const [along, setAlong] = useState<0 | 1>(0);
+  const [holdAt, setHoldAt] = useState(0);
+  const other = def.axes[along === 0 ? 1 : 0];
+  const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
+
+  return (
+    <div className="space-y-6">
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,2fr)_minmax(20rem,1fr)]">
+        <section aria-label="Comfort against grip" className="rounded border border-rule bg-paper-raised p-3">
+          <div className="mb-1 flex items-baseline justify-between gap-3 pr-20">
+            <h2 className="text-lg font-semibold">
+              <span className="text-comfort">Comfort</span> against <span className="text-grip">grip</span>
+            </h2>
+            <span className="text-xs text-ink-faint">{view.points.length} points</span>
+          </div>
+          <TradeOffChart view={view} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} describe={describe} />
+        </section>
+        <div className="space-y-3">
+          <CompromiseCard view={view} actions={pointActions} />
+          {selected !== null && <PointCard view={view} index={selected} actions={selected >= 0 ? pointActions?.(selected) : undefined} />}
+          {!view.compromise && <p className="rounded border border-dashed border-rule px-3 py-2 text-sm text-ink-soft">The best compromise is worked out when the run ends.</p>}
+        </div>
+      </div>
+
+      <div className={`grid gap-4 ${def.axes.length === 2 ? 'xl:grid-cols-2' : ''}`}>
+        {def.axes.length === 2 && (
+          <section aria-label="Map of a figure" className="rounded border border-rule bg-paper-raised p-3">
+            <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
+              <h2 className="text-base font-semibold">Map over both parameters</h2>
+              <Field label="Figure" className="w-72">
+                <Select value={mapFigure} onChange={(e) => setMapFigure(e.target.value as StudyFigureKey)}>
+                  {present.map((k) => (
+                    <option key={k} value={k}>
+                      {figureLabel(k)}
+                    </option>
+                  ))}
+                </Select>
+              </Field>
+            </div>
+            <HeatMap view={view} figure={mapFigure} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} />
+            <p className="mt-1 text-xs text-ink-soft">Hatched cells break a limit. Outlined: best compromise (violet), baseline (olive).</p>
+          </section>
+        )}
+        <section aria-label="Figure along a parameter" className="rounded border border-rule bg-paper-raised p-3">
+          <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
+            <h2 className="text-base font-semibold">Along one parameter, per road and speed</h2>
+            <Field label="Figure" className="w-64">
+              <Select value={lineFigure} onChange={(e) => setLineFigure(e.target.value as StudyFigureKey)}>
+                {present.map((k) => (
+                  <option key={k} value={k}>
+                    {figureLabel(k)}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+            {def.axes.length === 2 && other && (
+              <>
+                <Field label="Across" className="w-44">
+                  <Select
+                    value={along}
+                    onChange={(e) => {
+                      setAlong(Number(e.target.value) as 0 | 1);
+                      setHoldAt(0);
+                    }}
+                  >
+                    {def.axes.map((a, i) => (
+                      <option key={a.parameter} value={i}>
+                        {parameterLabel(a.parameter, false)}
+                      </option>
+                    ))}
+                  </Select>
+                </Field>
+                <Field label={`At ${parameterLabel(other.parameter)}`} className="w-36">
+                  <Select value={holdAt} onChange={(e) => setHoldAt(Number(e.target.value))}>
+                    {sweepValues(other).map((v, i) => (
+                      <option key={i} value={i}>
+                        {parameterText(other.parameter, v)}
+                      </option>
+                    ))}
+                  </Select>
+                </Field>
+              </>
+            )}
+          </div>
+          <FigureLinesChart view={view} figure={lineFigure} along={along} holdAt={holdAt} roadNames={roadNames} />
+        </section>
+      </div>
+
+      <Section
+        title="All points"
+        actions={
+          <Button size="sm" onClick={() => downloadText(pointsCsv(view), `${def.name.replace(/[^\w.-]+/g, '-')}-points.csv`)}>
+            Export CSV
+          </Button>
+        }
+      >
+        <PointsTable view={view} selected={selected} onSelect={setSelected} />
+      </Section>
+    </div>
+  );
+}

@@ -1,0 +1,142 @@
+import type { IsoClass } from '../../../../shared/schemas/road.ts';
+import type { StudyDefinitionInput, StudyFigureKey, StudyParameter } from '../../../../shared/schemas/study.ts';
+import { parameterToSI } from './display.ts';
+
+/**
+ * The study form's values, in the units the form shows (N/mm for rates, % for shares), and
+ * their conversion to a definition for the shared schema. Field names follow the schema's
+ * paths wherever they can, so its messages land on the right field.
+ */
+export interface AxisValues {
+  parameter: StudyParameter;
+  from: number;
+  to: number;
+  steps: number;
+  spacing: 'linear' | 'log';
+}
+
+export interface StudyFormValues {
+  name: string;
+  setupId: string;
+  /** Revision number as the select holds it. */
+  revision: string;
+  twoAxes: boolean;
+  axes: AxisValues[];
+  /** `library:<roadId>` or `iso:<class>` (a generated ISO 8608 road); seed blank keeps the road's own. */
+  roads: { choice: string; seed: string }[];
+  /** m/s, separated by commas or spaces. */
+  speeds: string;
+  duration: number;
+  aggregate: 'mean' | 'worst';
+  objectives: { figure: StudyFigureKey; weight: number }[];
+  comfortFigure: StudyFigureKey;
+  gripFigure: StudyFigureKey;
+  /** %, blank for no limit. */
+  maxStrokeUsed: string;
+  /** %, blank for no limit. */
+  maxLiftOff: string;
+  /** N, blank for no limit. */
+  minTyreLoad: string;
+}
+
+/** A sensible range to start from when a parameter is picked (display units). */
+export const parameterDefaults: Record<StudyParameter, { from: number; to: number; steps: number }> = {
+  damperScale: { from: 0.6, to: 1.6, steps: 6 },
+  compressionScale: { from: 0.6, to: 1.6, steps: 6 },
+  reboundScale: { from: 0.6, to: 1.6, steps: 6 },
+  targetBodyDampingRatio: { from: 0.15, to: 0.45, steps: 7 },
+  springRate: { from: 22, to: 42, steps: 6 },
+  tyreRate: { from: 160, to: 280, steps: 5 },
+  unsprungMass: { from: 28, to: 48, steps: 5 },
+  gasForce: { from: 0, to: 400, steps: 5 },
+  speed: { from: 10, to: 35, steps: 6 },
+};
+
+export const axisDefaults = (parameter: StudyParameter): AxisValues => ({ parameter, ...parameterDefaults[parameter], spacing: 'linear' });
+
+export function defaultFormValues(firstRoad: string): StudyFormValues {
+  return {
+    name: 'Damping against spring rate',
+    setupId: '',
+    revision: '',
+    twoAxes: true,
+    axes: [axisDefaults('damperScale'), axisDefaults('springRate')],
+    roads: [{ choice: firstRoad, seed: '' }],
+    speeds: '20',
+    duration: 60,
+    aggregate: 'mean',
+    objectives: [
+      { figure: 'bodyAccelWkRms', weight: 1 },
+      { figure: 'tyreLoadRatio', weight: 1 },
+    ],
+    comfortFigure: 'bodyAccelWkRms',
+    gripFigure: 'tyreLoadRatio',
+    maxStrokeUsed: '90',
+    maxLiftOff: '1',
+    minTyreLoad: '',
+  };
+}
+
+const optionalNumber = (text: string, scale = 1): number | undefined => {
+  const t = text.trim();
+  if (t === '') return undefined;
+  const n = Number(t.replace(',', '.'));
+  return Number.isFinite(n) ? n * scale : Number.NaN;
+};
+
+/**
+ * The definition the form describes, ready for `StudyDefinition.safeParse`. `revisionId` maps
+ * the chosen revision number to its id (undefined while the list loads).
+ */
+export function formToDefinition(v: StudyFormValues, revisionId: (n: number) => string | undefined): StudyDefinitionInput {
+  const axes = (v.twoAxes ? v.axes.slice(0, 2) : v.axes.slice(0, 1)).map((a) => ({
+    parameter: a.parameter,
+    from: parameterToSI(a.parameter, Number(a.from)),
+    to: parameterToSI(a.parameter, Number(a.to)),
+    steps: Number(a.steps),
+    spacing: a.spacing,
+  }));
+  const sweptSpeed = axes.some((a) => a.parameter === 'speed');
+  const speeds = sweptSpeed ? [] : v.speeds.split(/[\s,;]+/).filter(Boolean).map((s) => Number(s));
+  const roads = v.roads.map((r) => {
+    const seed = optionalNumber(r.seed);
+    const extra = seed === undefined ? {} : { seed };
+    if (r.choice.startsWith('iso:')) {
+      const cls = r.choice.slice(4) as IsoClass;
+      return { source: 'inline' as const, road: { kind: 'iso8608' as const, name: `ISO 8608 class ${cls}`, class: cls, seed: 7 }, ...extra };
+    }
+    return { source: 'library' as const, roadId: r.choice.replace(/^library:/, ''), ...extra };
+  });
+  const constraints: StudyDefinitionInput['constraints'] = {};
+  const stroke = optionalNumber(v.maxStrokeUsed, 0.01);
+  const lift = optionalNumber(v.maxLiftOff, 0.01);
+  const load = optionalNumber(v.minTyreLoad);
+  if (stroke !== undefined) constraints.maxStrokeUsed = stroke;
+  if (lift !== undefined) constraints.maxLiftOffFraction = lift;
+  if (load !== undefined) constraints.minTyreLoad = load;
+  return {
+    name: v.name,
+    base: { setupId: v.setupId, revisionId: revisionId(Number(v.revision)) ?? '' },
+    axes,
+    roads,
+    speeds,
+    duration: Number(v.duration),
+    aggregate: v.aggregate,
+    objectives: v.objectives.map((o) => ({ figure: o.figure, weight: Number(o.weight) })),
+    comfortFigure: v.comfortFigure,
+    gripFigure: v.gripFigure,
+    constraints,
+  };
+}
+
+/** The form field a schema issue path belongs to. */
+export function fieldOfIssue(path: readonly PropertyKey[]): string {
+  const [head, ...rest] = path.map(String);
+  if (head === 'base') return rest[0] === 'setupId' ? 'setupId' : 'revision';
+  if (head === 'roads') return rest.length ? `roads.${rest[0]}.${rest[1] === 'seed' ? 'seed' : 'choice'}` : 'roads';
+  if (head === 'constraints') return rest[0] === 'maxStrokeUsed' ? 'maxStrokeUsed' : rest[0] === 'maxLiftOffFraction' ? 'maxLiftOff' : 'minTyreLoad';
+  if (head === 'speeds' || head === 'settleTime') return head === 'speeds' ? 'speeds' : 'duration';
+  if (head === 'axes') return rest.length >= 2 ? `axes.${rest[0]}.${rest[1]}` : rest.length === 1 ? `axes.${rest[0]}.steps` : 'axes.0.steps';
+  if (head === 'objectives') return rest.length >= 2 ? `objectives.${rest[0]}.${rest[1]}` : 'objectives';
+  return [head, ...rest].join('.');
+}

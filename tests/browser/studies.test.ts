@@ -1,0 +1,114 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { SetupDetail } from '../../shared/schemas/setup-record.ts';
+import { StudiesResponse, StudyDetail } from '../../shared/schemas/study-record.ts';
+import { apiWrite, demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+
+const baseUrl = inject('baseUrl');
+let browser: Browser;
+/** The study the engineer makes, opened by the viewer afterwards. */
+let made: { workspaceId: string; studyId: string; name: string } | undefined;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('studies in the browser', () => {
+  it('an engineer defines a 2-D study, runs it, sees the front and the best compromise, opens it as a revision and finds the study after a reload', async () => {
+    const { page, context } = await newSession(browser, baseUrl);
+    await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
+    const workspaceId = new URL(page.url()).pathname.split('/')[2];
+    await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Studies' }).click();
+    await page.waitForURL(`**/w/${workspaceId}/studies`);
+    await page.getByRole('button', { name: 'New study' }).click();
+
+    const form = page.getByRole('form', { name: 'Define a study' });
+    const name = `Rebound against spring ${Date.now()}`;
+    await form.getByLabel('Study name').fill(name);
+    await form.getByLabel('Base setup').selectOption({ label: 'Brume Pipit front, baseline' });
+    const first = form.getByRole('group', { name: 'First swept parameter' });
+    await first.getByLabel('Parameter').selectOption('reboundScale');
+    await first.getByLabel('From').fill('0.7');
+    await first.getByLabel('To').fill('1.6');
+    await first.getByLabel('Steps').fill('4');
+    const second = form.getByRole('group', { name: 'Second swept parameter' });
+    await second.getByLabel('Parameter').selectOption('springRate');
+    await second.getByLabel('From').fill('24');
+    await second.getByLabel('To').fill('40');
+    await second.getByLabel('Steps').fill('4');
+    await form.getByLabel('Road 1').selectOption('iso:C');
+    await form.getByLabel('Speeds [m/s]').fill('20');
+    await form.getByLabel('Run length [s]').fill('20');
+    await form.getByText('16 points, 17 runs of 20 s').waitFor();
+    await screenshot(page, 'study-form-engineer-1280');
+    await form.getByRole('button', { name: 'Save and run' }).click();
+
+    await page.waitForURL(new RegExp(`/w/${workspaceId}/studies/[^/?]+`));
+    const studyId = new URL(page.url()).pathname.split('/')[4];
+    await page.getByRole('progressbar', { name: 'Runs done' }).waitFor();
+    const best = page.getByRole('region', { name: 'Best compromise' });
+    await best.waitFor({ timeout: 60_000 });
+    await page.getByText('Saved: complete results.').waitFor({ timeout: 30_000 });
+
+    // The server judged the saved points the same way: a front through them and the same winner.
+    const saved = StudyDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/studies/${studyId}`)).json());
+    expect(saved.status).toBe('complete');
+    expect(saved.points).toHaveLength(16);
+    expect(saved.results?.tradeOff.front.length).toBeGreaterThan(0);
+    expect(saved.results?.best).not.toBeNull();
+    expect(await best.getByTestId('best-compromise-point').textContent()).toBe(saved.results?.best?.label);
+    expect(await best.getByText(/^Compared with /).count()).toBeGreaterThan(0);
+    const chart = page.getByRole('region', { name: 'Comfort against grip' });
+    expect(await chart.getByText('Trade-off front (Pareto)').isVisible()).toBe(true);
+    expect(await chart.getByText('Base setup').isVisible()).toBe(true);
+    expect(await page.getByRole('table', { name: 'Study points' }).getByRole('row').count()).toBe(1 + 16);
+    await screenshot(page, 'study-engineer-1280');
+
+    // The best point as the next revision of the base setup.
+    const before = SetupDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${saved.base.setupId}`)).json());
+    await best.getByRole('button', { name: 'Open as setup revision' }).click();
+    await page.getByText('Saved as a setup revision').waitFor();
+    const after = SetupDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${saved.base.setupId}`)).json());
+    expect(after.latestRevision).toBe(before.latestRevision + 1);
+    expect(after.revision.source).toBe(`study:${studyId}`);
+
+    await page.reload();
+    await page.getByRole('region', { name: 'Best compromise' }).waitFor();
+    await page.getByRole('link', { name: 'Studies', exact: true }).first().click();
+    await page.waitForURL(`**/w/${workspaceId}/studies`);
+    const row = page.getByRole('table', { name: 'Studies' }).getByRole('row', { name: new RegExp(name) });
+    await row.waitFor();
+    expect(await row.getByText('complete').count()).toBe(1);
+    await screenshot(page, 'studies-list-engineer-1280');
+    made = { workspaceId, studyId, name };
+    await context.close();
+  });
+
+  it('a viewer opens the study and can only preview a run: saving is refused and nothing changes', async () => {
+    if (!made) throw new Error('the engineer test must run first');
+    const { page, context } = await newSession(browser, baseUrl);
+    await signIn(page, (await demoUser(baseUrl, 'viewer')).email);
+    await page.goto(`/w/${made.workspaceId}/studies/${made.studyId}`);
+    await page.getByRole('heading', { name: made.name }).waitFor();
+    await page.getByRole('region', { name: 'Best compromise' }).waitFor();
+    expect(await page.getByRole('button', { name: /Run and save|Run again and save/ }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Open as setup revision' }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Mark as baseline' }).count()).toBe(0);
+
+    const preview = page.getByRole('button', { name: 'Preview a run (not saved)' });
+    await preview.click();
+    await page.getByText('Preview only: nothing was saved.').waitFor({ timeout: 60_000 });
+    await screenshot(page, 'study-viewer-1280');
+
+    // The server refuses a viewer's save, whatever the page offers.
+    const refused = await apiWrite({ page, context }, 'POST', `/api/workspaces/${made.workspaceId}/studies/${made.studyId}/points`, { points: [] });
+    expect(refused.status()).toBe(403);
+    const list = StudiesResponse.parse(await (await page.request.get(`/api/workspaces/${made.workspaceId}/studies`)).json());
+    const mine = list.studies.find((s) => s.id === made!.studyId);
+    expect(mine?.results?.ranBy.name).not.toBe((await demoUser(baseUrl, 'viewer')).name);
+    await context.close();
+  });
+});
