@@ -38,6 +38,14 @@ interface Shown {
 
 const LIVE_POINTS = 800;
 
+interface LiveRequest {
+  setup: SetupInput;
+  road: RoadInput;
+  speed: number;
+  duration: number;
+  seed?: number;
+}
+
 /**
  * Live mode: every change of setup, road or speed re-runs a short simulation in a worker
  * (leading edge at once, bursts debounced by 150 ms, a stale run cancelled) and shows the key
@@ -51,39 +59,47 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed }: LiveRu
   const seq = useRef(0);
   const changedAt = useRef(0);
 
-  const scheduler = useMemo(
-    () =>
-      new LiveScheduler<{ setup: SetupInput; road: RoadInput; speed: number; duration: number; seed?: number }>({
-        quietMs: 150,
-        run: async (req, signal) => {
-          const started = changedAt.current;
-          setPending(true);
-          const outcome = await simulate(req, { signal, spectra: false, response: false });
-          if (signal.aborted) return;
-          setPending(false);
-          if (!outcome.ok) {
-            if (!('cancelled' in outcome)) setFailure(outcome.reason);
-            return;
-          }
-          setFailure(null);
-          const thinned = thinColumns([outcome.trace.travel], outcome.trace.dt, LIVE_POINTS);
-          setShown({ result: outcome.result, time: thinned.time, travel: thinned.columns[0].map((v) => v * 1000), latencyMs: performance.now() - started, seq: ++seq.current });
-        },
-      }),
-    [],
-  );
-  useEffect(() => () => scheduler.dispose(), [scheduler]);
+  const scheduler = useRef<LiveScheduler<LiveRequest> | null>(null);
+  const latest = useRef<LiveRequest | null>(null);
+
+  // Made in an effect (not during render) so a remount, as StrictMode does in development, gets a live scheduler.
+  useEffect(() => {
+    const s = new LiveScheduler<LiveRequest>({
+      quietMs: 150,
+      run: async (req, signal) => {
+        const started = changedAt.current;
+        setPending(true);
+        const outcome = await simulate(req, { signal, spectra: false, response: false });
+        if (signal.aborted) return;
+        setPending(false);
+        if (!outcome.ok) {
+          if (!('cancelled' in outcome)) setFailure(outcome.reason);
+          return;
+        }
+        setFailure(null);
+        const thinned = thinColumns([outcome.trace.travel], outcome.trace.dt, LIVE_POINTS);
+        setShown({ result: outcome.result, time: thinned.time, travel: thinned.columns[0].map((v) => v * 1000), latencyMs: performance.now() - started, seq: ++seq.current });
+      },
+    });
+    scheduler.current = s;
+    if (latest.current) s.change(latest.current);
+    return () => {
+      s.dispose();
+      scheduler.current = null;
+    };
+  }, []);
 
   const key = JSON.stringify([setup, road, speed, duration, seed]);
   useEffect(() => {
     changedAt.current = performance.now();
-    scheduler.change({ setup, road, speed, duration, seed });
-    // key stands for the values: a new object with the same content is no change
-  }, [key, scheduler]);
+    latest.current = { setup, road, speed, duration, seed };
+    scheduler.current?.change(latest.current);
+    // `key` stands for the values: a new object with the same content is no change
+  }, [key]);
 
   const options = useMemo(
     (): ChartOptions => ({
-      height: 110,
+      height: 130,
       scales: { x: linearX },
       axes: [themedAxis(theme, { size: 28 }), themedAxis(theme, { label: 'Travel', unit: 'mm', size: 52 })],
       series: [{ label: 's' }, themedSeries({ label: 'Travel', unit: 'mm', color: theme.ink })],
@@ -137,11 +153,11 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed }: LiveRu
             <LiveFigure name="velRms" label="Piston vel. RMS">
               <Figure value={m.damperVelocityRms} unit="mmps" label="piston velocity RMS" />
             </LiveFigure>
-            <LiveFigure name="bodyHz" label="Body, Hz · ζ">
-              <Figure value={shown.result.modal.body.naturalHz} label="body frequency" /> · <Figure value={shown.result.modal.body.dampingRatio} label="body damping ratio" />
+            <LiveFigure name="bodyHz" label="Body mode" wide>
+              <Figure value={shown.result.modal.body.naturalHz} unit="Hz" label="body frequency" /> <span className="text-xs text-ink-faint">ζ</span> <Figure value={shown.result.modal.body.dampingRatio} label="body damping ratio" />
             </LiveFigure>
-            <LiveFigure name="wheelHz" label="Wheel hop, Hz · ζ">
-              <Figure value={shown.result.modal.wheel.naturalHz} label="wheel-hop frequency" /> · <Figure value={shown.result.modal.wheel.dampingRatio} label="wheel-hop damping ratio" />
+            <LiveFigure name="wheelHz" label="Wheel hop" wide>
+              <Figure value={shown.result.modal.wheel.naturalHz} unit="Hz" label="wheel-hop frequency" /> <span className="text-xs text-ink-faint">ζ</span> <Figure value={shown.result.modal.wheel.dampingRatio} label="wheel-hop damping ratio" />
             </LiveFigure>
           </dl>
           <p className="mt-1 text-xs text-comfort">{m.comfort.bands.join(' / ')}</p>
@@ -159,11 +175,11 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed }: LiveRu
   );
 }
 
-function LiveFigure({ name, label, hue, warn, children }: { name: string; label: string; hue?: 'comfort' | 'grip'; warn?: boolean; children: React.ReactNode }) {
+function LiveFigure({ name, label, hue, warn, wide, children }: { name: string; label: string; hue?: 'comfort' | 'grip'; warn?: boolean; wide?: boolean; children: React.ReactNode }) {
   return (
-    <div className="flex items-baseline justify-between gap-2 border-b border-rule/60 py-0.5" data-figure={name}>
+    <div className={`flex items-baseline justify-between gap-2 border-b border-rule/60 py-0.5 ${wide ? 'col-span-2' : ''}`} data-figure={name}>
       <dt className={`text-xs ${hue === 'comfort' ? 'text-comfort' : hue === 'grip' ? 'text-grip' : 'text-ink-soft'}`}>{label}</dt>
-      <dd className={warn ? 'font-semibold [&_*]:!text-signal-ink' : ''}>{children}</dd>
+      <dd className={`whitespace-nowrap ${warn ? 'font-semibold [&_*]:!text-signal-ink' : ''}`}>{children}</dd>
     </div>
   );
 }

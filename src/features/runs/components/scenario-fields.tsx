@@ -34,7 +34,7 @@ export function ScenarioFields({ draft, onChange, errors, libraryRoads, libraryU
             )}
           </Select>
         </Field>
-        <Field label="Speed" error={errors.speed} className="w-44">
+        <Field label="Speed" error={errors.speed} className="w-44 shrink-0">
           <div className="flex">
             <Input inputMode="decimal" className="rounded-r-none" aria-label="Speed value" value={draft.speed} onChange={(e) => set({ speed: e.target.value })} />
             <Select aria-label="Speed unit" className="w-[5.6rem] shrink-0 rounded-l-none border-l-0" value={draft.speedUnit} onChange={(e) => set({ speedUnit: e.target.value as 'kmh' | 'mps' })}>
@@ -43,7 +43,7 @@ export function ScenarioFields({ draft, onChange, errors, libraryRoads, libraryU
             </Select>
           </div>
         </Field>
-        <Field label="Duration, s" error={errors.duration} className="w-24">
+        <Field label="Duration, s" error={errors.duration} className="w-24 shrink-0">
           <Input inputMode="decimal" value={draft.duration} onChange={(e) => set({ duration: e.target.value })} />
         </Field>
         {draft.roadChoice !== INLINE_ROAD && librarySeed !== undefined && (
