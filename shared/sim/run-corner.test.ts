@@ -7,7 +7,7 @@ import { runCorner } from './run-corner.ts';
 
 const example = <T>(name: string): T => JSON.parse(readFileSync(new URL(`../../examples/${name}`, import.meta.url), 'utf8'));
 const pipit = example<SetupInput>('pipit-front.setup.json');
-const isoC = example<RoadInput>('iso-c.road.json');
+const isoC = example<Extract<RoadInput, { kind: 'iso8608' }>>('iso-c.road.json');
 
 describe('runCorner', () => {
   it('returns a result that satisfies the run-result schema, with traces beside it', () => {
