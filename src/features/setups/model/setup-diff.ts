@@ -12,7 +12,7 @@ export interface DiffRow {
   after: number | string | undefined;
 }
 
-interface Described {
+export interface Described {
   label: string;
   unit?: DisplayUnit;
   order: number;
@@ -47,7 +47,8 @@ const orderOf = (path: string) => scalarIndex.get(path)?.order ?? Number.MAX_SAF
 const directionWord = { compression: 'Compression', rebound: 'Rebound' } as const;
 const stopWord = { bumpStop: 'Bump stop', reboundStop: 'Rebound stop' } as const;
 
-function describe(path: string): Described {
+/** Label, display unit and page position of any leaf path of a setup document. */
+export function describePath(path: string): Described {
   const scalar = scalarIndex.get(path);
   if (scalar) return scalar;
   let m = /^damper\.(compression|rebound)\.(\d+)\.([01])$/.exec(path);
@@ -89,7 +90,16 @@ export function diffSetups(a: Setup, b: Setup): DiffRow[] {
   const fb = flatten(b);
   const paths = [...new Set([...fa.keys(), ...fb.keys()])].filter((p) => fa.get(p) !== fb.get(p));
   return paths
-    .map((path) => ({ path, ...describe(path), before: fa.get(path), after: fb.get(path) }))
+    .map((path) => ({ path, ...describePath(path), before: fa.get(path), after: fb.get(path) }))
+    .sort((x, y) => x.order - y.order || x.path.localeCompare(y.path))
+    .map(({ order: _order, ...row }) => row);
+}
+
+/** A document as labelled rows in page order (for read-only sheets), curve points left out. */
+export function sheetRows(setup: Setup): Array<{ path: string; label: string; unit?: DisplayUnit; value: number | string }> {
+  return [...flatten(setup)]
+    .filter(([path]) => path !== 'name' && path !== 'notes' && !/^damper\.(compression|rebound)\./.test(path))
+    .map(([path, value]) => ({ path, ...describePath(path), value }))
     .sort((x, y) => x.order - y.order || x.path.localeCompare(y.path))
     .map(({ order: _order, ...row }) => row);
 }

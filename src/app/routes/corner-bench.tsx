@@ -1,0 +1,172 @@
+import { useMemo, useRef, useState } from 'react';
+import { useParams } from 'react-router';
+import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
+import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
+import { Notice } from '../../components/ui/notice.tsx';
+import { PageHeader, Section } from '../../components/ui/page-header.tsx';
+import { ResultsCaution } from '../../components/ui/results-caution.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
+import { useToast } from '../../components/ui/toast.tsx';
+import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
+import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
+import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
+import { useSetup } from '../../features/setups/api/get-setup.ts';
+import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
+import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
+import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
+import { SetupForm } from '../../features/setups/components/form/setup-form.tsx';
+import { RevisionHistory } from '../../features/setups/components/revision-history.tsx';
+import { SaveBar } from '../../features/setups/components/save-bar.tsx';
+import { ArchiveButton, GroupingControl, SetupNameHeading } from '../../features/setups/components/setup-facts.tsx';
+import { LoadSetupFileButton } from '../../features/setups/components/setup-file-buttons.tsx';
+import { SetupSheet } from '../../features/setups/components/setup-sheet.tsx';
+import { UnsavedGuard } from '../../features/setups/components/unsaved-guard.tsx';
+import { draftFigures } from '../../features/setups/model/draft-figures.ts';
+import { useSetupDraft } from '../../features/setups/model/use-setup-draft.ts';
+import { SharePanel } from '../../features/sharing/components/share-panel.tsx';
+import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
+import { buttonClass } from '../../components/ui/button.tsx';
+import { formatDateTime } from '../../lib/format.ts';
+import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+/** `/w/:workspaceId/corners/:setupId`: the setup bench. */
+export function CornerBenchRoute() {
+  const { setupId = '' } = useParams();
+  const workspace = useWorkspace();
+  const setup = useSetup(workspace.id, setupId);
+  if (setup.isPending) return <Loading what="the setup" />;
+  if (setup.isError) {
+    return (
+      <Notice tone="danger" title={setup.error.code === 'not_found' ? 'No such setup here' : 'The setup did not load'}>
+        {setup.error.message}
+      </Notice>
+    );
+  }
+  return <Bench key={setup.data.id} detail={setup.data} />;
+}
+
+function Bench({ detail }: { detail: SetupDetail }) {
+  const workspace = useWorkspace();
+  const canWrite = workspace.can('engineer') && !detail.archivedAt;
+  const vehicles = useVehicles(workspace.id).data?.vehicles.map((v) => ({ id: v.id, name: v.name })) ?? [];
+  const draft = useSetupDraft(detail.revision);
+  const save = useSaveRevision(workspace.id, detail.id);
+  const toast = useToast();
+  const [saveError, setSaveError] = useState('');
+  const [scenario, setScenario] = useState(defaultScenario);
+
+  // The panels on the right follow the draft; while a field is wrong they keep the last valid state.
+  const lastValid = useRef<Setup>(detail.revision.document);
+  if (draft.valid) lastValid.current = draft.valid;
+  const shown = canWrite ? lastValid.current : detail.revision.document;
+  const figures = useMemo(() => draftFigures(shown), [shown]);
+  const damper = useMemo(() => {
+    const parsed = Damper.safeParse(canWrite ? draft.values.damper : shown.damper);
+    return parsed.success ? parsed.data : shown.damper;
+  }, [canWrite, draft.values.damper, shown.damper]);
+
+  const onSave = (setup: Setup, message: string) => {
+    setSaveError('');
+    save.mutate(
+      { setup, message, basedOn: draft.baseRevision },
+      {
+        onSuccess: (d) => {
+          draft.resetTo(d.revision);
+          toast.show(`Saved as revision ${d.latestRevision}.`);
+        },
+        onError: (error) => {
+          for (const f of error.fields) if (f.path.startsWith('setup.')) draft.form.setError(f.path.slice(6) as never, { type: 'server', message: f.message });
+          setSaveError(error.message);
+        },
+      },
+    );
+  };
+
+  const r = detail.revision;
+  return (
+    <>
+      <PageHeader
+        eyebrow={`Corner setup · revision ${detail.latestRevision}`}
+        title={<SetupNameHeading workspaceId={workspace.id} detail={detail} canWrite={canWrite} />}
+        detail={
+          <>
+            <span className="block">
+              r{r.number} “{r.message}” — {r.author.name}, <span className="figures">{formatDateTime(r.createdAt)}</span>
+            </span>
+            <GroupingControl workspaceId={workspace.id} detail={detail} canWrite={canWrite} vehicles={vehicles} />
+          </>
+        }
+        actions={
+          <>
+            <a className={buttonClass('secondary')} href={exportRevisionUrl(workspace.id, detail.id, detail.latestRevision)} download>
+              Export JSON
+            </a>
+            {canWrite && (
+              <LoadSetupFileButton
+                onLoad={(setup, fileName) => {
+                  draft.load(setup);
+                  toast.show(`Loaded ${fileName} into the form: review it, then save it as revision ${detail.latestRevision + 1}.`, 'info');
+                }}
+              />
+            )}
+            {workspace.can('engineer') && <ArchiveButton workspaceId={workspace.id} detail={detail} />}
+          </>
+        }
+      />
+      {detail.archivedAt && (
+        <Notice className="mb-4" title="Archived">
+          This setup is archived: it is out of the list and of its vehicle. Its revisions are kept; bring it back to change it.
+        </Notice>
+      )}
+
+      <div className="grid items-start gap-6 lg:grid-cols-[24rem_minmax(0,1fr)]">
+        <div className="min-w-0">
+          {canWrite ? (
+            <>
+              <div className="sticky top-0 z-10 -mx-1 mb-3 bg-paper px-1 pt-1 pb-2">
+                <SaveBar draft={draft} nextNumber={detail.latestRevision + 1} saving={save.isPending} error={saveError} onSave={onSave} />
+              </div>
+              <SetupForm form={draft.form} />
+            </>
+          ) : (
+            <SetupSheet setup={detail.revision.document} />
+          )}
+        </div>
+
+        <div className="flex min-w-0 flex-col gap-5">
+          <CornerFiguresStrip modal={figures.modal} wheelRate={figures.analysisWheelRate} sprungMass={shown.sprungMass} stale={canWrite && !draft.valid} />
+          <section aria-label="Damper">
+            <h2 className="mb-2 text-sm font-semibold text-ink">Damper</h2>
+            <DamperCurveEditor
+              value={damper}
+              onChange={draft.setDamper}
+              readOnly={!canWrite}
+              motionRatio={shown.motionRatio}
+              sprungMass={shown.sprungMass}
+              wheelRate={figures.analysisWheelRate}
+              unsprungMass={shown.unsprungMass}
+              tyreRate={shown.tyreRate}
+              tyreDamping={shown.tyreDamping}
+            />
+          </section>
+          <section aria-label="Live run">
+            <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2">
+              <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.isDirty ? ' of the unsaved draft' : ''}</h2>
+              <BenchScenarioPicker value={scenario} onChange={setScenario} />
+            </div>
+            <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} />
+          </section>
+        </div>
+      </div>
+
+      <Section title="Revisions" className="mt-8">
+        <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.isDirty} onRestored={(d) => draft.resetTo(d.revision)} />
+      </Section>
+      <Section title="Read-only links">
+        <SharePanel workspaceId={workspace.id} setupId={detail.id} revision={{ id: r.id, number: r.number }} canWrite={workspace.can('engineer')} />
+      </Section>
+      <ResultsCaution />
+      <UnsavedGuard when={canWrite && draft.isDirty && !save.isPending} />
+    </>
+  );
+}

@@ -1,0 +1,102 @@
+import { useId } from 'react';
+import { useWatch } from 'react-hook-form';
+import type { Stroke } from '../../../../../shared/schemas/setup.ts';
+import { formatSig, units } from '../../../../lib/format.ts';
+import type { SetupForm as Form } from '../../model/use-setup-draft.ts';
+import { rateUnits } from '../../model/setup-units.ts';
+import { DerivedRow, FormBlock, QuantityRow } from './quantity-row.tsx';
+import { RateUnitToggle, useRateUnit } from './rate-unit-toggle.tsx';
+import { StopFields } from './stop-fields.tsx';
+import { ToggleRow } from './toggle-row.tsx';
+
+function WheelRate({ form, unit }: { form: Form; unit: (typeof rateUnits)[keyof typeof rateUnits] }) {
+  const [k, mr] = useWatch({ control: form.control, name: ['springRate', 'motionRatio'] });
+  const value = typeof k === 'number' && typeof mr === 'number' ? k * mr * mr : Number.NaN;
+  return (
+    <DerivedRow label="Wheel rate (spring × MR²)">
+      <span className="figures text-ink">{formatSig(unit.fromSI(value), 3)}</span> <span className="text-xs font-light text-ink-faint">{unit.symbol}</span>
+    </DerivedRow>
+  );
+}
+
+function StrokeFields({ form }: { form: Form }) {
+  const stroke = useWatch({ control: form.control, name: 'stroke' }) as Stroke | undefined;
+  return (
+    <>
+      <ToggleRow
+        label="Stroke available"
+        hint={stroke ? 'from static' : 'not given'}
+        checked={Boolean(stroke)}
+        onChange={(on) => form.setValue('stroke', (on ? { compression: 0.085, extension: 0.095 } : undefined) as never, { shouldDirty: true, shouldValidate: true })}
+      />
+      {stroke && (
+        <>
+          <QuantityRow control={form.control} name="stroke.compression" label="Towards bump" unit={units.mm} />
+          <QuantityRow control={form.control} name="stroke.extension" label="Towards rebound" unit={units.mm} />
+        </>
+      )}
+    </>
+  );
+}
+
+function Notes({ form }: { form: Form }) {
+  const id = useId();
+  const error = form.formState.errors.notes?.message;
+  return (
+    <div>
+      <label htmlFor={id} className="sr-only">
+        Notes
+      </label>
+      <textarea
+        id={id}
+        rows={3}
+        {...form.register('notes', { setValueAs: (v: string) => (v === '' ? undefined : v) })}
+        placeholder="Trim, tyre, load, anything the numbers do not say"
+        className="w-full rounded-sm border border-rule-strong bg-paper-raised px-2 py-1 text-sm hover:border-ink-faint focus-visible:border-accent"
+      />
+      {error && (
+        <p role="alert" className="text-xs text-danger">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
+/**
+ * The corner's numbers, in the units engineers use, stored in SI. The damper (curves and gas
+ * charge) is edited in the damper panel beside it; everything else is here.
+ */
+export function SetupForm({ form }: { form: Form }) {
+  const [rateUnit, setRateUnit] = useRateUnit();
+  const rate = rateUnits[rateUnit];
+  const { control } = form;
+  return (
+    <div aria-label="Setup values" role="group">
+      <FormBlock title="Masses">
+        <QuantityRow control={control} name="sprungMass" label="Sprung mass" unit={units.kg} />
+        <QuantityRow control={control} name="unsprungMass" label="Unsprung mass" unit={units.kg} />
+      </FormBlock>
+      <FormBlock title="Spring" aside={<RateUnitToggle value={rateUnit} onChange={setRateUnit} />}>
+        <QuantityRow control={control} name="springRate" label="Spring rate" unit={rate} />
+        <QuantityRow control={control} name="motionRatio" label="Motion ratio" unit={units.ratio} hint="damper travel per wheel travel" />
+        <WheelRate form={form} unit={rate} />
+      </FormBlock>
+      <FormBlock title="Tyre">
+        <QuantityRow control={control} name="tyreRate" label="Vertical rate" unit={rate} />
+        <QuantityRow control={control} name="tyreDamping" label="Damping" unit={units.Nspm} />
+        <QuantityRow control={control} name="tyreFootprint" label="Footprint length" unit={units.mm} optional hint="blank: point contact" />
+      </FormBlock>
+      <FormBlock title="End stops (at the wheel)">
+        <StopFields form={form} which="bumpStop" />
+        <StopFields form={form} which="reboundStop" />
+      </FormBlock>
+      <FormBlock title="Stroke">
+        <StrokeFields form={form} />
+      </FormBlock>
+      <FormBlock title="Notes">
+        <Notes form={form} />
+      </FormBlock>
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useForm, useWatch, type UseFormReturn } from 'react-hook-form';
+import type { SetupRevision } from '../../../../shared/schemas/setup-record.ts';
+import { type Damper, Setup, type SetupInput } from '../../../../shared/schemas/setup.ts';
+
+export type SetupForm = UseFormReturn<SetupInput, unknown, Setup>;
+
+/** The bench's working copy of a setup: the form, its current values, and the parsed setup when valid. */
+export interface SetupDraft {
+  form: SetupForm;
+  /** Everything typed so far, valid or not. */
+  values: SetupInput;
+  /** The draft parsed with the shared schema; null while any field is wrong. */
+  valid: Setup | null;
+  isDirty: boolean;
+  /** The revision the draft was started from (sent as `basedOn` when saving). */
+  baseRevision: number;
+  /** For the damper curve editor: replaces the damper and marks the form changed. */
+  setDamper: (damper: SetupInput['damper']) => void;
+  /** Starts over from a revision (after a save, a restore, or to discard edits). */
+  resetTo: (revision: Pick<SetupRevision, 'number' | 'document'>) => void;
+  /** Puts a document (a loaded file) into the form as unsaved changes. */
+  load: (document: SetupInput) => void;
+}
+
+/**
+ * Holds the draft of the bench. The form is validated by the shared `Setup` schema itself; the
+ * page shows numbers in engineers' units but the form holds SI, converted by each input.
+ */
+export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document'>): SetupDraft {
+  const form = useForm<SetupInput, unknown, Setup>({ resolver: zodResolver(Setup), defaultValues: revision.document, mode: 'onChange' });
+  const [baseRevision, setBaseRevision] = useState(revision.number);
+  const watched = useWatch({ control: form.control }) as SetupInput;
+  const { isDirty } = form.formState;
+
+  const resetTo = useCallback(
+    (r: Pick<SetupRevision, 'number' | 'document'>) => {
+      form.reset(r.document);
+      setBaseRevision(r.number);
+    },
+    [form],
+  );
+
+  // A newer revision saved elsewhere replaces a clean draft; a draft with edits stays, and its
+  // save is refused by the server (basedOn) rather than overwriting what was saved meanwhile.
+  useEffect(() => {
+    if (revision.number !== baseRevision && !form.formState.isDirty) resetTo(revision);
+  }, [revision, baseRevision, form, resetTo]);
+
+  const values = watched ?? revision.document;
+  const valid = useMemo(() => {
+    const parsed = Setup.safeParse(values);
+    return parsed.success ? parsed.data : null;
+  }, [values]);
+
+  const setDamper = useCallback(
+    (damper: SetupInput['damper'] | Damper) => form.setValue('damper', damper as SetupInput['damper'], { shouldDirty: true, shouldValidate: true }),
+    [form],
+  );
+
+  const load = useCallback(
+    (document: SetupInput) => {
+      for (const [key, value] of Object.entries(document)) {
+        form.setValue(key as keyof SetupInput, value as never, { shouldDirty: true, shouldValidate: true });
+      }
+      for (const key of ['tyreFootprint', 'bumpStop', 'reboundStop', 'stroke', 'notes'] as const) {
+        if (!(key in document)) form.setValue(key, undefined, { shouldDirty: true, shouldValidate: true });
+      }
+    },
+    [form],
+  );
+
+  return { form, values, valid, isDirty, baseRevision, setDamper, resetTo, load };
+}
