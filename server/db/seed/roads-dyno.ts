@@ -22,8 +22,8 @@ export function inventedLaneProfile(): [number, number][] {
   let mid = 0;
   for (let i = 0; i <= 3000; i++) {
     const x = i * dx;
-    slow = 0.995 * slow + 0.0006 * (rng() - 0.5);
-    mid = 0.9 * mid + 0.0012 * (rng() - 0.5);
+    slow = 0.995 * slow + 0.002 * (rng() - 0.5);
+    mid = 0.9 * mid + 0.004 * (rng() - 0.5);
     const patch = x > 120 && x < 124 ? 0.006 : 0;
     const joint = Math.abs(x - 210) < 0.15 ? -0.008 : 0;
     const grade = 0.004 * x;

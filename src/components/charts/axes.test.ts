@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import type uPlot from 'uplot';
-import { decadesIn, logScale, logTickValues } from './axes.ts';
+import { decadesIn, logDecadeRange, logScale, logTickValues } from './axes.ts';
 import { axisLabel, formatTick, readChartTheme, seriesColor } from './chart-theme.ts';
 
 describe('log axes', () => {
@@ -19,6 +19,17 @@ describe('log axes', () => {
     expect(logTickValues(u, [1, 2, 3, 5, 10])).toEqual(['1', '2', '', '5', '10']);
     const wide = [0.01, 0.02, 0.1, 1, 10, 20, 100];
     expect(logTickValues(u, wide)).toEqual(['0.01', '', '0.1', '1', '10', '', '100']);
+  });
+});
+
+describe('logDecadeRange', () => {
+  test('whole decades around the data, cut to the decades asked for below the top', () => {
+    const [a, b] = logDecadeRange([3e-4, 2e-2, 0, -1]);
+    expect(a).toBeCloseTo(1e-4, 15);
+    expect(b).toBeCloseTo(0.1, 15);
+    const [lo, hi] = logDecadeRange([1.5e-27, 0.0097], 8);
+    expect(hi).toBeCloseTo(0.01, 12);
+    expect(lo).toBeCloseTo(1e-10, 20);
   });
 });
 

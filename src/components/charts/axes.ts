@@ -42,6 +42,23 @@ export function logTickValues(_u: uPlot, splits: number[]): string[] {
   });
 }
 
+/**
+ * Axis splits for a log scale: the decades only, plus 2× and 5× when the range spans fewer than
+ * three decades. Keeps the grid of a many-decade spectrum light.
+ */
+export function logSplits(_u: uPlot, _axis: number, min: number, max: number): number[] {
+  const decades = decadesIn(min, max);
+  if (decades.length >= 3) return decades;
+  const out: number[] = [];
+  for (let e = Math.floor(Math.log10(min)); e <= Math.ceil(Math.log10(max)); e++) {
+    for (const m of [1, 2, 5]) {
+      const v = m * 10 ** e;
+      if (v >= min * (1 - 1e-9) && v <= max * (1 + 1e-9)) out.push(v);
+    }
+  }
+  return out;
+}
+
 /** The x scale entry for a log-x chart, ready to spread into `scales`. */
 export function logXScales(range?: [number, number]): uPlot.Options['scales'] {
   return { x: logScale(range) };
@@ -50,4 +67,26 @@ export function logXScales(range?: [number, number]): uPlot.Options['scales'] {
 /** Log-log scales (x and y), e.g. a spatial PSD in m³ against wavenumber in cycles/m. */
 export function logLogScales(xRange?: [number, number], yRange?: [number, number]): uPlot.Options['scales'] {
   return { x: logScale(xRange), y: logScale(yRange) };
+}
+
+/**
+ * A log scale range in whole decades holding the positive values, at most `maxDecades` below the
+ * highest. Use it (and leave values below it out as null) for spectra: uPlot's log tick
+ * generator can loop without end on ranges reaching far below 1e−16, which a Welch PSD with
+ * leakage easily does.
+ */
+export function logDecadeRange(values: ArrayLike<number>, maxDecades = 8): [number, number] {
+  let max = 0;
+  let min = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (v > 0 && Number.isFinite(v)) {
+      if (v > max) max = v;
+      if (v < min) min = v;
+    }
+  }
+  if (!(max > 0)) return [0.1, 1];
+  const hi = 10 ** Math.ceil(Math.log10(max));
+  const lo = Math.max(10 ** Math.floor(Math.log10(min)), hi / 10 ** maxDecades);
+  return [lo, hi];
 }

@@ -18,6 +18,8 @@
  * - Width follows the container (ResizeObserver); height comes from `options.height` (260 px default).
  * - Clicking a legend entry toggles its series (uPlot's own legend).
  * - `exportName` adds a small "Save PNG" button; `exportPng(chart)` does the same from code.
+ * - Log axes: give the scale a finite range (`logDecadeRange(values)` in axes.ts) and null out
+ *   values below it; uPlot's log ticks can loop forever on ranges reaching below about 1e−16.
  */
 import { useEffect, useMemo, useRef } from 'react';
 import uPlot from 'uplot';

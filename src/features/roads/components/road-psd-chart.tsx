@@ -1,9 +1,9 @@
-import { useMemo } from 'react';
+import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
 import { isoClasses } from '../../../../shared/schemas/road.ts';
 import { isoClassBounds } from '../../../../shared/sim/roads/iso-fit.ts';
 import { ISO_N0 as N0 } from '../../../../shared/sim/roads/iso8608.ts';
-import { logLogScales, logTickValues } from '../../../components/charts/axes.ts';
+import { logDecadeRange, logLogScales, logSplits, logTickValues } from '../../../components/charts/axes.ts';
 import { type ChartTheme, formatTick, seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
 import type { PsdPreview } from '../model/preview.ts';
@@ -46,28 +46,39 @@ function drawIsoBands(theme: ChartTheme) {
       ctx.moveTo(px(xMin), py(line(lower, xMin)));
       ctx.lineTo(px(xMax), py(line(lower, xMax)));
       ctx.stroke();
-      // the class letter sits inside its strip, near the left edge where strips are widest apart
-      const nLabel = xMin * 1.35;
-      const y = py(Math.sqrt(lower * upper) * (nLabel / N0) ** -BAND_WAVINESS);
-      if (y > u.bbox.top + 6 && y < u.bbox.top + u.bbox.height - 6) {
-        ctx.fillStyle = theme.inkFaint;
-        ctx.fillText(cls, px(nLabel), y);
+      // the class letter sits inside its strip at the right edge, or where the strip leaves
+      // the bottom of the plot when it is below the range there
+      const yMin = u.scales.y.min ?? 0;
+      const mid = Math.sqrt(lower * upper);
+      const nRight = xMax / 1.5;
+      const nBottom = N0 * Math.sqrt(mid / (yMin * 3));
+      const nLabel = line(mid, nRight) >= yMin * 3 ? nRight : nBottom;
+      const y = py(line(mid, nLabel));
+      const x = px(nLabel);
+      if (nLabel >= xMin && nLabel <= xMax && y > u.bbox.top + 6 && y < u.bbox.top + u.bbox.height - 6) {
+        ctx.fillStyle = theme.inkSoft;
+        ctx.textAlign = 'center';
+        ctx.fillText(cls, x, y);
       }
     });
     ctx.restore();
   };
 }
 
+/** Decades shown below the highest PSD value: the ISO classes span eight (A to H at one n). */
+const DECADES_SHOWN = 8;
+
 /** Displacement PSD of the road against spatial frequency, log-log, over the ISO 8608 class strips. */
 export function RoadPsdChart({ psd }: { psd: PsdPreview }) {
   const theme = useChartTheme();
+  const yRange = useRef<[number, number]>([1e-9, 1e-1]);
   const options = useMemo<ChartOptions>(
     () => ({
       height: 280,
-      scales: logLogScales(),
+      scales: { ...logLogScales(), y: { time: false, distr: 3, log: 10, range: () => yRange.current } },
       axes: [
-        themedAxis(theme, { label: 'Spatial frequency', unit: 'cycle/m', values: logTickValues }),
-        themedAxis(theme, { label: 'Displacement PSD', unit: 'm³', size: 64, values: (_u, splits) => splits.map((v) => (Math.abs(Math.log10(v) % 1) < 1e-9 ? formatTick(v) : '')) }),
+        themedAxis(theme, { label: 'Spatial frequency', unit: 'cycle/m', splits: logSplits, values: logTickValues }),
+        themedAxis(theme, { label: 'Displacement PSD', unit: 'm³', size: 64, splits: logSplits, values: (_u, splits) => splits.map((v) => formatTick(v)) }),
       ],
       series: [
         { label: 'n', value: (_u, v) => (v == null ? '–' : `${formatTick(v)} cycle/m`) },
@@ -79,8 +90,12 @@ export function RoadPsdChart({ psd }: { psd: PsdPreview }) {
     [theme],
   );
   const data = useMemo(() => {
+    const range = logDecadeRange(psd.psd, DECADES_SHOWN);
+    yRange.current = range;
+    // below the shown range a line only leaves the plot; left out, it also keeps uPlot's log splits finite
+    const shown = Array.from(psd.psd, (v) => (v >= range[0] ? v : null));
     const fit = psd.fit ? Array.from(psd.fit, (v) => (Number.isNaN(v) ? null : v)) : Array.from(psd.n, () => null);
-    return [psd.n, psd.psd, fit] as uPlot.AlignedData;
+    return [psd.n, shown, fit] as uPlot.AlignedData;
   }, [psd]);
   return <UChart options={options} data={data} label="Road displacement PSD against ISO 8608 classes" exportName="road-psd" />;
 }
