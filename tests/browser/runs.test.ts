@@ -96,7 +96,7 @@ describe('runs in the browser', () => {
     await page.getByLabel('Duration, s').fill('8');
     await runAndWait(page);
     await page.getByText('Try a change live').click();
-    const panel = page.getByRole('region', { name: 'Live run' });
+    const panel = page.getByRole('region', { name: 'Live run figures' });
     await page.locator('[data-live-figures][data-run-seq="1"]').waitFor({ timeout: 90_000 });
     const before = await shown(page, '[data-live-figures] [data-figure="aw"]');
     const velRmsBefore = await shown(page, '[data-live-figures] [data-figure="velRms"]');

@@ -1,18 +1,16 @@
 import { useState } from 'react';
 import { useNavigate, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/button.tsx';
-import { EmptyState } from '../../components/ui/empty-state.tsx';
+import { Select } from '../../components/ui/field.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
-import { useDeleteRun } from '../../features/runs/api/delete-run.ts';
-import { useRuns } from '../../features/runs/api/get-runs.ts';
+import { useSetupChoices } from '../../features/runs/api/get-setup-choices.ts';
 import { ExportButtons, runTitle, SaveRunForm, type SaveTarget } from '../../features/runs/components/run-actions.tsx';
 import { LiveTryout } from '../../features/runs/components/live-tryout.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
 import { type RunChoice, RunForm } from '../../features/runs/components/run-form.tsx';
 import { RunStatus } from '../../features/runs/components/run-status.tsx';
-import { SavedRunsTable } from '../../features/runs/components/saved-runs-table.tsx';
+import { SetupRunsList } from '../../features/runs/components/setup-runs-list.tsx';
 import { useSimulation } from '../../features/runs/model/use-simulation.ts';
 import { formatQuantityText } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
@@ -96,20 +94,24 @@ export function RunsRoute() {
 }
 
 function SavedRuns({ workspaceId, canDelete }: { workspaceId: string; canDelete: boolean }) {
-  const runs = useRuns(workspaceId);
-  const remove = useDeleteRun(workspaceId);
-  if (runs.isPending) return <Loading what="saved runs" />;
-  if (runs.isError) return <Notice tone="danger">{runs.error.message}</Notice>;
-  if (runs.data.runs.length === 0) return <EmptyState title="No saved runs yet">Run a setup above and save it: it keeps its inputs, figures and traces, so it opens again without running.</EmptyState>;
+  const [setupId, setSetupId] = useState('');
+  const setups = useSetupChoices(workspaceId);
   return (
-    <SavedRunsTable
-      workspaceId={workspaceId}
-      runs={runs.data.runs}
-      canDelete={canDelete}
-      deleting={remove.isPending ? remove.variables : undefined}
-      onDelete={(run) => {
-        if (window.confirm(`Delete the saved run “${run.name}”? Its figures and traces go with it.`)) remove.mutate(run.id);
-      }}
-    />
+    <>
+      <div className="mb-2 flex items-center gap-2 text-sm">
+        <label htmlFor="runs-filter" className="text-ink-soft">
+          Show
+        </label>
+        <Select id="runs-filter" className="w-72" value={setupId} onChange={(e) => setSetupId(e.target.value)}>
+          <option value="">every setup</option>
+          {(setups.data?.setups ?? []).map((s) => (
+            <option key={s.id} value={s.id}>
+              {s.name}
+            </option>
+          ))}
+        </Select>
+      </div>
+      <SetupRunsList workspaceId={workspaceId} setupId={setupId || undefined} canDelete={canDelete} />
+    </>
   );
 }

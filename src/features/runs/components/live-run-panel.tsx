@@ -25,6 +25,8 @@ export interface LiveRunPanelProps {
   duration?: number;
   /** Replaces the seed of an ISO 8608 road. */
   seed?: number;
+  /** Leave out the panel's own "Live run" title when the page already gives one. */
+  hideTitle?: boolean;
 }
 
 interface Shown {
@@ -51,7 +53,7 @@ interface LiveRequest {
  * (leading edge at once, bursts debounced by 150 ms, a stale run cancelled) and shows the key
  * figures and a small travel chart. Spectra and responses are skipped to keep it quick.
  */
-export function LiveRunPanel({ setup, road, speed, duration = 20, seed }: LiveRunPanelProps) {
+export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitle = false }: LiveRunPanelProps) {
   const theme = useChartTheme();
   const [shown, setShown] = useState<Shown | null>(null);
   const [pending, setPending] = useState(false);
@@ -115,9 +117,9 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed }: LiveRu
   const stale = Boolean(failure) || pending;
 
   return (
-    <section aria-label="Live run" className="rounded border border-rule bg-paper-raised p-3" data-live-figures data-run-seq={shown?.seq ?? 0} data-latency-ms={shown ? shown.latencyMs.toFixed(1) : undefined}>
+    <section aria-label="Live run figures" className="rounded border border-rule bg-paper-raised p-3" data-live-figures data-run-seq={shown?.seq ?? 0} data-latency-ms={shown ? shown.latencyMs.toFixed(1) : undefined}>
       <header className="mb-2 flex items-baseline justify-between gap-2">
-        <h3 className="text-sm font-semibold">Live run</h3>
+        {hideTitle ? <span /> : <h3 className="text-sm font-semibold">Live run</h3>}
         <span className="flex items-center gap-1.5 text-2xs text-ink-faint">
           {pending ? <Spinner label="Updating" /> : shown ? <span className="figures">updated in {Math.round(shown.latencyMs)} ms</span> : null}
         </span>
