@@ -2,12 +2,14 @@ import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
+import { staticGasForce } from '../../../shared/sim/damper.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
+import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
 import { useSetup } from '../../features/setups/api/get-setup.ts';
@@ -154,11 +156,21 @@ function Bench({ detail }: { detail: SetupDetail }) {
               <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.isDirty ? ' of the unsaved draft' : ''}</h2>
               <BenchScenarioPicker value={scenario} onChange={setScenario} />
             </div>
-            <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} />
+            <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} hideTitle />
           </section>
         </div>
       </div>
 
+      <Section title="Dyno files" className="mt-8">
+        <DynoPanel
+          workspaceId={workspace.id}
+          setupId={detail.id}
+          latestRevision={detail.latestRevision}
+          readOnly={!canWrite}
+          gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
+          onApplied={(n) => toast.show(`Saved the dyno fit as revision ${n}.`)}
+        />
+      </Section>
       <Section title="Revisions" className="mt-8">
         <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.isDirty} onRestored={(d) => draft.resetTo(d.revision)} />
       </Section>
