@@ -1,0 +1,95 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { openDatabase } from '../db/database.ts';
+import { migrateToLatest } from '../db/migrator.ts';
+import { seedDemo } from '../db/seed/seed-demo.ts';
+
+const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+
+/** The real server (`node --import tsx server/main.ts`) running as a child process on loopback. */
+export interface ServerProcess {
+  url: string;
+  pid: number;
+  child: ChildProcess;
+  /** Resident memory of the child, bytes (Linux /proc). */
+  rssBytes(): number;
+  /** Sends `signal` and resolves when the process is gone. */
+  kill(signal?: NodeJS.Signals): Promise<void>;
+}
+
+export interface ServerProcessOptions {
+  dbPath: string;
+  /** Extra environment (e.g. a rate limit); the defaults turn limiting off and use demo mode. */
+  env?: Record<string, string>;
+  /** How long to wait for "serving" on stdout; a loaded machine can take tens of seconds. */
+  readyTimeoutMs?: number;
+}
+
+/** A fixed session key, so a session survives a restart of the child. */
+export const CHILD_SECRET = 'ridewright-child-process-secret-0123456789';
+
+/** Migrates the database file and seeds the demo workspace (when it has no users). */
+export async function prepareDatabase(dbPath: string): Promise<void> {
+  const db = openDatabase(dbPath);
+  try {
+    const { error } = await migrateToLatest(db);
+    if (error) throw error;
+    await seedDemo(db);
+  } finally {
+    await db.destroy();
+  }
+}
+
+/** Starts `server/main.ts` with its own database on 127.0.0.1 and a free port; resolves once it serves. */
+export function startServerProcess(options: ServerProcessOptions): Promise<ServerProcess> {
+  const env: Record<string, string> = {};
+  for (const [k, v] of Object.entries(process.env)) if (v !== undefined && !k.startsWith('SMTP_') && k !== 'PORT' && k !== 'HOST') env[k] = v;
+  Object.assign(env, {
+    RIDEWRIGHT_DB: options.dbPath,
+    HOST: '127.0.0.1',
+    PORT: '0',
+    RIDEWRIGHT_RATE_LIMIT: '0',
+    RIDEWRIGHT_DEMO: '1',
+    RIDEWRIGHT_SECRET: CHILD_SECRET,
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'warn',
+    ...options.env,
+  });
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], { cwd: ROOT, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const gone = new Promise<void>((resolve) => child.once('exit', () => resolve()));
+  let stderr = '';
+  child.stderr!.on('data', (d: Buffer) => void (stderr = (stderr + d.toString()).slice(-4000)));
+  return new Promise((resolve, reject) => {
+    let out = '';
+    let ready = false;
+    const timer = setTimeout(() => {
+      child.kill('SIGKILL');
+      reject(new Error(`server did not start within ${options.readyTimeoutMs ?? 120_000} ms:\n${stderr}`));
+    }, options.readyTimeoutMs ?? 120_000);
+    child.once('exit', (code, signal) => {
+      clearTimeout(timer);
+      if (!ready) reject(new Error(`server exited before serving (${code ?? signal}):\n${stderr}`));
+    });
+    child.stdout!.on('data', (d: Buffer) => {
+      out += d.toString();
+      const m = /serving (http:\/\/\S+)/.exec(out);
+      if (!m || ready) return;
+      ready = true;
+      clearTimeout(timer);
+      child.stdout!.removeAllListeners('data');
+      child.stdout!.resume();
+      const pid = child.pid!;
+      resolve({
+        url: m[1],
+        pid,
+        child,
+        rssBytes: () => Number(/VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))?.[1] ?? 0) * 1024,
+        async kill(signal = 'SIGTERM') {
+          if (child.exitCode === null && child.signalCode === null) child.kill(signal);
+          await gone;
+        },
+      });
+    });
+  });
+}
