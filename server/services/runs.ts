@@ -7,7 +7,7 @@ import { RunRequest, type RunResult } from '../../shared/schemas/run.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import { effectiveSeed, roadLabel } from '../../shared/runs/road-label.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
-import type { Db } from '../db/database.ts';
+import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../errors.ts';
 import { deleteRunRow, findLibraryRoad, findRevisionForRun, findRunRow, insertRun, listRunRows, type RunSummaryRow, setupExists } from '../repositories/runs.ts';
 import { recordAudit } from './audit.ts';
@@ -74,7 +74,12 @@ export async function getRun(db: Db, ws: WorkspaceContext, runId: string): Promi
  * the request is rebuilt here from that revision, the road and the options, so the stored
  * request reproduces the figures with `npm run sim`.
  */
-export async function saveRun(db: Db, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
+export function saveRun(db: Db, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
+  return db.transaction().execute((trx) => saveRunIn(trx, ws, actor, input, now));
+}
+
+/** `saveRun` inside a transaction the caller holds (the demo seed, which runs in one). */
+export async function saveRunIn(db: Queryable, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
   const revision = await findRevisionForRun(db, ws.workspaceId, input.setupId, input.revisionNumber);
   if (!revision) {
     if (!(await setupExists(db, ws.workspaceId, input.setupId))) return fail('not_found', 'No such setup in this workspace.', [{ path: 'setupId', message: 'No such setup' }]);
@@ -107,38 +112,36 @@ export async function saveRun(db: Db, ws: WorkspaceContext, actor: SessionUser, 
   const seed = effectiveSeed(road, input.seed);
   const { metrics, modal, ...rest } = result;
   const { data: traceData, ...traceInfo } = input.traces;
-  await db.transaction().execute(async (trx) => {
-    await insertRun(trx, {
-      id,
-      workspace_id: ws.workspaceId,
-      setup_id: input.setupId,
-      revision_id: revision.id,
-      road_id: roadId,
-      name: input.name,
-      road: JSON.stringify(road),
-      speed: input.speed,
-      duration: input.duration,
-      seed,
-      request: JSON.stringify(parsed.data),
-      metrics: JSON.stringify(metrics),
-      modal: JSON.stringify(modal),
-      result: JSON.stringify(rest),
-      trace_info: JSON.stringify(traceInfo),
-      traces: Buffer.from(traceData, 'base64'),
-      spectra_length: input.spectra?.length ?? null,
-      spectra: input.spectra ? Buffer.from(input.spectra.data, 'base64') : null,
-      created_by: actor.id,
-      created_at: now.toISOString(),
-    });
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'run.saved',
-      entityType: 'run',
-      entityId: id,
-      summary: `${actor.name} saved the run “${input.name}” of ${revision.setup_name} revision ${revision.number} on ${roadLabel(road, input.seed)}.`,
-      at: now,
-    });
+  await insertRun(db, {
+    id,
+    workspace_id: ws.workspaceId,
+    setup_id: input.setupId,
+    revision_id: revision.id,
+    road_id: roadId,
+    name: input.name,
+    road: JSON.stringify(road),
+    speed: input.speed,
+    duration: input.duration,
+    seed,
+    request: JSON.stringify(parsed.data),
+    metrics: JSON.stringify(metrics),
+    modal: JSON.stringify(modal),
+    result: JSON.stringify(rest),
+    trace_info: JSON.stringify(traceInfo),
+    traces: Buffer.from(traceData, 'base64'),
+    spectra_length: input.spectra?.length ?? null,
+    spectra: input.spectra ? Buffer.from(input.spectra.data, 'base64') : null,
+    created_by: actor.id,
+    created_at: now.toISOString(),
+  });
+  await recordAudit(db, {
+    workspaceId: ws.workspaceId,
+    actorId: actor.id,
+    action: 'run.saved',
+    entityType: 'run',
+    entityId: id,
+    summary: `${actor.name} saved the run “${input.name}” of ${revision.setup_name} revision ${revision.number} on ${roadLabel(road, input.seed)}.`,
+    at: now,
   });
   const saved = await findRunRow(db, ws.workspaceId, id);
   if (!saved) throw new Error(`saved run ${id} is missing`);

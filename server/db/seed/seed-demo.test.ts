@@ -22,5 +22,6 @@ describe('seedDemo', () => {
     expect(new Set(rows.map((r) => r.name))).toEqual(new Set([DEMO_WORKSPACE_NAME]));
     expect(await verifyPassword(DEMO_PASSWORD, rows[0].password_hash)).toBe(true);
     await db.destroy();
-  });
+    // seeding runs simulations (demo saved runs): give it room on a loaded machine
+  }, 30_000);
 });

@@ -1,15 +1,17 @@
 import type { Db } from '../database.ts';
 import { seedDemoPeople } from './demo-people.ts';
 import { seedRoadsDyno } from './roads-dyno.ts';
+import { seedRuns } from './runs.ts';
 import type { SeedStep } from './seed-context.ts';
 import { seedSetups } from './setups.ts';
+import { seedStudies } from './studies.ts';
 import { seedTargetSheets } from './target-sheets.ts';
 
 /**
  * Steps that run after the people exist, in order. A feature adds its demo data as one file in
  * server/db/seed/ exporting a `SeedStep`, and one line here.
  */
-export const seedSteps: SeedStep[] = [seedSetups, seedRoadsDyno, seedTargetSheets];
+export const seedSteps: SeedStep[] = [seedSetups, seedRoadsDyno, seedRuns, seedTargetSheets];
 
 /**
  * Seeds the demo workspace when the database has no users; does nothing otherwise, so it is
