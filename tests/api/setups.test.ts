@@ -155,7 +155,7 @@ describe('setups and their revisions', () => {
     expect(Setup.parse(file)).toEqual(file);
     expect(file).toEqual(parsed(cornerDocument('Brume Pipit front, export', { motionRatio: 0.9 })));
 
-    const imported = SetupDetail.parse((await eng.post(`${setups}/import?corner=front`, file).expect(201)).body);
+    const imported = SetupDetail.parse((await eng.post(`${setups}/import?corner=front`, file as object).expect(201)).body);
     expect(imported.id).not.toBe(created.id);
     expect(imported).toMatchObject({ name: 'Brume Pipit front, export', latestRevision: 1, corner: 'front' });
     expect(imported.revision.source).toBe('import');
