@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { CreateStudyInput, FinishStudyRunInput, OpenPointAsSetupInput, SaveStudyPointsInput, SetStudyBaselineInput } from '../../shared/schemas/study-record.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { HttpError, unwrap } from '../errors.ts';
-import { createStudy, deleteStudy, finishStudyRun, getStudy, listStudies, openPointAsSetup, saveStudyPoints, setStudyBaseline } from '../services/studies.ts';
+import { finishStudyRun, saveStudyPoints, setStudyBaseline } from '../services/study-results.ts';
+import { createStudy, deleteStudy, getStudy, listStudies, openPointAsSetup } from '../services/studies.ts';
 import type { RouteModule } from './registry.ts';
 
 const base = '/api/workspaces/:workspaceId/studies';

@@ -12,6 +12,12 @@ import type { ExpandedStudy, StudyJob } from './expand.ts';
  * its runs are in, and an upload is checked against the jobs the definition expands to.
  */
 
+/** A judged point as the browser saves it: its runs (and why its setup was invalid, if it was); the server judges it again. */
+export function studyPointUpload(p: StudyPointResult): { index: number; runs: StudyRunOutcome[]; setupError?: string } {
+  const setupError = p.violations.find((v) => v.kind === 'setupInvalid')?.message;
+  return { index: p.index, runs: p.runs, ...(setupError ? { setupError } : {}) };
+}
+
 /** Names of the study's roads for tables and limit messages: the entry's name, else the road's own label. */
 export function studyRoadNames(def: Pick<StudyDefinition, 'roads'>, roads: readonly Road[]): string[] {
   return def.roads.map((entry, i) => entry.name ?? (roads[i] ? roadLabel(roads[i], entry.seed) : `road ${i + 1}`));

@@ -11,7 +11,7 @@ import { seedTargetSheets } from './target-sheets.ts';
  * Steps that run after the people exist, in order. A feature adds its demo data as one file in
  * server/db/seed/ exporting a `SeedStep`, and one line here.
  */
-export const seedSteps: SeedStep[] = [seedSetups, seedRoadsDyno, seedRuns, seedTargetSheets];
+export const seedSteps: SeedStep[] = [seedSetups, seedRoadsDyno, seedRuns, seedTargetSheets, seedStudies];
 
 /**
  * Seeds the demo workspace when the database has no users; does nothing otherwise, so it is

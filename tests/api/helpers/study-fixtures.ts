@@ -1,10 +1,10 @@
 import type { StudyDetail, StudyPointUpload } from '../../../shared/schemas/study-record.ts';
 import { StudyDefinition, type StudyDefinitionInput } from '../../../shared/schemas/study.ts';
-import { createPointCollector, studyRoadNames } from '../../../shared/study/collect.ts';
-import { expandStudy } from '../../../shared/study/expand.ts';
-import { createStudyRunner } from '../../../shared/study/run-jobs.ts';
+import { studyPointUpload } from '../../../shared/study/collect.ts';
+import { runStudyHere } from '../../../shared/study/run-all.ts';
 import type { Db } from '../../../server/db/database.ts';
-import { createStudy, finishStudyRun, saveStudyPoints } from '../../../server/services/studies.ts';
+import { finishStudyRun, saveStudyPoints } from '../../../server/services/study-results.ts';
+import { createStudy } from '../../../server/services/studies.ts';
 import { exampleSetup, insertSetup } from './runs.ts';
 
 /** A small 2-D study (2 × 2 points of 4 s on one ISO class C road at 20 m/s) on a setup revision. */
@@ -38,17 +38,8 @@ export function uploadsFor(detail: Pick<StudyDetail, 'definition' | 'baseSetup' 
   const key = JSON.stringify([detail.definition.axes, detail.definition.roads, detail.definition.speeds, detail.definition.duration, detail.baseSetup, detail.roads]);
   const hit = cache.get(key);
   if (hit) return hit;
-  const def = detail.definition;
-  const expanded = expandStudy(def);
-  const runner = createStudyRunner({ base: detail.baseSetup, roads: detail.roads, duration: def.duration, settleTime: def.settleTime });
-  const collector = createPointCollector(def, expanded, studyRoadNames(def, detail.roads));
-  const uploads: StudyPointUpload[] = [];
-  for (const job of [...expanded.jobs, ...expanded.baseJobs]) {
-    const values = job.pointIndex === -1 ? {} : expanded.points[job.pointIndex].values;
-    const out = runner.run({ ...job, values });
-    const point = collector.add(job.pointIndex, out.run, out.setupError);
-    if (point) uploads.push({ index: point.index, runs: point.runs, ...(out.setupError ? { setupError: out.setupError } : {}) });
-  }
+  const { points, base } = runStudyHere(detail.definition, detail.baseSetup, detail.roads);
+  const uploads: StudyPointUpload[] = [...points, ...(base ? [base] : [])].map(studyPointUpload);
   cache.set(key, uploads);
   return uploads;
 }

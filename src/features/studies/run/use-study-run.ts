@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { StudyDetail, StudyPointUpload } from '../../../../shared/schemas/study-record.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
+import { studyPointUpload } from '../../../../shared/study/collect.ts';
 import { isApiError } from '../../../lib/api-client.ts';
 import { finishStudyRun } from '../api/finish-study-run.ts';
 import { saveStudyPoints } from '../api/save-study-points.ts';
@@ -33,10 +34,7 @@ const idle: StudyRunState = { phase: 'idle', progress: null, points: [], base: n
 /** Runs sent per save request while the run goes on. */
 const SLICE_RUNS = 300;
 
-const upload = (p: StudyPointResult): StudyPointUpload => {
-  const setupError = p.violations.find((v) => v.kind === 'setupInvalid')?.message;
-  return { index: p.index, runs: p.runs, ...(setupError ? { setupError } : {}) };
-};
+const upload = (p: StudyPointResult): StudyPointUpload => studyPointUpload(p);
 
 export function useStudyRun(opts: { workspaceId: string; studyId: string; save: boolean; onSaved?: (detail: StudyDetail) => void }) {
   const [state, setState] = useState<StudyRunState>(idle);
