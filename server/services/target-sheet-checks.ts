@@ -88,7 +88,7 @@ export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): 
       return;
     }
     const warnings = [...read.summary.warnings.map((w) => w.message), ...(read.summary.series?.warnings ?? [])];
-    measured.push({ label: labels[i] ?? labelFromFileName(file.filename), fileName: file.filename, peaks: read.summary.peaks, warnings });
+    measured.push({ label: labels[i]?.trim() || labelFromFileName(file.filename), fileName: file.filename, peaks: read.summary.peaks, warnings });
   });
   if (problems.length) {
     const where = (p: (typeof problems)[number]) => `${p.file}${p.line !== undefined ? `, line ${p.line}` : ''}`;

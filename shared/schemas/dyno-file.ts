@@ -12,7 +12,7 @@ import { PersonRef, RevisionMessage } from './setup-record.ts';
 /** Largest dyno file accepted, bytes. */
 export const DYNO_MAX_BYTES = 2 * 1024 * 1024;
 
-const blankToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
+const blankToUndefined = (v: unknown) => (v === null || (typeof v === 'string' && v.trim() === '') ? undefined : v);
 const optional = <T extends z.ZodType>(t: T) => z.preprocess(blankToUndefined, t.optional());
 
 /**
