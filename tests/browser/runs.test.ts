@@ -59,6 +59,8 @@ describe('runs in the browser', () => {
     await runAndWait(page);
     await page.waitForTimeout(300);
     await screenshot(page, 'run-dashboard-1280');
+    await form.screenshot({ path: 'test-results/run-form.png' });
+    await page.getByRole('table', { name: 'Saved runs' }).screenshot({ path: 'test-results/run-saved-list.png' });
 
     const exported = await page.request.get(`/api/workspaces/${workspaceId}/setups/${setupId}/revisions/${revision}/export`);
     expect(exported.ok()).toBe(true);

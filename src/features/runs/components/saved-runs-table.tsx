@@ -13,13 +13,11 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
       <THead>
         <tr>
           <Th>Run</Th>
-          <Th>Setup</Th>
-          <Th>Road</Th>
           <Th numeric>Speed</Th>
-          <Th numeric>aw</Th>
-          <Th numeric>Load var.</Th>
+          <Th numeric title="Wk-weighted RMS body acceleration">aw</Th>
+          <Th numeric title="Tyre load RMS over static load">Load var.</Th>
           <Th numeric>Lift-off</Th>
-          <Th numeric>Body</Th>
+          <Th numeric>Body mode</Th>
           <Th>Saved</Th>
           {canDelete && <Th className="w-px" />}
         </tr>
@@ -27,22 +25,18 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
       <TBody>
         {runs.map((run) => (
           <Tr key={run.id}>
-            <Td>
+            <Td className="py-1.5">
               <Link to={`/w/${workspaceId}/runs/${run.id}`} className="font-medium text-accent hover:underline">
                 {run.name}
               </Link>
-            </Td>
-            <Td>
-              <span className="whitespace-nowrap">
-                {run.setupName} <span className="figures text-ink-soft">r{run.revisionNumber}</span>
-              </span>
-              {run.latestRevision > run.revisionNumber && (
-                <span className="ml-1.5">
-                  <Tag tone="signal">now r{run.latestRevision}</Tag>
+              <span className="mt-0.5 flex flex-wrap items-center gap-x-1.5 text-xs text-ink-soft">
+                <span>
+                  {run.setupName} <span className="figures">r{run.revisionNumber}</span>
                 </span>
-              )}
+                {run.latestRevision > run.revisionNumber && <Tag tone="signal">setup now at r{run.latestRevision}</Tag>}
+                <span className="text-ink-faint">· {run.roadName}</span>
+              </span>
             </Td>
-            <Td className="text-ink-soft">{run.roadName}</Td>
             <Td numeric>
               <Figure value={run.speed} unit="kmph" label="speed" />
             </Td>
@@ -58,8 +52,9 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
             <Td numeric>
               <Figure value={run.headline.bodyHz} unit="Hz" label="body frequency" />
             </Td>
-            <Td className="whitespace-nowrap text-ink-soft">
-              {formatDateTime(run.createdAt)} · {run.createdBy.name}
+            <Td className="text-xs whitespace-nowrap text-ink-soft">
+              <span className="figures block">{formatDateTime(run.createdAt)}</span>
+              {run.createdBy.name}
             </Td>
             {canDelete && (
               <Td>

@@ -34,13 +34,17 @@ export function ScenarioFields({ draft, onChange, errors, libraryRoads, libraryU
             )}
           </Select>
         </Field>
-        <Field label="Speed" error={errors.speed} className="w-44 shrink-0">
+        <Field label="Speed" error={errors.speed} className="w-48 shrink-0">
           <div className="flex">
-            <Input inputMode="decimal" className="rounded-r-none" aria-label="Speed value" value={draft.speed} onChange={(e) => set({ speed: e.target.value })} />
-            <Select aria-label="Speed unit" className="w-[5.6rem] shrink-0 rounded-l-none border-l-0" value={draft.speedUnit} onChange={(e) => set({ speedUnit: e.target.value as 'kmh' | 'mps' })}>
-              <option value="kmh">km/h</option>
-              <option value="mps">m/s</option>
-            </Select>
+            <div className="min-w-0 flex-1">
+              <Input inputMode="decimal" className="rounded-r-none" aria-label="Speed value" value={draft.speed} onChange={(e) => set({ speed: e.target.value })} />
+            </div>
+            <div className="w-[6.2rem] shrink-0">
+              <Select aria-label="Speed unit" className="rounded-l-none border-l-0" value={draft.speedUnit} onChange={(e) => set({ speedUnit: e.target.value as 'kmh' | 'mps' })}>
+                <option value="kmh">km/h</option>
+                <option value="mps">m/s</option>
+              </Select>
+            </div>
           </div>
         </Field>
         <Field label="Duration, s" error={errors.duration} className="w-24 shrink-0">

@@ -61,7 +61,7 @@ export function ComparePicker({ entries, onChange, setups, runs }: ComparePicker
               ))}
             </Select>
           </Field>
-          <Field label="Revision" className="w-28">
+          <Field label="Revision" className="w-36">
             <Select value={revision || String(chosenSetup?.latestRevision ?? '')} onChange={(e) => setRevision(e.target.value)}>
               {chosenSetup &&
                 Array.from({ length: chosenSetup.latestRevision }, (_, i) => chosenSetup.latestRevision - i).map((n) => (
