@@ -34,7 +34,11 @@ export function RunForm({ workspaceId, initialSetupId, initialRevision, running,
 
   const live = setups.data?.setups ?? [];
   useEffect(() => {
-    if (!setupId && live.length > 0) setSetupId(live[0].id);
+    // no choice yet, or a link named a setup that is not (or no longer) here: take the first
+    if (live.length > 0 && !live.some((s) => s.id === setupId)) {
+      setSetupId(live[0].id);
+      setRevision(undefined);
+    }
   }, [setupId, live]);
   const chosen = live.find((s) => s.id === setupId);
   const revisions = useRevisionChoices(workspaceId, chosen?.id);
