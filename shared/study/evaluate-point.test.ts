@@ -1,44 +1,69 @@
 import { describe, expect, it } from 'vitest';
-import { StudyPointResult } from '../schemas/study-result.ts';
+import type { StudyRunOutcome } from '../schemas/study-result.ts';
+import { aggregateFigures } from './aggregate.ts';
 import { evaluatePoint } from './evaluate-point.ts';
+
+const run = (roadIndex: number, speed: number, f: Partial<Record<'bodyAccelWkRms' | 'tyreLoadMin' | 'strokeUsed' | 'liftOffFraction', number>> | null, error?: string): StudyRunOutcome => ({
+  roadIndex,
+  speed,
+  figures: f,
+  ...(error ? { error } : {}),
+});
 
 const def = {
   aggregate: 'mean' as const,
-  objectives: [{ figure: 'bodyAccelWkRms' as const, weight: 1 }, { figure: 'strokeUsed' as const, weight: 0 }],
-  constraints: { maxStrokeUsed: 0.9, maxLiftOffFraction: 0.01, minTyreLoad: 500 },
+  objectives: [
+    { figure: 'bodyAccelWkRms' as const, weight: 1 },
+    { figure: 'tyreLoadMin' as const, weight: 1 },
+  ],
+  constraints: { maxStrokeUsed: 0.9, maxLiftOffFraction: 0.01, minTyreLoad: 300 },
 };
-const good = { bodyAccelWkRms: 0.5, strokeUsed: 0.6, liftOffFraction: 0, tyreLoadMin: 1800 };
+
+describe('aggregating a point over roads and speeds', () => {
+  it('mean averages each figure; worst takes the highest, or the lowest for higher-is-better figures', () => {
+    const runs = [{ bodyAccelWkRms: 1, tyreLoadMin: 500 }, { bodyAccelWkRms: 2, tyreLoadMin: 200 }];
+    expect(aggregateFigures(runs, 'mean')).toEqual({ bodyAccelWkRms: 1.5, tyreLoadMin: 350 });
+    expect(aggregateFigures(runs, 'worst')).toEqual({ bodyAccelWkRms: 2, tyreLoadMin: 200 });
+  });
+
+  it('keeps a figure only when every run has it', () => {
+    expect(aggregateFigures([{ bodyAccelWkRms: 1, strokeUsed: 0.5 }, { bodyAccelWkRms: 3 }], 'mean')).toEqual({ bodyAccelWkRms: 2 });
+    expect(aggregateFigures([], 'mean')).toEqual({});
+  });
+});
 
 describe('evaluatePoint', () => {
-  it('aggregates figures, lists objectives in order, and is feasible when every run meets every limit', () => {
-    const r = evaluatePoint(def, { index: 3, values: { damperScale: 1.1 } }, [
-      { roadIndex: 0, speed: 20, figures: good },
-      { roadIndex: 1, speed: 20, figures: { ...good, bodyAccelWkRms: 0.7, strokeUsed: 0.8 } },
-    ]);
-    expect(StudyPointResult.safeParse(r).success).toBe(true);
-    expect(r.objectives[0]).toBeCloseTo(0.6, 12);
-    expect(r.objectives[1]).toBeCloseTo(0.7, 12);
-    expect(r).toMatchObject({ index: 3, feasible: true, violations: [] });
+  it('a point within every limit on every run is feasible, with objectives in the definition’s order', () => {
+    const p = evaluatePoint(def, { index: 4, values: { damperScale: 1.2 } }, [run(0, 20, { bodyAccelWkRms: 1, tyreLoadMin: 500, strokeUsed: 0.5, liftOffFraction: 0 }), run(1, 20, { bodyAccelWkRms: 2, tyreLoadMin: 400, strokeUsed: 0.6, liftOffFraction: 0 })]);
+    expect(p).toMatchObject({ index: 4, feasible: true, violations: [], objectives: [1.5, 450] });
   });
 
-  it('fails a point on any one run breaking a limit, even when the mean would pass', () => {
-    const r = evaluatePoint(def, { index: 0, values: {} }, [
-      { roadIndex: 0, speed: 20, figures: good },
-      { roadIndex: 1, speed: 30, figures: { ...good, strokeUsed: 0.95, liftOffFraction: 0.02, tyreLoadMin: 0 } },
+  it('judges limits run by run, even when the mean would pass', () => {
+    const p = evaluatePoint(def, { index: 0, values: {} }, [run(0, 20, { bodyAccelWkRms: 1, tyreLoadMin: 900, strokeUsed: 0.95, liftOffFraction: 0 }), run(1, 30, { bodyAccelWkRms: 1, tyreLoadMin: 100, strokeUsed: 0.1, liftOffFraction: 0.02 })], {
+      roadName: (i) => ['town', 'motorway'][i],
+    });
+    expect(p.feasible).toBe(false);
+    expect(p.violations.map((v) => [v.kind, v.roadIndex, v.speed])).toEqual([
+      ['maxStrokeUsed', 0, 20],
+      ['maxLiftOffFraction', 1, 30],
+      ['minTyreLoad', 1, 30],
     ]);
-    expect(r.figures.strokeUsed).toBeCloseTo(0.775, 12);
-    expect(r.feasible).toBe(false);
-    expect(r.violations.map((v) => v.kind)).toEqual(['maxStrokeUsed', 'maxLiftOffFraction', 'minTyreLoad']);
-    expect(r.violations[0]).toMatchObject({ limit: 0.9, value: 0.95, roadIndex: 1, speed: 30, message: 'uses 95.0 % of the stroke on road 2 at 30 m/s (limit 90.0 %)' });
+    expect(p.violations[0].message).toBe('uses 95.0 % of the stroke on town at 20 m/s (limit 90.0 %)');
+    expect(p.figures.tyreLoadMin).toBe(500);
   });
 
-  it('fails a limit it cannot check, a failed run and an invalid setup, with reasons', () => {
-    const noStroke = evaluatePoint(def, { index: 0, values: {} }, [{ roadIndex: 0, speed: 20, figures: { bodyAccelWkRms: 0.5 } }]);
-    expect(noStroke.violations[0].kind).toBe('notCheckable');
-    const failed = evaluatePoint(def, { index: 0, values: {} }, [{ roadIndex: 0, speed: 20, figures: null, error: 'integration gave up' }], { roadName: () => 'ISO C' });
-    expect(failed.violations[0].message).toBe('the run on ISO C at 20 m/s failed: integration gave up');
-    expect(failed.objectives).toEqual([null, null]);
-    const invalid = evaluatePoint(def, { index: 0, values: {} }, [], { setupError: 'springRate: too big' });
-    expect(invalid).toMatchObject({ feasible: false, violations: [{ kind: 'setupInvalid', message: 'springRate: too big' }] });
+  it('a stroke limit without a stroke in the setup fails as not checkable, and a failed run makes the point infeasible', () => {
+    const noStroke = evaluatePoint(def, { index: 0, values: {} }, [run(0, 20, { bodyAccelWkRms: 1, tyreLoadMin: 900, liftOffFraction: 0 })]);
+    expect(noStroke.violations.map((v) => v.kind)).toEqual(['notCheckable']);
+    const failed = evaluatePoint(def, { index: 1, values: {} }, [run(0, 20, { bodyAccelWkRms: 1, tyreLoadMin: 900, strokeUsed: 0.2, liftOffFraction: 0 }), run(1, 20, null, 'the motion diverged')]);
+    expect(failed.feasible).toBe(false);
+    expect(failed.violations[0]).toMatchObject({ kind: 'runFailed', message: 'the run on road 2 at 20 m/s failed: the motion diverged' });
+    // figures come from the runs that worked
+    expect(failed.figures.bodyAccelWkRms).toBe(1);
+  });
+
+  it('a setup the swept values could not make is infeasible with that reason', () => {
+    const p = evaluatePoint(def, { index: 2, values: { gasForce: 9e4 } }, [run(0, 20, null, 'damper.gas: too much')], { setupError: 'damper.gas: too much' });
+    expect(p).toMatchObject({ feasible: false, violations: [{ kind: 'setupInvalid', message: 'damper.gas: too much' }], objectives: [null, null] });
   });
 });

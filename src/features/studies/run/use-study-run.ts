@@ -33,6 +33,8 @@ const idle: StudyRunState = { phase: 'idle', progress: null, points: [], base: n
 
 /** Runs sent per save request while the run goes on. */
 const SLICE_RUNS = 300;
+/** Shortest time between two repaints of a running study, ms. */
+const PAINT_MS = 120;
 
 const upload = (p: StudyPointResult): StudyPointUpload => studyPointUpload(p);
 
@@ -83,6 +85,13 @@ export function useStudyRun(opts: { workspaceId: string; studyId: string; save: 
     };
 
     setState({ ...idle, phase: 'running', saving: save });
+    let latest: StudyProgress | null = null;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const paint = () => {
+      timer = undefined;
+      const progress = latest;
+      setState((s) => ({ ...s, progress, points: finished.slice(), base }));
+    };
     const h = startStudyRun(input, {
       onPoints: (points) => {
         for (const p of points) {
@@ -93,12 +102,19 @@ export function useStudyRun(opts: { workspaceId: string; studyId: string; save: 
         }
         if (pendingRuns >= SLICE_RUNS) flush();
       },
-      onProgress: (progress) => setState((s) => ({ ...s, progress, points: finished.slice(), base })),
+      onProgress: (progress) => {
+        latest = progress;
+        // Repaint at most every PAINT_MS: the charts and table redraw with each paint, and the
+        // main thread must stay free for the page (the run itself is in the workers).
+        if (timer === undefined) timer = setTimeout(paint, PAINT_MS);
+      },
     });
     handle.current = h;
 
     void h.done.then(async (end) => {
       handle.current = null;
+      if (timer !== undefined) clearTimeout(timer);
+      paint();
       if (!save) {
         setState((s) => ({ ...s, phase: 'finished', end, points: end.points, base: end.base }));
         return;
