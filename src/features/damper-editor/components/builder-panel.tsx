@@ -18,10 +18,10 @@ function guess(curve: DamperCurve): Texts {
   return { lowSpeedSlope: round(low), kneeVelocity: String(KNEE_GUESS), highSpeedSlope: round(high), shape: 'digressive' };
 }
 
-const shapeWords: Record<DamperShape, string> = {
-  digressive: 'digressive (slope falls above the knee)',
-  linear: 'linear above the knee',
-  progressive: 'progressive (slope grows above the knee)',
+const shapeHints: Record<DamperShape, string> = {
+  digressive: 'slope falls above the knee',
+  linear: 'slope holds above the knee',
+  progressive: 'slope grows above the knee',
 };
 
 /**
@@ -53,11 +53,11 @@ export function BuilderPanel({ direction, damper, onFill }: { direction: Directi
         <Field label="High-speed slope [N·s/m]" error={errorOf('highSpeedSlope')}>
           <Input inputMode="decimal" className="figures text-right" value={texts.highSpeedSlope} onChange={set('highSpeedSlope')} />
         </Field>
-        <Field label="Shape above the knee">
+        <Field label="Shape" hint={shapeHints[texts.shape]}>
           <Select value={texts.shape} onChange={set('shape')}>
             {damperShapes.map((s) => (
               <option key={s} value={s}>
-                {shapeWords[s]}
+                {s}
               </option>
             ))}
           </Select>

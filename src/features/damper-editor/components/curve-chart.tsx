@@ -28,7 +28,26 @@ interface Handle {
  * down (or focus it and use the arrow keys) to change that point's force. The force is held
  * between its neighbours' so the curve stays valid while it moves.
  */
-export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 'compression' | 'rebound'>; readOnly?: boolean; onMove: (m: PointMove) => void }) {
+/** Velocity ranges offered for the chart: the whole table, or a closer look at low speeds (m/s). */
+export const chartSpans = [
+  { value: 0, label: 'all speeds' },
+  { value: 0.6, label: '±0.6 m/s' },
+  { value: 0.3, label: '±0.3 m/s' },
+  { value: 0.15, label: '±0.15 m/s' },
+] as const;
+
+export function CurveChart({
+  damper,
+  readOnly,
+  span = 0,
+  onMove,
+}: {
+  damper: Pick<Damper, 'compression' | 'rebound'>;
+  readOnly?: boolean;
+  /** Half-width of the velocity range shown, m/s; 0 shows the whole table. */
+  span?: number;
+  onMove: (m: PointMove) => void;
+}) {
   const theme = useChartTheme();
   const wrapRef = useRef<HTMLDivElement>(null);
   const chartRef = useRef<uPlot | null>(null);
@@ -49,8 +68,10 @@ export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 
     for (const direction of ['compression', 'rebound'] as const) {
       const sign = direction === 'compression' ? 1 : -1;
       damperRef.current[direction].forEach(([v, f], row) => {
-        if (v === 0) return;
-        next.push({ direction, row, velocity: v, force: f, left: o.left - w.left + u.valToPos(sign * v, 'x'), top: o.top - w.top + u.valToPos(sign * f, 'y') });
+        const x = u.valToPos(sign * v, 'x');
+        // points off the shown velocity range get no handle
+        if (v === 0 || x < -1 || x > o.width + 1) return;
+        next.push({ direction, row, velocity: v, force: f, left: o.left - w.left + x, top: o.top - w.top + u.valToPos(sign * f, 'y') });
       });
     }
     setHandles(next);
@@ -59,7 +80,7 @@ export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 
   const options = useMemo<ChartOptions>(
     () => ({
       height: 300,
-      scales: { x: linearX },
+      scales: { x: span > 0 ? { ...linearX, range: () => [-span, span] } : linearX },
       axes: [themedAxis(theme, { label: 'Piston velocity, signed: compression +, rebound −', unit: 'm/s' }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 64 })],
       series: [
         { label: 'Velocity', value: (_u, v) => (v == null ? '–' : `${v.toFixed(3)} m/s`) },
@@ -69,7 +90,7 @@ export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 
       cursor: { drag: { x: false, y: false }, points: { size: 7 } },
       hooks: { draw: [(u) => placeHandles(u)] },
     }),
-    [theme, placeHandles],
+    [theme, placeHandles, span],
   );
 
   const forceAt = (clientY: number): number | undefined => {
@@ -92,16 +113,37 @@ export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 
     onMove({ direction, row, force: clampForce(direction, row, sign * signedForce) });
   };
 
-  const onPointerDown = (h: Handle) => (e: PointerEvent<HTMLButtonElement>) => {
+  /**
+   * Handles sit close together at low speed, so a press takes the handle whose centre is nearest
+   * the pointer, not merely the one on top.
+   */
+  const nearest = (clientX: number, clientY: number): Handle | undefined => {
+    const wrap = wrapRef.current?.getBoundingClientRect();
+    if (!wrap) return undefined;
+    let best: Handle | undefined;
+    let bestD = Number.POSITIVE_INFINITY;
+    for (const h of handles) {
+      const d = (h.left + wrap.left - clientX) ** 2 + (h.top + wrap.top - clientY) ** 2;
+      if (d < bestD) {
+        bestD = d;
+        best = h;
+      }
+    }
+    return best;
+  };
+
+  const onPointerDown = (e: PointerEvent<HTMLButtonElement>) => {
     if (readOnly) return;
+    const h = nearest(e.clientX, e.clientY);
+    if (!h) return;
     e.currentTarget.setPointerCapture(e.pointerId);
     e.preventDefault();
     setDragging({ direction: h.direction, row: h.row });
   };
-  const onPointerMove = (h: Handle) => (e: PointerEvent<HTMLButtonElement>) => {
-    if (!dragging || dragging.direction !== h.direction || dragging.row !== h.row) return;
+  const onPointerMove = (e: PointerEvent<HTMLButtonElement>) => {
+    if (!dragging) return;
     const f = forceAt(e.clientY);
-    if (f !== undefined) move(h.direction, h.row, f);
+    if (f !== undefined) move(dragging.direction, dragging.row, f);
   };
   const endDrag = () => {
     if (!dragging) return;
@@ -127,10 +169,10 @@ export function CurveChart({ damper, readOnly, onMove }: { damper: Pick<Damper, 
           disabled={readOnly}
           aria-label={`${h.direction} point ${h.row + 1}: ${h.velocity} m/s, ${h.force} N${readOnly ? '' : '; drag or use the arrow keys to change the force'}`}
           data-handle={`${h.direction}-${h.row}`}
-          className={`absolute z-10 -ml-2 -mt-2 size-4 rounded-full border-2 bg-paper-raised/60 outline-offset-1 ${readOnly ? 'pointer-events-none opacity-0' : 'cursor-ns-resize hover:bg-white'} ${dragging?.direction === h.direction && dragging.row === h.row ? 'ring-2 ring-accent' : ''}`}
+          className={`absolute z-10 -ml-1.5 -mt-1.5 size-3 rounded-full border-2 bg-paper-raised/60 outline-offset-1 ${readOnly ? 'pointer-events-none opacity-0' : 'cursor-ns-resize hover:bg-white'} ${dragging?.direction === h.direction && dragging.row === h.row ? 'ring-2 ring-accent' : ''}`}
           style={{ left: h.left, top: h.top, borderColor: h.direction === 'compression' ? seriesColor(theme, 0) : seriesColor(theme, 1), touchAction: 'none' }}
-          onPointerDown={onPointerDown(h)}
-          onPointerMove={onPointerMove(h)}
+          onPointerDown={onPointerDown}
+          onPointerMove={onPointerMove}
           onPointerUp={endDrag}
           onPointerCancel={endDrag}
           onKeyDown={onKeyDown(h)}

@@ -4,7 +4,7 @@ import { Notice } from '../../../components/ui/notice.tsx';
 import { type DraftCurves, type DraftRow, type Direction, directions, draftFromCurve, draftFromDamper, draftMatches, readDraft, cellText } from '../model/draft.ts';
 import { type CornerContext, dampingFigures } from '../model/figures.ts';
 import { BuilderPanel } from './builder-panel.tsx';
-import { CurveChart, type PointMove } from './curve-chart.tsx';
+import { chartSpans, CurveChart, type PointMove } from './curve-chart.tsx';
 import { DampingFiguresPanel } from './damping-figures.tsx';
 import { GasEntry } from './gas-entry.tsx';
 import { PointsTable } from './points-table.tsx';
@@ -28,6 +28,7 @@ export interface DamperCurveEditorProps extends CornerContext {
 export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner }: DamperCurveEditorProps) {
   const [draft, setDraft] = useState<DraftCurves>(() => draftFromDamper(value));
   const [seededFrom, setSeededFrom] = useState(value);
+  const [span, setSpan] = useState(0);
   // A new value from outside (restore, load, builder through the parent) re-seeds the tables,
   // unless it is just our own last change echoed back.
   let shown = draft;
@@ -64,22 +65,33 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner
   };
 
   return (
-    <div className="grid gap-4" data-testid="damper-curve-editor">
-      <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_17rem]">
-        <div className="min-w-0 rounded border border-rule bg-paper-raised px-3 pt-2 pb-1">
-          <h3 className="text-sm font-semibold text-ink">Force against piston velocity</h3>
-          <p className="text-2xs text-ink-faint">
-            Signed velocity: compression to the right with positive force, rebound to the left with negative force. {readOnly ? '' : 'Drag a point up or down to change its force.'}
-          </p>
-          <CurveChart damper={value} readOnly={readOnly} onMove={moveTo} />
+    <div className="@container grid gap-4" data-testid="damper-curve-editor">
+      <div className="min-w-0 rounded border border-rule bg-paper-raised px-3 pt-2 pb-1">
+        <div className="flex items-start justify-between gap-3 pr-20">
+          <div className="min-w-0">
+            <h3 className="text-sm font-semibold text-ink">Force against piston velocity</h3>
+            <p className="text-2xs text-ink-faint">
+              Signed velocity: compression to the right with positive force, rebound to the left with negative force. {readOnly ? '' : 'Drag a point up or down to change its force.'}
+            </p>
+          </div>
+          <select aria-label="Velocity range shown" value={span} onChange={(e) => setSpan(Number(e.target.value))} className="h-6 shrink-0 rounded border border-rule bg-paper-raised px-1 text-xs text-ink-soft">
+            {chartSpans.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
+          </select>
         </div>
-        <DampingFiguresPanel figures={figures} motionRatio={corner.motionRatio} />
+        <CurveChart damper={value} readOnly={readOnly} span={span} onMove={moveTo} />
       </div>
 
-      <div className="flex flex-wrap gap-x-10 gap-y-4">
+      <div className="grid items-start gap-x-6 gap-y-4 @2xl:grid-cols-[auto_auto_minmax(0,1fr)] @lg:grid-cols-2">
         {directions.map((d) => (
           <PointsTable key={d} direction={d} rows={shown[d]} errors={read.errors[d]} readOnly={readOnly} onChange={(rows) => editRows(d, rows)} />
         ))}
+        <div className="@lg:col-span-2 @2xl:col-span-1">
+          <DampingFiguresPanel figures={figures} motionRatio={corner.motionRatio} />
+        </div>
       </div>
       {!read.ok && (read.general.length > 0 || directions.some((d) => read.errors[d].some((e) => e.velocity || e.force))) && (
         <Notice tone="signal">

@@ -2,7 +2,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { type CellErrors, type Direction, type DraftRow, emptyRow } from '../model/draft.ts';
 
 const cellClass = (bad: boolean) =>
-  `figures h-8 w-24 rounded border bg-paper-raised px-2 text-right text-sm ${bad ? 'border-danger' : 'border-rule-strong'} focus-visible:border-accent disabled:bg-transparent disabled:border-transparent`;
+  `figures h-7 w-20 rounded border bg-paper-raised px-2 text-right text-sm ${bad ? 'border-danger' : 'border-rule-strong'} focus-visible:border-accent disabled:bg-transparent disabled:border-transparent`;
 
 /**
  * One direction's points, cell by cell: piston velocity (m/s) and force (N) at the damper, both
@@ -65,7 +65,7 @@ export function PointsTable({
                   />
                 </td>
                 <td className="py-0.5 pl-1">
-                  <div className="flex items-start gap-1">
+                  <div className="flex items-start gap-0.5">
                     {!readOnly && (
                       <>
                         <Button size="sm" variant="quiet" aria-label={`Add a ${direction} point after point ${i + 1}`} onClick={() => onChange([...rows.slice(0, i + 1), emptyRow(row), ...rows.slice(i + 1)])}>

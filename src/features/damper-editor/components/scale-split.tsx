@@ -33,7 +33,7 @@ export function ScaleSplit({ damper, currentSplit, onChange }: { damper: Damper;
         </Button>
       </div>
       <div className="flex items-end gap-2">
-        <Field label="Rebound ÷ compression" hint={`now ${formatSig(currentSplit, 3)}`} error={r === undefined ? 'a ratio above 0, at most 20' : undefined}>
+        <Field label={`Rebound ÷ compression (now ${formatSig(currentSplit, 3)})`} error={r === undefined ? 'a ratio above 0, at most 20' : undefined}>
           <Input inputMode="decimal" className="figures w-24 text-right" value={ratio} onChange={(e) => setRatio(e.target.value)} />
         </Field>
         <Button size="md" variant="secondary" disabled={r === undefined} onClick={() => r !== undefined && apply(splitDamper(damper, r))}>

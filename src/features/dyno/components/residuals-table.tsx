@@ -4,9 +4,16 @@ import { formatSig } from '../../../lib/format.ts';
 
 /** How far each measured point sits from the fitted table, in N and in % of the measured force. */
 export function ResidualsTable({ direction, fit }: { direction: 'compression' | 'rebound'; fit: DynoDirectionFit }) {
-  if (!fit.ok) return <p className="text-sm text-danger">{fit.message}</p>;
+  if (!fit.ok) {
+    return (
+      <p className="text-sm text-danger" role="alert">
+        {direction}: {fit.message}
+      </p>
+    );
+  }
   return (
     <div className="grid gap-1">
+      <h4 className="text-sm font-semibold text-ink">{direction === 'compression' ? 'Compression' : 'Rebound'}</h4>
       <Table caption={`${direction === 'compression' ? 'Compression' : 'Rebound'} residuals`}>
         <THead>
           <tr>

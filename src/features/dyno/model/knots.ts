@@ -1,6 +1,12 @@
 import type { DynoPeakPoints } from '../../../../shared/schemas/dyno.ts';
 import { suggestFitKnots } from '../../../../shared/dyno/fit-curve.ts';
-import { DEFAULT_TABLE_VELOCITIES } from '../../../../shared/sim/damper-builder.ts';
+
+/**
+ * Speeds offered for a first fit, m/s: a coarser spread than most dyno programmes, so the
+ * residuals say something about the fitted table between its points (common table speeds; no
+ * standard).
+ */
+export const FIT_SPREAD = [0.05, 0.1, 0.2, 0.3, 0.5, 1.0] as const;
 
 /** Fit speeds typed as a list in m/s ("0.05, 0.1, 0.2"): rising, above 0, at most 20. */
 export function readKnots(text: string): { ok: true; knots: number[] } | { ok: false; message: string } {
@@ -23,7 +29,7 @@ export function readKnots(text: string): { ok: true; knots: number[] } | { ok: f
 /** Suggested fit speeds covering both directions' measured points (the builder's table speeds kept in range). */
 export function suggestKnots(peaks: DynoPeakPoints): number[] {
   const all = [...peaks.compression, ...peaks.rebound];
-  const both = suggestFitKnots(all, DEFAULT_TABLE_VELOCITIES);
+  const both = suggestFitKnots(all, FIT_SPREAD);
   // keep only speeds each direction can fix, so one list serves both
   const c = new Set(suggestFitKnots(peaks.compression, both));
   const r = new Set(suggestFitKnots(peaks.rebound, both));
