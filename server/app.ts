@@ -6,6 +6,7 @@ import { requireCsrf } from './auth/csrf.ts';
 import { loadSession } from './auth/require-user.ts';
 import { type AppDeps, type AppOptions, resolveDeps } from './deps.ts';
 import { errorHandler, sendError } from './errors.ts';
+import { redactUrl } from './middleware/redact-url.ts';
 import { allRoutes } from './routes/all-routes.ts';
 import { buildApiRouter, type RouteDef } from './routes/registry.ts';
 import { mountStaticClient } from './static-client.ts';
@@ -61,7 +62,7 @@ export function createApp(options: AppOptions): App {
       autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
       // One short line per API request; headers (cookies!) stay out of the log.
       serializers: {
-        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: redactUrl(req.url) }),
         res: (res: { statusCode: number }) => ({ status: res.statusCode }),
       },
     }),

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';
 import { type ErrorBody, type ErrorCode, type FieldIssue, statusOf } from '../shared/errors.ts';
+import { redactUrl } from './middleware/redact-url.ts';
 import type { Failure, Outcome } from './services/outcome.ts';
 
 /** An error with an HTTP status and a shared error code; thrown by routes, answered by `errorHandler`. */
@@ -57,7 +58,7 @@ function clientErrorCode(err: unknown): ErrorCode | undefined {
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (res.headersSent) {
-      logger.error({ err, url: req.originalUrl }, 'error after response started');
+      logger.error({ err, url: redactUrl(req.originalUrl) }, 'error after response started');
       res.end();
       return;
     }
@@ -70,7 +71,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (err instanceof URIError) return sendError(res, 'bad_request', 'A part of the address is not valid percent-encoding.');
     const clientCode = clientErrorCode(err);
     if (clientCode) return sendError(res, clientCode, `The request was refused: ${String((err as Error).message).slice(0, 200)}`);
-    logger.error({ err, url: req.originalUrl, method: req.method }, 'unhandled error');
+    logger.error({ err, url: redactUrl(req.originalUrl), method: req.method }, 'unhandled error');
     sendError(res, 'internal', 'Something went wrong on the server.');
   };
 }

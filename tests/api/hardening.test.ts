@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import pino from 'pino';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
@@ -205,6 +206,24 @@ describe('session cookies', () => {
     await withApp({ trustProxy: false }, async (t) => {
       const { session } = await signInCookies(t, { 'X-Forwarded-Proto': 'https' });
       expect(session).not.toMatch(/Secure/i);
+    });
+  });
+});
+
+describe('request logs', () => {
+  it('never hold a share-link or invitation token', async () => {
+    const lines: string[] = [];
+    const logger = pino({ level: 'info' }, { write: (line: string) => void lines.push(line) });
+    await withApp({ logger }, async (t) => {
+      const token = 'S'.repeat(43);
+      await request(t.url).get(`/api/shared/${token}`).expect(404);
+      await request(t.url).get(`/api/invitations/${token}?x=1`);
+      await request(t.url).post(`/api/invitations/${token}/accept`).set(anonymousHeaders()).send({});
+      await request(t.url).get(`/api/shared/${token}%E0%A4%A`).expect(400);
+      const log = lines.join('');
+      expect(log).toContain('/api/shared/[token]');
+      expect(log).toContain('/api/invitations/[token]');
+      expect(log).not.toContain(token);
     });
   });
 });
