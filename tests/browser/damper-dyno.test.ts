@@ -154,6 +154,19 @@ describe('road library', () => {
     await page.getByRole('figure', { name: 'Road profile' }).locator('canvas').waitFor();
     await page.getByRole('figure', { name: 'Road displacement PSD against ISO 8608 classes' }).locator('canvas').waitFor();
     await screenshot(page, 'road-detail-measured-1280');
+
+    // a new kerb, previewed while it is typed, saved and opened
+    await openSection(page, 'Roads');
+    await page.getByRole('button', { name: 'Add a road' }).click();
+    await page.getByLabel('Kind of road').selectOption('kerb');
+    const form = page.getByRole('form', { name: 'Save road: road fields' });
+    await form.getByLabel('Name').fill('Browser kerb, 60 mm up');
+    await form.getByLabel('Step (up +, down −) [mm]').fill('60');
+    await page.getByRole('figure', { name: 'Road profile' }).locator('canvas').waitFor();
+    await screenshot(page, 'road-new-kerb-1280');
+    await form.getByRole('button', { name: 'Save road' }).click();
+    await page.getByRole('heading', { name: 'Browser kerb, 60 mm up' }).waitFor();
+    expect(await page.getByText('Kerb step · changed').count()).toBe(1);
     await context.close();
   });
 });

@@ -32,5 +32,6 @@ describe('demo roads and dyno file', () => {
     expect(files.value.files).toHaveLength(1);
     expect(files.value.files[0].summary.peaks.compression.length).toBeGreaterThan(5);
     await db.destroy();
-  });
+    // the whole demo seed runs here (every feature's step), which takes a few seconds on a busy machine
+  }, 60_000);
 });

@@ -2,7 +2,8 @@ import { useCallback, useState } from 'react';
 import { useNavigate } from 'react-router';
 import type { RoadListItem } from '../../../shared/schemas/road-record.ts';
 import { roadKinds } from '../../../shared/schemas/road-record.ts';
-import type { Road, RoadKind } from '../../../shared/schemas/road.ts';
+import { Road as RoadSchema, type Road, type RoadKind } from '../../../shared/schemas/road.ts';
+import { candidateOf, defaultRoads } from '../../features/roads/model/road-fields.ts';
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
 import { Field, Select } from '../../components/ui/field.tsx';
@@ -19,13 +20,19 @@ import { RoadsTable } from '../../features/roads/components/roads-table.tsx';
 import { isApiError } from '../../lib/api-client.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
+/** The preview shown before anything is typed: the kind's starting values. */
+function defaultDraft(kind: Exclude<RoadKind, 'measured'>): Road | null {
+  const parsed = RoadSchema.safeParse(candidateOf(kind, defaultRoads[kind]));
+  return parsed.success ? parsed.data : null;
+}
+
 type Adding = null | { kind: Exclude<RoadKind, 'measured'> } | { kind: 'measured' };
 
 function NewRoad({ workspaceId, onDone }: { workspaceId: string; onDone: (roadId?: string) => void }) {
   const navigate = useNavigate();
   const create = useCreateRoad(workspaceId);
   const [adding, setAdding] = useState<Adding>({ kind: 'iso8608' });
-  const [draft, setDraft] = useState<Road | null>(null);
+  const [draft, setDraft] = useState<Road | null>(() => defaultDraft('iso8608'));
   const open = (roadId: string) => navigate(`/w/${workspaceId}/roads/${roadId}`);
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
@@ -34,8 +41,9 @@ function NewRoad({ workspaceId, onDone }: { workspaceId: string; onDone: (roadId
           <Select
             value={adding?.kind ?? 'iso8608'}
             onChange={(e) => {
-              setAdding({ kind: e.target.value as RoadKind } as Adding);
-              setDraft(null);
+              const kind = e.target.value as RoadKind;
+              setAdding({ kind } as Adding);
+              setDraft(kind === 'measured' ? null : defaultDraft(kind));
               create.reset();
             }}
           >

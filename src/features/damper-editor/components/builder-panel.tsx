@@ -54,7 +54,7 @@ export function BuilderPanel({ direction, damper, onFill }: { direction: Directi
           <Input inputMode="decimal" className="figures text-right" value={texts.highSpeedSlope} onChange={set('highSpeedSlope')} />
         </Field>
         <Field label="Shape" hint={shapeHints[texts.shape]}>
-          <Select value={texts.shape} onChange={set('shape')}>
+          <Select value={texts.shape} onChange={set('shape')} className="pr-5 pl-1.5 text-sm">
             {damperShapes.map((s) => (
               <option key={s} value={s}>
                 {s}

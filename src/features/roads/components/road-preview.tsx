@@ -23,7 +23,7 @@ export function RoadFiguresList({ figures }: { figures: RoadFigures }) {
     <dl aria-label="Road figures" className="rounded border border-rule bg-paper-raised px-3 py-2">
       {figures.length !== null && (
         <Fig label="Length">
-          <Figure value={figures.length} unit="m" digits={4} label="profile length" />
+          <Figure value={figures.length} unit="m" digits={figures.length >= 1000 ? 4 : 3} label="profile length" />
         </Fig>
       )}
       {figures.spacing !== null && (

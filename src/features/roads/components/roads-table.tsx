@@ -59,7 +59,7 @@ export function RoadsTable({ roads, hrefOf }: { roads: RoadListItem[]; hrefOf: (
         header: 'Length',
         cell: (info) => {
           const l = info.row.original.figures.length;
-          return l === null ? '—' : `${formatSig(l, 4)} m`;
+          return l === null ? '—' : `${l >= 100 ? Math.round(l) : formatSig(l, 3)} m`;
         },
         meta: { numeric: true },
       }),
