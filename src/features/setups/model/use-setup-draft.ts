@@ -24,19 +24,32 @@ export interface SetupDraft {
   load: (document: SetupInput) => void;
 }
 
+/** Optional top-level fields a form may add; listed so a clean form compares equal to its revision. */
+const optionalKeys = ['tyreFootprint', 'bumpStop', 'reboundStop', 'stroke', 'notes'] as const;
+
+/**
+ * The document with every optional key present (undefined when absent). The form's dirty check
+ * compares key counts, and the inputs for optional fields add their keys on mount.
+ */
+function withAllKeys(document: SetupInput): SetupInput {
+  const out = { ...document } as Record<string, unknown>;
+  for (const key of optionalKeys) if (!(key in out)) out[key] = undefined;
+  return out as SetupInput;
+}
+
 /**
  * Holds the draft of the bench. The form is validated by the shared `Setup` schema itself; the
  * page shows numbers in engineers' units but the form holds SI, converted by each input.
  */
 export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document'>): SetupDraft {
-  const form = useForm<SetupInput, unknown, Setup>({ resolver: zodResolver(Setup), defaultValues: revision.document, mode: 'onChange' });
+  const form = useForm<SetupInput, unknown, Setup>({ resolver: zodResolver(Setup), defaultValues: withAllKeys(revision.document), mode: 'onChange' });
   const [baseRevision, setBaseRevision] = useState(revision.number);
   const watched = useWatch({ control: form.control }) as SetupInput;
   const { isDirty } = form.formState;
 
   const resetTo = useCallback(
     (r: Pick<SetupRevision, 'number' | 'document'>) => {
-      form.reset(r.document);
+      form.reset(withAllKeys(r.document));
       setBaseRevision(r.number);
     },
     [form],
@@ -64,7 +77,7 @@ export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document
       for (const [key, value] of Object.entries(document)) {
         form.setValue(key as keyof SetupInput, value as never, { shouldDirty: true, shouldValidate: true });
       }
-      for (const key of ['tyreFootprint', 'bumpStop', 'reboundStop', 'stroke', 'notes'] as const) {
+      for (const key of optionalKeys) {
         if (!(key in document)) form.setValue(key, undefined, { shouldDirty: true, shouldValidate: true });
       }
     },
