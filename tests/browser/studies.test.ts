@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { SetupDetail } from '../../shared/schemas/setup-record.ts';
+import { RevisionsResponse, SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { StudiesResponse, StudyDetail } from '../../shared/schemas/study-record.ts';
 import { apiWrite, demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
 
@@ -111,4 +111,52 @@ describe('studies in the browser', () => {
     expect(mine?.results?.ranBy.name).not.toBe((await demoUser(baseUrl, 'viewer')).name);
     await context.close();
   });
+
+  it('stopping a long run keeps and saves the finished points as a partial result', async () => {
+    const session = await newSession(browser, baseUrl);
+    const { page, context } = session;
+    await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
+    const workspaceId = new URL(page.url()).pathname.split('/')[2];
+    const setups = SetupsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups`)).json());
+    const pipit = setups.setups.find((x) => x.name === 'Brume Pipit front, baseline')!;
+    const revisions = RevisionsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${pipit.id}/revisions`)).json());
+    const definition = {
+      name: `Long sweep to stop ${Date.now()}`,
+      base: { setupId: pipit.id, revisionId: revisions.revisions[0].id },
+      axes: [
+        { parameter: 'damperScale', from: 0.5, to: 2, steps: 20 },
+        { parameter: 'springRate', from: 20000, to: 44000, steps: 20 },
+      ],
+      roads: [{ source: 'inline', road: { kind: 'iso8608', name: 'ISO class C', class: 'C', seed: 7 } }],
+      speeds: [20],
+      duration: 60,
+      objectives: [
+        { figure: 'bodyAccelWkRms', weight: 1 },
+        { figure: 'tyreLoadRatio', weight: 1 },
+      ],
+    };
+    const created = await apiWrite(session, 'POST', `/api/workspaces/${workspaceId}/studies`, { definition });
+    expect(created.status()).toBe(201);
+    const studyId = StudyDetail.parse(await created.json()).id;
+
+    await page.goto(`/w/${workspaceId}/studies/${studyId}`);
+    await page.getByRole('button', { name: 'Run and save' }).click();
+    const bar = page.getByRole('progressbar', { name: 'Runs done' });
+    await bar.waitFor();
+    await page.waitForFunction(() => Number(document.querySelector('[role=progressbar]')?.getAttribute('aria-valuenow')) >= 30, undefined, { timeout: 60_000 });
+    await page.getByRole('button', { name: 'Stop the run' }).click();
+    await page.getByText('Saved: partial results.').waitFor({ timeout: 30_000 });
+    expect(await page.getByText(/^Stopped after \d+ of the points/).count()).toBe(1);
+    await screenshot(page, 'study-stopped-engineer-1280');
+
+    const saved = StudyDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/studies/${studyId}`)).json());
+    expect(saved.status).toBe('partial');
+    expect(saved.points.length).toBeGreaterThan(0);
+    expect(saved.points.length).toBeLessThan(400);
+    expect(saved.results?.savedPoints).toBe(saved.points.length);
+    // only whole points are kept: each with its one run (one road, one speed)
+    expect(saved.points.every((p) => p.runs.length === 1)).toBe(true);
+    await context.close();
+  });
 });
+

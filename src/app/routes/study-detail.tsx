@@ -193,7 +193,13 @@ export function StudyDetailRoute() {
           <Notice tone="signal">Partial results: the last run was stopped after {s.results?.savedPoints} of {s.plannedPoints} points. Figures and the best compromise cover only those.</Notice>
         )}
         {view && (view.points.length > 0 || state.phase !== 'idle') ? (
-          <StudyResults view={view} roadNames={roadNames} baselineIndex={s.baseline?.pointIndex ?? null} pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined} />
+          <StudyResults
+            view={view}
+            roadNames={roadNames}
+            baselineIndex={s.baseline?.pointIndex ?? null}
+            running={state.phase === 'running'}
+            pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
+          />
         ) : (
           <Notice>This study has not been run yet. {canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}</Notice>
         )}

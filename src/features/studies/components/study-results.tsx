@@ -21,6 +21,11 @@ export interface StudyResultsProps {
   baselineIndex: number | null;
   /** Buttons for a point (open as setup, mark as baseline), as the caller's role allows. */
   pointActions?: (index: number) => ReactNode;
+  /**
+   * A run is going: only the trade-off chart fills in as points finish; the map, the lines and
+   * the table wait for the end, so the page's own thread stays light while the workers run.
+   */
+  running?: boolean;
 }
 
 /**
@@ -28,7 +33,7 @@ export interface StudyResultsProps {
  * best compromise beside it, the 2-D map of any figure, a figure along one parameter, and the
  * table of all points. Picking a point anywhere highlights it everywhere.
  */
-export function StudyResults({ view, roadNames, baselineIndex, pointActions }: StudyResultsProps) {
+export function StudyResults({ view, roadNames, baselineIndex, pointActions, running = false }: StudyResultsProps) {
   const def = view.definition;
   const [selected, setSelected] = useState<number | null>(null);
   const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
@@ -58,80 +63,86 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions }: S
         </div>
       </div>
 
-      <div className={`grid gap-4 ${def.axes.length === 2 ? 'xl:grid-cols-2' : ''}`}>
-        {def.axes.length === 2 && (
-          <section aria-label="Map of a figure" className="rounded border border-rule bg-paper-raised p-3">
-            <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
-              <h2 className="text-base font-semibold">Map over both parameters</h2>
-              <Field label="Figure" className="w-72">
-                <Select value={mapFigure} onChange={(e) => setMapFigure(e.target.value as StudyFigureKey)}>
-                  {present.map((k) => (
-                    <option key={k} value={k}>
-                      {figureLabel(k)}
-                    </option>
-                  ))}
-                </Select>
-              </Field>
-            </div>
-            <HeatMap view={view} figure={mapFigure} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} />
-            <p className="mt-1 text-xs text-ink-soft">Hatched cells break a limit. Outlined: best compromise (violet), baseline (olive).</p>
-          </section>
-        )}
-        <section aria-label="Figure along a parameter" className="rounded border border-rule bg-paper-raised p-3">
-          <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
-            <h2 className="text-base font-semibold">Along one parameter, per road and speed</h2>
-            <Field label="Figure" className="w-64">
-              <Select value={lineFigure} onChange={(e) => setLineFigure(e.target.value as StudyFigureKey)}>
-                {present.map((k) => (
-                  <option key={k} value={k}>
-                    {figureLabel(k)}
-                  </option>
-                ))}
-              </Select>
-            </Field>
-            {def.axes.length === 2 && other && (
-              <>
-                <Field label="Across" className="w-44">
-                  <Select
-                    value={along}
-                    onChange={(e) => {
-                      setAlong(Number(e.target.value) as 0 | 1);
-                      setHoldAt(0);
-                    }}
-                  >
-                    {def.axes.map((a, i) => (
-                      <option key={a.parameter} value={i}>
-                        {parameterLabel(a.parameter, false)}
-                      </option>
-                    ))}
-                  </Select>
-                </Field>
-                <Field label={`At ${parameterLabel(other.parameter)}`} className="w-36">
-                  <Select value={holdAt} onChange={(e) => setHoldAt(Number(e.target.value))}>
-                    {sweepValues(other).map((v, i) => (
-                      <option key={i} value={i}>
-                        {parameterText(other.parameter, v)}
-                      </option>
-                    ))}
-                  </Select>
-                </Field>
-              </>
+      {running ? (
+        <p className="rounded border border-dashed border-rule px-3 py-2 text-sm text-ink-soft">The map, the figures along each parameter and the table of points appear when the run ends.</p>
+      ) : (
+        <>
+          <div className={`grid gap-4 ${def.axes.length === 2 ? 'xl:grid-cols-2' : ''}`}>
+            {def.axes.length === 2 && (
+              <section aria-label="Map of a figure" className="rounded border border-rule bg-paper-raised p-3">
+                <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
+                  <h2 className="text-base font-semibold">Map over both parameters</h2>
+                  <Field label="Figure" className="w-72">
+                    <Select value={mapFigure} onChange={(e) => setMapFigure(e.target.value as StudyFigureKey)}>
+                      {present.map((k) => (
+                        <option key={k} value={k}>
+                          {figureLabel(k)}
+                        </option>
+                      ))}
+                    </Select>
+                  </Field>
+                </div>
+                <HeatMap view={view} figure={mapFigure} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} />
+                <p className="mt-1 text-xs text-ink-soft">Hatched cells break a limit. Outlined: best compromise (violet), baseline (olive).</p>
+              </section>
             )}
+            <section aria-label="Figure along a parameter" className="rounded border border-rule bg-paper-raised p-3">
+              <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
+                <h2 className="text-base font-semibold">Along one parameter, per road and speed</h2>
+                <Field label="Figure" className="w-64">
+                  <Select value={lineFigure} onChange={(e) => setLineFigure(e.target.value as StudyFigureKey)}>
+                    {present.map((k) => (
+                      <option key={k} value={k}>
+                        {figureLabel(k)}
+                      </option>
+                    ))}
+                  </Select>
+                </Field>
+                {def.axes.length === 2 && other && (
+                  <>
+                    <Field label="Across" className="w-44">
+                      <Select
+                        value={along}
+                        onChange={(e) => {
+                          setAlong(Number(e.target.value) as 0 | 1);
+                          setHoldAt(0);
+                        }}
+                      >
+                        {def.axes.map((a, i) => (
+                          <option key={a.parameter} value={i}>
+                            {parameterLabel(a.parameter, false)}
+                          </option>
+                        ))}
+                      </Select>
+                    </Field>
+                    <Field label={`At ${parameterLabel(other.parameter)}`} className="w-36">
+                      <Select value={holdAt} onChange={(e) => setHoldAt(Number(e.target.value))}>
+                        {sweepValues(other).map((v, i) => (
+                          <option key={i} value={i}>
+                            {parameterText(other.parameter, v)}
+                          </option>
+                        ))}
+                      </Select>
+                    </Field>
+                  </>
+                )}
+              </div>
+              <FigureLinesChart view={view} figure={lineFigure} along={along} holdAt={holdAt} roadNames={roadNames} />
+            </section>
           </div>
-          <FigureLinesChart view={view} figure={lineFigure} along={along} holdAt={holdAt} roadNames={roadNames} />
-        </section>
-      </div>
 
-      <Section
-        title="All points"
-        actions={
-          <Button size="sm" onClick={() => downloadText(pointsCsv(view), `${def.name.replace(/[^\w.-]+/g, '-')}-points.csv`)}>
-            Export CSV
-          </Button>
-        }
-      >
-        <PointsTable view={view} selected={selected} onSelect={setSelected} />
-      </Section>
+          <Section
+            title="All points"
+            actions={
+              <Button size="sm" onClick={() => downloadText(pointsCsv(view), `${def.name.replace(/[^\w.-]+/g, '-')}-points.csv`)}>
+                Export CSV
+              </Button>
+            }
+          >
+            <PointsTable view={view} selected={selected} onSelect={setSelected} />
+          </Section>
+        </>
+      )}
     </div>
   );
 }

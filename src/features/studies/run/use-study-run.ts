@@ -34,7 +34,7 @@ const idle: StudyRunState = { phase: 'idle', progress: null, points: [], base: n
 /** Runs sent per save request while the run goes on. */
 const SLICE_RUNS = 300;
 /** Shortest time between two repaints of a running study, ms. */
-const PAINT_MS = 120;
+const PAINT_MS = 200;
 
 const upload = (p: StudyPointResult): StudyPointUpload => studyPointUpload(p);
 
