@@ -66,12 +66,15 @@ try {
   const fire = (opts: autocannon.Options) => autocannon({ connections, ...opts });
   const rssStart = server.rssBytes();
   console.log(`server ${server.url}, pid ${server.pid}; ${connections} connections, ${runs} × ${duration} s per route; RSS at start ${mb(rssStart)}\n`);
-  console.log('route                         kind    req/s   p50 ms  p99 ms  errors  non-2xx');
+  console.log('route                         kind    req/s   p50 ms  p99 ms  errors  non-2xx  server CPU ms/req');
   const table: Record<string, unknown>[] = [];
   for (const s of scenarios) {
     const results = [];
+    const cpu: number[] = [];
     for (let i = 0; i < runs; i++) {
+      const cpuBefore = server.cpuMs();
       results.push(await fire({ url: `${server.url}${s.path}`, method: s.method, headers, body: s.body === undefined ? undefined : JSON.stringify(s.body), duration }));
+      cpu.push((server.cpuMs() - cpuBefore) / Math.max(1, results[results.length - 1].requests.total));
     }
     const row = {
       route: s.name,
@@ -81,10 +84,13 @@ try {
       p99: median(results.map((r) => r.latency.p99)),
       errors: results.reduce((n, r) => n + r.errors + r.timeouts, 0),
       non2xx: results.reduce((n, r) => n + r.non2xx, 0),
+      // What a request costs the server's one thread, whatever else the machine runs: 1000 / this
+      // is the request rate one free core would reach.
+      cpuMsPerRequest: Number(median(cpu).toFixed(3)),
     };
     table.push(row);
     console.log(
-      `${s.name.padEnd(30)}${s.kind.padEnd(6)}${String(row.reqPerSec).padStart(7)}${String(row.p50).padStart(9)}${String(row.p99).padStart(8)}${String(row.errors).padStart(8)}${String(row.non2xx).padStart(9)}`,
+      `${s.name.padEnd(30)}${s.kind.padEnd(6)}${String(row.reqPerSec).padStart(7)}${String(row.p50).padStart(9)}${String(row.p99).padStart(8)}${String(row.errors).padStart(8)}${String(row.non2xx).padStart(9)}${row.cpuMsPerRequest.toFixed(2).padStart(19)}`,
     );
   }
   const rssAfter = server.rssBytes();

@@ -15,6 +15,8 @@ export interface ServerProcess {
   child: ChildProcess;
   /** Resident memory of the child, bytes (Linux /proc). */
   rssBytes(): number;
+  /** CPU time the child has used so far (user + system), ms (Linux /proc). */
+  cpuMs(): number;
   /** Sends `signal` and resolves when the process is gone. */
   kill(signal?: NodeJS.Signals): Promise<void>;
 }
@@ -106,6 +108,11 @@ export function startServerProcess(options: ServerProcessOptions): Promise<Serve
         pid,
         child,
         rssBytes: () => Number(/VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))?.[1] ?? 0) * 1024,
+        cpuMs: () => {
+          // fields 14 and 15 of /proc/<pid>/stat (utime, stime) in clock ticks of 10 ms on Linux
+          const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+          return (Number(fields[11]) + Number(fields[12])) * 10;
+        },
         async kill(signal = 'SIGTERM') {
           if (child.exitCode === null && child.signalCode === null) child.kill(signal);
           await gone;
