@@ -112,6 +112,25 @@ describe('studies in the browser', () => {
     await context.close();
   });
 
+  it('a lead marks the best compromise as the team’s baseline; the list shows it', async () => {
+    if (!made) throw new Error('the engineer test must run first');
+    const { page, context } = await newSession(browser, baseUrl);
+    await signIn(page, (await demoUser(baseUrl, 'lead')).email);
+    await page.goto(`/w/${made.workspaceId}/studies/${made.studyId}`);
+    const best = page.getByRole('region', { name: 'Best compromise' });
+    await best.waitFor();
+    const label = await best.getByTestId('best-compromise-point').textContent();
+    await best.getByRole('button', { name: 'Mark as baseline' }).click();
+    await page.getByText(`baseline: ${label}`).waitFor();
+    await best.getByRole('button', { name: 'Clear the baseline' }).waitFor();
+    const saved = StudyDetail.parse(await (await page.request.get(`/api/workspaces/${made.workspaceId}/studies/${made.studyId}`)).json());
+    expect(saved.baseline).toMatchObject({ label, pointIndex: saved.results?.best?.pointIndex });
+    await page.goto(`/w/${made.workspaceId}/studies`);
+    const row = page.getByRole('table', { name: 'Studies' }).getByRole('row', { name: new RegExp(made.name) });
+    await row.getByText('baseline picked').waitFor();
+    await context.close();
+  });
+
   it('stopping a long run keeps and saves the finished points as a partial result', async () => {
     const session = await newSession(browser, baseUrl);
     const { page, context } = session;

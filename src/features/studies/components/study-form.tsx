@@ -137,25 +137,25 @@ function StudyFormBody({
         {axes.fields.slice(0, twoAxes ? 2 : 1).map((field, i) => (
           <fieldset key={field.id} className="rounded border border-rule p-3" aria-label={i === 0 ? 'First swept parameter' : 'Second swept parameter'}>
             <legend className="px-1 text-sm font-semibold">{i === 0 ? 'Swept parameter' : 'Second swept parameter'}</legend>
-            <div className="grid grid-cols-[minmax(10rem,2fr)_1fr_1fr_5rem_6rem] items-start gap-2">
-              <Field label="Parameter" error={e(`axes.${i}.parameter`)}>
-                <Select
-                  {...register(`axes.${i}.parameter`, {
-                    onChange: (ev: React.ChangeEvent<HTMLSelectElement>) => {
-                      const d = axisDefaults(ev.target.value as StudyParameter);
-                      setValue(`axes.${i}.from`, d.from);
-                      setValue(`axes.${i}.to`, d.to);
-                      setValue(`axes.${i}.steps`, d.steps);
-                    },
-                  })}
-                >
-                  {studyParameters.map((p) => (
-                    <option key={p} value={p}>
-                      {parameterLabel(p)}
-                    </option>
-                  ))}
-                </Select>
-              </Field>
+            <Field label="Parameter" error={e(`axes.${i}.parameter`)} className="mb-2">
+              <Select
+                {...register(`axes.${i}.parameter`, {
+                  onChange: (ev: React.ChangeEvent<HTMLSelectElement>) => {
+                    const d = axisDefaults(ev.target.value as StudyParameter);
+                    setValue(`axes.${i}.from`, d.from);
+                    setValue(`axes.${i}.to`, d.to);
+                    setValue(`axes.${i}.steps`, d.steps);
+                  },
+                })}
+              >
+                {studyParameters.map((p) => (
+                  <option key={p} value={p}>
+                    {parameterLabel(p)}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+            <div className="grid grid-cols-[1fr_1fr_5rem_7rem] items-start gap-2">
               <Field label="From" error={e(`axes.${i}.from`)}>
                 <Input type="number" step="any" inputMode="decimal" {...register(`axes.${i}.from`, { valueAsNumber: true })} />
               </Field>
@@ -292,17 +292,18 @@ function StudyFormBody({
         </fieldset>
         <fieldset className="rounded border border-rule p-3" aria-label="Limits">
           <legend className="px-1 text-sm font-semibold">Limits (on every road and speed)</legend>
-          <div className="space-y-2">
-            <Field label="Most stroke used [%]" hint="blank: no limit" error={e('maxStrokeUsed')} layout="inline">
+          <div className="grid grid-cols-3 items-end gap-2">
+            <Field label="Most stroke used [%]" error={e('maxStrokeUsed')}>
               <Input inputMode="decimal" {...register('maxStrokeUsed')} />
             </Field>
-            <Field label="Most time off the road [%]" hint="blank: no limit" error={e('maxLiftOff')} layout="inline">
+            <Field label="Most time off the road [%]" error={e('maxLiftOff')}>
               <Input inputMode="decimal" {...register('maxLiftOff')} />
             </Field>
-            <Field label="Least tyre load [N]" hint="blank: no limit" error={e('minTyreLoad')} layout="inline">
+            <Field label="Least tyre load [N]" error={e('minTyreLoad')}>
               <Input inputMode="decimal" {...register('minTyreLoad')} />
             </Field>
           </div>
+          <p className="mt-2 text-xs text-ink-faint">Leave a limit blank for none. A point meets the limits only if every road at every speed does; the others stay on the charts, marked.</p>
         </fieldset>
       </div>
 

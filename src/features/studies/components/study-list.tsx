@@ -59,12 +59,10 @@ export function StudyList({ workspaceId, studies }: { workspaceId: string; studi
                 {s.speeds.length > 0 && <span className="figures"> · {s.speeds.join(', ')} m/s</span>}
               </Td>
               <Td>
-                <Tag tone={status.tone}>{status.text}</Tag>
-                {s.baseline && (
-                  <span className="ml-1.5">
-                    <Tag tone="accent">baseline picked</Tag>
-                  </span>
-                )}
+                <span className="flex flex-wrap gap-1 whitespace-nowrap">
+                  <Tag tone={status.tone}>{status.text}</Tag>
+                  {s.baseline && <Tag tone="accent">baseline picked</Tag>}
+                </span>
               </Td>
               <Td className="text-sm">{verdict ?? <span className="text-ink-faint">—</span>}</Td>
               <Td className="whitespace-nowrap text-ink-soft">{formatDateTime(s.updatedAt)}</Td>
