@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { demoUser, launchBrowser, newSession, RESULTS_DIR, screenshot, signIn } from './helpers/browser.ts';
 
 const PEAKS_CSV = fileURLToPath(new URL('../../examples/dyno/pipit-front-peaks.csv', import.meta.url));
+const RECORD_CSV = fileURLToPath(new URL('../../examples/dyno/pipit-front-sine-record.csv', import.meta.url));
 /** A dyno file with text where a force should be, on line 3. */
 const BAD_CSV = 'velocity [m/s],compression force [N],rebound force [N]\n0.05,120,300\n0.1,lots,520\n0.2,330,800\n';
 const SETUP = 'Brume Skerry rear, road';
@@ -111,6 +112,17 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
     await dyno.getByText(`made revision ${fitted.number}`).waitFor();
     await screenshot(page, 'bench-dyno-fitted-1280');
     await dyno.screenshot({ path: join(RESULTS_DIR, 'dyno-panel-fitted-1280.png') });
+
+    // a raw record: its strokes become peak points, drawn over the force-velocity loop
+    await dyno.getByRole('button', { name: 'Upload a dyno file' }).click();
+    await upload.getByLabel('Dyno file (CSV)').setInputFiles(RECORD_CSV);
+    await upload.getByText('Read as a raw record (time, displacement, force)').waitFor();
+    await upload.getByText('Units, signs and gas force').click();
+    await upload.getByLabel('Gas force in the readings [N]').fill('150');
+    await upload.getByRole('button', { name: 'Upload and keep' }).click();
+    await dyno.getByRole('list', { name: 'Dyno files' }).getByText('pipit-front-sine-record.csv').waitFor();
+    await dyno.getByRole('table', { name: 'Rebound residuals' }).waitFor();
+    await dyno.screenshot({ path: join(RESULTS_DIR, 'dyno-panel-record-1280.png') });
     await context.close();
   });
 

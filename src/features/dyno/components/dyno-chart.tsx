@@ -51,7 +51,7 @@ export function DynoChart({ peaks, loop, fitted }: { peaks: DynoPeakPoints; loop
       ctx.beginPath();
       ctx.rect(u.bbox.left, u.bbox.top, u.bbox.width, u.bbox.height);
       ctx.clip();
-      ctx.strokeStyle = `${theme.inkFaint}88`;
+      ctx.strokeStyle = `${theme.ink}59`;
       ctx.lineWidth = devicePixelRatio;
       ctx.beginPath();
       l.velocity.forEach((v, i) => {
@@ -78,7 +78,8 @@ export function DynoChart({ peaks, loop, fitted }: { peaks: DynoPeakPoints; loop
         { ...themedSeries({ label: 'Fitted compression', unit: 'N', color: seriesColor(theme, 0), width: 1.75 }), spanGaps: true },
         { ...themedSeries({ label: 'Fitted rebound', unit: 'N', color: seriesColor(theme, 1), width: 1.75 }), spanGaps: true },
       ],
-      hooks: { drawAxes: [drawLoop] },
+      // drawn over the series: the loop mostly hugs the fitted curve and would hide under it
+      hooks: { draw: [drawLoop] },
     };
   }, [theme]);
 

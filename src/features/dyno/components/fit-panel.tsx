@@ -64,6 +64,10 @@ export function FitPanel({
 
   return (
     <div className="grid gap-3">
+      <p className="text-2xs text-ink-faint">
+        Dots: measured {file.loop ? 'peak force of each stroke' : 'points'}; lines: the fitted tables
+        {file.loop ? '; thin dark line: the record itself, force against velocity sample by sample (the loop)' : ''}.
+      </p>
       <DynoChart peaks={peaks} loop={file.loop} fitted={fitted} />
       <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_12rem]">
         <Field label="Fit at these piston speeds [m/s]" error={parsedKnots.ok ? undefined : parsedKnots.message} hint="A table point at each; force never falls with speed.">

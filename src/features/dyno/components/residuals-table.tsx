@@ -2,6 +2,9 @@ import type { DynoDirectionFit } from '../../../../shared/schemas/dyno.ts';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
 import { formatSig } from '../../../lib/format.ts';
 
+/** Round-off left by the solver (1e−13 N) reads as 0, not as a figure. */
+const clean = (x: number, scale: number) => (Math.abs(x) < 1e-9 * Math.max(1, Math.abs(scale)) ? 0 : x);
+
 /** How far each measured point sits from the fitted table, in N and in % of the measured force. */
 export function ResidualsTable({ direction, fit }: { direction: 'compression' | 'rebound'; fit: DynoDirectionFit }) {
   if (!fit.ok) {
@@ -30,9 +33,9 @@ export function ResidualsTable({ direction, fit }: { direction: 'compression' | 
               <Td numeric>{formatSig(r.velocity, 3)}</Td>
               <Td numeric>{formatSig(r.measured, 4)}</Td>
               <Td numeric>{formatSig(r.fitted, 4)}</Td>
-              <Td numeric>{formatSig(r.residual, 3)}</Td>
+              <Td numeric>{formatSig(clean(r.residual, r.measured), 3)}</Td>
               <Td numeric className={r.residualPct !== null && Math.abs(r.residualPct) > 10 ? 'text-signal-ink' : ''}>
-                {r.residualPct === null ? '—' : formatSig(r.residualPct, 2)}
+                {r.residualPct === null ? '—' : formatSig(clean(r.residualPct, 100), 2)}
               </Td>
             </Tr>
           ))}
