@@ -34,6 +34,12 @@ async function setQuantity(page: Page, label: string, value: string) {
   await input.blur();
 }
 
+/** Full-page picture from the top (sticky parts sit where a reader first sees them). */
+async function picture(page: Page, name: string) {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await screenshot(page, name);
+}
+
 async function saveRevision(page: Page, number: number, message: string) {
   const bar = page.getByRole('form', { name: 'Save as a new revision' });
   await bar.getByLabel('What changed').fill(message);
@@ -46,7 +52,7 @@ describe('corner setups', () => {
     const { page, context, workspaceId } = await signedInAs('engineer');
     await openCorners(page, workspaceId);
     await page.getByRole('row', { name: 'Brume Pipit front, baseline' }).waitFor();
-    await screenshot(page, 'corners-list-1280');
+    await picture(page, 'corners-list-1280');
 
     // new setup from the plain template
     await page.getByRole('button', { name: 'New setup', exact: true }).click();
@@ -82,7 +88,7 @@ describe('corner setups', () => {
     const diff13 = page.getByRole('table', { name: 'Differences from revision 1 to revision 3' });
     await diff13.getByRole('row', { name: /Sprung mass/ }).waitFor();
     expect(await diff13.getByRole('row', { name: /Spring rate/ }).count()).toBe(1);
-    await screenshot(page, 'corner-bench-1280');
+    await picture(page, 'corner-bench-1280');
 
     // restore r1 as r4
     const r1 = page.getByRole('row', { name: 'Revision 1', exact: true });
@@ -126,7 +132,7 @@ describe('corner setups', () => {
     // nothing on the page takes an edit (the damper tables show as disabled cells)
     expect(await visitor.page.getByRole('textbox', { disabled: false }).count()).toBe(0);
     await visitor.page.getByRole('region', { name: 'Corner figures' }).waitFor();
-    await screenshot(visitor.page, 'shared-setup-signed-out-1280');
+    await picture(visitor.page, 'shared-setup-signed-out-1280');
 
     // withdrawn: the same link now says so plainly
     await page.getByRole('button', { name: 'Withdraw link to Browser corner · revision 5' }).click();
@@ -164,13 +170,13 @@ describe('corner setups', () => {
     expect(await page.getByLabel('Load file…').count()).toBe(0);
     // history and diff are for reading: r2 → r3 of the demo setup shows the bump stop change
     await page.getByRole('table', { name: 'Differences from revision 2 to revision 3' }).getByRole('row', { name: /Bump stop clearance/ }).waitFor();
-    await screenshot(page, 'corner-bench-viewer-1280');
+    await picture(page, 'corner-bench-viewer-1280');
 
     await page.goto(`/w/${workspaceId}/corners`);
     await page.getByRole('list', { name: 'Vehicles' }).getByRole('link', { name: 'Brume Pipit', exact: true }).click();
     await page.getByRole('region', { name: 'Front and rear compared' }).waitFor();
     expect(await page.getByRole('button', { name: 'Edit vehicle' }).count()).toBe(0);
-    await screenshot(page, 'vehicle-viewer-1280');
+    await picture(page, 'vehicle-viewer-1280');
     await context.close();
   });
 });

@@ -121,7 +121,7 @@ function Bench({ detail }: { detail: SetupDetail }) {
         </Notice>
       )}
 
-      <div className="grid items-start gap-6 lg:grid-cols-[24rem_minmax(0,1fr)]">
+      <div className="grid items-start gap-6 lg:grid-cols-[21rem_minmax(0,1fr)]">
         <div className="min-w-0">
           {canWrite ? (
             <>

@@ -28,7 +28,7 @@ export function SharedRoute() {
           memberships={me.data?.memberships ?? null}
           renderSetup={(view) => (
             <>
-              <div className="grid items-start gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]">
+              <div className="grid items-start gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
                 <SetupSheet setup={view.document} />
                 <div className="flex min-w-0 flex-col gap-5">
                   <CornerFiguresStrip modal={view.modal} wheelRate={view.wheelRate} sprungMass={view.document.sprungMass} />

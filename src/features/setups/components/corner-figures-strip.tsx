@@ -16,7 +16,7 @@ function Cell({ label, children, note }: { label: string; children: React.ReactN
     <div className="min-w-0 px-3 py-1.5">
       <dt className="truncate text-2xs tracking-wide text-ink-faint uppercase">{label}</dt>
       <dd className="text-base">{children}</dd>
-      {note && <dd className="truncate text-2xs text-ink-faint">{note}</dd>}
+      {note && <dd className="text-2xs leading-tight text-ink-faint">{note}</dd>}
     </div>
   );
 }
@@ -29,21 +29,24 @@ export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false
   const sag = (sprungMass * GRAVITY) / wheelRate;
   return (
     <section aria-label="Corner figures" className={`rounded border border-rule bg-paper-raised ${stale ? 'opacity-60' : ''}`}>
-      <dl className="grid grid-cols-2 divide-rule sm:grid-cols-5 sm:divide-x">
-        <Cell label="Body" note={`ζ ${modal.body.dampingRatio.toFixed(2)} · damped ${modal.body.dampedHz.toFixed(2)} Hz`}>
+      <dl className="grid grid-cols-3 [&>div]:border-rule [&>div:nth-child(-n+3)]:border-b [&>div:not(:nth-child(3n+1))]:border-l">
+        <Cell label="Body mode" note={`damped ${modal.body.dampedHz.toFixed(2)} Hz · hand estimate ${modal.classic.bodyHz.toFixed(2)} Hz`}>
           <Figure value={modal.body.naturalHz} unit="Hz" label="Body natural frequency" />
         </Cell>
-        <Cell label="Wheel hop" note={`ζ ${modal.wheel.dampingRatio.toFixed(2)}`}>
-          <Figure value={modal.wheel.naturalHz} unit="Hz" label="Wheel-hop natural frequency" />
-        </Cell>
-        <Cell label="Body ζ" note={`hand estimate ${modal.classic.bodyDampingRatio.toFixed(2)}`}>
+        <Cell label="Body damping ratio" note={`hand estimate c/(2√(ks·ms)) ${modal.classic.bodyDampingRatio.toFixed(2)}`}>
           <Figure value={modal.body.dampingRatio} digits={2} label="Body damping ratio" />
         </Cell>
-        <Cell label="Wheel rate" note="incl. gas rate at static">
-          <Figure value={wheelRate} unit="Npermm" label="Wheel rate" />
-        </Cell>
-        <Cell label="Static sag" note="sprung weight / wheel rate">
+        <Cell label="Static sag" note="sprung weight over wheel rate">
           <Figure value={sag} unit="mm" label="Static sag" />
+        </Cell>
+        <Cell label="Wheel hop" note={`hand estimate ${modal.classic.wheelHz.toFixed(1)} Hz`}>
+          <Figure value={modal.wheel.naturalHz} unit="Hz" label="Wheel-hop natural frequency" />
+        </Cell>
+        <Cell label="Wheel-hop damping ratio">
+          <Figure value={modal.wheel.dampingRatio} digits={2} label="Wheel-hop damping ratio" />
+        </Cell>
+        <Cell label="Wheel rate" note="spring × MR², with the gas rate at static">
+          <Figure value={wheelRate} unit="Npermm" label="Wheel rate" />
         </Cell>
       </dl>
       <p className="border-t border-rule px-3 py-1 text-2xs text-ink-faint">

@@ -72,7 +72,7 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
     );
 
   return (
-    <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+    <div className="grid gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
         <table className="w-full text-sm" aria-label="Revisions">
           <thead className="border-b border-rule-strong bg-paper-sunk/70 text-left text-xs text-ink-soft">

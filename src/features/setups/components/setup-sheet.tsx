@@ -18,7 +18,7 @@ export function SetupSheet({ setup }: { setup: Setup }) {
               <td className="py-[3px] text-right whitespace-nowrap">
                 {typeof r.value === 'number' && r.unit ? (
                   <>
-                    <span className="figures text-ink">{formatSig(r.unit.fromSI(r.value), 4)}</span>
+                    <span className="figures text-ink">{formatSig(r.unit.fromSI(r.value), 3)}</span>
                     {r.unit.symbol && <span className="ml-1 text-xs font-light text-ink-faint">{r.unit.symbol}</span>}
                   </>
                 ) : (

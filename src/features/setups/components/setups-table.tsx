@@ -56,6 +56,7 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
     () => [
       column.accessor('name', {
         header: 'Setup',
+        meta: { className: 'min-w-[13rem]' },
         cell: (info) => (
           <span className="inline-flex items-center gap-1.5">
             <Link to={`/w/${workspaceId}/corners/${info.row.original.id}`} className="font-medium text-ink hover:text-accent hover:underline">
@@ -69,6 +70,7 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
         id: 'vehicle',
         header: 'Vehicle',
         filterFn: 'equalsString',
+        meta: { className: 'whitespace-nowrap' },
         cell: (info) => info.getValue() || <span className="text-ink-faint">—</span>,
       }),
       column.accessor((s) => s.corner ?? '', {
@@ -84,8 +86,11 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
       column.accessor('latestMessage', {
         header: 'Last change',
         enableSorting: false,
-        meta: { className: 'max-w-[16rem]' },
-        cell: (info) => <span className="block truncate text-ink-soft" title={info.getValue()}>{info.getValue()}</span>,
+        cell: (info) => (
+          <span className="block max-w-[13rem] truncate text-ink-soft" title={info.getValue()}>
+            {info.getValue()}
+          </span>
+        ),
       }),
       column.accessor('changedAt', {
         header: 'Changed',

@@ -23,7 +23,7 @@ export function RatioGauge({ ratio }: { ratio: number }) {
       </div>
       <div className="figures relative h-4 text-2xs text-ink-faint">
         {[0.8, 1.0, 1.2, 1.4].map((t) => (
-          <span key={t} className="absolute -translate-x-1/2" style={{ left: at(t) }}>
+          <span key={t} className={`absolute ${t === MIN ? '' : t === MAX ? '-translate-x-full' : '-translate-x-1/2'}`} style={{ left: at(t) }}>
             {t.toFixed(1)}
           </span>
         ))}
