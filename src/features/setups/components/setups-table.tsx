@@ -13,7 +13,7 @@ import { Link } from 'react-router';
 import type { SetupSummary } from '../../../../shared/schemas/setup-record.ts';
 import { DataTable } from '../../../components/ui/data-table.tsx';
 import { Tag } from '../../../components/ui/tag.tsx';
-import { formatDateTime, formatSig } from '../../../lib/format.ts';
+import { formatDate, formatDateTime, formatSig } from '../../../lib/format.ts';
 
 const column = createColumnHelper<SetupSummary>();
 
@@ -68,17 +68,18 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
       }),
       column.accessor((s) => s.vehicle?.name ?? '', {
         id: 'vehicle',
-        header: 'Vehicle',
+        header: 'Vehicle, corner',
         filterFn: 'equalsString',
         meta: { className: 'whitespace-nowrap' },
-        cell: (info) => info.getValue() || <span className="text-ink-faint">—</span>,
+        cell: (info) => (
+          <span className="inline-flex items-center gap-1.5">
+            {info.getValue() || <span className="text-ink-faint">—</span>}
+            {info.row.original.corner && <Tag>{info.row.original.corner}</Tag>}
+          </span>
+        ),
       }),
-      column.accessor((s) => s.corner ?? '', {
-        id: 'corner',
-        header: 'Corner',
-        filterFn: 'equalsString',
-        cell: (info) => (info.getValue() ? <Tag>{info.getValue()}</Tag> : <span className="text-ink-faint">—</span>),
-      }),
+      // filtered on, not shown: the corner sits beside the vehicle
+      column.accessor((s) => s.corner ?? '', { id: 'corner', filterFn: 'equalsString' }),
       column.accessor('latestRevision', { header: 'Rev.', meta: { numeric: true }, cell: (info) => `r${info.getValue()}` }),
       column.accessor((s) => s.figures?.bodyHz, { id: 'bodyHz', header: 'Body', meta: { numeric: true }, sortUndefined: 'last', cell: (info) => figure(info.getValue(), 3, 'Hz') }),
       column.accessor((s) => s.figures?.wheelHopHz, { id: 'wheelHz', header: 'Wheel hop', meta: { numeric: true }, sortUndefined: 'last', cell: (info) => figure(info.getValue(), 3, 'Hz') }),
@@ -87,7 +88,7 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
         header: 'Last change',
         enableSorting: false,
         cell: (info) => (
-          <span className="block max-w-[13rem] truncate text-ink-soft" title={info.getValue()}>
+          <span className="block max-w-[10.5rem] truncate text-ink-soft" title={info.getValue()}>
             {info.getValue()}
           </span>
         ),
@@ -97,7 +98,7 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
         meta: { numeric: true },
         cell: (info) => (
           <span className="whitespace-nowrap">
-            {formatDateTime(info.getValue())}
+            <span title={formatDateTime(info.getValue())}>{formatDate(info.getValue())}</span>
             <span className="block font-sans text-xs text-ink-faint">{info.row.original.changedBy.name}</span>
           </span>
         ),
@@ -109,7 +110,7 @@ export function SetupsTable({ workspaceId, setups, extraFilters }: SetupsTablePr
   const table = useReactTable({
     data: setups,
     columns,
-    state: { sorting, globalFilter: search, columnFilters: filters },
+    state: { sorting, globalFilter: search, columnFilters: filters, columnVisibility: { corner: false } },
     onSortingChange: setSorting,
     onGlobalFilterChange: setSearch,
     onColumnFiltersChange: setFilters,
