@@ -1,15 +1,38 @@
 import type { RequestHandler } from 'express';
+import { LRUCache } from 'lru-cache';
 import type { AppDeps } from '../deps.ts';
 import { HttpError } from '../errors.ts';
 import { sessionUser } from '../services/accounts.ts';
-import { readSessionToken, SESSION_COOKIE } from './session.ts';
+import { readSessionToken, SESSION_COOKIE, type SessionClaims } from './session.ts';
 
-/** Sets `req.user` when the session cookie is valid and current; never refuses the request. */
+/** Tokens whose signature has been checked; about 300 bytes each. */
+const VERIFIED_TOKENS = 5000;
+
+/**
+ * Sets `req.user` when the session cookie is valid and current; never refuses the request.
+ *
+ * A token's signature is checked once and its claims kept (with their expiry, checked again on
+ * every use) in a bounded in-process cache: the HMAC through WebCrypto was the largest cost of a
+ * read. Whether the session is still current (the user's `session_version`, bumped by sign-out
+ * and password changes) is still asked of the database on every request.
+ */
 export function loadSession(deps: Pick<AppDeps, 'db' | 'secret' | 'clock'>): RequestHandler {
+  const verified = new LRUCache<string, SessionClaims & { expiresAt: number }>({ max: VERIFIED_TOKENS });
   return async (req, _res, next) => {
     const token: unknown = req.cookies?.[SESSION_COOKIE];
     if (typeof token === 'string' && token.length > 0) {
-      const claims = await readSessionToken(deps.secret, token, deps.clock());
+      const now = deps.clock();
+      let claims: SessionClaims | null = null;
+      const known = verified.get(token);
+      if (known && known.expiresAt > now.getTime()) claims = known;
+      else {
+        if (known) verified.delete(token);
+        const read = await readSessionToken(deps.secret, token, now);
+        if (read) {
+          verified.set(token, read);
+          claims = read;
+        }
+      }
       if (claims) req.user = (await sessionUser(deps.db, claims.userId, claims.sessionVersion)) ?? undefined;
     }
     next();

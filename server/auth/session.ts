@@ -21,12 +21,12 @@ export async function issueSessionToken(secret: Uint8Array, claims: SessionClaim
     .sign(secret);
 }
 
-/** The claims of a valid, unexpired token, or null for anything else. */
-export async function readSessionToken(secret: Uint8Array, token: string, now: Date): Promise<SessionClaims | null> {
+/** The claims of a valid, unexpired token and when it expires (ms since the epoch), or null for anything else. */
+export async function readSessionToken(secret: Uint8Array, token: string, now: Date): Promise<(SessionClaims & { expiresAt: number }) | null> {
   try {
-    const { payload } = await jwtVerify(token, secret, { algorithms: ['HS256'], currentDate: now });
-    if (typeof payload.sub !== 'string' || typeof payload.sv !== 'number') return null;
-    return { userId: payload.sub, sessionVersion: payload.sv };
+    const { payload } = await jwtVerify(token, secret, { algorithms: ['HS256'], currentDate: now, requiredClaims: ['exp'] });
+    if (typeof payload.sub !== 'string' || typeof payload.sv !== 'number' || typeof payload.exp !== 'number') return null;
+    return { userId: payload.sub, sessionVersion: payload.sv, expiresAt: payload.exp * 1000 };
   } catch {
     return null;
   }

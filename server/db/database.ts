@@ -1,7 +1,8 @@
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import SQLite from 'better-sqlite3';
-import { Kysely, SqliteDialect, type Transaction } from 'kysely';
+import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'kysely';
+import { LRUCache } from 'lru-cache';
 import type { AuditLogTable } from './audit-log-table.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from './outbox-message-table.ts';
 import type { DynoFileTable, RoadTable } from './road-dyno-tables.ts';
@@ -56,5 +57,29 @@ export function openDatabase(path: string): Db {
   sqlite.pragma('journal_mode = WAL');
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
-  return new Kysely<Database>({ dialect: new SqliteDialect({ database: sqlite }) });
+  return new Kysely<Database>({ dialect: new SqliteDialect({ database: withStatementCache(sqlite) }) });
+}
+
+/** How many distinct SQL texts keep their prepared statement: the app issues a few hundred. */
+const STATEMENT_CACHE_SIZE = 500;
+
+/**
+ * Kysely prepares every query afresh; this hands it back the statement prepared last time for
+ * the same SQL text instead (SQLite re-prepares by itself after a schema change). Safe because
+ * nothing here streams (`.stream()` would hold a statement busy while another call wanted it)
+ * and one connection runs one statement at a time.
+ */
+function withStatementCache(sqlite: SQLite.Database): SqliteDatabase {
+  const statements = new LRUCache<string, SQLite.Statement>({ max: STATEMENT_CACHE_SIZE });
+  return {
+    close: () => sqlite.close(),
+    prepare: (sql: string) => {
+      let statement = statements.get(sql);
+      if (!statement) {
+        statement = sqlite.prepare(sql);
+        statements.set(sql, statement);
+      }
+      return statement;
+    },
+  };
 }

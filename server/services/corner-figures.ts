@@ -1,3 +1,4 @@
+import { LRUCache } from 'lru-cache';
 import type { ModalResult } from '../../shared/schemas/modal.ts';
 import type { CornerFigures } from '../../shared/schemas/setup-record.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
@@ -19,6 +20,22 @@ export function analyseSetup(setup: Setup): { modal: ModalResult; wheelRate: num
 export function figuresOf(setup: Setup): CornerFigures {
   const { modal, wheelRate } = analyseSetup(setup);
   return { bodyHz: modal.body.naturalHz, wheelHopHz: modal.wheel.naturalHz, bodyDampingRatio: modal.body.dampingRatio, wheelRate };
+}
+
+const figuresByRevision = new LRUCache<string, CornerFigures>({ max: 20_000 });
+
+/**
+ * The figures of a stored revision, worked out once per revision: revisions never change (a
+ * trigger refuses UPDATE), so the setups list does not parse and analyse every document on
+ * every request.
+ */
+export function figuresOfRevision(revisionId: string, documentJson: string): CornerFigures {
+  let figures = figuresByRevision.get(revisionId);
+  if (!figures) {
+    figures = figuresOf(parseStoredSetup(documentJson, `of revision ${revisionId}`));
+    figuresByRevision.set(revisionId, figures);
+  }
+  return figures;
 }
 
 /**

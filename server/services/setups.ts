@@ -38,7 +38,7 @@ import {
 } from '../repositories/setups.ts';
 import { findVehicle } from '../repositories/vehicles.ts';
 import { recordAudit } from './audit.ts';
-import { figuresOf, parseStoredSetup } from './corner-figures.ts';
+import { figuresOfRevision, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
 
 /** Who acts, in the shape every service here needs. */
@@ -49,7 +49,6 @@ const noSetup = () => fail('not_found', 'No such setup in this workspace.');
 const noRevision = (n: number) => fail('not_found', `This setup has no revision ${n}.`);
 
 export function toSummary(r: SetupSummaryRow): SetupSummary {
-  const document = parseStoredSetup(r.revision_document, `of revision ${r.revision_id}`);
   return {
     id: r.id,
     name: r.name,
@@ -62,7 +61,7 @@ export function toSummary(r: SetupSummaryRow): SetupSummary {
     changedAt: r.updated_at,
     changedBy: { id: r.updated_by, name: r.updated_by_name },
     archivedAt: r.archived_at,
-    figures: figuresOf(document),
+    figures: figuresOfRevision(r.revision_id, r.revision_document),
   };
 }
 
