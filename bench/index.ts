@@ -12,7 +12,9 @@ import { buildRoad } from '../shared/sim/roads/index.ts';
 import { clearIsoRoadCache } from '../shared/sim/roads/iso8608.ts';
 import { runCorner } from '../shared/sim/run-corner.ts';
 import type { TraceColumns } from '../shared/sim/trace.ts';
-import { DURATION, isoC, linearSetup, nonLinearSetup, request, SPEED, sweepRequests } from './problems.ts';
+import { createStudyRunner } from '../shared/study/run-jobs.ts';
+import { integrateFixedStep, sampleRoad, stepPlanFor } from '../shared/study/fixed-step.ts';
+import { DURATION, isoC, linearSetup, nonLinearSetup, request, SPEED, sweepJobs, sweepRequests } from './problems.ts';
 import { rk4Corner } from './rk4.ts';
 import { median, timeIt, type Timings } from './stats.ts';
 import { startPool } from './sweep.ts';
@@ -109,8 +111,36 @@ async function main() {
     sweepTimes.push(performance.now() - s0);
     failures = results.filter((r) => 'error' in r).length;
   }
+  row('400 runs on 2 worker threads (s, median)', (median(sweepTimes) / 1000).toFixed(2), `runCorner (odex); workers started beforehand (${(startup / 1000).toFixed(2)} s to start); ${failures} failed runs`);
+
+  // 3b. The study path: what a study worker runs for each point (fixed-step RK4 on a road
+  //     sampled once per road and speed, shared/study/fixed-step.ts), alone and over 2 threads.
+  const studyCtx = { base: Setup.parse(nonLinearSetup), roads: [Road.parse(isoC)], duration: DURATION };
+  const jobs = sweepJobs();
+  const baseJob = { pointIndex: 0, values: {}, roadIndex: 0, speed: SPEED };
+  const studyFirst = timeIt(() => {
+    clearIsoRoadCache();
+    const out = createStudyRunner(studyCtx).run(baseJob);
+    if (!out.run.figures) throw new Error(out.run.error ?? 'study run failed');
+  }, REPEATS);
+  const runner = createStudyRunner(studyCtx);
+  runner.run(baseJob);
+  let k = 0;
+  const studyWarm = timeIt(() => {
+    const out = runner.run(jobs[k++ % jobs.length]);
+    if (!out.run.figures) throw new Error(out.run.error ?? 'study run failed');
+  }, REPEATS);
+  row('60 s non-linear run, study path, first of a study (ms, median)', ms(studyFirst), 'fixed-step RK4; road generated and sampled');
+  row('60 s non-linear run, study path, road kept (ms, median)', ms(studyWarm), 'every later run of the same road and speed');
+  const studyTimes: number[] = [];
+  for (let i = 0; i < SWEEP_REPEATS; i++) {
+    const s0 = performance.now();
+    const results = await pool.runStudy(jobs);
+    studyTimes.push(performance.now() - s0);
+    failures = results.filter((r) => 'error' in r).length;
+  }
   await pool.close();
-  row('400 runs on 2 worker threads (s, median)', (median(sweepTimes) / 1000).toFixed(2), `workers started beforehand (${(startup / 1000).toFixed(2)} s to start); ${failures} failed runs`);
+  row('400 runs on 2 worker threads, study path (s, median)', (median(studyTimes) / 1000).toFixed(2), `as a study runs them; ${failures} failed runs`);
 
   // 4. Fixed-step RK4 at 1 kHz on the non-linear problem, against odex at its default tolerance,
   //    both compared with odex at a tolerance of 1e-8.
@@ -128,6 +158,10 @@ async function main() {
   row('RK4 1 kHz: worst metric difference from odex at 1e-8', worstDifference(metricsOf(rk.trace, p.statics.tyreLoad), mRef));
   row('odex default (1e-4): ms per simulated second', perSecond(odexTimes), `${def.stats.rhsEvaluations} RHS evaluations`);
   row('odex default (1e-4): worst metric difference from odex at 1e-8', worstDifference(metricsOf(def.trace, p.statics.tyreLoad), mRef));
+  const plan = stepPlanFor(p.setup);
+  const fixed = integrateFixedStep(p.setup, sampleRoad(p.road, DURATION, plan), DURATION);
+  if (!fixed.ok) throw new Error(fixed.reason);
+  row('study path (fixed-step RK4): worst metric difference from odex at 1e-8', worstDifference(metricsOf(fixed.trace, p.statics.tyreLoad), mRef), `${plan.outputsPerStep === 2 ? 'one RK4 step per two output samples' : `${plan.substeps} RK4 steps per output sample`}`);
 
   const w0 = Math.max(...rows.map((r) => r[0].length));
   const w1 = Math.max(...rows.map((r) => r[1].length));

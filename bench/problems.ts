@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import type { RoadInput } from '../shared/schemas/road.ts';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
 import type { SetupInput } from '../shared/schemas/setup.ts';
+import type { StudyRunJob } from '../shared/study/run-jobs.ts';
 
 /** The reference problems: the Pipit front corner on ISO 8608 class C, seed 7, at 20 m/s. */
 const example = <T>(name: string): T => JSON.parse(readFileSync(new URL(`../examples/${name}`, import.meta.url), 'utf8'));
@@ -37,6 +38,19 @@ export function sweepRequests(): RunRequestInput[] {
           damper: { ...d, compression: scale(d.compression), rebound: scale(d.rebound) },
         }),
       );
+    }
+  }
+  return out;
+}
+
+/** The same 20 × 20 grid as study jobs (damper scale, spring rate at the spring), one road, one speed. */
+export function sweepJobs(): StudyRunJob[] {
+  const out: StudyRunJob[] = [];
+  for (let i = 0; i < 20; i++) {
+    for (let j = 0; j < 20; j++) {
+      const damperScale = 0.6 + (1.4 * i) / 19;
+      const springRate = (nonLinearSetup.springRate as number) * (0.7 + (0.6 * j) / 19);
+      out.push({ pointIndex: i * 20 + j, values: { damperScale, springRate }, roadIndex: 0, speed: SPEED });
     }
   }
   return out;

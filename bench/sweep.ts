@@ -1,5 +1,6 @@
 import { Worker } from 'node:worker_threads';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
+import type { StudyRunJob } from '../shared/study/run-jobs.ts';
 
 type RunSummary = { aw: number; evals: number } | { error: string };
 
@@ -18,21 +19,28 @@ export async function startPool(size: number) {
       });
     }),
   );
+  async function spread<T>(items: T[], message: (part: T[]) => unknown): Promise<RunSummary[]> {
+    const share = Math.ceil(items.length / workers.length);
+    const parts = await Promise.all(
+      workers.map(
+        (w, i) =>
+          new Promise<RunSummary[]>((resolve, reject) => {
+            w.once('message', resolve);
+            w.once('error', reject);
+            w.postMessage(message(items.slice(i * share, (i + 1) * share)));
+          }),
+      ),
+    );
+    return parts.flat();
+  }
   return {
-    /** Splits the requests evenly, runs them, and returns every summary in order. */
-    async run(requests: RunRequestInput[]): Promise<RunSummary[]> {
-      const share = Math.ceil(requests.length / workers.length);
-      const parts = await Promise.all(
-        workers.map(
-          (w, i) =>
-            new Promise<RunSummary[]>((resolve, reject) => {
-              w.once('message', resolve);
-              w.once('error', reject);
-              w.postMessage(requests.slice(i * share, (i + 1) * share));
-            }),
-        ),
-      );
-      return parts.flat();
+    /** Splits the requests evenly, runs each through `runCorner`, and returns every summary in order. */
+    run(requests: RunRequestInput[]): Promise<RunSummary[]> {
+      return spread(requests, (part) => ({ kind: 'single', requests: part }));
+    },
+    /** The same split for study jobs, run as a study worker runs them (shared/study/run-jobs.ts). */
+    runStudy(jobs: StudyRunJob[]): Promise<RunSummary[]> {
+      return spread(jobs, (part) => ({ kind: 'study', jobs: part }));
     },
     async close() {
       await Promise.all(workers.map((w) => w.terminate()));
