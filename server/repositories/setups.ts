@@ -86,8 +86,11 @@ function revisionQuery(db: Queryable) {
 
 export type RevisionSummaryRow = Awaited<ReturnType<typeof listRevisions>>[number];
 
-export function listRevisions(db: Queryable, setupId: string) {
-  return revisionQuery(db).where('r.setup_id', '=', setupId).orderBy('r.number', 'desc').execute();
+/** Up to `limit` revisions numbered below `before` (all when absent), newest first. */
+export function listRevisions(db: Queryable, setupId: string, page: { limit: number; before?: number }) {
+  let q = revisionQuery(db).where('r.setup_id', '=', setupId);
+  if (page.before !== undefined) q = q.where('r.number', '<', page.before);
+  return q.orderBy('r.number', 'desc').limit(page.limit).execute();
 }
 
 export function findRevision(db: Queryable, setupId: string, number: number) {

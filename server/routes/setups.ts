@@ -4,6 +4,7 @@ import {
   CreateSetupInput,
   ImportSetupQuery,
   RestoreRevisionInput,
+  RevisionsQuery,
   type RevisionsResponse,
   SaveRevisionInput,
   type SetupDetail,
@@ -80,7 +81,7 @@ export const setupRoutes: RouteModule = (deps) => [
     path: `${base}/:setupId/revisions`,
     access: 'viewer',
     handler: async (req, res) => {
-      const body: RevisionsResponse = unwrap(await getRevisions(deps.db, workspaceOf(req), pathParam(req, 'setupId')));
+      const body: RevisionsResponse = unwrap(await getRevisions(deps.db, workspaceOf(req), pathParam(req, 'setupId'), RevisionsQuery.parse(req.query)));
       res.json(body);
     },
   },

@@ -5,6 +5,7 @@ import {
   type CreateSetupInput,
   type ImportSetupQuery,
   type RestoreRevisionInput,
+  type RevisionsQuery,
   type RevisionsResponse,
   type RevisionSummary,
   type SaveRevisionInput,
@@ -97,9 +98,12 @@ export async function getSetup(db: Db, ws: Ws, setupId: string): Promise<Outcome
   return detail ? ok(detail) : noSetup();
 }
 
-export async function getRevisions(db: Db, ws: Ws, setupId: string): Promise<Outcome<RevisionsResponse>> {
+/** A page of a setup's revisions: one more row than asked tells whether older ones remain. */
+export async function getRevisions(db: Db, ws: Ws, setupId: string, page: RevisionsQuery): Promise<Outcome<RevisionsResponse>> {
   if (!(await findSetup(db, ws.workspaceId, setupId))) return noSetup();
-  return ok({ revisions: (await listRevisions(db, setupId)).map(toRevisionSummary) });
+  const rows = await listRevisions(db, setupId, { limit: page.limit + 1, before: page.before });
+  const revisions = rows.slice(0, page.limit).map(toRevisionSummary);
+  return ok({ revisions, nextBefore: rows.length > page.limit ? revisions[revisions.length - 1].number : null });
 }
 
 export async function getRevision(db: Db, ws: Ws, setupId: string, number: number): Promise<Outcome<SetupRevision>> {

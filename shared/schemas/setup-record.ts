@@ -81,8 +81,19 @@ export type SetupsResponse = z.infer<typeof SetupsResponse>;
 export const SetupsQuery = z.object({ archived: z.enum(['exclude', 'include', 'only']).default('exclude') });
 export type SetupsQuery = z.infer<typeof SetupsQuery>;
 
-/** GET /setups/:setupId/revisions — newest first. */
-export const RevisionsResponse = z.object({ revisions: z.array(RevisionSummary) });
+/** Revisions per page of GET /setups/:setupId/revisions, unless the caller asks for fewer. */
+export const REVISIONS_PAGE = 100;
+
+/** GET /setups/:setupId/revisions?limit=&before= — a page, newest first, older than `before`. */
+export const RevisionsQuery = z.object({
+  limit: z.coerce.number().int().min(1).max(500).default(REVISIONS_PAGE),
+  /** Only revisions numbered below this one (the previous page's `nextBefore`). */
+  before: z.coerce.number().int().min(2).optional(),
+});
+export type RevisionsQuery = z.infer<typeof RevisionsQuery>;
+
+/** A page of revisions, newest first; `nextBefore` fetches the next older page (null: none left). */
+export const RevisionsResponse = z.object({ revisions: z.array(RevisionSummary), nextBefore: z.number().int().nullable() });
 export type RevisionsResponse = z.infer<typeof RevisionsResponse>;
 
 /** POST /setups — a new setup with its first revision; the setup takes the document's name. */

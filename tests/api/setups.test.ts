@@ -83,6 +83,31 @@ describe('setups and their revisions', () => {
     expect(await auditActions(created.id)).toEqual(['setup.created', 'setup.revised', 'setup.revised']);
   });
 
+  it('lists revisions a page at a time, newest first, and says where the next page starts', async () => {
+    const created = await create('Paged history');
+    for (let n = 2; n <= 5; n++) {
+      await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Paged history', { springRate: 30000 + n }), message: `Save ${n}`, basedOn: n - 1 }).expect(201);
+    }
+    const numbers = (r: RevisionsResponse) => r.revisions.map((x) => x.number);
+    const first = RevisionsResponse.parse((await eng.get(`${setups}/${created.id}/revisions?limit=2`).expect(200)).body);
+    expect(numbers(first)).toEqual([5, 4]);
+    expect(first.nextBefore).toBe(4);
+    const second = RevisionsResponse.parse((await eng.get(`${setups}/${created.id}/revisions?limit=2&before=${first.nextBefore}`).expect(200)).body);
+    expect(numbers(second)).toEqual([3, 2]);
+    const last = RevisionsResponse.parse((await eng.get(`${setups}/${created.id}/revisions?limit=2&before=${second.nextBefore}`).expect(200)).body);
+    expect(numbers(last)).toEqual([1]);
+    expect(last.nextBefore).toBeNull();
+    // exactly a page left: no empty page promised
+    const exact = RevisionsResponse.parse((await eng.get(`${setups}/${created.id}/revisions?limit=5`).expect(200)).body);
+    expect(exact.nextBefore).toBeNull();
+    // the default page holds all five
+    expect(numbers(RevisionsResponse.parse((await eng.get(`${setups}/${created.id}/revisions`).expect(200)).body))).toEqual([5, 4, 3, 2, 1]);
+    for (const bad of ['limit=0', 'limit=501', 'limit=two', 'before=1', 'before=-3']) {
+      const res = await eng.get(`${setups}/${created.id}/revisions?${bad}`).expect(400);
+      expect(JSON.stringify(res.body)).toMatch(new RegExp(bad.split('=')[0]));
+    }
+  });
+
   it('the database itself refuses to update a revision row', async () => {
     const created = await create('Immutable check');
     await expect(t.db.updateTable('setup_revision').set({ message: 'rewritten' }).where('setup_id', '=', created.id).execute()).rejects.toThrow(/immutable/);

@@ -1,12 +1,19 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { RevisionsResponse } from '../../../../shared/schemas/setup-record.ts';
 import { api } from '../../../lib/api-client.ts';
 import { revisionsKey, setupPath } from './setup-keys.ts';
 
-export const getRevisions = (workspaceId: string, setupId: string) => api.get(`${setupPath(workspaceId, setupId)}/revisions`, RevisionsResponse);
+/** One page of a setup's revisions, newest first; `before` continues from the previous page. */
+export const getRevisions = (workspaceId: string, setupId: string, before?: number) =>
+  api.get(`${setupPath(workspaceId, setupId)}/revisions${before === undefined ? '' : `?before=${before}`}`, RevisionsResponse);
 
 export const revisionsQueryOptions = (workspaceId: string, setupId: string) =>
-  queryOptions({ queryKey: revisionsKey(workspaceId, setupId), queryFn: () => getRevisions(workspaceId, setupId) });
+  infiniteQueryOptions({
+    queryKey: revisionsKey(workspaceId, setupId),
+    queryFn: ({ pageParam }) => getRevisions(workspaceId, setupId, pageParam),
+    initialPageParam: undefined as number | undefined,
+    getNextPageParam: (last) => last.nextBefore ?? undefined,
+  });
 
-/** Every revision of a setup, newest first, without documents. */
-export const useRevisions = (workspaceId: string, setupId: string) => useQuery(revisionsQueryOptions(workspaceId, setupId));
+/** A setup's revisions, newest first, without documents, a page at a time (`fetchNextPage` for older ones). */
+export const useRevisions = (workspaceId: string, setupId: string) => useInfiniteQuery(revisionsQueryOptions(workspaceId, setupId));

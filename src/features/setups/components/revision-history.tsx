@@ -56,7 +56,7 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
 
   if (revisions.isPending) return <Loading what="revisions" />;
   if (revisions.isError) return <Notice tone="danger">{revisions.error.message}</Notice>;
-  const list: RevisionSummary[] = revisions.data.revisions;
+  const list: RevisionSummary[] = revisions.data.pages.flatMap((page) => page.revisions);
 
   const doRestore = (number: number) =>
     restore.mutate(
@@ -151,6 +151,14 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
             ))}
           </tbody>
         </table>
+        {revisions.hasNextPage && (
+          <div className="flex items-center gap-3 border-t border-rule px-2 py-2 text-xs text-ink-soft">
+            <Button size="sm" busy={revisions.isFetchingNextPage} onClick={() => void revisions.fetchNextPage()}>
+              Show older revisions
+            </Button>
+            <span>{list.length} newest shown</span>
+          </div>
+        )}
       </div>
       <div className="min-w-0">
         <h3 className="mb-1.5 text-sm font-semibold text-ink">
