@@ -130,8 +130,15 @@ describe('backup and restore', () => {
 
     const backupHeld = crashMessages(backupFile).revisions;
     const again = await serve();
-    const list = RevisionsResponse.parse((await callJson(again.url, session, 'GET', `/api/workspaces/${workspaceId}/setups/${setupId}/revisions`)).body);
-    const served = new Set(list.revisions.map((r) => r.message).filter((msg) => msg.startsWith('load ')));
+    // every page of the history, newest first
+    const messages: string[] = [];
+    for (let before: number | null | undefined; before !== null; ) {
+      const query = before === undefined ? '' : `?before=${before}`;
+      const page = RevisionsResponse.parse((await callJson(again.url, session, 'GET', `/api/workspaces/${workspaceId}/setups/${setupId}/revisions${query}`)).body);
+      messages.push(...page.revisions.map((r) => r.message));
+      before = page.nextBefore;
+    }
+    const served = new Set(messages.filter((msg) => msg.startsWith('load ')));
     expect(served).toEqual(backupHeld);
     await again.kill('SIGTERM');
     children.delete(again);
