@@ -36,6 +36,8 @@ describe('setup and road documents', () => {
       [{ ...base, sprungmass: 300 }, ''],
       [{ ...base, damper: { ...base.damper, compression: [[0, 10], [0.1, 100]] } }, 'damper.compression.0.1'],
       [{ ...base, damper: { ...base.damper, rebound: [[0.1, 300], [0.2, 250]] } }, 'damper.rebound.1.1'],
+      // an empty table is a field error, not a crash in the table checks (found by tests/fuzz)
+      [{ ...base, damper: { ...base.damper, rebound: [] } }, 'damper.rebound'],
       [{ ...base, damper: { ...base.damper, gas: { pressure: 1e6 } } }, 'damper.gas.rodArea'],
       [{ ...base, damper: { ...base.damper, gas: { force: 200, polytropic: { volume: 1e-4, exponent: 1.6 } } } }, 'damper.gas.polytropic.exponent'],
       [{ ...base, bumpStop: { clearance: -0.01, law: { kind: 'polynomial', coefficients: [1e4] } } }, 'bumpStop.clearance'],

@@ -44,6 +44,8 @@ export const DamperCurve = z
   .min(1)
   .max(64)
   .superRefine((pts, ctx) => {
+    // zod runs refinements after a failed .min(1) too: the empty table has its issue already
+    if (pts.length === 0) return;
     checkMonotoneTable(pts, ctx, 'velocity', 'm/s');
     if (pts[0][0] === 0 && pts[0][1] !== 0) {
       ctx.addIssue({ code: 'custom', path: [0, 1], message: 'a damper makes no force at rest: the point at 0 m/s must have 0 N' });

@@ -72,7 +72,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
               <section aria-label="Map of a figure" className="rounded border border-rule bg-paper-raised p-3">
                 <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
                   <h2 className="text-base font-semibold">Map over both parameters</h2>
-                  <Field label="Figure" className="w-72">
+                  <Field label="Figure" className="w-80 max-w-full">
                     <Select value={mapFigure} onChange={(e) => setMapFigure(e.target.value as StudyFigureKey)}>
                       {present.map((k) => (
                         <option key={k} value={k}>
@@ -89,7 +89,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
             <section aria-label="Figure along a parameter" className="rounded border border-rule bg-paper-raised p-3">
               <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
                 <h2 className="text-base font-semibold">Along one parameter, per road and speed</h2>
-                <Field label="Figure" className="w-64">
+                <Field label="Figure" className="w-80 max-w-full">
                   <Select value={lineFigure} onChange={(e) => setLineFigure(e.target.value as StudyFigureKey)}>
                     {present.map((k) => (
                       <option key={k} value={k}>
