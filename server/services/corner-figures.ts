@@ -22,20 +22,35 @@ export function figuresOf(setup: Setup): CornerFigures {
   return { bodyHz: modal.body.naturalHz, wheelHopHz: modal.wheel.naturalHz, bodyDampingRatio: modal.body.dampingRatio, wheelRate };
 }
 
-const figuresByRevision = new LRUCache<string, CornerFigures>({ max: 20_000 });
+const figuresByRevision = new LRUCache<string, { figures: CornerFigures | null }>({ max: 20_000 });
 
 /**
  * The figures of a stored revision, worked out once per revision: revisions never change (a
  * trigger refuses UPDATE), so the setups list does not parse and analyse every document on
  * every request.
  */
-export function figuresOfRevision(revisionId: string, documentJson: string): CornerFigures {
-  let figures = figuresByRevision.get(revisionId);
-  if (!figures) {
-    figures = figuresOf(parseStoredSetup(documentJson, `of revision ${revisionId}`));
-    figuresByRevision.set(revisionId, figures);
+export function figuresOfRevision(revisionId: string, documentJson: string): CornerFigures | null {
+  let known = figuresByRevision.get(revisionId);
+  if (!known) {
+    known = { figures: listFigures(parseStoredSetup(documentJson, `of revision ${revisionId}`)) };
+    figuresByRevision.set(revisionId, known);
   }
-  return figures;
+  return known.figures;
+}
+
+/**
+ * Figures for a list, or null when the linear analysis has none to give: a corner the schema
+ * allows can still be far outside what the eigenvalue solver resolves (a damper table whose
+ * first point makes a slope of 1e8 N·s/m, found by tests/fuzz). One such setup must not take
+ * the whole list down; its row shows dashes.
+ */
+export function listFigures(setup: Setup): CornerFigures | null {
+  try {
+    const figures = figuresOf(setup);
+    return Object.values(figures).every(Number.isFinite) ? figures : null;
+  } catch {
+    return null;
+  }
 }
 
 /**

@@ -108,6 +108,17 @@ describe('setups and their revisions', () => {
     }
   });
 
+  it('a corner beyond what the linear analysis resolves still saves, and the list shows it without figures', async () => {
+    // a first damper point at 5e-324 m/s: an infinite low-speed slope (found by tests/fuzz)
+    const extreme = cornerDocument('Extreme damper', {});
+    const doc = { ...extreme, damper: { ...(extreme as { damper: object }).damper, rebound: [[5e-324, 0.000001]] } };
+    const res = await eng.post(setups, { setup: doc }).expect(201);
+    const id = SetupDetail.parse(res.body).id;
+    const list = SetupsResponse.parse((await eng.get(setups).expect(200)).body);
+    expect(list.setups.find((s) => s.id === id)?.figures).toBeNull();
+    expect(list.setups.filter((s) => s.id !== id).every((s) => s.figures !== null)).toBe(true);
+  });
+
   it('the database itself refuses to update a revision row', async () => {
     const created = await create('Immutable check');
     await expect(t.db.updateTable('setup_revision').set({ message: 'rewritten' }).where('setup_id', '=', created.id).execute()).rejects.toThrow(/immutable/);
