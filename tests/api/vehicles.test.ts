@@ -38,6 +38,20 @@ function expectedModal(doc: typeof front) {
 }
 
 describe('vehicles', () => {
+  it('a corner the linear analysis cannot resolve keeps its slot, without modal figures or a ratio', async () => {
+    // a first damper point at 5e-324 m/s: an infinite low-speed slope (found by tests/fuzz)
+    const extreme = { ...front, damper: { ...front.damper, rebound: [[5e-324, 0.000001]] as [number, number][] } };
+    const f = await newSetup(extreme);
+    const r = await newSetup(rear);
+    const v = VehicleDetail.parse((await eng.post(`${ws}/vehicles`, { name: 'Extreme Pipit', frontSetupId: f.id, rearSetupId: r.id }).expect(201)).body);
+    expect(v.front?.id).toBe(f.id);
+    expect(v.analysis.front).toBeNull();
+    expect(v.analysis.rear?.setup.id).toBe(r.id);
+    expect(v.bodyRatio).toBeNull();
+    const list = VehiclesResponse.parse((await eng.get(`${ws}/vehicles`).expect(200)).body);
+    expect(list.vehicles.find((x) => x.id === v.id)?.bodyRatio).toBeNull();
+  });
+
   it('groups a front and a rear corner and reports both modes and the rear/front body ratio', async () => {
     const f = await newSetup(front);
     const r = await newSetup(rear);

@@ -16,11 +16,18 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
   );
 }
 
-function CornerColumn({ workspaceId, title, analysis }: { workspaceId: string; title: string; analysis: CornerAnalysis | null }) {
+function CornerColumn({ workspaceId, title, analysis, slot }: { workspaceId: string; title: string; analysis: CornerAnalysis | null; slot: VehicleDetail['front'] }) {
   return (
     <section aria-label={`${title} corner`} className="min-w-0 rounded border border-rule bg-paper-raised px-4 py-3">
       <h2 className="text-2xs font-semibold tracking-wider text-ink-faint uppercase">{title}</h2>
-      {!analysis ? (
+      {!analysis && slot ? (
+        <>
+          <Link to={`/w/${workspaceId}/corners/${slot.id}`} className="mt-0.5 block font-medium text-ink hover:text-accent hover:underline">
+            {slot.name} <span className="figures text-xs font-normal text-ink-faint">r{slot.latestRevision}</span>
+          </Link>
+          <p className="mt-2 text-sm text-ink-soft">The linear analysis cannot resolve this corner (its damper or rates are far outside what a road car uses), so it has no modal figures.</p>
+        </>
+      ) : !analysis ? (
         <p className="mt-2 text-sm text-ink-faint">No setup in this corner yet.</p>
       ) : (
         <>
@@ -66,8 +73,8 @@ export function VehicleSummaryPanel({ workspaceId, vehicle }: { workspaceId: str
   const { front, rear } = vehicle.analysis;
   return (
     <div className="grid gap-4 lg:grid-cols-[1fr_1fr_minmax(15rem,0.9fr)]">
-      <CornerColumn workspaceId={workspaceId} title="Front" analysis={front} />
-      <CornerColumn workspaceId={workspaceId} title="Rear" analysis={rear} />
+      <CornerColumn workspaceId={workspaceId} title="Front" analysis={front} slot={vehicle.front} />
+      <CornerColumn workspaceId={workspaceId} title="Rear" analysis={rear} slot={vehicle.rear} />
       <section aria-label="Front and rear compared" className="rounded border border-rule bg-paper-raised px-4 py-3">
         <h2 className="text-2xs font-semibold tracking-wider text-ink-faint uppercase">Rear / front body frequency</h2>
         {vehicle.bodyRatio === null ? (
