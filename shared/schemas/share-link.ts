@@ -67,7 +67,8 @@ export const SharedSetupRevision = z.object({
   setupName: z.string(),
   revision: z.object({ number: z.number().int().positive(), message: z.string(), createdAt: IsoDateTime, authorName: z.string() }),
   document: Setup,
-  modal: ModalResult,
+  /** null when the linear analysis cannot resolve the corner (see server listFigures). */
+  modal: ModalResult.nullable(),
   /** Wheel rate used by the analysis, N/m. */
   wheelRate: z.number(),
 });

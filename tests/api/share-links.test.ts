@@ -61,8 +61,8 @@ describe('share links', () => {
     const view = SharedSetupRevision.parse(res.body);
     expect(view).toMatchObject({ readOnly: true, workspaceName: 'Instructor bench', sharedBy: 'Instructor Hale', setupName: 'Corrie rear, shared', revision: { number: 1 } });
     expect(view.document).toEqual(parsed(cornerDocument('Corrie rear, shared')));
-    expect(view.modal.body.naturalHz).toBeGreaterThan(0.8);
-    expect(view.modal.wheel.naturalHz).toBeGreaterThan(view.modal.body.naturalHz);
+    expect(view.modal!.body.naturalHz).toBeGreaterThan(0.8);
+    expect(view.modal!.wheel.naturalHz).toBeGreaterThan(view.modal!.body.naturalHz);
   });
 
   it('a revoked link answers 410 with plain words, signed in or not', async () => {

@@ -31,7 +31,11 @@ export function SharedRoute() {
               <div className="grid items-start gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
                 <SetupSheet setup={view.document} />
                 <div className="flex min-w-0 flex-col gap-5">
-                  <CornerFiguresStrip modal={view.modal} wheelRate={view.wheelRate} sprungMass={view.document.sprungMass} />
+                  {view.modal ? (
+                    <CornerFiguresStrip modal={view.modal} wheelRate={view.wheelRate} sprungMass={view.document.sprungMass} />
+                  ) : (
+                    <p className="text-sm text-ink-soft">The linear analysis cannot resolve this corner (its damper or rates are far outside what a road car uses), so it has no modal figures.</p>
+                  )}
                   <DamperCurveEditor
                     value={Damper.parse(view.document.damper)}
                     onChange={() => undefined}
