@@ -10,16 +10,29 @@ import { linearCorner } from '../../shared/sim/quarter-car.ts';
  * Linear analysis of a stored setup document with the simulation core's own reduction
  * (`linearCorner`: wheel rate with the gas rate, damper as its least-squares equivalent), so
  * the figures here are the ones a run reports.
+ *
+ * `modal` is null when the analysis cannot resolve the corner. The schema allows corners far
+ * outside any car (found by tests/fuzz): a first damper point at 5e-324 m/s makes the equivalent
+ * damping infinite, and 1e8 N·s/m against a 36 kg wheel leaves the eigenvalue solver a root of
+ * the wrong sign. One such setup must not take a list or a page down with it.
  */
-export function analyseSetup(setup: Setup): { modal: ModalResult; wheelRate: number } {
+export function analyseSetup(setup: Setup): { modal: ModalResult | null; wheelRate: number } {
   const equivalent = equivalentDampingLeastSquares(setup.damper);
   const corner = linearCorner(setup, equivalent);
-  return { modal: modalAnalysis(corner, equivalent.definition), wheelRate: corner.wheelRate };
+  let modal: ModalResult | null;
+  try {
+    modal = modalAnalysis(corner, equivalent.definition);
+  } catch {
+    modal = null;
+  }
+  const modes = modal ? [modal.body.naturalHz, modal.body.dampingRatio, modal.wheel.naturalHz, modal.wheel.dampingRatio] : [];
+  return { modal: modal && modes.every(Number.isFinite) ? modal : null, wheelRate: corner.wheelRate };
 }
 
-export function figuresOf(setup: Setup): CornerFigures {
+/** The list's figures of a corner; null when its analysis has none (see `analyseSetup`). */
+export function figuresOf(setup: Setup): CornerFigures | null {
   const { modal, wheelRate } = analyseSetup(setup);
-  return { bodyHz: modal.body.naturalHz, wheelHopHz: modal.wheel.naturalHz, bodyDampingRatio: modal.body.dampingRatio, wheelRate };
+  return modal && { bodyHz: modal.body.naturalHz, wheelHopHz: modal.wheel.naturalHz, bodyDampingRatio: modal.body.dampingRatio, wheelRate };
 }
 
 const figuresByRevision = new LRUCache<string, { figures: CornerFigures | null }>({ max: 20_000 });
@@ -32,25 +45,10 @@ const figuresByRevision = new LRUCache<string, { figures: CornerFigures | null }
 export function figuresOfRevision(revisionId: string, documentJson: string): CornerFigures | null {
   let known = figuresByRevision.get(revisionId);
   if (!known) {
-    known = { figures: listFigures(parseStoredSetup(documentJson, `of revision ${revisionId}`)) };
+    known = { figures: figuresOf(parseStoredSetup(documentJson, `of revision ${revisionId}`)) };
     figuresByRevision.set(revisionId, known);
   }
   return known.figures;
-}
-
-/**
- * Figures for a list, or null when the linear analysis has none to give: a corner the schema
- * allows can still be far outside what the eigenvalue solver resolves (a damper table whose
- * first point makes a slope of 1e8 N·s/m, found by tests/fuzz). One such setup must not take
- * the whole list down; its row shows dashes.
- */
-export function listFigures(setup: Setup): CornerFigures | null {
-  try {
-    const figures = figuresOf(setup);
-    return Object.values(figures).every(Number.isFinite) ? figures : null;
-  } catch {
-    return null;
-  }
 }
 
 /**

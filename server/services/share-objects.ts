@@ -2,8 +2,7 @@ import type { ShareObjectType, SharedObject } from '../../shared/schemas/share-l
 import type { Queryable } from '../db/database.ts';
 import { findRevisionById } from '../repositories/setups.ts';
 import type { ShareLinkViewRow } from '../repositories/share-links.ts';
-import { wheelRate } from '../../shared/sim/quarter-car.ts';
-import { analyseSetup, listFigures, parseStoredSetup } from './corner-figures.ts';
+import { analyseSetup, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
 import { type Actor, insertNewSetup } from './setups.ts';
 import { studyShare } from './study-share.ts';
@@ -29,7 +28,7 @@ const setupRevision: ShareableKind = {
     const r = await findRevisionById(db, link.object_id);
     if (!r || r.workspace_id !== link.workspace_id) return undefined;
     const document = parseStoredSetup(r.document, `of revision ${r.id}`);
-    const { modal, wheelRate: rate } = listFigures(document) ? analyseSetup(document) : { modal: null, wheelRate: wheelRate(document) };
+    const { modal, wheelRate } = analyseSetup(document);
     return {
       readOnly: true,
       objectType: 'setup_revision',
@@ -41,7 +40,7 @@ const setupRevision: ShareableKind = {
       revision: { number: r.number, message: r.message, createdAt: r.created_at, authorName: r.author_name },
       document,
       modal,
-      wheelRate: rate,
+      wheelRate,
     };
   },
 

@@ -7,7 +7,7 @@ import type { VehicleRow } from '../db/setup-tables.ts';
 import { findSetup, findSlotHolder, listSetupSummariesOfVehicles, type SetupSummaryRow, updateSetupRow } from '../repositories/setups.ts';
 import { deleteVehicleRow, findVehicle, insertVehicle, listVehicles as listVehicleRows, updateVehicleRow } from '../repositories/vehicles.ts';
 import { recordAudit } from './audit.ts';
-import { analyseSetup, listFigures, parseStoredSetup } from './corner-figures.ts';
+import { analyseSetup, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
 import { type Actor, placeInSlot, toSummary } from './setups.ts';
 
@@ -24,13 +24,12 @@ function slot(r: SetupSummaryRow | undefined): CornerSlot | null {
   return r ? { id: r.id, name: r.name, latestRevision: r.revision_number } : null;
 }
 
-/** The corner's linear analysis; null without a setup, or when the analysis cannot resolve it (see `listFigures`). */
+/** The corner's linear analysis; null without a setup, or when the analysis cannot resolve it (see `analyseSetup`). */
 function analysis(r: SetupSummaryRow | undefined): CornerAnalysis | null {
   if (!r) return null;
   const document = parseStoredSetup(r.revision_document, `of revision ${r.revision_id}`);
-  if (!listFigures(document)) return null;
   const { modal, wheelRate } = analyseSetup(document);
-  return { setup: toSummary(r), modal, wheelRate, sprungMass: document.sprungMass };
+  return modal && { setup: toSummary(r), modal, wheelRate, sprungMass: document.sprungMass };
 }
 
 /** Rear over front body frequency (the body mode's |λ|/2π of each corner's latest revision). */

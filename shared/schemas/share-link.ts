@@ -67,7 +67,7 @@ export const SharedSetupRevision = z.object({
   setupName: z.string(),
   revision: z.object({ number: z.number().int().positive(), message: z.string(), createdAt: IsoDateTime, authorName: z.string() }),
   document: Setup,
-  /** null when the linear analysis cannot resolve the corner (see server listFigures). */
+  /** null when the linear analysis cannot resolve the corner (see `analyseSetup` on the server). */
   modal: ModalResult.nullable(),
   /** Wheel rate used by the analysis, N/m. */
   wheelRate: z.number(),

@@ -5,7 +5,7 @@ import { revisionsKey, setupPath } from './setup-keys.ts';
 
 /** One page of a setup's revisions, newest first; `before` continues from the previous page. */
 export const getRevisions = (workspaceId: string, setupId: string, before?: number) =>
-  api.get(`${setupPath(workspaceId, setupId)}/revisions${before === undefined ? '' : `?before=${before}`}`, RevisionsResponse);
+  api.get(`${setupPath(workspaceId, setupId)}/revisions`, RevisionsResponse, { query: { before } });
 
 export const revisionsQueryOptions = (workspaceId: string, setupId: string) =>
   infiniteQueryOptions({

@@ -20,48 +20,45 @@ function CornerColumn({ workspaceId, title, analysis, slot }: { workspaceId: str
   return (
     <section aria-label={`${title} corner`} className="min-w-0 rounded border border-rule bg-paper-raised px-4 py-3">
       <h2 className="text-2xs font-semibold tracking-wider text-ink-faint uppercase">{title}</h2>
-      {!analysis && slot ? (
+      {!slot ? (
+        <p className="mt-2 text-sm text-ink-faint">No setup in this corner yet.</p>
+      ) : (
         <>
           <Link to={`/w/${workspaceId}/corners/${slot.id}`} className="mt-0.5 block font-medium text-ink hover:text-accent hover:underline">
             {slot.name} <span className="figures text-xs font-normal text-ink-faint">r{slot.latestRevision}</span>
           </Link>
-          <p className="mt-2 text-sm text-ink-soft">The linear analysis cannot resolve this corner (its damper or rates are far outside what a road car uses), so it has no modal figures.</p>
-        </>
-      ) : !analysis ? (
-        <p className="mt-2 text-sm text-ink-faint">No setup in this corner yet.</p>
-      ) : (
-        <>
-          <Link to={`/w/${workspaceId}/corners/${analysis.setup.id}`} className="mt-0.5 block font-medium text-ink hover:text-accent hover:underline">
-            {analysis.setup.name} <span className="figures text-xs font-normal text-ink-faint">r{analysis.setup.latestRevision}</span>
-          </Link>
-          <table className="mt-2 w-full text-sm">
-            <tbody>
-              <Row label="Body, natural">
-                <Figure value={analysis.modal.body.naturalHz} unit="Hz" label={`${title} body frequency`} />
-              </Row>
-              <Row label="Body, damped">
-                <Figure value={analysis.modal.body.dampedHz} unit="Hz" />
-              </Row>
-              <Row label="Body damping ratio">
-                <Figure value={analysis.modal.body.dampingRatio} digits={2} />
-              </Row>
-              <Row label="Wheel hop, natural">
-                <Figure value={analysis.modal.wheel.naturalHz} unit="Hz" label={`${title} wheel-hop frequency`} />
-              </Row>
-              <Row label="Wheel-hop damping ratio">
-                <Figure value={analysis.modal.wheel.dampingRatio} digits={2} />
-              </Row>
-              <Row label="Hand estimate √(k_ride/ms)/2π">
-                <Figure value={analysis.modal.classic.bodyHz} unit="Hz" />
-              </Row>
-              <Row label="Wheel rate">
-                <Figure value={analysis.wheelRate} unit="Npermm" />
-              </Row>
-              <Row label="Sprung mass">
-                <Figure value={analysis.sprungMass} unit="kg" />
-              </Row>
-            </tbody>
-          </table>
+          {!analysis ? (
+            <p className="mt-2 text-sm text-ink-soft">The linear analysis cannot resolve this corner (its damper or rates are far outside what a road car uses), so it has no modal figures.</p>
+          ) : (
+            <table className="mt-2 w-full text-sm">
+              <tbody>
+                <Row label="Body, natural">
+                  <Figure value={analysis.modal.body.naturalHz} unit="Hz" label={`${title} body frequency`} />
+                </Row>
+                <Row label="Body, damped">
+                  <Figure value={analysis.modal.body.dampedHz} unit="Hz" />
+                </Row>
+                <Row label="Body damping ratio">
+                  <Figure value={analysis.modal.body.dampingRatio} digits={2} />
+                </Row>
+                <Row label="Wheel hop, natural">
+                  <Figure value={analysis.modal.wheel.naturalHz} unit="Hz" label={`${title} wheel-hop frequency`} />
+                </Row>
+                <Row label="Wheel-hop damping ratio">
+                  <Figure value={analysis.modal.wheel.dampingRatio} digits={2} />
+                </Row>
+                <Row label="Hand estimate √(k_ride/ms)/2π">
+                  <Figure value={analysis.modal.classic.bodyHz} unit="Hz" />
+                </Row>
+                <Row label="Wheel rate">
+                  <Figure value={analysis.wheelRate} unit="Npermm" />
+                </Row>
+                <Row label="Sprung mass">
+                  <Figure value={analysis.sprungMass} unit="kg" />
+                </Row>
+              </tbody>
+            </table>
+          )}
         </>
       )}
     </section>
