@@ -75,7 +75,9 @@ export function VehicleSummaryPanel({ workspaceId, vehicle }: { workspaceId: str
       <section aria-label="Front and rear compared" className="rounded border border-rule bg-paper-raised px-4 py-3">
         <h2 className="text-2xs font-semibold tracking-wider text-ink-faint uppercase">Rear / front body frequency</h2>
         {vehicle.bodyRatio === null ? (
-          <p className="mt-2 text-sm text-ink-faint">Both corners are needed for the ratio.</p>
+          <p className="mt-2 text-sm text-ink-faint">
+            {vehicle.front && vehicle.rear ? 'No ratio: a corner has no modal figures.' : 'Both corners are needed for the ratio.'}
+          </p>
         ) : (
           <>
             <p className="mt-1 text-2xl">
