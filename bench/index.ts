@@ -14,7 +14,7 @@ import { runCorner } from '../shared/sim/run-corner.ts';
 import type { TraceColumns } from '../shared/sim/trace.ts';
 import { createStudyRunner } from '../shared/study/run-jobs.ts';
 import { integrateFixedStep, sampleRoad, stepPlanFor } from '../shared/study/fixed-step.ts';
-import { DURATION, isoC, linearSetup, nonLinearSetup, request, SPEED, sweepJobs, sweepRequests } from './problems.ts';
+import { DURATION, isoC, linearSetup, nonLinearSetup, request, SPEED, studyContext, sweepJobs, sweepRequests } from './problems.ts';
 import { rk4Corner } from './rk4.ts';
 import { median, timeIt, type Timings } from './stats.ts';
 import { startPool } from './sweep.ts';
@@ -115,7 +115,7 @@ async function main() {
 
   // 3b. The study path: what a study worker runs for each point (fixed-step RK4 on a road
   //     sampled once per road and speed, shared/study/fixed-step.ts), alone and over 2 threads.
-  const studyCtx = { base: Setup.parse(nonLinearSetup), roads: [Road.parse(isoC)], duration: DURATION };
+  const studyCtx = studyContext();
   const jobs = sweepJobs();
   const baseJob = { pointIndex: 0, values: {}, roadIndex: 0, speed: SPEED };
   const studyFirst = timeIt(() => {

@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
-import type { RoadInput } from '../shared/schemas/road.ts';
+import { Road, type RoadInput } from '../shared/schemas/road.ts';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
-import type { SetupInput } from '../shared/schemas/setup.ts';
-import type { StudyRunJob } from '../shared/study/run-jobs.ts';
+import { Setup, type SetupInput } from '../shared/schemas/setup.ts';
+import type { StudyRunContext, StudyRunJob } from '../shared/study/run-jobs.ts';
 
 /** The reference problems: the Pipit front corner on ISO 8608 class C, seed 7, at 20 m/s. */
 const example = <T>(name: string): T => JSON.parse(readFileSync(new URL(`../examples/${name}`, import.meta.url), 'utf8'));
@@ -42,6 +42,9 @@ export function sweepRequests(): RunRequestInput[] {
   }
   return out;
 }
+
+/** What every job of the study-path sweep shares (shared/study/run-jobs.ts): the corner, the road, the duration. */
+export const studyContext = (): StudyRunContext => ({ base: Setup.parse(nonLinearSetup), roads: [Road.parse(isoC)], duration: DURATION });
 
 /** The same 20 × 20 grid as study jobs (damper scale, spring rate at the spring), one road, one speed. */
 export function sweepJobs(): StudyRunJob[] {

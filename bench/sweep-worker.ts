@@ -1,15 +1,10 @@
 import { parentPort } from 'node:worker_threads';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
-import { Road } from '../shared/schemas/road.ts';
-import { Setup } from '../shared/schemas/setup.ts';
 import { runCorner } from '../shared/sim/run-corner.ts';
 import { createStudyRunner, type StudyRunJob } from '../shared/study/run-jobs.ts';
-import { DURATION, isoC, nonLinearSetup } from './problems.ts';
+import { studyContext } from './problems.ts';
 
 export type SweepMessage = { kind: 'single'; requests: RunRequestInput[] } | { kind: 'study'; jobs: StudyRunJob[] } | 'exit';
-
-// The study path as a study worker runs it: one runner per study run, the road sampled once.
-const studyContext = () => ({ base: Setup.parse(nonLinearSetup), roads: [Road.parse(isoC)], duration: DURATION });
 
 /** Runs its share of a sweep on request and reports one figure per run (traces stay here). */
 parentPort!.on('message', (message: SweepMessage) => {
@@ -25,6 +20,7 @@ parentPort!.on('message', (message: SweepMessage) => {
     parentPort!.postMessage(results);
     return;
   }
+  // the study path as a study worker runs it: one runner per study run, the road sampled once
   const runner = createStudyRunner(studyContext());
   const results = message.jobs.map((job) => {
     const out = runner.run(job).run;
