@@ -2,7 +2,8 @@
  * Headless runner: one corner over one road, the same code the browser workers run.
  *
  *   npm run --silent sim -- --setup S.json --road R.json --speed 20 --duration 60
- *                           [--seed 7] [--traces out.csv] [--tolerance 1e-4] [--rate 500]
+ *                           [--seed 7] [--traces out.csv] [--rate 500]
+ *                           [--integrator rk4|odex] [--tolerance 1e-4 (odex)]
  *
  * Prints exactly one JSON object on stdout (modal figures, metrics, road, timing). Exit status:
  * 0 done, 2 bad input (the message on stderr names the field, file or CSV line), 1 the
@@ -15,6 +16,7 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
+import { IntegratorName } from '../shared/schemas/run.ts';
 import { parseMeasuredCsv, type LengthUnit } from '../shared/sim/roads/measured-csv.ts';
 import { runCorner } from '../shared/sim/run-corner.ts';
 import type { TraceColumns } from '../shared/sim/trace.ts';
@@ -96,6 +98,7 @@ function main(argv: string[]): number {
       seed: { type: 'string' },
       traces: { type: 'string' },
       tolerance: { type: 'string' },
+      integrator: { type: 'string' },
       rate: { type: 'string' },
     },
     strict: true,
@@ -106,6 +109,10 @@ function main(argv: string[]): number {
   const setup = readJson(values.setup, 'setup');
   const road = resolveCsvRoad(readJson(values.road, 'road'), values.road);
 
+  const integrator = values.integrator;
+  if (integrator !== undefined && !IntegratorName.options.includes(integrator as IntegratorName)) {
+    throw new InputError(`--integrator: "${integrator}" is not one of ${IntegratorName.options.join(', ')}`);
+  }
   const outcome = runCorner({
     // Shapes are checked inside runCorner, which names the offending field.
     setup: setup as never,
@@ -113,6 +120,7 @@ function main(argv: string[]): number {
     speed: numberArg(values.speed, 'speed', true)!,
     duration: numberArg(values.duration, 'duration', true)!,
     seed: numberArg(values.seed, 'seed', false),
+    integrator: integrator as IntegratorName | undefined,
     tolerance: numberArg(values.tolerance, 'tolerance', false),
     outputRate: numberArg(values.rate, 'rate', false),
   });
@@ -127,6 +135,7 @@ function main(argv: string[]): number {
     speed: result.speed,
     duration: result.duration,
     settleTime: result.settleTime,
+    integrator: result.integrator,
     road: result.road,
     statics: result.statics,
     modal: result.modal,

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { Id, IsoDateTime } from './fields.ts';
 import { Road } from './road.ts';
 import { ComfortLabel, Histogram } from './metrics.ts';
-import { EquivalentDampingChoice, RunRequest, RunResult } from './run.ts';
+import { EquivalentDampingChoice, IntegratorName, RunRequest, RunResult } from './run.ts';
 import { Setup } from './setup.ts';
 
 /**
@@ -62,6 +62,7 @@ export type StoredSpectra = z.infer<typeof StoredSpectra>;
 export const RunOptions = z.strictObject({
   settleTime: z.number().nonnegative().optional(),
   outputRate: z.number().min(200).max(5000).optional(),
+  integrator: IntegratorName.optional(),
   tolerance: z.number().min(1e-12).max(1e-3).optional(),
   equivalentDamping: EquivalentDampingChoice.optional(),
   velocityBands: z.strictObject({ low: z.number().positive(), high: z.number().positive() }).optional(),

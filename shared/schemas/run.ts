@@ -21,6 +21,13 @@ export const EquivalentDampingChoice = z.discriminatedUnion('method', [
 ]);
 export type EquivalentDampingChoice = z.infer<typeof EquivalentDampingChoice>;
 
+/**
+ * Time integration method: `rk4`, fixed-step Runge–Kutta 4 with located regime switches (the
+ * default); `odex`, extrapolation with error control at `tolerance` (the reference).
+ */
+export const IntegratorName = z.enum(['rk4', 'odex']);
+export type IntegratorName = z.infer<typeof IntegratorName>;
+
 /** One simulation: a setup driven over a road at a speed. */
 export const RunRequest = z
   .strictObject({
@@ -40,7 +47,9 @@ export const RunRequest = z
     settleTime: seconds.nonnegative().optional(),
     /** Output sample rate, Hz; default 500 (Wk weighting reaches 80 Hz). */
     outputRate: hertz.min(200).max(5000).optional(),
-    /** Relative integration tolerance; default 1e-4 (absolute tolerances scale with it). */
+    /** Integration method; default `rk4`. */
+    integrator: IntegratorName.optional(),
+    /** odex's relative tolerance; default 1e-4 (absolute tolerances scale with it). */
     tolerance: z.number().min(1e-12).max(1e-3).optional(),
     /** Definition of the equivalent linear damper; default least squares over 0–0.3 m/s. */
     equivalentDamping: EquivalentDampingChoice.optional(),
@@ -119,6 +128,8 @@ export const RunResult = z.object({
   settleTime: z.number(),
   outputRate: z.number(),
   tolerance: z.number(),
+  /** Absent on runs saved before the choice existed (they were integrated with odex). */
+  integrator: IntegratorName.optional(),
   statics: StaticSummary,
   linear: LinearCorner,
   modal: ModalResult,

@@ -1,73 +1,50 @@
-import { Outcome, Solver } from 'odex';
-import type { TraceColumns } from './trace.ts';
-import { newCornerForces, SWITCH_COUNT, type CornerModel } from './quarter-car.ts';
+import type { IntegratorName } from '../schemas/run.ts';
+import type { CornerModel } from './quarter-car.ts';
 import type { RoadExcitation } from './roads/excitation.ts';
+import type { SampledRoad } from './step-plan.ts';
+import type { TraceColumns } from './trace.ts';
+import { integrateOdex } from './integrate-odex.ts';
+import { integrateRk4 } from './integrate-rk4.ts';
 
 /**
- * Time integration of the corner with odex (Gragg–Bulirsch–Stoer extrapolation with dense
- * output), sampled on a uniform output grid.
- *
- * Choices, and why:
- * - Tolerances. `tolerance` is the relative tolerance, default 1e-4; the absolute ones are
- *   scaled to the size of each state on a rough road: tolerance × 1 cm for displacements and
- *   tolerance × 10 cm/s for velocities (× mu for the wheel variable below), so no state is
- *   judged only relatively near a zero crossing. Measured on the Pipit example over ISO class
- *   C at 20 m/s for 60 s: at 1e-4 every continuous metric is within 0.01 % of a run at 1e-8
- *   and moves by 0.01 % when the tolerance is tightened tenfold (budget 0.1 %), for about
- *   100 000 right-hand-side evaluations. 1e-3 is still within 0.05 % of the 1e-8 run for a
- *   fifth fewer evaluations (a choice for large studies); 1e-5 costs half as much again.
- * - State variables. While the tyre touches, the fourth state is p = mu·vu − ct·zr rather than
- *   the wheel velocity vu. With tyre damping ct the wheel is pushed by ct·żr, and the road's
- *   rate is one derivative rougher than the road itself (the rate of a C² spline is only C¹);
- *   in p that term cancels, so the road enters the equations only through zr. While the wheel
- *   is in the air the road does not act at all and p = mu·vu; the variable changes at each
- *   landing and lift-off, where the integration restarts anyway. On the Pipit example over
- *   class C this cut the right-hand-side evaluations by about a third, down to what the same
- *   corner costs without tyre damping. vu is recovered exactly wherever a state is reported.
- * - Smooth road input. Extrapolation methods lose their order, and waste rejected steps, when
- *   the right-hand side has jumps in low derivatives. Random and measured roads are handed
- *   over as C² cubic splines on a fine grid (roads/spline.ts), sines and sweeps fade in and
- *   out with a C² quintic, and the slope jumps that events really have (bump edges, kerb
- *   ramp ends) are listed as breakpoints: the integration stops exactly there and restarts,
- *   so no step straddles them.
- * - Regime switches (tyre lift-off and landing, bump-stop and rebound-stop contact) are
- *   located and restarted at. They are rare, and they are the sharpest events in the model:
- *   the tyre force loses its whole stiffness at lift-off and, with tyre damping, jumps at
- *   landing. After every accepted step the sign of each switch function is checked; on a
- *   change the step is dropped, the crossing is found on the dense output (Illinois method),
- *   and the run resumes from the step's start with the crossing as a segment end, so the
- *   state at the switch comes from an integration that never straddled it. Without this,
- *   peaks right after a landing moved by 0.1 % between tolerances 1e-5 and 1e-6.
- * - Damper-table kinks (including the compression/rebound change at zero speed) are left to
- *   the error control: they are crossed dozens of times per second and the force stays
- *   continuous. Blending each kink into a C¹ curve over ±0.5 to ±10 mm/s was tried and saved
- *   no evaluations at all (the Pipit's tabled damper costs what a linear one does), so the
- *   curve is used exactly as the user drew it.
- * - Maximum step: 0.15 of the wheel-hop period (MAX_STEP_HOP_PERIODS below), so a quiet
- *   stretch (a level road before an event) cannot grow the step past the fastest dynamics of
- *   the corner, and the dense output between step ends stays accurate on a rough road.
- * - Output: dense output is evaluated at every grid time inside each accepted step, and the
- *   equations of motion once more there for accelerations and forces. The caller picks the
- *   rate; 500 Hz by default in the runner (the Wk weighting reaches 80 Hz).
+ * Time integration of the corner, sampled on a uniform output grid, by one of two methods:
+ * - `rk4` (the default for single runs, live runs and studies): classic Runge–Kutta 4 at a
+ *   step chosen from the corner's fastest dynamics, on the road sampled once, with every regime
+ *   switch located on the step's cubic Hermite interpolant and restarted at
+ *   (integrate-rk4.ts, step choice in step-plan.ts);
+ * - `odex` (the reference): Gragg–Bulirsch–Stoer extrapolation with error control at a
+ *   relative tolerance, the same switch location on its dense output (integrate-odex.ts).
+ * Both start from the same state, fill the same trace columns and report the same statistics.
  */
+
+export const DEFAULT_INTEGRATOR: IntegratorName = 'rk4';
 
 export interface IntegrationOptions {
   /** s. */
   duration: number;
   /** Output samples per second, Hz (≥ 400 recommended: the Wk weighting reaches 80 Hz). */
   outputRate: number;
-  /** Relative tolerance; default 1e-4. */
+  /** Method; default `rk4`. */
+  integrator?: IntegratorName;
+  /** odex only: relative tolerance; default 1e-4. */
   tolerance?: number;
   /** Initial [zs, vs, zu, vu] from static equilibrium; default at rest in equilibrium. */
   initial?: readonly [number, number, number, number];
   /** Also keep the four states on the output grid (`states` in the outcome). */
   recordStates?: boolean;
+  /** rk4 only: the road already sampled for this corner's step plan (a study shares it between points). */
+  sampled?: SampledRoad;
+  /** rk4 only: a trace of the right length to overwrite instead of allocating one. */
+  reuse?: TraceColumns;
 }
 
 export interface IntegrationStats {
+  /** Accepted steps (rk4: pieces of a step count once each). */
   steps: number;
+  /** Steps dropped because a switch changed inside them. */
   rejectedSteps: number;
   rhsEvaluations: number;
+  /** Stretches integrated without a restart (road breakpoints and located switches end one). */
   segments: number;
   integrateMs: number;
 }
@@ -80,286 +57,23 @@ export interface StateColumns {
   wheelVelocity: Float64Array;
 }
 
+export const allocateStates = (n: number): StateColumns => ({
+  bodyDisplacement: new Float64Array(n),
+  bodyVelocity: new Float64Array(n),
+  wheelDisplacement: new Float64Array(n),
+  wheelVelocity: new Float64Array(n),
+});
+
 export type IntegrationOutcome =
   | { ok: true; trace: TraceColumns; states?: StateColumns; stats: IntegrationStats }
   | { ok: false; reason: string };
 
+/** odex's default relative tolerance. */
 export const DEFAULT_TOLERANCE = 1e-4;
-const DISPLACEMENT_SCALE = 0.01;
-const VELOCITY_SCALE = 0.1;
-/** Accepted steps allowed per simulated second (a stiff or unstable setup fails fast). */
-const MAX_STEPS_PER_SECOND = 50_000;
 
-/** Allocates the trace columns for n samples. */
-export function allocateTrace(n: number, dt: number): TraceColumns {
-  return {
-    dt,
-    bodyAccel: new Float64Array(n),
-    travel: new Float64Array(n),
-    tyreLoad: new Float64Array(n),
-    damperVelocity: new Float64Array(n),
-    damperForce: new Float64Array(n),
-    bumpStopForce: new Float64Array(n),
-    reboundStopForce: new Float64Array(n),
-    road: new Float64Array(n),
-  };
-}
-
-/** Undamped wheel-hop frequency estimate √((ks + kt)/mu)/2π, Hz, for the step limit. */
-function wheelHopHz(model: CornerModel): number {
-  const s = model.setup;
-  return Math.sqrt((s.springRate * s.motionRatio ** 2 + s.tyreRate) / s.unsprungMass) / (2 * Math.PI);
-}
-
-/** Regime-switch values closer to zero than this count as "on the boundary" (N for the tyre, m for stops). */
-const SWITCH_DEADBAND = [1e-9, 1e-12, 1e-12];
-/**
- * Longest step as a share of the wheel-hop period. With a quarter period, steps of 20 ms
- * let the dense output between step ends miss part of the road content (57 Hz at 20 m/s on
- * the default ISO band), and travel extremes moved by 0.1 % between tolerances; at 0.15 they
- * agree within 0.02 %, for about 10 % more evaluations than a quarter.
- */
-const MAX_STEP_HOP_PERIODS = 0.15;
-/** A step shorter than this (relative to t) counts as stalled. */
-const STALL_STEP = 1e-13;
-/** Restarts allowed per run before switch tracking is abandoned (a chattering contact). */
-const MAX_EVENTS = 20_000;
+/** Output samples on [0, duration] at a rate: the last one may sit a rounding error past the end. */
+export const outputCount = (duration: number, outputRate: number): number => Math.floor(duration * outputRate + 1e-9) + 1;
 
 export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: IntegrationOptions): IntegrationOutcome {
-  const started = performance.now();
-  const tol = opts.tolerance ?? DEFAULT_TOLERANCE;
-  const dt = 1 / opts.outputRate;
-  const T = opts.duration;
-  const nOut = Math.floor(T / dt + 1e-9) + 1;
-  const trace = allocateTrace(nOut, dt);
-  const states: StateColumns | undefined = opts.recordStates
-    ? {
-        bodyDisplacement: new Float64Array(nOut),
-        bodyVelocity: new Float64Array(nOut),
-        wheelDisplacement: new Float64Array(nOut),
-        wheelVelocity: new Float64Array(nOut),
-      }
-    : undefined;
-  const forces = newCornerForces();
-  const rb = new Float64Array(2);
-  const sw = new Float64Array(SWITCH_COUNT);
-  const regime = new Int8Array(SWITCH_COUNT);
-
-  // Integrated states: [zs, vs, zu, p] with p = mu·vu − c·zr, c = ct while the tyre touches
-  // and 0 while the wheel is in the air (see the header note).
-  const mu = model.setup.unsprungMass;
-  const ct: number = model.setup.tyreDamping;
-  let c = ct;
-  const wheelVelocity = (p: number, zRoad: number) => (p + c * zRoad) / mu;
-
-  let evals = 0;
-  const dy = [0, 0, 0, 0];
-  const rhs = (t: number, y: number[]): number[] => {
-    evals++;
-    road.sample(t, rb);
-    const vu = wheelVelocity(y[3], rb[0]);
-    model.evaluate(y[0], y[1], y[2], vu, rb[0], rb[1], forces);
-    dy[0] = y[1];
-    dy[1] = forces.bodyAccel;
-    dy[2] = vu;
-    dy[3] = mu * forces.wheelAccel - c * rb[1];
-    return dy;
-  };
-
-  let next = 0;
-  const write = (t: number, zs: number, vs: number, zu: number, p: number) => {
-    road.sample(t, rb);
-    const vu = wheelVelocity(p, rb[0]);
-    model.evaluate(zs, vs, zu, vu, rb[0], rb[1], forces);
-    const i = next++;
-    trace.bodyAccel[i] = forces.bodyAccel;
-    trace.travel[i] = forces.travel;
-    trace.tyreLoad[i] = forces.tyreLoad;
-    trace.damperVelocity[i] = forces.damperVelocity;
-    trace.damperForce[i] = forces.damperForce;
-    trace.bumpStopForce[i] = forces.bumpStopForce;
-    trace.reboundStopForce[i] = forces.reboundStopForce;
-    trace.road[i] = rb[0];
-    if (states) {
-      states.bodyDisplacement[i] = zs;
-      states.bodyVelocity[i] = vs;
-      states.wheelDisplacement[i] = zu;
-      states.wheelVelocity[i] = vu;
-    }
-  };
-
-  /** Sign of each switch at a state (0 inside the deadband). */
-  const signsAt = (t: number, zs: number, vs: number, zu: number, p: number, out: Int8Array) => {
-    road.sample(t, rb);
-    model.switches(zs, vs, zu, wheelVelocity(p, rb[0]), rb[0], rb[1], sw);
-    for (let k = 0; k < SWITCH_COUNT; k++) out[k] = sw[k] > SWITCH_DEADBAND[k] ? 1 : sw[k] < -SWITCH_DEADBAND[k] ? -1 : 0;
-  };
-  const switchValue = (k: number, t: number, dense: (c: number, x: number) => number) => {
-    road.sample(t, rb);
-    model.switches(dense(0, t), dense(1, t), dense(2, t), wheelVelocity(dense(3, t), rb[0]), rb[0], rb[1], sw);
-    return sw[k];
-  };
-  /** Earliest time in (a, b] where switch k crosses zero, by the Illinois method on the dense output. */
-  const locate = (k: number, a: number, b: number, dense: (c: number, x: number) => number) => {
-    let fa = switchValue(k, a, dense);
-    let fb = switchValue(k, b, dense);
-    let side = 0;
-    for (let it = 0; it < 60 && b - a > 1e-13 * Math.max(1, b); it++) {
-      const c = (a * fb - b * fa) / (fb - fa);
-      const fc = switchValue(k, c, dense);
-      if (fc * fb > 0) {
-        b = c;
-        fb = fc;
-        if (side === -1) fa /= 2;
-        side = -1;
-      } else {
-        a = c;
-        fa = fc;
-        if (side === 1) fb /= 2;
-        side = 1;
-      }
-    }
-    // The left end: the restart must land on the old regime's side or on the boundary.
-    return a;
-  };
-
-  // Switch tracking state, shared with the main loop below.
-  const now = new Int8Array(SWITCH_COUNT);
-  let stepStart = 0;
-  const stateAtStart = [0, 0, 0, 0];
-  let eventAt = -1;
-  /** Tyre contact after the pending switch: true, false, or null when the tyre does not switch. */
-  let contactAfter: boolean | null = null;
-  let events = 0;
-  let lastStep = 0;
-  let stalled = false;
-
-  // Grid times are i·dt, compared with a hair of slack so a sample landing on a step end
-  // (or on the run's end) is not lost to rounding.
-  const slack = dt * 1e-9;
-  const solOut = (_nr: number, xOld: number, x: number, y: number[], dense?: (c: number, x: number) => number) => {
-    if (!dense) {
-      if (next === 0 && x <= slack) write(0, y[0], y[1], y[2], y[3]);
-      signsAt(x, y[0], y[1], y[2], y[3], regime);
-      stepStart = x;
-      for (let i = 0; i < 4; i++) stateAtStart[i] = y[i];
-      return;
-    }
-    if (x - xOld <= STALL_STEP * Math.max(1, x)) {
-      stalled = true;
-      return false;
-    }
-    signsAt(x, y[0], y[1], y[2], y[3], now);
-    if (events < MAX_EVENTS) {
-      let first = Infinity;
-      let which = -1;
-      for (let k = 0; k < SWITCH_COUNT; k++) {
-        if (regime[k] !== 0 && now[k] !== 0 && now[k] !== regime[k]) {
-          const tk = locate(k, xOld, x, dense);
-          if (tk < first) {
-            first = tk;
-            which = k;
-          }
-        }
-      }
-      if (first < Infinity && first - xOld > 1e-10) {
-        // A regime changed inside this step: drop the step and integrate up to the switch.
-        eventAt = first;
-        contactAfter = which === 0 ? now[0] > 0 : null;
-        events++;
-        return false;
-      }
-    }
-    for (let k = 0; k < SWITCH_COUNT; k++) if (now[k] !== 0) regime[k] = now[k];
-    while (next < nOut && next * dt <= x + slack) {
-      const t = next * dt;
-      write(t, dense(0, t), dense(1, t), dense(2, t), dense(3, t));
-    }
-    lastStep = x - xOld;
-    stepStart = x;
-    for (let i = 0; i < 4; i++) stateAtStart[i] = y[i];
-  };
-
-  const solver = new Solver(4);
-  solver.denseOutput = true;
-  solver.relativeTolerance = tol;
-  solver.absoluteTolerance = [tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE, tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE * mu];
-  const hMax = MAX_STEP_HOP_PERIODS / wheelHopHz(model);
-  solver.maxStepSize = hMax;
-  solver.maxSteps = Math.ceil(MAX_STEPS_PER_SECOND * T) + 100;
-
-  const tyreTouches = (zs: number, vs: number, zu: number, vu: number) => {
-    road.sample(0, rb);
-    model.switches(zs, vs, zu, vu, rb[0], rb[1], sw);
-    return sw[0] > 0;
-  };
-
-  const breaks = road.breakpoints.filter((b) => b > 0 && b < T);
-  let t = 0;
-  const [zs0, vs0, zu0, vu0] = opts.initial ?? [0, 0, 0, 0];
-  road.sample(0, rb);
-  c = model.setup.tyreDamping > 0 && tyreTouches(zs0, vs0, zu0, vu0) ? ct : 0;
-  let y = [zs0, vs0, zu0, mu * vu0 - c * rb[0]];
-  let steps = 0;
-  let rejected = 0;
-  let segments = 0;
-  let target = -1;
-  while (T - t > slack) {
-    const nextBreak = breaks.find((b) => b > t + slack) ?? T;
-    const end = target > t + slack && target < nextBreak ? target : nextBreak;
-    solver.initialStepSize = lastStep > 0 ? Math.min(lastStep, hMax) : 1e-4;
-    eventAt = -1;
-    stalled = false;
-    const res = solver.solve(rhs, t, y, end, solOut);
-    segments++;
-    steps += res.nAccept;
-    rejected += res.nReject;
-    if (steps > solver.maxSteps) res.outcome = Outcome.MaxStepsExceeded;
-    if (res.outcome === Outcome.EarlyReturn && eventAt > 0) {
-      // Resume from the start of the dropped step; the switch time becomes a segment end.
-      // (Integrating to it and finding an earlier switch on the way simply moves it.)
-      t = stepStart;
-      y = stateAtStart.slice();
-      target = eventAt;
-      continue;
-    }
-    if (res.outcome === Outcome.EarlyReturn && stalled && solver.stabilityCheckCount > 0) {
-      // odex's step-size heuristics (its stability check and dense-output error estimate)
-      // can starve the step on a right-hand side that is rough at the rounding level, which
-      // happens only once the motion has died out far below the tolerances. Go on without them.
-      solver.stabilityCheckCount = 0;
-      solver.denseOutputErrorEstimator = false;
-      t = stepStart;
-      y = stateAtStart.slice();
-      continue;
-    }
-    if (res.outcome !== Outcome.Converged) {
-      return {
-        ok: false,
-        reason: `the integrator gave up near t = ${stepStart.toFixed(3)} s: the setup may be unstable or far too stiff for its masses`,
-      };
-    }
-    y = res.y;
-    if (!y.every(Number.isFinite)) {
-      return { ok: false, reason: `the motion diverged before t = ${end.toFixed(3)} s` };
-    }
-    t = end;
-    if (end === target && contactAfter !== null) {
-      // The tyre lands or lifts here: carry the wheel velocity over into the new variable.
-      const cNew = contactAfter ? ct : 0;
-      road.sample(t, rb);
-      y[3] += (c - cNew) * rb[0];
-      c = cNew;
-      contactAfter = null;
-    }
-  }
-  // The last grid time can sit a rounding error past the end of the run.
-  while (next < nOut) write(next * dt, y[0], y[1], y[2], y[3]);
-
-  return {
-    ok: true,
-    trace,
-    states,
-    stats: { steps, rejectedSteps: rejected, rhsEvaluations: evals, segments, integrateMs: performance.now() - started },
-  };
+  return (opts.integrator ?? DEFAULT_INTEGRATOR) === 'odex' ? integrateOdex(model, road, opts) : integrateRk4(model, road, opts);
 }

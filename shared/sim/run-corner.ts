@@ -3,7 +3,7 @@ import type { FieldIssue } from '../errors.ts';
 import type { Road } from '../schemas/road.ts';
 import { RunRequest, type RunRequestInput, type RunResult } from '../schemas/run.ts';
 import { equivalentDampingLeastSquares, equivalentDampingSecant, type EquivalentDamping } from './damper.ts';
-import { DEFAULT_TOLERANCE, integrateCorner } from './integrate.ts';
+import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE, integrateCorner } from './integrate.ts';
 import { modalAnalysis } from './linear/modal.ts';
 import { computeMetrics } from './metrics/compute-metrics.ts';
 import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
@@ -61,7 +61,8 @@ export function runCorner(input: RunRequestInput): RunOutcome {
   if (duration - settleTime < 4 / outputRate) {
     return { ok: false, stage: 'input', reason: 'settleTime: leaves too little of the run to analyse' };
   }
-  const integrated = integrateCorner(cornerModel(setup, statics.state), built.road, { duration, outputRate, tolerance });
+  const integrator = req.integrator ?? DEFAULT_INTEGRATOR;
+  const integrated = integrateCorner(cornerModel(setup, statics.state), built.road, { duration, outputRate, tolerance, integrator });
   if (!integrated.ok) return { ok: false, stage: 'integration', reason: integrated.reason };
   const { trace, stats } = integrated;
 
@@ -88,6 +89,7 @@ export function runCorner(input: RunRequestInput): RunOutcome {
     settleTime,
     outputRate,
     tolerance,
+    integrator,
     statics: statics.state,
     linear,
     modal,

@@ -23,3 +23,41 @@ export interface TraceColumns {
   /** Road elevation under the tyre, m. */
   road: Float64Array;
 }
+
+/** Allocates the trace columns for n samples. */
+export function allocateTrace(n: number, dt: number): TraceColumns {
+  return {
+    dt,
+    bodyAccel: new Float64Array(n),
+    travel: new Float64Array(n),
+    tyreLoad: new Float64Array(n),
+    damperVelocity: new Float64Array(n),
+    damperForce: new Float64Array(n),
+    bumpStopForce: new Float64Array(n),
+    reboundStopForce: new Float64Array(n),
+    road: new Float64Array(n),
+  };
+}
+
+/** What one trace sample is made of: the model's forces at an instant (`CornerForces` fits). */
+export interface SampleForces {
+  bodyAccel: number;
+  travel: number;
+  tyreLoad: number;
+  damperVelocity: number;
+  damperForce: number;
+  bumpStopForce: number;
+  reboundStopForce: number;
+}
+
+/** Writes sample i of a trace from the forces evaluated there and the road elevation under the tyre. */
+export function writeSample(trace: TraceColumns, i: number, f: SampleForces, zRoad: number): void {
+  trace.bodyAccel[i] = f.bodyAccel;
+  trace.travel[i] = f.travel;
+  trace.tyreLoad[i] = f.tyreLoad;
+  trace.damperVelocity[i] = f.damperVelocity;
+  trace.damperForce[i] = f.damperForce;
+  trace.bumpStopForce[i] = f.bumpStopForce;
+  trace.reboundStopForce[i] = f.reboundStopForce;
+  trace.road[i] = zRoad;
+}

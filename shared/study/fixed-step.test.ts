@@ -6,7 +6,7 @@ import type { StudyFigureKey } from '../schemas/study.ts';
 import { runCorner } from '../sim/run-corner.ts';
 import { applyPoint } from './apply-point.ts';
 import { figuresFromMetrics } from './figures.ts';
-import { stepPlanFor } from './fixed-step.ts';
+import { stepPlanFor } from '../sim/step-plan.ts';
 import { createStudyRunner } from './run-jobs.ts';
 
 const pipit = Setup.parse(JSON.parse(readFileSync(new URL('../../examples/pipit-front.setup.json', import.meta.url), 'utf8')) as SetupInput);

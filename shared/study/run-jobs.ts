@@ -6,7 +6,9 @@ import { buildRoad } from '../sim/roads/index.ts';
 import { applyPoint } from './apply-point.ts';
 import { figuresFromMetrics } from './figures.ts';
 import type { TraceColumns } from '../sim/trace.ts';
-import { integrateFixedStep, sampleRoad, stepPlanFor, type SampledRoad } from './fixed-step.ts';
+import { integrateCorner } from '../sim/integrate.ts';
+import { cornerModel, staticEquilibrium } from '../sim/quarter-car.ts';
+import { sampleRoad, stepPlanFor, STUDY_OUTPUT_RATE, type SampledRoad } from '../sim/step-plan.ts';
 
 /**
  * Runs study jobs one by one, keeping what every point shares: each road sampled once per speed
@@ -94,11 +96,14 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
       if (!applied.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: applied.message }, setupError: applied.message };
       const road = sampled(job, applied.setup);
       if (typeof road === 'string') return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: road } };
-      const integrated = integrateFixedStep(applied.setup, road, ctx.duration, trace);
-      if (integrated.ok) trace = integrated.trace;
+      const statics = staticEquilibrium(applied.setup);
+      if (!statics.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: `setup.${statics.reason}` } };
+      const model = cornerModel(applied.setup, statics.state);
+      const integrated = integrateCorner(model, road.road, { duration: ctx.duration, outputRate: STUDY_OUTPUT_RATE, sampled: road, reuse: trace });
       if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
+      trace = integrated.trace;
       const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
-      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: integrated.statics.tyreLoad, stroke: applied.setup.stroke });
+      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke });
       return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics) } };
     },
   };
