@@ -11,11 +11,11 @@ import { createStudyRunner } from './run-jobs.ts';
 
 const pipit = Setup.parse(JSON.parse(readFileSync(new URL('../../examples/pipit-front.setup.json', import.meta.url), 'utf8')) as SetupInput);
 
-/** The study integrator against the single-run integrator (odex, tolerance 1e-4) on the same corner and road. */
+/** The study runner against a single run with the reference integrator (odex, tolerance 1e-4) on the same corner and road. */
 function compare(values: Parameters<typeof applyPoint>[1], road: RoadInput, speed: number, duration: number) {
   const applied = applyPoint(pipit, values);
   if (!applied.ok) throw new Error(applied.message);
-  const ref = runCorner({ setup: applied.setup, road, speed, duration });
+  const ref = runCorner({ setup: applied.setup, road, speed, duration, integrator: 'odex' });
   if (!ref.ok) throw new Error(ref.reason);
   const runner = createStudyRunner({ base: pipit, roads: [road as never], duration });
   const out = runner.run({ pointIndex: 0, values, roadIndex: 0, speed });
@@ -28,7 +28,7 @@ const rel = (a: number | undefined, b: number | undefined) => Math.abs((a as num
 const rmsFigures: StudyFigureKey[] = ['bodyAccelRms', 'bodyAccelWkRms', 'vdv', 'tyreLoadRms', 'tyreLoadRatio', 'travelRms', 'damperVelocityRms', 'damperPowerMean'];
 const extremes: StudyFigureKey[] = ['bodyAccelPeak', 'travelMaxCompression', 'travelMaxExtension', 'strokeUsed'];
 
-describe('study integrator (fixed-step RK4) against the single-run integrator', () => {
+describe('study runner (RK4 on the shared sampled road) against the reference integrator', () => {
   it('chooses the wide 4 ms step for the demo corner and finer steps for a stiff tyre', () => {
     expect(stepPlanFor(pipit)).toEqual({ outputsPerStep: 2, substeps: 1 });
     const stiff = applyPoint(pipit, { tyreRate: 5e6, unsprungMass: 20 });
