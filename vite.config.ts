@@ -10,7 +10,8 @@ export default defineConfig({
   resolve: { alias: { odex: odexShim } },
   worker: { format: 'es' },
   // No data: URIs: the CSP allows fonts and images from 'self' only.
-  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 1500, assetsInlineLimit: 0 },
+  // No source maps in the served build (they would publish the whole client source).
+  build: { outDir: 'dist', sourcemap: false, chunkSizeWarningLimit: 1500, assetsInlineLimit: 0 },
   server: { proxy: { '/api': 'http://127.0.0.1:3000' } },
   test: {
     server: { deps: { inline: ['kysely'] } },

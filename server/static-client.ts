@@ -12,6 +12,11 @@ const missingBuild = `<!doctype html><meta charset="utf-8"><title>Ridewright</ti
 export function mountStaticClient(app: Express, distDir: string): void {
   const root = resolve(distDir);
   const indexFile = join(root, 'index.html');
+  // Source maps stay private: the build makes none, and a stale one in dist is never served.
+  app.use((req, res, next) => {
+    if (req.path.endsWith('.map')) res.status(404).type('text').send('Not found');
+    else next();
+  });
   app.use(
     express.static(root, {
       index: false,

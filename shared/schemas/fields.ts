@@ -28,5 +28,16 @@ export const NewPassword = z
 /** A password typed to prove who you are (no length rule, so old passwords still work). */
 export const GivenPassword = z.string().min(1, 'Required').max(200, 'Use at most 200 characters');
 
+/**
+ * Names and labels are one line of plain text: no control characters (C0, DEL, C1) and no
+ * text-direction embeddings, overrides or isolates (U+202A–U+202E, U+2066–U+2069), which can make
+ * a name read differently from what it is, or break a line of an exported file.
+ */
+export const plainLine = /^[^\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]*$/;
+/** Free text (notes, messages) may keep line breaks and tabs, nothing else of the above. */
+export const plainText = /^[^\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]*$/;
+export const plainLineMessage = 'Use plain text on one line: no control characters or text-direction marks';
+export const plainTextMessage = 'Use plain text: no control characters or text-direction marks';
+
 /** A person's display name. */
-export const PersonName = z.string().trim().min(1, 'Required').max(100, 'At most 100 characters');
+export const PersonName = z.string().trim().min(1, 'Required').max(100, 'At most 100 characters').regex(plainLine, plainLineMessage);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './fields.ts';
+import { Id, IsoDateTime, plainLine, plainLineMessage } from './fields.ts';
 import { IsoClass, Road, type RoadKind } from './road.ts';
 import { PersonRef } from './setup-record.ts';
 
@@ -14,7 +14,7 @@ export const roadSources = ['defined', 'measured'] as const;
 export const RoadSource = z.enum(roadSources);
 export type RoadSource = z.infer<typeof RoadSource>;
 
-export const RoadName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
+export const RoadName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters').regex(plainLine, plainLineMessage);
 
 /** The ISO 8608 class and waviness fitted to the road's displacement PSD. */
 export const RoadIsoFigures = z.object({

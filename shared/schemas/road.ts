@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainLine, plainLineMessage } from './fields.ts';
 import { cyclesPerMeter, hertz, meters, metersPerSecond, seconds } from '../units.ts';
 
 /**
@@ -6,7 +7,7 @@ import { cyclesPerMeter, hertz, meters, metersPerSecond, seconds } from '../unit
  * elevations in m (positive up). Speed is not part of the road: it belongs to the run.
  */
 
-const name = z.string().trim().max(120).optional();
+const name = z.string().trim().max(120).regex(plainLine, plainLineMessage).optional();
 
 export const isoClasses = ['A', 'B', 'C', 'D', 'E', 'F', 'G', 'H'] as const;
 export const IsoClass = z.enum(isoClasses);

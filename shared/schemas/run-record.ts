@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './fields.ts';
+import { Id, IsoDateTime, plainLine, plainLineMessage } from './fields.ts';
 import { Road } from './road.ts';
 import { ComfortLabel, Histogram } from './metrics.ts';
 import { EquivalentDampingChoice, IntegratorName, RunRequest, RunResult } from './run.ts';
@@ -72,7 +72,7 @@ export type RunOptions = z.infer<typeof RunOptions>;
 
 /** POST /api/workspaces/:workspaceId/runs */
 export const SaveRunInput = z.strictObject({
-  name: z.string().trim().min(1, 'Required').max(120, 'At most 120 characters'),
+  name: z.string().trim().min(1, 'Required').max(120, 'At most 120 characters').regex(plainLine, plainLineMessage),
   setupId: Id,
   /** The revision that was run; its document must equal `setup`. */
   revisionNumber: z.number().int().positive(),

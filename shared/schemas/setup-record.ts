@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './fields.ts';
+import { Id, IsoDateTime, plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
 import { Setup } from './setup.ts';
 
 /**
@@ -16,10 +16,10 @@ export const PersonRef = z.object({ id: Id, name: z.string() });
 export type PersonRef = z.infer<typeof PersonRef>;
 
 /** Name of a setup in lists and on its page. */
-export const SetupName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
+export const SetupName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters').regex(plainLine, plainLineMessage);
 
 /** What a revision says about itself ("softer rebound above 0.3 m/s"). */
-export const RevisionMessage = z.string().trim().max(500, 'At most 500 characters');
+export const RevisionMessage = z.string().trim().max(500, 'At most 500 characters').regex(plainText, plainTextMessage);
 
 /** One saved revision without its document. Numbers count 1, 2, 3… per setup. */
 export const RevisionSummary = z.object({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
 import {
   cubicMeters,
   kilograms,
@@ -151,7 +152,7 @@ export type Stroke = z.infer<typeof Stroke>;
 
 export const Setup = z.strictObject({
   /** Display name, e.g. "Pipit front, baseline". */
-  name: z.string().trim().min(1).max(120),
+  name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
   /** The corner's share of the body mass, kg. */
   sprungMass: kilograms.positive().max(5000),
   /** Wheel, hub, brake and the moving part of the links, kg. */
@@ -175,7 +176,7 @@ export const Setup = z.strictObject({
   /** Wheel travel available from static, used for the stroke-used figures. */
   stroke: Stroke.optional(),
   /** Free text. */
-  notes: z.string().max(4000).optional(),
+  notes: z.string().max(4000).regex(plainText, plainTextMessage).optional(),
 });
 /** A parsed setup (branded SI numbers, defaults filled). */
 export type Setup = z.infer<typeof Setup>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id } from './fields.ts';
+import { Id, plainLine, plainLineMessage } from './fields.ts';
 import { Road } from './road.ts';
 
 /**
@@ -69,14 +69,14 @@ export const StudyRoad = z.discriminatedUnion('source', [
     source: z.literal('library'),
     roadId: Id,
     /** Shown in charts and tables; the library name when saved. */
-    name: z.string().max(120).optional(),
+    name: z.string().max(120).regex(plainLine, plainLineMessage).optional(),
     /** Replaces an ISO 8608 road's own seed for this study. */
     seed: z.number().int().min(0).max(4294967295).optional(),
   }),
   z.object({
     source: z.literal('inline'),
     road: Road,
-    name: z.string().max(120).optional(),
+    name: z.string().max(120).regex(plainLine, plainLineMessage).optional(),
     seed: z.number().int().min(0).max(4294967295).optional(),
   }),
 ]);
@@ -138,7 +138,7 @@ export const STUDY_MAX_RUNS = 20_000;
 
 export const StudyDefinition = z
   .object({
-    name: z.string().trim().min(1).max(120),
+    name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
     /** The setup revision every point starts from. */
     base: z.object({ setupId: Id, revisionId: Id }),
     axes: z.array(SweepAxis).min(1).max(2),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './fields.ts';
+import { Id, IsoDateTime, plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
 import { DynoPeakPoints } from './dyno.ts';
 import { DynoUploadFields } from './dyno-file.ts';
 import { PersonRef } from './setup-record.ts';
@@ -54,7 +54,7 @@ export const TargetSheetContent = z.object({
   rebound: TargetPoints,
   /** Static gas force of the damper, N (stated on the sheet; the targets exclude it). */
   gasForce: z.number().nonnegative().max(1e5),
-  notes: z.string().max(4000),
+  notes: z.string().max(4000).regex(plainText, plainTextMessage),
 });
 export type TargetSheetContent = z.infer<typeof TargetSheetContent>;
 
@@ -92,7 +92,7 @@ export type TargetSheet = z.infer<typeof TargetSheet>;
 export const TargetSheetTransitionInput = z.object({
   to: TargetSheetStatus,
   /** Required when returning a sheet. */
-  reason: z.string().trim().max(2000).optional(),
+  reason: z.string().trim().max(2000).regex(plainText, plainTextMessage).optional(),
 });
 export type TargetSheetTransitionInput = z.infer<typeof TargetSheetTransitionInput>;
 
@@ -134,7 +134,7 @@ export type DirectionCheck = z.infer<typeof DirectionCheck>;
 /** One physical damper checked against a sheet. */
 export const DamperCheck = z.object({
   /** Serial or name of the measured unit. */
-  label: z.string().min(1).max(120),
+  label: z.string().min(1).max(120).regex(plainLine, plainLineMessage),
   compression: DirectionCheck,
   rebound: DirectionCheck,
   pass: z.boolean(),
@@ -203,7 +203,7 @@ export type CreateTargetSheetInput = z.infer<typeof CreateTargetSheetInput>;
 
 /** POST …/:sheetId/return */
 export const ReturnTargetSheetInput = z.object({
-  reason: z.string().trim().min(1, 'Say why the sheet is sent back').max(2000, 'At most 2000 characters'),
+  reason: z.string().trim().min(1, 'Say why the sheet is sent back').max(2000, 'At most 2000 characters').regex(plainText, plainTextMessage),
 });
 export type ReturnTargetSheetInput = z.infer<typeof ReturnTargetSheetInput>;
 
@@ -249,7 +249,7 @@ const blankToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v
 export const DynoCheckFields = DynoUploadFields.extend({
   label: z.preprocess(
     (v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]),
-    z.array(z.preprocess(blankToUndefined, z.string().trim().max(120, 'A damper label has at most 120 characters').optional())),
+    z.array(z.preprocess(blankToUndefined, z.string().trim().max(120, 'A damper label has at most 120 characters').regex(plainLine, plainLineMessage).optional())),
   ),
 });
 export type DynoCheckFields = z.infer<typeof DynoCheckFields>;

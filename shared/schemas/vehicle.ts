@@ -1,12 +1,12 @@
 import { z } from 'zod';
-import { Id, IsoDateTime } from './fields.ts';
+import { Id, IsoDateTime, plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
 import { ModalResult } from './modal.ts';
 import { SetupSummary } from './setup-record.ts';
 
 /** A vehicle groups one front and one rear corner setup so their frequencies can be compared. */
 
-export const VehicleName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
-export const VehicleNotes = z.string().trim().max(4000, 'At most 4000 characters');
+export const VehicleName = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters').regex(plainLine, plainLineMessage);
+export const VehicleNotes = z.string().trim().max(4000, 'At most 4000 characters').regex(plainText, plainTextMessage);
 
 /** The setup in one corner slot: id, name and latest revision. */
 export const CornerSlot = z.object({ id: Id, name: z.string(), latestRevision: z.number().int().positive() });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Email, Id, IsoDateTime, NewPassword, PersonName } from './fields.ts';
+import { Email, Id, IsoDateTime, NewPassword, PersonName, plainLine, plainLineMessage } from './fields.ts';
 
 export const roles = ['viewer', 'engineer', 'lead', 'admin'] as const;
 /** A member's role in one workspace; each role can do everything the one below it can. */
@@ -13,7 +13,7 @@ export function hasRole(role: Role, least: Role): boolean {
   return roleRank[role] >= roleRank[least];
 }
 
-export const WorkspaceName = z.string().trim().min(1, 'Required').max(100, 'At most 100 characters');
+export const WorkspaceName = z.string().trim().min(1, 'Required').max(100, 'At most 100 characters').regex(plainLine, plainLineMessage);
 
 /** One of the caller's workspaces, as listed in `Me`. */
 export const Membership = z.object({ workspaceId: Id, workspaceName: z.string(), role: Role });

@@ -1,4 +1,4 @@
-import Papa from 'papaparse';
+import { commentText, writeCsv } from '../csv/write-csv.ts';
 import type { ConformityReport, TargetSheet, TargetSheetContent } from '../schemas/target-sheet.ts';
 import { toleranceBand } from './band.ts';
 
@@ -21,14 +21,11 @@ export function targetSheetToCsv(sheet: SheetForCsv, opts: { preamble?: boolean 
       rows.push([direction, p.velocity, round(p.force, 3), p.tolPct, p.floorN, round(b.lower, 3), round(b.upper, 3)]);
     }
   }
-  const table = Papa.unparse(
-    { fields: ['direction', 'velocity [m/s]', 'target force [N]', 'tolerance [%]', 'floor [N]', 'lower [N]', 'upper [N]'], data: rows },
-    { newline: '\n' },
-  );
+  const table = writeCsv(rows, ['direction', 'velocity [m/s]', 'target force [N]', 'tolerance [%]', 'floor [N]', 'lower [N]', 'upper [N]']);
   if (opts.preamble === false) return `${table}\n`;
   const head = [
-    sheet.number && `# damper target sheet ${sheet.number}`,
-    sheet.setupName && `# setup ${sheet.setupName}${sheet.setupRevision ? `, revision ${sheet.setupRevision}` : ''}`,
+    sheet.number && `# damper target sheet ${commentText(sheet.number)}`,
+    sheet.setupName && `# setup ${commentText(sheet.setupName)}${sheet.setupRevision ? `, revision ${sheet.setupRevision}` : ''}`,
     sheet.status && `# status ${sheet.status.replace('_', ' ')}`,
     `# gas force ${round(sheet.gasForce, 3)} N (not included in the target forces)`,
   ].filter(Boolean);
@@ -46,11 +43,5 @@ export function conformityToCsv(report: ConformityReport): string {
       }
     }
   }
-  return `${Papa.unparse(
-    {
-      fields: ['damper', 'direction', 'velocity [m/s]', 'target force [N]', 'lower [N]', 'upper [N]', 'measured force [N]', 'deviation [N]', 'deviation [%]', 'result', 'detail'],
-      data: rows,
-    },
-    { newline: '\n' },
-  )}\n`;
+  return `${writeCsv(rows, ['damper', 'direction', 'velocity [m/s]', 'target force [N]', 'lower [N]', 'upper [N]', 'measured force [N]', 'deviation [N]', 'deviation [%]', 'result', 'detail'])}\n`;
 }

@@ -179,6 +179,15 @@ describe('setups and their revisions', () => {
     expect([await count('setup'), await count('setup_revision'), await count('audit_log')]).toEqual([setupsBefore, revisionsBefore, auditBefore]);
   });
 
+  it('refuses a name with a text-direction override or a line break, naming the field, and saves nothing', async () => {
+    const before = await count('setup');
+    for (const name of ['Pipit \u202Etnorf', 'Pipit front\n=HYPERLINK("http://evil.example")']) {
+      const res = await eng.post(setups, { setup: cornerDocument(name) }).expect(400);
+      expect(ErrorBody.parse(res.body).error.fields?.map((f) => f.path)).toEqual(['setup.name']);
+    }
+    expect(await count('setup')).toBe(before);
+  });
+
   it('exports a revision as the setup file and imports that file back unchanged', async () => {
     const created = await create('Brume Pipit front, export');
     await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Brume Pipit front, export', { motionRatio: 0.9 }), message: 'Lower motion ratio' }).expect(201);

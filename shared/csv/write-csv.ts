@@ -1,0 +1,26 @@
+import Papa from 'papaparse';
+
+/** A cell the product writes: numbers stay numbers; text is written as text. */
+export type CsvCell = string | number | null | undefined;
+
+/**
+ * CSV text from rows, safe to open in a spreadsheet: a text cell that begins with `=`, `+`, `-`,
+ * `@`, tab or CR is written with a leading `'` (and quoted) so no spreadsheet evaluates it as a
+ * formula; numbers are never touched, so `-0.5` stays a negative number. Cells holding line
+ * breaks are quoted, so they cannot start a row of their own. Every CSV export goes through here.
+ */
+export function writeCsv(rows: readonly (readonly CsvCell[])[], fields?: readonly string[]): string {
+  const data = rows.map((r) => r.map((c) => (c === null || c === undefined ? '' : c)));
+  return Papa.unparse(fields ? { fields: [...fields], data } : data, { newline: '\n', escapeFormulae: true });
+}
+
+// C0 and C1 controls, DEL, and the text-direction embeddings, overrides and isolates.
+const unsafeInLine = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+
+/**
+ * Free text for a `#` comment line above a CSV table: line breaks, controls and direction
+ * overrides become spaces, so a name can never end the comment and begin a formula row.
+ */
+export function commentText(text: string): string {
+  return text.replace(unsafeInLine, ' ');
+}
