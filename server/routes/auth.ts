@@ -44,7 +44,7 @@ export const authRoutes: RouteModule = (deps) => [
     path: '/api/auth/signout',
     access: 'public',
     handler: async (req, res) => {
-      if (req.user) await signOutEverywhere(deps.db, req.user.id);
+      if (req.user) await signOutEverywhere(deps.db, req.user.id, deps.clock());
       clearSessionCookie(req, res);
       res.status(204).end();
     },

@@ -5,6 +5,7 @@ import { decoyHash, hashPassword, verifyPassword } from '../auth/password.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { UserRow } from '../db/user-table.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, insertUser, setPasswordHash } from '../repositories/users.ts';
+import { expireOpenResets } from '../repositories/tokens.ts';
 import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../repositories/workspaces.ts';
 import { recordAudit } from './audit.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
@@ -51,12 +52,18 @@ export async function signIn(db: Queryable, input: SignInInput): Promise<Outcome
   return ok(user);
 }
 
-/** Ends every session of the user, this one included. */
-export async function signOutEverywhere(db: Queryable, userId: string): Promise<void> {
-  await bumpSessionVersion(db, userId);
+/**
+ * Ends every session of the user, this one included, and every password-reset link still open:
+ * a link mailed before the sign-out must not outlive it.
+ */
+export async function signOutEverywhere(db: Db, userId: string, now: Date): Promise<void> {
+  await db.transaction().execute(async (trx) => {
+    await bumpSessionVersion(trx, userId);
+    await expireOpenResets(trx, userId, now.toISOString());
+  });
 }
 
-/** Sets a new password and ends every other session; returns the state for the caller's new cookie. */
+/** Sets a new password, ends every other session and every open reset link; returns the state for the caller's new cookie. */
 export async function changePassword(db: Db, user: SessionUser, input: PasswordChangeInput, now: Date): Promise<Outcome<SessionStart>> {
   const row = await findUserById(db, user.id);
   if (!row) return fail('unauthenticated', 'Please sign in again.');
@@ -67,6 +74,8 @@ export async function changePassword(db: Db, user: SessionUser, input: PasswordC
   const version = await db.transaction().execute(async (trx) => {
     await setPasswordHash(trx, user.id, passwordHash);
     const v = await bumpSessionVersion(trx, user.id);
+    // A reset link mailed before the change would otherwise still set a password.
+    await expireOpenResets(trx, user.id, now.toISOString());
     await recordAudit(trx, {
       workspaceId: null,
       actorId: user.id,

@@ -39,6 +39,30 @@ describe('password reset', () => {
     expect(audit.map((a) => a.action)).toEqual(['account.password_reset']);
   });
 
+  it('a link mailed before the password was changed on the account page no longer works', async () => {
+    const user = await createUser(t.db, { name: 'Wren Halloway' });
+    const token = await requestLink(user.email);
+    const session = await signedIn(t.url, user.email, user.password);
+    await session.post('/api/auth/password', { currentPassword: user.password, newPassword: 'changed on purpose' }).expect(204);
+
+    const b = await browserLike(t.url);
+    const late = await b.post('/api/auth/reset/confirm', { token, password: 'attacker chosen pw' }).expect(410);
+    expect(ErrorBody.parse(late.body).error.code).toBe('gone');
+    await b.post('/api/auth/signin', { email: user.email, password: 'attacker chosen pw' }).expect(401);
+    await signedIn(t.url, user.email, 'changed on purpose');
+  });
+
+  it('a link mailed before the account signed out of every session no longer works', async () => {
+    const user = await createUser(t.db, { name: 'Orrin Pale' });
+    const token = await requestLink(user.email);
+    const session = await signedIn(t.url, user.email, user.password);
+    await session.post('/api/auth/signout').expect(204);
+
+    const b = await browserLike(t.url);
+    await b.post('/api/auth/reset/confirm', { token, password: 'attacker chosen pw' }).expect(410);
+    await signedIn(t.url, user.email, user.password);
+  });
+
   it(`refuses a link older than ${RESET_MINUTES} minutes with 410 and keeps the old password`, async () => {
     const user = await createUser(t.db);
     const token = await requestLink(user.email);
