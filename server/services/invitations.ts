@@ -93,13 +93,9 @@ async function liveInvitation(deps: Deps, token: string): Promise<InvitationRow 
 export async function invitationInfo(deps: Deps, token: string): Promise<Outcome<InvitationInfo>> {
   const row = await liveInvitation(deps, token);
   if (!row) return gone();
-  const [workspace, inviter, account] = await Promise.all([
-    findWorkspace(deps.db, row.workspace_id),
-    findUserById(deps.db, row.invited_by),
-    findUserByEmail(deps.db, row.email),
-  ]);
+  const [workspace, inviter] = await Promise.all([findWorkspace(deps.db, row.workspace_id), findUserById(deps.db, row.invited_by)]);
   if (!workspace) return gone();
-  return ok({ workspaceName: workspace.name, email: row.email, role: row.role, accountExists: !!account, invitedBy: inviter?.name ?? 'An administrator' });
+  return ok({ workspaceName: workspace.name, email: row.email, role: row.role, invitedBy: inviter?.name ?? 'An administrator' });
 }
 
 /**
@@ -110,6 +106,14 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
   const row = await liveInvitation(deps, token);
   if (!row) return gone();
   const account = await findUserByEmail(deps.db, row.email);
+  // Signed out with nothing filled in: one answer whether or not the address has an account,
+  // so the bare link tells nobody which.
+  if (!caller && !input.name && !input.password) {
+    return fail('bad_request', `Sign in as ${row.email} to accept, or choose a name and a password for a new account.`, [
+      { path: 'name', message: 'Required to create your account' },
+      { path: 'password', message: 'Required to create your account' },
+    ]);
+  }
   if (account) {
     if (!caller) return fail('unauthenticated', `Sign in as ${row.email} to accept this invitation.`);
     if (caller.id !== account.id) return fail('forbidden', `This invitation is for ${row.email}; sign in with that address to accept it.`);

@@ -49,12 +49,14 @@ export type MembersResponse = z.infer<typeof MembersResponse>;
 export const InviteInput = z.object({ email: Email, role: Role });
 export type InviteInput = z.infer<typeof InviteInput>;
 
-/** GET /api/invitations/:token — what the person following the link sees. */
+/**
+ * GET /api/invitations/:token — what the person following the link sees. It never says whether
+ * the address already has an account: the page offers both ways in.
+ */
 export const InvitationInfo = z.object({
   workspaceName: z.string(),
   email: z.string(),
   role: Role,
-  accountExists: z.boolean(),
   /** Name of the admin who sent it. */
   invitedBy: z.string(),
 });

@@ -45,34 +45,33 @@ export function AcceptInviteRoute() {
     navigate(target ? `/w/${target.workspaceId}` : landingPath(joined), { replace: true });
   };
 
+  // The page never learns whether the address has an account: signed out, it offers both ways in.
+  const signInLink = (
+    <Link to={`/signin?next=${encodeURIComponent(`/invite/${token}`)}`} className={linkClass}>
+      Sign in as {inv.email} to accept
+    </Link>
+  );
   let body;
-  if (!inv.accountExists) {
-    body = (
-      <>
-        {signedInAs && <Notice className="mb-4">You are signed in as {signedInAs}. Accepting creates a new account for {inv.email} and signs you in as it.</Notice>}
-        <AcceptAsNewAccount token={token} email={inv.email} onAccepted={onAccepted} />
-      </>
-    );
-  } else if (signedInAs === inv.email) {
+  if (signedInAs === inv.email) {
     body = <AcceptAsSignedIn token={token} onAccepted={onAccepted} />;
   } else if (signedInAs) {
     body = (
-      <Notice tone="signal" title={`This invitation is for ${inv.email}`}>
-        <p>You are signed in as {signedInAs}. Sign out, then sign in as {inv.email} to accept.</p>
-        <Button size="sm" className="mt-2" busy={signOut.isPending} onClick={() => signOut.mutate()}>
-          Sign out
-        </Button>
-      </Notice>
+      <>
+        <Notice tone="signal" title={`This invitation is for ${inv.email}`} className="mb-4">
+          <p>You are signed in as {signedInAs}. Sign out, then sign in as {inv.email} to accept — or create a new account for {inv.email} below, which signs you in as it.</p>
+          <Button size="sm" className="mt-2" busy={signOut.isPending} onClick={() => signOut.mutate()}>
+            Sign out
+          </Button>
+        </Notice>
+        <AcceptAsNewAccount token={token} email={inv.email} onAccepted={onAccepted} />
+      </>
     );
   } else {
     body = (
-      <p className="text-sm">
-        {inv.email} already has a Ridewright account.{' '}
-        <Link to={`/signin?next=${encodeURIComponent(`/invite/${token}`)}`} className={linkClass}>
-          Sign in to accept
-        </Link>
-        .
-      </p>
+      <>
+        <p className="mb-4 text-sm">Already use Ridewright with this address? {signInLink}. New here? Create your account:</p>
+        <AcceptAsNewAccount token={token} email={inv.email} onAccepted={onAccepted} />
+      </>
     );
   }
 
