@@ -12,6 +12,7 @@ export class HttpError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: FieldIssue[],
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
     this.status = statusOf[code];
@@ -25,7 +26,7 @@ export function unwrap<T>(outcome: Outcome<T>): T {
 }
 
 export function httpErrorOf(failure: Failure): HttpError {
-  return new HttpError(failure.code, failure.message, failure.fields);
+  return new HttpError(failure.code, failure.message, failure.fields, failure.retryAfterSeconds);
 }
 
 export function fieldsOf(error: ZodError): FieldIssue[] {
@@ -62,7 +63,10 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.end();
       return;
     }
-    if (err instanceof HttpError) return sendError(res, err.code, err.message, err.fields);
+    if (err instanceof HttpError) {
+      if (err.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(err.retryAfterSeconds));
+      return sendError(res, err.code, err.message, err.fields);
+    }
     if (err instanceof ZodError) return sendError(res, 'bad_request', 'Some fields need attention.', fieldsOf(err));
     const bpCode = bodyParserCode(err);
     if (bpCode === 'payload_too_large') return sendError(res, bpCode, 'The request body is too large.');

@@ -11,6 +11,7 @@ import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-table
 import type { ShareLinkTable } from './share-link-table.ts';
 import type { StudyPointTable, StudyTable } from './study-tables.ts';
 import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from './target-sheet-tables.ts';
+import type { ThrottleEventTable } from './throttle-table.ts';
 import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
 import type { UserTable } from './user-table.ts';
 import type { MembershipTable, WorkspaceTable } from './workspace-table.ts';
@@ -40,6 +41,7 @@ export interface Database {
   target_sheet: TargetSheetTable;
   target_sheet_event: TargetSheetEventTable;
   dyno_check: DynoCheckTable;
+  throttle_event: ThrottleEventTable;
 }
 
 export type Db = Kysely<Database>;

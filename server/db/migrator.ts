@@ -6,6 +6,7 @@ import * as m0004 from '../../migrations/0004_runs.ts';
 import * as m0005 from '../../migrations/0005_studies.ts';
 import * as m0006 from '../../migrations/0006_target_sheets.ts';
 import * as m0007 from '../../migrations/0007_outbox_audience.ts';
+import * as m0008 from '../../migrations/0008_throttle_events.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -20,6 +21,7 @@ export const migrations: Record<string, Migration> = {
   '0005_studies': m0005,
   '0006_target_sheets': m0006,
   '0007_outbox_audience': m0007,
+  '0008_throttle_events': m0008,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

@@ -34,7 +34,7 @@ export const authRoutes: RouteModule = (deps) => [
     rateLimited: true,
     handler: async (req, res) => {
       const input = SignInInput.parse(req.body);
-      const who = unwrap(await signIn(deps.db, input));
+      const who = unwrap(await signIn(deps.db, input, deps.clock()));
       await startSession(deps, req, res, who);
     },
   },

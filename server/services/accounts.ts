@@ -9,6 +9,7 @@ import { expireOpenResets } from '../repositories/tokens.ts';
 import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../repositories/workspaces.ts';
 import { recordAudit } from './audit.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
+import { releaseSlot, takeSlot, type ThrottleRule } from './throttle.ts';
 import { isUniqueViolation } from './sqlite-errors.ts';
 
 export type SessionStart = Pick<UserRow, 'id' | 'session_version'>;
@@ -44,11 +45,26 @@ export async function signUp(db: Db, input: SignUpInput, now: Date): Promise<Out
   return ok({ id: userId, session_version: 0 });
 }
 
+const MINUTE = 60_000;
+/**
+ * Failed sign-ins per account address, beside the per-client-address limit on the route: a guesser
+ * spreading over many client addresses still gets 10 tries per 15 minutes on one account. Counted
+ * for unknown addresses too, so the limit says nothing about which addresses have accounts.
+ */
+export const signInRule = (email: string): ThrottleRule => ({ key: `signin:account:${email}`, limit: 10, windowMs: 15 * MINUTE, what: 'failed sign-ins for this account' });
+/** Password changes (each one a key derivation) per user. */
+export const passwordChangeRule = (userId: string): ThrottleRule => ({ key: `password:user:${userId}`, limit: 5, windowMs: 15 * MINUTE, what: 'password change attempts' });
+
 /** Same answer and roughly the same time for an unknown e-mail as for a wrong password. */
-export async function signIn(db: Queryable, input: SignInInput): Promise<Outcome<SessionStart>> {
+export async function signIn(db: Db, input: SignInInput, now: Date): Promise<Outcome<SessionStart>> {
+  // The attempt is counted before the password is checked and given back when it was right.
+  const rule = signInRule(input.email);
+  const limited = await takeSlot(db, [rule], now);
+  if (limited) return limited;
   const user = await findUserByEmail(db, input.email);
   const matches = await verifyPassword(input.password, user?.password_hash ?? (await decoyHash()));
   if (!user || !matches) return fail('unauthenticated', 'The e-mail or the password is wrong.');
+  await releaseSlot(db, rule, now);
   return ok(user);
 }
 
@@ -67,6 +83,9 @@ export async function signOutEverywhere(db: Db, userId: string, now: Date): Prom
 export async function changePassword(db: Db, user: SessionUser, input: PasswordChangeInput, now: Date): Promise<Outcome<SessionStart>> {
   const row = await findUserById(db, user.id);
   if (!row) return fail('unauthenticated', 'Please sign in again.');
+  // Counted before the hash is worked out, so a burst of guesses costs the server little.
+  const limited = await takeSlot(db, [passwordChangeRule(user.id)], now);
+  if (limited) return limited;
   if (!(await verifyPassword(input.currentPassword, row.password_hash))) {
     return fail('bad_request', 'The current password is wrong.', [{ path: 'currentPassword', message: 'Wrong password' }]);
   }

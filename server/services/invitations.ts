@@ -6,15 +6,28 @@ import { hashPassword } from '../auth/password.ts';
 import type { AppDeps } from '../deps.ts';
 import type { InvitationRow } from '../db/token-tables.ts';
 import { invitationMail } from '../mail/templates.ts';
-import { deleteInvitation, findInvitation, findInvitationByTokenHash, insertInvitation, markInvitationAccepted } from '../repositories/tokens.ts';
+import { deleteInvitation, findInvitation, findInvitationByTokenHash, insertInvitation, listPendingInvitations, markInvitationAccepted } from '../repositories/tokens.ts';
 import { findUserByEmail, findUserById, insertUser } from '../repositories/users.ts';
 import { findMembership, findWorkspace, insertMembership } from '../repositories/workspaces.ts';
 import { recordAudit } from './audit.ts';
 import { hashOneTimeToken, minutesAfter, newOneTimeToken } from './one-time-tokens.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
+import { overLimit, recordActions, type ThrottleRule } from './throttle.ts';
 import { isUniqueViolation } from './sqlite-errors.ts';
 
 export const INVITATION_DAYS = 7;
+/** Pending invitations one workspace may hold at once. */
+export const MAX_PENDING_INVITATIONS = 200;
+
+const HOUR = 60 * 60_000;
+/** Limits on sending invitations: per sender, per workspace, and per recipient address. */
+export function invitationRules(actorId: string, workspaceId: string, email: string): ThrottleRule[] {
+  return [
+    { key: `invite:user:${actorId}`, limit: 20, windowMs: HOUR, what: 'invitations from you' },
+    { key: `invite:workspace:${workspaceId}`, limit: 50, windowMs: HOUR, what: 'invitations from this workspace' },
+    { key: `invite:to:${email}`, limit: 3, windowMs: 24 * HOUR, what: `invitations to ${email}` },
+  ];
+}
 
 type Deps = Pick<AppDeps, 'db' | 'mailer' | 'publicUrl' | 'clock'>;
 
@@ -32,6 +45,12 @@ export async function createInvitation(deps: Deps, ws: WorkspaceContext, actor: 
     return fail('conflict', `${input.email} is already a member of this workspace.`, [{ path: 'email', message: 'Already a member' }]);
   }
   const now = deps.clock();
+  const rules = invitationRules(actor.id, ws.workspaceId, input.email);
+  const limited = await overLimit(deps.db, rules, now);
+  if (limited) return limited;
+  if ((await listPendingInvitations(deps.db, ws.workspaceId, now.toISOString())).length >= MAX_PENDING_INVITATIONS) {
+    return fail('conflict', `This workspace already has ${MAX_PENDING_INVITATIONS} invitations waiting; withdraw some before sending more.`);
+  }
   const expiresAt = minutesAfter(now, INVITATION_DAYS * 24 * 60);
   const { token, hash } = newOneTimeToken();
   const row: InvitationRow = {
@@ -48,6 +67,7 @@ export async function createInvitation(deps: Deps, ws: WorkspaceContext, actor: 
   await deps.db.transaction().execute(async (trx) => {
     await trx.deleteFrom('invitation').where('workspace_id', '=', ws.workspaceId).where('email', '=', input.email).where('accepted_at', 'is', null).execute();
     await insertInvitation(trx, row);
+    await recordActions(trx, rules, now);
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
       actorId: actor.id,

@@ -9,6 +9,8 @@ export interface Failure {
   code: ErrorCode;
   message: string;
   fields?: FieldIssue[];
+  /** For `rate_limited`: seconds until the caller may try again (sent as `Retry-After`). */
+  retryAfterSeconds?: number;
 }
 export type Outcome<T> = { ok: true; value: T } | Failure;
 
