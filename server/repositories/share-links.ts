@@ -48,6 +48,18 @@ export async function revokeShareLinkRow(db: Queryable, linkId: string, at: stri
   await db.updateTable('share_link').set({ revoked_at: at }).where('id', '=', linkId).where('revoked_at', 'is', null).execute();
 }
 
+/** Revokes every live link `userId` made in the workspace; returns how many. */
+export async function revokeShareLinksOfCreator(db: Queryable, workspaceId: string, userId: string, at: string): Promise<number> {
+  const r = await db
+    .updateTable('share_link')
+    .set({ revoked_at: at })
+    .where('workspace_id', '=', workspaceId)
+    .where('created_by', '=', userId)
+    .where('revoked_at', 'is', null)
+    .executeTakeFirst();
+  return Number(r.numUpdatedRows);
+}
+
 /** Revision ids of a setup, for listing the links that point into it. */
 export async function revisionIdsOfSetup(db: Queryable, setupId: string): Promise<string[]> {
   const rows = await db.selectFrom('setup_revision').select('id').where('setup_id', '=', setupId).execute();

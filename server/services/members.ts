@@ -1,6 +1,7 @@
 import type { Member, MembersResponse, Role } from '../../shared/schemas/workspace.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db } from '../db/database.ts';
+import { revokeShareLinksOfCreator } from '../repositories/share-links.ts';
 import { listPendingInvitations } from '../repositories/tokens.ts';
 import { countAdmins, deleteMembership, findMemberOfWorkspace, listMembersOfWorkspace, type MemberRow, updateMembershipRole } from '../repositories/workspaces.ts';
 import { recordAudit } from './audit.ts';
@@ -40,19 +41,23 @@ export async function changeRole(db: Db, ws: WorkspaceContext, actor: SessionUse
   });
 }
 
+/** Removes a member and revokes the share links they made in this workspace. */
 export async function removeMember(db: Db, ws: WorkspaceContext, actor: SessionUser, userId: string, now: Date): Promise<Outcome<void>> {
   return db.transaction().execute(async (trx) => {
     const target = await findMemberOfWorkspace(trx, ws.workspaceId, userId);
     if (!target) return fail('not_found', 'No such member.');
     if (target.role === 'admin' && (await countAdmins(trx, ws.workspaceId)) <= 1) return lastAdmin('Removing the only admin');
     await deleteMembership(trx, ws.workspaceId, userId);
+    // Policy (server/THREAT-MODEL.md): read-only links live no longer than their maker's access.
+    const revoked = await revokeShareLinksOfCreator(trx, ws.workspaceId, userId, now.toISOString());
+    const links = revoked === 0 ? '' : ` ${revoked} share link${revoked === 1 ? '' : 's'} they made ${revoked === 1 ? 'was' : 'were'} revoked.`;
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
       actorId: actor.id,
       action: 'member.removed',
       entityType: 'user',
       entityId: userId,
-      summary: userId === actor.id ? `${actor.name} left the workspace.` : `${actor.name} removed ${target.name} (${target.role}) from the workspace.`,
+      summary: (userId === actor.id ? `${actor.name} left the workspace.` : `${actor.name} removed ${target.name} (${target.role}) from the workspace.`) + links,
       at: now,
     });
     return ok(undefined);

@@ -75,6 +75,25 @@ describe('share links', () => {
     await stud.post(`/api/shared/${token}/copy`, { workspaceId: classWorkspaceId }).expect(410);
   });
 
+  it('removing a member revokes the links they made in that workspace, and says so in the audit log', async () => {
+    const admin = await createUser(t.db, { name: 'Bench admin' });
+    await addMember(t.db, workspaceId, admin.id, 'admin');
+    const leaver = await createUser(t.db, { name: 'Short-stay engineer' });
+    await addMember(t.db, workspaceId, leaver.id, 'engineer');
+    const lv = await signedIn(t.url, leaver.email, leaver.password);
+    const setup = SetupDetail.parse((await lv.post(`${ws}/setups`, { setup: cornerDocument('Made by a leaver') }).expect(201)).body);
+    const { token } = CreatedShareLink.parse((await lv.post(`${ws}/share-links`, { objectType: 'setup_revision', objectId: setup.revision.id, expiresAt: null }).expect(201)).body);
+    const kept = await setupWithLink('Made by someone who stays');
+    await request(t.url).get(`/api/shared/${token}`).expect(200);
+
+    const adm = await signedIn(t.url, admin.email, admin.password);
+    await adm.del(`${ws}/members/${leaver.id}`).expect(204);
+    await request(t.url).get(`/api/shared/${token}`).expect(410);
+    await request(t.url).get(`/api/shared/${kept.token}`).expect(200);
+    const audit = await t.db.selectFrom('audit_log').select('summary').where('action', '=', 'member.removed').where('entity_id', '=', leaver.id).executeTakeFirstOrThrow();
+    expect(audit.summary).toMatch(/1 share link they made was revoked/);
+  });
+
   it('an expired link answers 410; an expiry in the past is refused when the link is made', async () => {
     const now = t.clock.now();
     const { token, link } = await setupWithLink('Short-lived', new Date(now.getTime() + 3600_000).toISOString());
