@@ -69,8 +69,8 @@ export function createApp(options: AppOptions): App {
   );
   app.use(cookieParser());
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT }));
-  app.use('/api', requireCsrf);
   app.use('/api', loadSession(deps));
+  app.use('/api', requireCsrf(deps));
 
   const routes = allRoutes(deps);
   app.use(buildApiRouter(routes, deps));

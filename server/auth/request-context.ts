@@ -22,6 +22,8 @@ declare global {
     interface Request {
       user?: SessionUser;
       workspace?: WorkspaceContext;
+      /** Nonce of the CSRF cookie the caller's session was issued beside. */
+      sessionCsrf?: string;
     }
   }
 }

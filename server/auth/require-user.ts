@@ -33,7 +33,10 @@ export function loadSession(deps: Pick<AppDeps, 'db' | 'secret' | 'clock'>): Req
           claims = read;
         }
       }
-      if (claims) req.user = (await sessionUser(deps.db, claims.userId, claims.sessionVersion)) ?? undefined;
+      if (claims) {
+        req.user = (await sessionUser(deps.db, claims.userId, claims.sessionVersion)) ?? undefined;
+        if (req.user) req.sessionCsrf = claims.csrf;
+      }
     }
     next();
   };

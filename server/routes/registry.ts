@@ -73,7 +73,7 @@ export function buildApiRouter(routes: RouteDef[], deps: AppDeps): Router {
     const chain: RequestHandler[] = [];
     const limit = route.rateLimited ? limiter(deps) : null;
     if (limit) chain.push(limit);
-    if (route.issuesCsrf) chain.push((req, res, next) => (ensureCsrfCookie(req, res), next()));
+    if (route.issuesCsrf) chain.push((req, res, next) => (ensureCsrfCookie(req, res, deps.secret), next()));
     chain.push(...accessCheck(route.access, deps), ...(route.before ?? []), route.handler);
     router[route.method](route.path, ...chain);
   }

@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import type { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
+import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
 import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints } from '../repositories/studies.ts';
 import { recordAudit } from './audit.ts';
 import { fail, ok } from './outcome.ts';
@@ -10,6 +11,23 @@ import type { ShareableKind } from './share-objects.ts';
 import { definitionOf, detailOf } from './studies.ts';
 
 const gone = () => fail('gone', 'What this link pointed to is no longer there.');
+
+/** What a link shows of a study: its figures, no internal ids (roads written out, people by name). */
+export function publicStudyOf(detail: StudyDetail): PublicStudy {
+  const { id: _id, base, createdBy, definition, results, baseline, ...rest } = detail;
+  const { base: _base, roads, ...def } = definition;
+  return {
+    ...rest,
+    base: { setupName: base.setupName, revisionNumber: base.revisionNumber },
+    createdBy: { name: createdBy.name },
+    definition: {
+      ...def,
+      roads: roads.map((entry, i) => ({ source: 'inline' as const, road: detail.roads[i], ...(entry.name ? { name: entry.name } : {}), ...(entry.seed !== undefined ? { seed: entry.seed } : {}) })),
+    },
+    results: results && { ...results, ranBy: { name: results.ranBy.name } },
+    baseline: baseline && { ...baseline, chosenBy: { name: baseline.chosenBy.name } },
+  };
+}
 
 /**
  * A study behind a read-only link. Copying takes the study with its saved results into the
@@ -34,7 +52,7 @@ export const studyShare: ShareableKind = {
       sharedBy: link.created_by_name,
       sharedAt: link.created_at,
       expiresAt: link.expires_at,
-      study: await detailOf(db, row),
+      study: publicStudyOf(await detailOf(db, row)),
     };
   },
 

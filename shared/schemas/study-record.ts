@@ -3,7 +3,7 @@ import { Id, IsoDateTime } from './fields.ts';
 import { Road } from './road.ts';
 import { PersonRef, RevisionMessage } from './setup-record.ts';
 import { Setup } from './setup.ts';
-import { StudyDefinition, SweepAxis } from './study.ts';
+import { PublicStudyDefinition, StudyDefinition, SweepAxis } from './study.ts';
 import { StudyCompromise, StudyPointResult, StudyRunOutcome, StudyTradeOff } from './study-result.ts';
 
 /**
@@ -143,7 +143,22 @@ export const StudyDetail = StudySummary.extend({
 });
 export type StudyDetail = z.infer<typeof StudyDetail>;
 
-/** GET /api/shared/:token for a study: the study as its workspace sees it, read-only. */
+const PublicPerson = PersonRef.pick({ name: true });
+
+/**
+ * A study as a read-only link shows it: the same figures as in the workspace, with no internal
+ * id (study, setup, revision, library roads, people) — roads written out, people by name.
+ */
+export const PublicStudy = StudyDetail.omit({ id: true, base: true, createdBy: true, definition: true, results: true, baseline: true }).extend({
+  base: StudyBaseRef.omit({ setupId: true }),
+  createdBy: PublicPerson,
+  definition: PublicStudyDefinition,
+  results: StudyResultsSummary.omit({ ranBy: true }).extend({ ranBy: PublicPerson }).nullable(),
+  baseline: StudyBaseline.omit({ chosenBy: true }).extend({ chosenBy: PublicPerson }).nullable(),
+});
+export type PublicStudy = z.infer<typeof PublicStudy>;
+
+/** GET /api/shared/:token for a study: the study as its workspace sees it, read-only, without ids. */
 export const SharedStudy = z.object({
   readOnly: z.literal(true),
   objectType: z.literal('study'),
@@ -151,6 +166,6 @@ export const SharedStudy = z.object({
   sharedBy: z.string(),
   sharedAt: IsoDateTime,
   expiresAt: IsoDateTime.nullable(),
-  study: StudyDetail,
+  study: PublicStudy,
 });
 export type SharedStudy = z.infer<typeof SharedStudy>;

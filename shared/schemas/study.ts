@@ -63,6 +63,14 @@ export const SweepAxis = z
   });
 export type SweepAxis = z.infer<typeof SweepAxis>;
 
+/** A road written out in full (also what a study shared by link shows: no library ids). */
+export const InlineStudyRoad = z.object({
+  source: z.literal('inline'),
+  road: Road,
+  name: z.string().max(120).regex(plainLine, plainLineMessage).optional(),
+  seed: z.number().int().min(0).max(4294967295).optional(),
+});
+
 /** A road of the study: one from the workspace library, or written out in full. */
 export const StudyRoad = z.discriminatedUnion('source', [
   z.object({
@@ -73,12 +81,7 @@ export const StudyRoad = z.discriminatedUnion('source', [
     /** Replaces an ISO 8608 road's own seed for this study. */
     seed: z.number().int().min(0).max(4294967295).optional(),
   }),
-  z.object({
-    source: z.literal('inline'),
-    road: Road,
-    name: z.string().max(120).regex(plainLine, plainLineMessage).optional(),
-    seed: z.number().int().min(0).max(4294967295).optional(),
-  }),
+  InlineStudyRoad,
 ]);
 export type StudyRoad = z.infer<typeof StudyRoad>;
 
@@ -136,27 +139,36 @@ export type StudyConstraints = z.infer<typeof StudyConstraints>;
 /** Runs one study may ask for (points × roads × speeds). */
 export const STUDY_MAX_RUNS = 20_000;
 
+const studyDefinitionFields = {
+  name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
+  /** The setup revision every point starts from. */
+  base: z.object({ setupId: Id, revisionId: Id }),
+  axes: z.array(SweepAxis).min(1).max(2),
+  roads: z.array(StudyRoad).min(1).max(8),
+  /** Vehicle speeds, m/s; must be empty when `speed` is a swept axis. */
+  speeds: z.array(z.number().min(0.5).max(100)).max(8),
+  /** Simulated time per run, s. */
+  duration: z.number().min(1).max(600).default(60),
+  /** Start of the analysed part, s; default as for single runs. */
+  settleTime: z.number().nonnegative().max(600).optional(),
+  /** How figures combine over roads and speeds: their mean, or the worst of them. */
+  aggregate: z.enum(['mean', 'worst']).default('mean'),
+  objectives: z.array(StudyObjective).min(1).max(6),
+  /** The figures on the comfort and grip axes of the trade-off chart (and its Pareto front). */
+  comfortFigure: StudyFigureKey.default('bodyAccelWkRms'),
+  gripFigure: StudyFigureKey.default('tyreLoadRatio'),
+  constraints: StudyConstraints.default({}),
+};
+
+/**
+ * What a study shared by link shows of its definition: everything but the base setup's ids, with
+ * every road written out.
+ */
+export const PublicStudyDefinition = z.object({ ...studyDefinitionFields, roads: z.array(InlineStudyRoad).min(1).max(8) }).omit({ base: true });
+export type PublicStudyDefinition = z.infer<typeof PublicStudyDefinition>;
+
 export const StudyDefinition = z
-  .object({
-    name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
-    /** The setup revision every point starts from. */
-    base: z.object({ setupId: Id, revisionId: Id }),
-    axes: z.array(SweepAxis).min(1).max(2),
-    roads: z.array(StudyRoad).min(1).max(8),
-    /** Vehicle speeds, m/s; must be empty when `speed` is a swept axis. */
-    speeds: z.array(z.number().min(0.5).max(100)).max(8),
-    /** Simulated time per run, s. */
-    duration: z.number().min(1).max(600).default(60),
-    /** Start of the analysed part, s; default as for single runs. */
-    settleTime: z.number().nonnegative().max(600).optional(),
-    /** How figures combine over roads and speeds: their mean, or the worst of them. */
-    aggregate: z.enum(['mean', 'worst']).default('mean'),
-    objectives: z.array(StudyObjective).min(1).max(6),
-    /** The figures on the comfort and grip axes of the trade-off chart (and its Pareto front). */
-    comfortFigure: StudyFigureKey.default('bodyAccelWkRms'),
-    gripFigure: StudyFigureKey.default('tyreLoadRatio'),
-    constraints: StudyConstraints.default({}),
-  })
+  .object(studyDefinitionFields)
   .superRefine((d, ctx) => {
     const params = d.axes.map((a) => a.parameter);
     if (params.length === 2 && params[0] === params[1]) ctx.addIssue({ code: 'custom', path: ['axes', 1, 'parameter'], message: 'the two axes must sweep different parameters' });

@@ -89,7 +89,7 @@ describe('sign-in and sign-out', () => {
   it('answers GET /api/auth/me with 401 and a CSRF cookie when signed out', async () => {
     const res = await request(t.url).get('/api/auth/me').expect(401);
     expect(ErrorBody.parse(res.body).error.code).toBe('unauthenticated');
-    expect(cookieValue(res.headers['set-cookie'], 'rw_csrf')).toMatch(/^[A-Za-z0-9_-]{20,}$/);
+    expect(cookieValue(res.headers['set-cookie'], 'rw_csrf')).toMatch(/^[A-Za-z0-9_-]{20,}\.[A-Za-z0-9_-]{32}$/);
   });
 
   it('ignores a session token signed with another key', async () => {

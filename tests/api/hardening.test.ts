@@ -78,7 +78,7 @@ describe('rate limits', () => {
     await withApp({ rateLimit: 2, trustProxy: 'loopback' }, async (t) => {
       for (const route of t.routes.filter((r) => r.rateLimited)) {
         const path = route.path.replace(':token', 'a'.repeat(43));
-        const from = (ip: string) => request(t.url)[route.method](path).set(anonymousHeaders()).set('X-Forwarded-For', ip).send({});
+        const from = (ip: string) => request(t.url)[route.method](path).set(anonymousHeaders(t)).set('X-Forwarded-For', ip).send({});
         for (let i = 0; i < 2; i++) expect((await from('198.51.100.7')).status, routeKey(route)).not.toBe(429);
         const refused = await from('198.51.100.7');
         expect(refused.status, routeKey(route)).toBe(429);
@@ -218,7 +218,7 @@ describe('request logs', () => {
       const token = 'S'.repeat(43);
       await request(t.url).get(`/api/shared/${token}`).expect(404);
       await request(t.url).get(`/api/invitations/${token}?x=1`);
-      await request(t.url).post(`/api/invitations/${token}/accept`).set(anonymousHeaders()).send({});
+      await request(t.url).post(`/api/invitations/${token}/accept`).set(anonymousHeaders(t)).send({});
       await request(t.url).get(`/api/shared/${token}%E0%A4%A`).expect(400);
       const log = lines.join('');
       expect(log).toContain('/api/shared/[token]');

@@ -43,6 +43,36 @@ describe('CSRF', () => {
   });
 });
 
+describe('CSRF tokens signed by the server and bound to the session (OWASP signed double-submit)', () => {
+  it('refuses a made-up cookie/header pair, even a matching one', async () => {
+    const u = await createUser(t.db);
+    const res = await request(t.url).post('/api/auth/signin').set('Cookie', 'rw_csrf=a').set('x-csrf-token', 'a').send({ email: u.email, password: u.password }).expect(403);
+    expect(ErrorBody.parse(res.body).error.code).toBe('csrf');
+  });
+
+  it('refuses a write from a foreign Origin or a cross-site fetch, and accepts the app\'s own origin', async () => {
+    const u = await createUser(t.db);
+    const s = await signedIn(t.url, u.email, u.password);
+    const foreign = await s.agent.post('/api/auth/password').set('x-csrf-token', s.csrf).set('Origin', 'http://evil.example').send({ currentPassword: u.password, newPassword: 'a new long password' }).expect(403);
+    expect(ErrorBody.parse(foreign.body).error.code).toBe('csrf');
+    await s.agent.post('/api/auth/password').set('x-csrf-token', s.csrf).set('Sec-Fetch-Site', 'cross-site').send({ currentPassword: u.password, newPassword: 'a new long password' }).expect(403);
+    await s.agent.post('/api/auth/password').set('x-csrf-token', s.csrf).set('Origin', new URL(t.url).origin).send({ currentPassword: u.password, newPassword: 'a new long password' }).expect(204);
+  });
+
+  it('refuses a valid token from another browser planted beside a session', async () => {
+    const u = await createUser(t.db);
+    const victim = await browserLike(t.url);
+    const signin = await victim.post('/api/auth/signin', { email: u.email, password: u.password }).expect(200);
+    const setCookies = ([] as string[]).concat(signin.headers['set-cookie'] ?? []);
+    const sessionCookie = setCookies.find((c) => c.startsWith('rw_session='))?.split(';')[0];
+    expect(sessionCookie).toBeDefined();
+    const attacker = await browserLike(t.url);
+    const res = await request(t.url).post('/api/auth/signout').set('Cookie', `${sessionCookie}; rw_csrf=${attacker.csrf}`).set('x-csrf-token', attacker.csrf).expect(403);
+    expect(ErrorBody.parse(res.body).error.code).toBe('csrf');
+    await victim.get('/api/auth/me').expect(200);
+  });
+});
+
 describe('errors and limits', () => {
   it('answers an unknown /api route with a JSON 404 for any method', async () => {
     const get = await request(t.url).get('/api/no/such/thing').expect(404);

@@ -195,7 +195,8 @@ describe('studies: baseline, revision, sharing', () => {
   });
 
   it('shares a study read-only by link (signed out), and a signed-in engineer copies it with its setup', async () => {
-    const detail = await newStudy();
+    const road = await freshRoad(t.db, workspaceId, engineer, { kind: 'iso8608', class: 'C', seed: 5 });
+    const detail = await newStudy({ roads: [{ source: 'library', roadId: road.id }] });
     await eng.post(`${studies}/${detail.id}/points`, { points: uploadsFor(detail) }).expect(200);
     await put(eng, `${studies}/${detail.id}/results`, { status: 'complete', elapsedMs: 1 }).expect(200);
     const link = CreatedShareLink.parse((await eng.post(`/api/workspaces/${workspaceId}/share-links`, { objectType: 'study', objectId: detail.id }).expect(201)).body);
@@ -203,7 +204,14 @@ describe('studies: baseline, revision, sharing', () => {
 
     const anon = await fetch(`${t.url}/api/shared/${link.token}`);
     expect(anon.status).toBe(200);
-    const shared = SharedObject.parse(await anon.json());
+    const text = await anon.text();
+    // The public projection: no internal id of the study, its setup and revision, library roads or people.
+    const people = await t.db.selectFrom('user').select('id').execute();
+    const roadIds = detail.definition.roads.flatMap((r) => (r.source === 'library' ? [r.roadId] : []));
+    for (const id of [detail.id, detail.base.setupId, detail.definition.base.revisionId, ...roadIds, ...people.map((p) => p.id)]) {
+      if (id) expect(text).not.toContain(id);
+    }
+    const shared = SharedObject.parse(JSON.parse(text));
     if (shared.objectType !== 'study') throw new Error('expected a study');
     expect(shared.study.points).toHaveLength(4);
     expect(shared.study.status).toBe('complete');

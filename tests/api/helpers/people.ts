@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import { hashPassword } from '../../../server/auth/password.ts';
-import { CSRF_COOKIE, CSRF_HEADER } from '../../../server/auth/csrf.ts';
+import { CSRF_COOKIE, CSRF_HEADER, csrfNonce, makeCsrfToken } from '../../../server/auth/csrf.ts';
 import { issueSessionToken, SESSION_COOKIE } from '../../../server/auth/session.ts';
 import type { Db } from '../../../server/db/database.ts';
 import type { TestApp } from './test-app.ts';
@@ -45,12 +45,10 @@ export async function addMember(db: Db, workspaceId: string, userId: string, rol
   await db.insertInto('membership').values({ workspace_id: workspaceId, user_id: userId, role, created_at: new Date().toISOString() }).execute();
 }
 
-/** A fixed CSRF value; tests send it as both cookie and header. */
-export const TEST_CSRF = 'test-csrf-token-0123456789abcdef';
-
-/** Headers for a signed-out caller that passes the CSRF check. */
-export function anonymousHeaders(): Record<string, string> {
-  return { Cookie: `${CSRF_COOKIE}=${TEST_CSRF}`, [CSRF_HEADER]: TEST_CSRF };
+/** Headers for a signed-out caller that passes the CSRF check: a server-signed token as cookie and header. */
+export function anonymousHeaders(t: Pick<TestApp, 'deps'>): Record<string, string> {
+  const csrf = makeCsrfToken(t.deps.secret);
+  return { Cookie: `${CSRF_COOKIE}=${csrf}`, [CSRF_HEADER]: csrf };
 }
 
 /**
@@ -59,6 +57,8 @@ export function anonymousHeaders(): Record<string, string> {
  */
 export async function sessionHeaders(t: Pick<TestApp, 'db' | 'deps'>, userId: string): Promise<Record<string, string>> {
   const row = await t.db.selectFrom('user').select('session_version').where('id', '=', userId).executeTakeFirstOrThrow();
-  const token = await issueSessionToken(t.deps.secret, { userId, sessionVersion: row.session_version }, t.deps.clock());
-  return { Cookie: `${SESSION_COOKIE}=${token}; ${CSRF_COOKIE}=${TEST_CSRF}`, [CSRF_HEADER]: TEST_CSRF };
+  const csrf = makeCsrfToken(t.deps.secret);
+  const nonce = csrfNonce(t.deps.secret, csrf) ?? '';
+  const token = await issueSessionToken(t.deps.secret, { userId, sessionVersion: row.session_version, csrf: nonce }, t.deps.clock());
+  return { Cookie: `${SESSION_COOKIE}=${token}; ${CSRF_COOKIE}=${csrf}`, [CSRF_HEADER]: csrf };
 }

@@ -51,7 +51,7 @@ export function expectedFor(access: Access, caller: Caller, ok: number): Expecta
 /** Sends the entry's request as `caller`, with a current session (if any) and a valid CSRF token. */
 export async function sendAs(world: RoleWorld, method: string, req: MatrixRequest, caller: Caller): Promise<request.Response> {
   const user = userOfCaller(world, caller);
-  const headers = user ? await sessionHeaders(world.t, user.id) : anonymousHeaders();
+  const headers = user ? await sessionHeaders(world.t, user.id) : anonymousHeaders(world.t);
   const agent = request(world.t.url);
   let r: request.Test = agent[method as 'get' | 'post' | 'put' | 'patch' | 'delete'](req.path).set(headers);
   if (req.customize) r = req.customize(r);

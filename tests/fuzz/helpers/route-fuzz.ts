@@ -37,7 +37,7 @@ const TIMEOUT = { response: 15_000, deadline: 20_000 };
 /** Sends the valid request of `entry` with `m` applied. */
 export async function sendMutated(world: RoleWorld, route: RouteDef, valid: MatrixRequest, caller: Caller, m: Mutation): Promise<request.Response> {
   const user = userOfCaller(world, caller);
-  const headers = user ? await sessionHeaders(world.t, user.id) : anonymousHeaders();
+  const headers = user ? await sessionHeaders(world.t, user.id) : anonymousHeaders(world.t);
   const path = (m.path ?? valid.path) + (m.query ? `${valid.path.includes('?') ? '&' : '?'}${m.query}` : '');
   let r = request(world.t.url)[route.method](path).set(headers).timeout(TIMEOUT);
   if (m.text) return r.set('Content-Type', m.text.contentType).send(m.text.body);

@@ -1,4 +1,7 @@
 import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
+
+/** What the views read of a definition: a shared study's (without base ids) will do. */
+type ViewedDefinition = Omit<StudyDefinition, 'base' | 'roads'> & { roads: ReadonlyArray<Pick<StudyDefinition['roads'][number], 'name' | 'seed' | 'source'>> };
 import type { StudyCompromise, StudyPointResult, StudyTradeOff } from '../../../../shared/schemas/study-result.ts';
 import { studyBestCompromise, studyTradeOff } from '../../../../shared/study/study-compromise.ts';
 
@@ -8,7 +11,7 @@ import { studyBestCompromise, studyTradeOff } from '../../../../shared/study/stu
  * `points` (which may have gaps in sweep order after a cancelled run), not point indices.
  */
 export interface StudyView {
-  definition: StudyDefinition;
+  definition: ViewedDefinition;
   points: StudyPointResult[];
   base: StudyPointResult | null;
   /** null while a run is going: the verdict is worked out once, on the final set. */
@@ -16,7 +19,7 @@ export interface StudyView {
   tradeOff: StudyTradeOff | null;
 }
 
-export function studyView(definition: StudyDefinition, points: readonly StudyPointResult[], base: StudyPointResult | null, final: boolean): StudyView {
+export function studyView(definition: ViewedDefinition, points: readonly StudyPointResult[], base: StudyPointResult | null, final: boolean): StudyView {
   const sorted = [...points].sort((a, b) => a.index - b.index);
   return {
     definition,
