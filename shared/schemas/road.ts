@@ -9,6 +9,9 @@ import { cyclesPerMeter, hertz, meters, metersPerSecond, seconds } from '../unit
 
 const name = z.string().trim().max(120).regex(plainLine, plainLineMessage).optional();
 
+/** Most samples one ISO 8608 profile may have (2 per shortest wavelength over its period). */
+export const ISO_MAX_SAMPLES = 1_048_576;
+
 export const isoClasses = ['A', 'B', 'C', 'D', 'E', 'F', 'G', 'H'] as const;
 export const IsoClass = z.enum(isoClasses);
 export type IsoClass = z.infer<typeof IsoClass>;
@@ -34,7 +37,12 @@ export const Iso8608Road = z
     /** Period of the generated profile, m; default 1024. */
     length: meters.min(10).max(100000).optional(),
   })
-  .refine((r) => (r.nMin ?? 0.011) < (r.nMax ?? 2.83), { path: ['nMax'], message: 'nMax must be above nMin' });
+  .refine((r) => (r.nMin ?? 0.011) < (r.nMax ?? 2.83), { path: ['nMax'], message: 'nMax must be above nMin' })
+  // Two samples per shortest wavelength over one period: bounded so one road stays a cheap object.
+  .refine((r) => 2 * (r.length ?? 1024) * (r.nMax ?? 2.83) <= ISO_MAX_SAMPLES, {
+    path: ['length'],
+    message: `length × nMax makes too many samples: 2 × length × nMax must stay at or below ${ISO_MAX_SAMPLES} (e.g. 100 km at the default 2.83 cycle/m)`,
+  });
 
 /** Endless sine, faded in over its first two wavelengths. */
 export const SineRoad = z.strictObject({

@@ -66,6 +66,19 @@ describe('road library', () => {
     expect(await roadCount()).toBe(before);
   });
 
+  it('refuses definitions that would expand a few bytes into millions of samples, naming the field', async () => {
+    const before = await roadCount();
+    // 100 bytes asking for 5 million samples from two points.
+    const twoPoints = await eng.post(roads, { name: 'Two points', definition: { kind: 'measured', points: [[0, 0], [49999, 0.01]], spacing: 0.01 } }).expect(400);
+    expect(ErrorBody.parse(twoPoints.body).error.fields?.map((f) => f.path)).toEqual(['definition.spacing']);
+    // 100 km of road up to 100 cycle/m: 2 × 10⁷ samples.
+    const longIso = await eng.post(roads, { name: 'Endless fine road', definition: { kind: 'iso8608', class: 'C', seed: 1, length: 100000, nMax: 100 } }).expect(400);
+    expect(ErrorBody.parse(longIso.body).error.fields?.map((f) => f.path)).toEqual(['definition.length']);
+    expect(await roadCount()).toBe(before);
+    // The same lengths at ordinary detail are fine.
+    await eng.post(roads, { name: 'Long ordinary road', definition: { kind: 'iso8608', class: 'C', seed: 1, length: 100000 } }).expect(201);
+  });
+
   it('uploads a measured profile in mm, stores metres, and fits its ISO 8608 class', async () => {
     const res = await upload(measuredCsv(800), { name: 'Quarry lane', detrend: 'mean' }).expect(201);
     const road = RoadDetail.parse(res.body);

@@ -3,7 +3,19 @@ import { atSpeed, type RoadExcitation } from './excitation.ts';
 import { gridSpline } from './spline.ts';
 
 /** Largest resampled grid accepted (memory and spline cost stay moderate). */
-const MAX_SAMPLES = 5_000_000;
+const MAX_SAMPLES = 2_000_000;
+/**
+ * Resampling may add detail between measured points, within reason: at most this many samples
+ * per given point (or 100 000 samples in all for short files), so a two-point "profile" cannot
+ * ask for millions of samples.
+ */
+export const SAMPLES_PER_POINT = 4;
+const SMALL_PROFILE_SAMPLES = 100_000;
+
+/** Most samples a profile of `points` points may be resampled to. */
+export function sampleCap(points: number): number {
+  return Math.min(MAX_SAMPLES, Math.max(SAMPLES_PER_POINT * points, SMALL_PROFILE_SAMPLES));
+}
 
 /** A measured profile on an even grid starting at distance 0 (the first point). */
 export interface ResampledProfile {
@@ -35,8 +47,9 @@ export function resampleMeasured(road: MeasuredRoad): ResampleOutcome {
   // profile (evenly spaced points then land exactly on the grid).
   const dx = road.spacing ?? length / Math.max(1, Math.round(length / median(gaps)));
   const n = Math.floor(length / dx + 1e-9) + 1;
-  if (n > MAX_SAMPLES) {
-    return { ok: false, reason: `road.spacing: ${dx} m over ${length.toFixed(1)} m makes more than ${MAX_SAMPLES} samples` };
+  const cap = sampleCap(pts.length);
+  if (n > cap) {
+    return { ok: false, reason: `road.spacing: ${dx} m over ${length.toFixed(1)} m makes ${n} samples from ${pts.length} points; at most ${cap} (${SAMPLES_PER_POINT} per point, or ${SMALL_PROFILE_SAMPLES} in all, up to ${MAX_SAMPLES})` };
   }
   if (n < 4) return { ok: false, reason: 'road.points: the profile needs at least 4 samples at its spacing' };
   const z = new Float64Array(n);
