@@ -77,3 +77,7 @@ export async function countAdmins(db: Queryable, workspaceId: string): Promise<n
 export function listRolesOfUser(db: Queryable, userId: string): Promise<Pick<MembershipRow, 'role'>[]> {
   return db.selectFrom('membership').select('role').where('user_id', '=', userId).execute();
 }
+
+export async function updateWorkspaceSettings(db: Queryable, id: string, patch: { release_needs_second_person: number }): Promise<void> {
+  await db.updateTable('workspace').set(patch).where('id', '=', id).execute();
+}

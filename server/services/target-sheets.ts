@@ -34,6 +34,7 @@ import { recordAudit } from './audit.ts';
 import { parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
 import { mailSheetDecision, type SheetMailFacts } from './target-sheet-mail.ts';
+import { workspaceSettings } from './workspace-settings.ts';
 
 export type Actor = Pick<SessionUser, 'id' | 'name'>;
 type Ws = Pick<WorkspaceContext, 'workspaceId' | 'workspaceName' | 'role'>;
@@ -235,6 +236,14 @@ export interface SheetMove {
   detail: TargetSheetDetail;
 }
 
+/** True when the workspace asks for a second person and `actorId` wrote or last submitted the sheet. */
+async function wantsSecondPerson(trx: Queryable, workspaceId: string, authorId: string, sheetId: string, actorId: string): Promise<boolean> {
+  if (!(await workspaceSettings(trx, workspaceId)).releaseNeedsSecondPerson) return false;
+  if (authorId === actorId) return true;
+  const submits = (await listSheetEvents(trx, sheetId)).filter((e) => e.to_status === 'in_review');
+  return submits.at(-1)?.actor_id === actorId;
+}
+
 /** `moveTargetSheet` inside an open transaction, without the mail (the demo seed sends none). */
 export async function moveTargetSheetIn(
   trx: Queryable,
@@ -251,6 +260,9 @@ export async function moveTargetSheetIn(
   const check = checkTransition(row.status, to, ws.role, reason);
   if (!check.ok) return fail(check.code, `${row.number}: ${check.message}.`, check.code === 'bad_request' ? [{ path: 'reason', message: check.message }] : undefined);
   const { action } = check.transition;
+  if (action === 'release' && (await wantsSecondPerson(trx, ws.workspaceId, row.author_id, sheetId, actor.id))) {
+    return fail('forbidden', `${row.number}: this workspace asks for a second person — a lead who did not write or submit the sheet releases it.`);
+  }
   const why = action === 'return' ? reason!.trim() : null;
   await updateSheet(trx, sheetId, {
     status: to,

@@ -20,7 +20,13 @@ export const Membership = z.object({ workspaceId: Id, workspaceName: z.string(),
 export type Membership = z.infer<typeof Membership>;
 
 /** GET /api/workspaces/:workspaceId */
-export const WorkspaceInfo = z.object({ id: Id, name: z.string(), role: Role });
+export const WorkspaceSettings = z.object({
+  /** A target sheet is released only by a lead other than the one who wrote or submitted it. */
+  releaseNeedsSecondPerson: z.boolean(),
+});
+export type WorkspaceSettings = z.infer<typeof WorkspaceSettings>;
+
+export const WorkspaceInfo = z.object({ id: Id, name: z.string(), role: Role, settings: WorkspaceSettings });
 export type WorkspaceInfo = z.infer<typeof WorkspaceInfo>;
 
 export const Member = z.object({

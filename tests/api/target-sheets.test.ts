@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { ErrorBody } from '../../shared/errors.ts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { roles, type Role } from '../../shared/schemas/workspace.ts';
 import { ConformityChecksResponse, ConformityRecordDetail, type TargetSheetContent, TargetSheetDetail, TargetSheetsResponse, TargetSheetTransitionResult, type TargetSheetStatus } from '../../shared/schemas/target-sheet.ts';
@@ -232,6 +233,42 @@ describe('supersession', () => {
     const next = TargetSheetDetail.parse((await call('post', path(`/${old.id}/supersede`), people.engineer, {})).body).sheet;
     await call('delete', path(`/${next.id}`), people.engineer);
     expect(TargetSheetDetail.parse((await call('get', path(`/${old.id}`), people.viewer)).body).sheet.supersededBy).toBeNull();
+  });
+});
+
+describe('a second person for release (workspace setting)', () => {
+  async function leadsOwnSheetInReview() {
+    const setup = await freshSetup(t.db, cast.workspaceId, people.engineer);
+    const created = await call('post', path(), people.lead, { setupId: setup.id, revision: 1 });
+    expect(created.status, JSON.stringify(created.body)).toBe(201);
+    const { sheet } = TargetSheetDetail.parse(created.body);
+    expect((await call('post', path(`/${sheet.id}/submit`), people.lead)).status).toBe(200);
+    return sheet;
+  }
+
+  it('off (the default): a lead may release a sheet they wrote and submitted', async () => {
+    const sheet = await leadsOwnSheetInReview();
+    expect((await call('post', path(`/${sheet.id}/release`), people.lead)).status).toBe(200);
+  });
+
+  it('on: the author-submitter is refused with a plain reason, another lead releases; only an admin changes it', async () => {
+    const url = `/api/workspaces/${cast.workspaceId}/settings`;
+    expect((await call('put', url, people.lead, { releaseNeedsSecondPerson: true })).status).toBe(403);
+    expect((await call('put', url, people.admin, { releaseNeedsSecondPerson: true })).body).toEqual({ releaseNeedsSecondPerson: true });
+    try {
+      const info = await call('get', `/api/workspaces/${cast.workspaceId}`, people.viewer);
+      expect(info.body.settings).toEqual({ releaseNeedsSecondPerson: true });
+      const sheet = await leadsOwnSheetInReview();
+      const refused = await call('post', path(`/${sheet.id}/release`), people.lead);
+      expect(refused.status).toBe(403);
+      expect(ErrorBody.parse(refused.body).error.message).toMatch(/second person/);
+      expect(await statusOf(sheet.id)).toBe('in_review');
+      expect((await call('post', path(`/${sheet.id}/release`), secondLead)).status).toBe(200);
+      const audit = await t.db.selectFrom('audit_log').select('action').where('entity_id', '=', cast.workspaceId).where('action', '=', 'workspace.settings_changed').execute();
+      expect(audit).toHaveLength(1);
+    } finally {
+      await call('put', url, people.admin, { releaseNeedsSecondPerson: false });
+    }
   });
 });
 

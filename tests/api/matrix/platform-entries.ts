@@ -90,6 +90,7 @@ export const platformEntries: MatrixEntries = {
   },
 
   'GET /api/workspaces/:workspaceId': { access: 'viewer', ok: 200, build: (w) => ({ path: ws(w) }) },
+  'PUT /api/workspaces/:workspaceId/settings': { access: 'admin', ok: 200, build: (w) => ({ path: ws(w, '/settings'), body: { releaseNeedsSecondPerson: false } }) },
   'GET /api/workspaces/:workspaceId/members': { access: 'viewer', ok: 200, build: (w) => ({ path: ws(w, '/members') }) },
   'PATCH /api/workspaces/:workspaceId/members/:userId': {
     access: 'admin',
