@@ -20,6 +20,7 @@ import { TargetTable } from '../../features/target-sheets/components/target-tabl
 import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+import { useMe } from '../../features/auth/api/get-me.ts';
 import { NotFoundRoute } from './not-found.tsx';
 
 /**
@@ -29,6 +30,7 @@ import { NotFoundRoute } from './not-found.tsx';
  */
 export function SheetDetailRoute() {
   const workspace = useWorkspace();
+  const me = useMe();
   const { sheetId = '' } = useParams();
   const detail = useSheet(workspace.id, sheetId);
   const checks = useChecks(workspace.id, sheetId);
@@ -66,7 +68,7 @@ export function SheetDetailRoute() {
           </>
         }
       />
-      <StatusBar sheet={sheet} workspaceId={workspace.id} role={workspace.role} />
+      <StatusBar sheet={sheet} workspaceId={workspace.id} role={workspace.role} secondPerson={workspace.settings.releaseNeedsSecondPerson ? { userId: me.data?.user.id ?? '' } : null} />
       <Section title="Identity">
         <SheetIdentity sheet={sheet} workspaceId={workspace.id} />
       </Section>

@@ -7,6 +7,7 @@ import { InvitationsTable } from '../../features/team/components/invitations-tab
 import { InviteForm } from '../../features/team/components/invite-form.tsx';
 import { MembersTable } from '../../features/team/components/members-table.tsx';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+import { ReleaseRule } from '../../features/workspaces/components/release-rule.tsx';
 
 export function TeamRoute() {
   const workspace = useWorkspace();
@@ -38,6 +39,11 @@ export function TeamRoute() {
           <MembersTable workspaceId={workspace.id} members={members.data.members} currentUserId={me?.user.id ?? ''} canManage={isAdmin} />
         )}
       </Section>
+      {isAdmin && (
+        <Section title="Rules">
+          <ReleaseRule workspaceId={workspace.id} settings={workspace.settings} />
+        </Section>
+      )}
       {isAdmin && members.data && members.data.invitations.length > 0 && (
         <Section title="Waiting for an answer">
           <InvitationsTable workspaceId={workspace.id} invitations={members.data.invitations} />

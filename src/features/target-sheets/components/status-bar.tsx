@@ -26,7 +26,18 @@ const waiting: Partial<Record<TargetSheet['status'], string>> = {
  * others anyway). Release and send-back open in place: release with its caution, send-back
  * with a reason.
  */
-export function StatusBar({ sheet, workspaceId, role }: { sheet: TargetSheet; workspaceId: string; role: Role }) {
+export function StatusBar({
+  sheet,
+  workspaceId,
+  role,
+  secondPerson,
+}: {
+  sheet: TargetSheet;
+  workspaceId: string;
+  role: Role;
+  /** Set when the workspace asks for a second person at release: who is looking. */
+  secondPerson: { userId: string } | null;
+}) {
   const navigate = useNavigate();
   const move = useMoveSheet(workspaceId, sheet.id);
   const supersede = useSupersedeSheet(workspaceId, sheet.id);
@@ -102,9 +113,15 @@ export function StatusBar({ sheet, workspaceId, role }: { sheet: TargetSheet; wo
       {panel === 'release' && (
         <div className="mt-3 border-t border-rule pt-3" role="group" aria-label="Release this sheet">
           <Caution className="mb-2 text-sm">{sheetCautions.release}</Caution>
+          {secondPerson && (
+            <p className="mb-2 text-sm text-ink-soft">
+              This workspace asks for a second person: a lead who did not write or submit the sheet releases it
+              {sheet.author.id === secondPerson.userId ? ' — you wrote this one, so another lead releases it.' : '.'}
+            </p>
+          )}
           <p className="mb-2 text-sm text-ink-soft">The author is e-mailed. A released sheet cannot be edited; changes need a new sheet that supersedes it.</p>
           <div className="flex gap-2">
-            <Button variant="primary" size="sm" busy={move.isPending} onClick={() => run('release')}>
+            <Button variant="primary" size="sm" busy={move.isPending} disabled={secondPerson?.userId === sheet.author.id} onClick={() => run('release')}>
               Release {sheet.number}
             </Button>
             <Button variant="quiet" size="sm" onClick={() => setPanel(null)}>
