@@ -16,9 +16,10 @@ export async function insertEvents(db: Queryable, keys: string[], at: string): P
   await db.insertInto('throttle_event').values(keys.map((key) => ({ key, at }))).execute();
 }
 
-/** Forgets actions older than `before` (every limit's window is shorter). */
-export async function deleteEventsBefore(db: Queryable, before: string): Promise<void> {
-  await db.deleteFrom('throttle_event').where('at', '<', before).execute();
+/** Forgets the keys' actions older than `before` (every limit's window is shorter). */
+export async function deleteEventsBefore(db: Queryable, keys: string[], before: string): Promise<void> {
+  if (keys.length === 0) return;
+  await db.deleteFrom('throttle_event').where('key', 'in', keys).where('at', '<', before).execute();
 }
 
 /** Forgets the action counted under `key` at exactly `at` (one attempt's own mark). */

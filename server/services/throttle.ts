@@ -30,10 +30,11 @@ export async function overLimit(db: Queryable, rules: ThrottleRule[], now: Date)
   return null;
 }
 
-/** Counts one action against every rule's key (and now and then forgets old ones). */
+/** Counts one action against every rule's key, forgetting that key's actions older than any window. */
 export async function recordActions(db: Db | Queryable, rules: ThrottleRule[], now: Date): Promise<void> {
-  await insertEvents(db, [...new Set(rules.map((r) => r.key))], now.toISOString());
-  if (Math.random() < 0.01) await deleteEventsBefore(db, new Date(now.getTime() - LONGEST_WINDOW_MS).toISOString());
+  const keys = [...new Set(rules.map((r) => r.key))];
+  await deleteEventsBefore(db, keys, new Date(now.getTime() - LONGEST_WINDOW_MS).toISOString());
+  await insertEvents(db, keys, now.toISOString());
 }
 
 function describeWait(seconds: number): string {
