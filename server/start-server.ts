@@ -1,3 +1,4 @@
+import { closeHeavyPool } from './jobs/heavy-pool.ts';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
@@ -72,6 +73,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
       });
       mailer.close();
       await sink?.close();
+      await closeHeavyPool();
       await db.destroy();
     },
   };

@@ -11,6 +11,7 @@ export const errorCodes = [
   'rate_limited',
   'payload_too_large',
   'gone',
+  'busy',
   'internal',
 ] as const;
 export const ErrorCode = z.enum(errorCodes);
@@ -40,5 +41,6 @@ export const statusOf: Record<ErrorCode, number> = {
   rate_limited: 429,
   payload_too_large: 413,
   gone: 410,
+  busy: 503,
   internal: 500,
 };

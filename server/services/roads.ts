@@ -11,12 +11,11 @@ import {
   type UpdateRoadInput,
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
-import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import { fieldsOf } from '../errors.ts';
 import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from '../repositories/roads.ts';
 import { recordAudit } from './audit.ts';
 import { fail, ok, type Outcome } from './outcome.ts';
+import { runHeavy } from '../jobs/heavy-pool.ts';
 import type { Actor } from './setups.ts';
 
 type Ws = { workspaceId: string };
@@ -53,6 +52,16 @@ export function figuresOrFail(road: Road): Outcome<RoadFigures> {
   return ok(out.figures);
 }
 
+/** `figuresOrFail` in a worker thread (resampling and the class fit can take seconds). */
+async function figuresInWorker(road: Road): Promise<Outcome<RoadFigures>> {
+  const done = await runHeavy('roadFigures', road);
+  if (!done.ok) return done;
+  const out = done.value;
+  if (out.ok) return ok(out.figures);
+  const [path, ...rest] = out.reason.split(': ');
+  return rest.length ? fail('bad_request', 'The road definition needs attention.', [{ path: path.replace(/^road\./, 'definition.'), message: rest.join(': ') }]) : fail('bad_request', out.reason);
+}
+
 export async function listRoadLibrary(db: Db, ws: Ws): Promise<RoadsResponse> {
   return { roads: (await listRoads(db, ws.workspaceId)).map(toListItem) };
 }
@@ -77,7 +86,7 @@ const kindWords: Record<Road['kind'], string> = {
  * (length, step, fitted ISO class) is computed here so lists never recompute it.
  */
 export async function saveNewRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, now: Date): Promise<Outcome<RoadDetail>> {
-  const figures = figuresOrFail(input.definition);
+  const figures = await figuresInWorker(input.definition);
   if (!figures.ok) return figures;
   return db.transaction().execute(async (trx) => ok(await insertRoadRecord(trx, ws, actor, input, source, figures.value, now)));
 }
@@ -121,6 +130,9 @@ export function createRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput,
 
 /** Rename or redefine a road; runs that drove it keep their own copy of the old definition. */
 export async function updateRoad(db: Db, ws: Ws, actor: Actor, roadId: string, input: UpdateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
+  // Worked out before the transaction, in a worker thread (see figuresInWorker).
+  const newFigures = input.definition ? await figuresInWorker(input.definition) : null;
+  if (newFigures && !newFigures.ok) return newFigures;
   return db.transaction().execute(async (trx) => {
     const row = await findRoad(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
@@ -132,9 +144,8 @@ export async function updateRoad(db: Db, ws: Ws, actor: Actor, roadId: string, i
       if (current.source === 'measured' && input.definition.kind !== 'measured') {
         return fail('bad_request', 'A measured road stays measured; add a new road for a different kind.', [{ path: 'definition.kind', message: 'must stay measured' }]);
       }
-      const figures = figuresOrFail(input.definition);
-      if (!figures.ok) return figures;
-      summary = JSON.stringify(figures.value);
+      if (!newFigures?.ok) throw new Error('figures of a new definition were not worked out');
+      summary = JSON.stringify(newFigures.value);
     }
     const at = now.toISOString();
     await updateRoadRow(trx, ws.workspaceId, roadId, {
@@ -198,17 +209,11 @@ export async function uploadMeasuredRoad(
   fields: MeasuredUploadFields,
   now: Date,
 ): Promise<Outcome<RoadDetail>> {
-  const parsed = parseMeasuredCsv(file.text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit, maxRows: MEASURED_MAX_ROWS });
-  if (!parsed.ok) return fail('bad_request', `${file.filename} was not saved: ${parsed.reason}`, parsed.issues);
-  const definition = Road.safeParse({
-    kind: 'measured',
-    name: fields.name,
-    points: parsed.profile.points,
-    ...(fields.detrend ? { detrend: fields.detrend } : {}),
-    ...(fields.spacing ? { spacing: fields.spacing } : {}),
-  });
-  if (!definition.success) {
-    return fail('bad_request', `${file.filename} was not saved: the profile does not make a valid road.`, fieldsOf(definition.error));
-  }
-  return saveNewRoad(db, ws, actor, { name: fields.name, definition: definition.data }, 'measured', now);
+  // Parsing, checking and the figures of up to 500 000 rows run in a worker thread.
+  const done = await runHeavy('measuredUpload', { text: file.text, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
+  if (!done.ok) return done;
+  const out = done.value;
+  if (!out.ok) return fail('bad_request', out.message, out.fields);
+  const input = { name: fields.name, definition: out.definition };
+  return db.transaction().execute(async (trx) => ok(await insertRoadRecord(trx, ws, actor, input, 'measured', out.figures, now)));
 }

@@ -1,0 +1,37 @@
+// Runs in the server's worker threads (server/jobs/heavy-pool.ts): pure functions from shared/
+// that can take seconds on big input, so that they never hold the request thread.
+import { Road } from '../../shared/schemas/road.ts';
+import type { MeasuredUploadFields } from '../../shared/schemas/road-record.ts';
+import type { FieldIssue } from '../../shared/errors.ts';
+import { roadFigures as figuresOfRoad, type RoadFiguresOutcome } from '../../shared/road-library/road-figures.ts';
+import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
+
+export type MeasuredUploadResult =
+  | { ok: true; definition: Road; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
+  | { ok: false; message: string; fields?: FieldIssue[] };
+
+/** A measured-profile CSV → the road definition and its figures, or what is wrong (by line or field). */
+export function measuredUpload(input: { text: string; filename: string; fields: MeasuredUploadFields; maxRows: number }): MeasuredUploadResult {
+  const { text, filename, fields } = input;
+  const parsed = parseMeasuredCsv(text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit, maxRows: input.maxRows });
+  if (!parsed.ok) return { ok: false, message: `${filename} was not saved: ${parsed.reason}`, fields: parsed.issues };
+  const definition = Road.safeParse({
+    kind: 'measured',
+    name: fields.name,
+    points: parsed.profile.points,
+    ...(fields.detrend ? { detrend: fields.detrend } : {}),
+    ...(fields.spacing ? { spacing: fields.spacing } : {}),
+  });
+  if (!definition.success) {
+    const issues = definition.error.issues.map((i) => ({ path: i.path.map(String).join('.') || '(body)', message: i.message }));
+    return { ok: false, message: `${filename} was not saved: the profile does not make a valid road.`, fields: issues };
+  }
+  const figures = figuresOfRoad(definition.data);
+  if (!figures.ok) return { ok: false, message: `${filename} was not saved: ${figures.reason}` };
+  return { ok: true, definition: definition.data, figures: figures.figures };
+}
+
+/** A road's figures (resampling, spectrum, class fit). */
+export function roadFigures(road: Road): RoadFiguresOutcome {
+  return figuresOfRoad(road);
+}
