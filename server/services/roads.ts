@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { roadFigures } from '../../shared/road-library/road-figures.ts';
+import { roadFigures, type RoadFiguresOutcome } from '../../shared/road-library/road-figures.ts';
 import {
   type CreateRoadInput,
   type MeasuredUploadFields,
@@ -44,22 +44,19 @@ function toDetail(r: RoadDetailRow): RoadDetail {
 
 /** Figures of a road, or a 400 naming the definition field at fault (e.g. too many samples). */
 export function figuresOrFail(road: Road): Outcome<RoadFigures> {
-  const out = roadFigures(road);
-  if (!out.ok) {
-    const [path, ...rest] = out.reason.split(': ');
-    return rest.length ? fail('bad_request', 'The road definition needs attention.', [{ path: path.replace(/^road\./, 'definition.'), message: rest.join(': ') }]) : fail('bad_request', out.reason);
-  }
-  return ok(out.figures);
+  return asOutcome(roadFigures(road));
+}
+
+function asOutcome(out: RoadFiguresOutcome): Outcome<RoadFigures> {
+  if (out.ok) return ok(out.figures);
+  const [path, ...rest] = out.reason.split(': ');
+  return rest.length ? fail('bad_request', 'The road definition needs attention.', [{ path: path.replace(/^road\./, 'definition.'), message: rest.join(': ') }]) : fail('bad_request', out.reason);
 }
 
 /** `figuresOrFail` in a worker thread (resampling and the class fit can take seconds). */
 async function figuresInWorker(road: Road): Promise<Outcome<RoadFigures>> {
   const done = await runHeavy('roadFigures', road);
-  if (!done.ok) return done;
-  const out = done.value;
-  if (out.ok) return ok(out.figures);
-  const [path, ...rest] = out.reason.split(': ');
-  return rest.length ? fail('bad_request', 'The road definition needs attention.', [{ path: path.replace(/^road\./, 'definition.'), message: rest.join(': ') }]) : fail('bad_request', out.reason);
+  return done.ok ? asOutcome(done.value) : done;
 }
 
 export async function listRoadLibrary(db: Db, ws: Ws): Promise<RoadsResponse> {
