@@ -28,7 +28,7 @@ describe('members and roles', () => {
   it('tells each member their own role in the workspace', async () => {
     const eng = await member('engineer');
     const info = WorkspaceInfo.parse((await (await signedIn(t.url, eng.email, eng.password)).get(base).expect(200)).body);
-    expect(info).toEqual({ id: workspaceId, name: 'Skerry corner bench', role: 'engineer' });
+    expect(info).toEqual({ id: workspaceId, name: 'Skerry corner bench', role: 'engineer', settings: { releaseNeedsSecondPerson: false } });
   });
 
   it('changes a role, answers with the member, and audits who did it', async () => {
