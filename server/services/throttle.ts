@@ -31,7 +31,7 @@ export async function overLimit(db: Queryable, rules: ThrottleRule[], now: Date)
 }
 
 /** Counts one action against every rule's key, forgetting that key's actions older than any window. */
-export async function recordActions(db: Db | Queryable, rules: ThrottleRule[], now: Date): Promise<void> {
+export async function recordActions(db: Queryable, rules: ThrottleRule[], now: Date): Promise<void> {
   const keys = [...new Set(rules.map((r) => r.key))];
   await deleteEventsBefore(db, keys, new Date(now.getTime() - LONGEST_WINDOW_MS).toISOString());
   await insertEvents(db, keys, now.toISOString());

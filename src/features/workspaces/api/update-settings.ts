@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { WorkspaceSettings } from '../../../../shared/schemas/workspace.ts';
+import { type WorkspaceInfo, WorkspaceSettings } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
 import { workspaceInfoKey } from '../../../lib/query-keys.ts';
 
@@ -11,6 +11,8 @@ export function useUpdateWorkspaceSettings(workspaceId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (settings: WorkspaceSettings) => updateWorkspaceSettings(workspaceId, settings),
+    // The saved rules are the answer itself: put them in place at once, then refetch to be sure.
+    onSuccess: (settings) => queryClient.setQueryData(workspaceInfoKey(workspaceId), (info: WorkspaceInfo | undefined) => info && { ...info, settings }),
     onSettled: () => void queryClient.invalidateQueries({ queryKey: workspaceInfoKey(workspaceId) }),
   });
 }

@@ -5,13 +5,15 @@ import { useUpdateWorkspaceSettings } from '../api/update-settings.ts';
 /** The admin's switch for a second person at target-sheet release. */
 export function ReleaseRule({ workspaceId, settings }: { workspaceId: string; settings: WorkspaceSettings }) {
   const update = useUpdateWorkspaceSettings(workspaceId);
+  // Shows the choice at once; the workspace's own answer takes over when the save comes back.
+  const shown = update.isPending ? update.variables : settings;
   return (
     <div className="space-y-1">
       <label className="flex items-start gap-2 text-sm">
         <input
           type="checkbox"
           className="mt-0.5"
-          checked={settings.releaseNeedsSecondPerson}
+          checked={shown.releaseNeedsSecondPerson}
           disabled={update.isPending}
           onChange={(e) => update.mutate({ ...settings, releaseNeedsSecondPerson: e.target.checked })}
         />
