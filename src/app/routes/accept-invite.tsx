@@ -48,7 +48,7 @@ export function AcceptInviteRoute() {
   // The page never learns whether the address has an account: signed out, it offers both ways in.
   const signInLink = (
     <Link to={`/signin?next=${encodeURIComponent(`/invite/${token}`)}`} className={linkClass}>
-      Sign in as {inv.email} to accept
+      Sign in to accept
     </Link>
   );
   let body;
@@ -69,7 +69,9 @@ export function AcceptInviteRoute() {
   } else {
     body = (
       <>
-        <p className="mb-4 text-sm">Already use Ridewright with this address? {signInLink}. New here? Create your account:</p>
+        <p className="mb-4 text-sm">
+          Already have a Ridewright account for this address? {signInLink}. Otherwise create your account:
+        </p>
         <AcceptAsNewAccount token={token} email={inv.email} onAccepted={onAccepted} />
       </>
     );
