@@ -5,10 +5,10 @@ import { pinoHttp } from 'pino-http';
 import { requireCsrf } from './auth/csrf.ts';
 import { loadSession } from './auth/require-user.ts';
 import { type AppDeps, type AppOptions, resolveDeps } from './deps.ts';
-import { errorHandler, sendError } from './errors.ts';
-import { redactUrl } from './middleware/redact-url.ts';
-import { allRoutes } from './routes/all-routes.ts';
-import { buildApiRouter, type RouteDef } from './routes/registry.ts';
+import { errorHandler, sendError } from './core/errors.ts';
+import { redactUrl } from './http/redact-url.ts';
+import { allRoutes } from './http/all-routes.ts';
+import { buildApiRouter, type RouteDef } from './http/registry.ts';
 import { mountStaticClient } from './static-client.ts';
 
 /** Largest JSON body the API reads; bigger ones get 413 payload_too_large. */

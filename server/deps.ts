@@ -2,7 +2,7 @@ import type { Express } from 'express';
 import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
 import type { Mailer } from './mail/mailer.ts';
-import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './services/upload-quota.ts';
+import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/upload-quota.service.ts';
 
 /** How the app serves the client outside /api. */
 export type ClientServing =
@@ -29,7 +29,7 @@ export interface AppDeps {
   logger: Logger;
   /** Requests per 15 minutes per address on the sensitive public routes; 0 disables. */
   rateLimit: number;
-  /** Uploaded bytes a workspace may keep (server/services/upload-quota.ts); over it, uploads get 413. */
+  /** Uploaded bytes a workspace may keep (server/uploads/upload-quota.service.ts); over it, uploads get 413. */
   uploadQuotaBytes: number;
   /** Express `trust proxy` setting. */
   trustProxy: boolean | number | string;

@@ -1,6 +1,6 @@
 import { Piscina } from 'piscina';
 import type * as Tasks from './heavy-tasks.ts';
-import { fail, type Failure } from '../services/outcome.ts';
+import { fail, type Failure } from '../core/outcome.ts';
 
 /**
  * Worker threads for work that can take seconds (parsing a big CSV, resampling, spectra, class

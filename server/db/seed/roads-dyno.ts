@@ -3,10 +3,10 @@ import seedrandom from 'seedrandom';
 import { summariseDyno } from '../../../shared/dyno-upload/summarise-dyno.ts';
 import { Road, type RoadInput } from '../../../shared/schemas/road.ts';
 import type { Role } from '../../../shared/schemas/workspace.ts';
-import { listSetupSummaries } from '../../repositories/setups.ts';
-import { insertDynoRecord } from '../../services/dyno-files.ts';
-import { figuresOrFail, insertRoadRecord } from '../../services/roads.ts';
-import type { Actor } from '../../services/setups.ts';
+import { listSetupSummaries } from '../../setups/setups.repository.ts';
+import { insertDynoRecord } from '../../dyno/dyno-files.service.ts';
+import { figuresOrFail, insertRoadRecord } from '../../roads/roads.service.ts';
+import type { Actor } from '../../setups/setups.service.ts';
 import { DEMO_USERS } from './demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
 

@@ -5,7 +5,7 @@ import type { Role } from '../../../shared/schemas/workspace.ts';
 import { toStoredSpectra, toStoredTraces } from '../../../shared/runs/stored-run.ts';
 import { computeSpectra } from '../../../shared/sim/metrics/compute-metrics.ts';
 import { runCorner } from '../../../shared/sim/run-corner.ts';
-import { saveRunIn } from '../../services/runs.ts';
+import { saveRunIn } from '../../runs/runs.service.ts';
 import type { Queryable } from '../database.ts';
 import { DEMO_USERS } from './demo-people.ts';
 import type { SeedStep } from './seed-context.ts';

@@ -1,9 +1,9 @@
 import { StudyDefinition } from '../../../shared/schemas/study.ts';
 import { studyPointUpload } from '../../../shared/study/collect.ts';
 import { runStudyHere } from '../../../shared/study/run-all.ts';
-import { listSetupSummaries } from '../../repositories/setups.ts';
-import { insertNewStudy } from '../../services/studies.ts';
-import { chooseStudyBaseline, closeStudyRun, storeStudyPoints } from '../../services/study-results.ts';
+import { listSetupSummaries } from '../../setups/setups.repository.ts';
+import { insertNewStudy } from '../../studies/studies.service.ts';
+import { chooseStudyBaseline, closeStudyRun, storeStudyPoints } from '../../studies/study-results.service.ts';
 import { DEMO_USERS } from './demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
 

@@ -1,7 +1,7 @@
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import type { TargetPoint } from '../../../shared/schemas/target-sheet.ts';
-import { readCheckFiles, storeSheetCheckIn } from '../../services/target-sheet-checks.ts';
-import { createTargetSheetIn, moveTargetSheetIn, saveTargetSheetIn } from '../../services/target-sheets.ts';
+import { readCheckFiles, storeSheetCheckIn } from '../../target-sheets/checks.service.ts';
+import { createTargetSheetIn, moveTargetSheetIn, saveTargetSheetIn } from '../../target-sheets/target-sheets.service.ts';
 import type { Queryable } from '../database.ts';
 import { DEMO_USERS, DEMO_WORKSPACE_NAME } from './demo-people.ts';
 import type { SeedStep } from './seed-context.ts';

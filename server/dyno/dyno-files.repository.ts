@@ -1,0 +1,50 @@
+import type { Queryable } from '../db/database.ts';
+import type { NewDynoFileRow } from '../roads/roads.tables.ts';
+
+/** SQL for dyno files. The uploaded text is read only where it is needed (detail, apply). */
+
+export async function insertDynoFile(db: Queryable, row: NewDynoFileRow): Promise<void> {
+  await db.insertInto('dyno_file').values(row).execute();
+}
+
+function fileQuery(db: Queryable, workspaceId: string, setupId: string) {
+  return db
+    .selectFrom('dyno_file as d')
+    .innerJoin('user as u', 'u.id', 'd.uploaded_by')
+    .leftJoin('setup_revision as r', 'r.id', 'd.produced_revision_id')
+    .select([
+      'd.id',
+      'd.setup_id',
+      'd.filename',
+      'd.bytes',
+      'd.options',
+      'd.summary',
+      'd.uploaded_by',
+      'u.name as uploaded_by_name',
+      'd.created_at',
+      'd.produced_revision_id',
+      'r.number as produced_revision_number',
+    ])
+    .where('d.workspace_id', '=', workspaceId)
+    .where('d.setup_id', '=', setupId);
+}
+
+export type DynoFileListRow = Awaited<ReturnType<typeof listDynoFiles>>[number];
+
+export function listDynoFiles(db: Queryable, workspaceId: string, setupId: string) {
+  return fileQuery(db, workspaceId, setupId).orderBy('d.created_at', 'desc').orderBy('d.id').execute();
+}
+
+export function findDynoFile(db: Queryable, workspaceId: string, setupId: string, fileId: string) {
+  return fileQuery(db, workspaceId, setupId).select('d.content').where('d.id', '=', fileId).executeTakeFirst();
+}
+export type DynoFileDetailRow = NonNullable<Awaited<ReturnType<typeof findDynoFile>>>;
+
+export async function linkProducedRevision(db: Queryable, fileId: string, revisionId: string): Promise<void> {
+  await db.updateTable('dyno_file').set({ produced_revision_id: revisionId }).where('id', '=', fileId).execute();
+}
+
+export async function countDynoFiles(db: Queryable, setupId: string): Promise<number> {
+  const row = await db.selectFrom('dyno_file').select((eb) => eb.fn.countAll<number>().as('n')).where('setup_id', '=', setupId).executeTakeFirstOrThrow();
+  return Number(row.n);
+}

@@ -1,0 +1,71 @@
+import { CreateRoadInput, MeasuredUploadFields, type RoadDetail, type RoadsResponse, UpdateRoadInput } from '../../shared/schemas/road-record.ts';
+import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
+import { unwrap } from '../core/errors.ts';
+import { singleTextUpload, uploadedText } from '../uploads/single-upload.middleware.ts';
+import { withinUploadQuota } from '../uploads/upload-quota.middleware.ts';
+import { createRoad, deleteRoad, getRoad, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from './roads.service.ts';
+import type { RouteModule } from '../http/registry.ts';
+
+const base = '/api/workspaces/:workspaceId/roads';
+
+export const roadRoutes: RouteModule = (deps) => [
+  {
+    method: 'get',
+    path: base,
+    access: 'viewer',
+    handler: async (req, res) => {
+      const body: RoadsResponse = await listRoadLibrary(deps.db, workspaceOf(req));
+      res.json(body);
+    },
+  },
+  {
+    method: 'post',
+    path: base,
+    access: 'engineer',
+    handler: async (req, res) => {
+      const input = CreateRoadInput.parse(req.body);
+      const road: RoadDetail = unwrap(await createRoad(deps.db, workspaceOf(req), userOf(req), input, deps.clock()));
+      res.status(201).json(road);
+    },
+  },
+  {
+    method: 'post',
+    path: `${base}/measured`,
+    access: 'engineer',
+    before: [singleTextUpload(MEASURED_MAX_BYTES), withinUploadQuota(deps)],
+    handler: async (req, res) => {
+      const fields = MeasuredUploadFields.parse(req.body ?? {});
+      const file = uploadedText(req.file);
+      const road: RoadDetail = unwrap(await uploadMeasuredRoad(deps.db, workspaceOf(req), userOf(req), file, fields, deps.clock()));
+      res.status(201).json(road);
+    },
+  },
+  {
+    method: 'get',
+    path: `${base}/:roadId`,
+    access: 'viewer',
+    handler: async (req, res) => {
+      const road: RoadDetail = unwrap(await getRoad(deps.db, workspaceOf(req), pathParam(req, 'roadId')));
+      res.json(road);
+    },
+  },
+  {
+    method: 'put',
+    path: `${base}/:roadId`,
+    access: 'engineer',
+    handler: async (req, res) => {
+      const input = UpdateRoadInput.parse(req.body);
+      const road: RoadDetail = unwrap(await updateRoad(deps.db, workspaceOf(req), userOf(req), pathParam(req, 'roadId'), input, deps.clock()));
+      res.json(road);
+    },
+  },
+  {
+    method: 'delete',
+    path: `${base}/:roadId`,
+    access: 'engineer',
+    handler: async (req, res) => {
+      unwrap(await deleteRoad(deps.db, workspaceOf(req), userOf(req), pathParam(req, 'roadId'), deps.clock()));
+      res.status(204).end();
+    },
+  },
+];
