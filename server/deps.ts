@@ -1,8 +1,8 @@
 import type { Express } from 'express';
 import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
-import type { Mailer } from './mail/mailer.ts';
-import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/upload-quota.service.ts';
+import type { Mailer } from './mail/index.ts';
+import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/index.ts';
 
 /** How the app serves the client outside /api. */
 export type ClientServing =

@@ -5,11 +5,11 @@ import { decoyHash, hashPassword, verifyPassword } from '../auth/password.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { UserRow } from './users.tables.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, insertUser, setPasswordHash } from './users.repository.ts';
-import { expireOpenResets } from './tokens.repository.ts';
-import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../workspaces/workspaces.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { expireOpenResets } from './password-resets.repository.ts';
+import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../workspaces/index.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { releaseSlot, takeSlot, type ThrottleRule } from '../limits/throttle.service.ts';
+import { releaseSlot, takeSlot, type ThrottleRule } from '../limits/index.ts';
 import { isUniqueViolation } from '../core/sqlite-errors.ts';
 
 export type SessionStart = Pick<UserRow, 'id' | 'session_version'>;

@@ -1,19 +1,11 @@
-import type { Request, Response } from 'express';
 import { PasswordChangeInput, ResetConfirmInput, ResetRequestInput, SignInInput, SignUpInput, type Me } from '../../shared/schemas/account.ts';
 import { userOf } from '../auth/request-context.ts';
 import { clearSessionCookie, setSessionCookie } from '../auth/session.ts';
-import type { AppDeps } from '../deps.ts';
 import { unwrap } from '../core/errors.ts';
-import { changePassword, loadMe, type SessionStart, signIn, signOutEverywhere, signUp } from './accounts.service.ts';
+import { changePassword, loadMe, signIn, signOutEverywhere, signUp } from './accounts.service.ts';
+import { startSession } from './session-start.ts';
 import { confirmPasswordReset, requestPasswordReset } from './password-reset.service.ts';
 import type { RouteModule } from '../http/registry.ts';
-
-/** Sets the session cookie for `who` and answers with their `Me`. */
-export async function startSession(deps: AppDeps, req: Request, res: Response, who: SessionStart, status = 200): Promise<void> {
-  await setSessionCookie(req, res, deps.secret, { userId: who.id, sessionVersion: who.session_version }, deps.clock());
-  const me: Me = await loadMe(deps.db, who.id);
-  res.status(status).json(me);
-}
 
 export const authRoutes: RouteModule = (deps) => [
   {

@@ -1,11 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { hashPassword } from '../auth/password.ts';
 import type { AppDeps } from '../deps.ts';
-import { passwordResetMail } from '../mail/templates.ts';
+import { passwordResetMail } from '../mail/index.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, setPasswordHash } from './users.repository.ts';
-import { expireOpenResets, findPasswordResetByTokenHash, insertPasswordReset, markPasswordResetUsed } from './tokens.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { hashOneTimeToken, minutesAfter, newOneTimeToken } from './one-time-tokens.ts';
+import { expireOpenResets, findPasswordResetByTokenHash, insertPasswordReset, markPasswordResetUsed } from './password-resets.repository.ts';
+import { recordAudit } from '../audit/index.ts';
+import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../core/one-time-tokens.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 
 export const RESET_MINUTES = 30;

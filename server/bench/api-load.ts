@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
-import { DEMO_PASSWORD, DEMO_USERS } from '../db/seed/demo-people.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../core/demo-people.ts';
 import { prepareDatabase, startServerProcess } from './server-process.ts';
 import { callJson, sessionHeaders, signInAs } from './session-client.ts';
 

@@ -5,14 +5,17 @@ import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'ky
 import { LRUCache } from 'lru-cache';
 import type { AuditLogTable } from '../audit/audit.tables.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
-import type { DynoFileTable, RoadTable } from '../roads/roads.tables.ts';
+import type { RoadTable } from '../roads/roads.tables.ts';
+import type { DynoFileTable } from '../dyno/dyno-files.tables.ts';
 import type { RunTable } from '../runs/runs.tables.ts';
-import type { SetupRevisionTable, SetupTable, VehicleTable } from '../setups/setups.tables.ts';
+import type { SetupRevisionTable, SetupTable } from '../setups/setups.tables.ts';
+import type { VehicleTable } from '../vehicles/vehicles.tables.ts';
 import type { ShareLinkTable } from '../sharing/share-links.tables.ts';
 import type { StudyPointTable, StudyTable } from '../studies/studies.tables.ts';
 import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from '../target-sheets/target-sheets.tables.ts';
 import type { ThrottleEventTable } from '../limits/throttle.tables.ts';
-import type { InvitationTable, PasswordResetTable } from '../accounts/tokens.tables.ts';
+import type { InvitationTable } from '../workspaces/invitations.tables.ts';
+import type { PasswordResetTable } from '../accounts/password-resets.tables.ts';
 import type { UserTable } from '../accounts/users.tables.ts';
 import type { MembershipTable, WorkspaceTable } from '../workspaces/workspaces.tables.ts';
 

@@ -1,5 +1,5 @@
 import type { Queryable } from '../db/database.ts';
-import type { NewDynoFileRow } from '../roads/roads.tables.ts';
+import type { NewDynoFileRow } from './dyno-files.tables.ts';
 
 /** SQL for dyno files. The uploaded text is read only where it is needed (detail, apply). */
 

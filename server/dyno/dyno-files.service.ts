@@ -15,13 +15,13 @@ import { Setup } from '../../shared/schemas/setup.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../core/errors.ts';
 import { type DynoFileListRow, findDynoFile, insertDynoFile, linkProducedRevision, listDynoFiles } from './dyno-files.repository.ts';
-import { findRevision, findSetup, latestRevisionNumber } from '../setups/setups.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { parseStoredSetup } from '../setups/corner-figures.ts';
+import { findRevision, findSetup, latestRevisionNumber } from '../setups/index.ts';
+import { recordAudit } from '../audit/index.ts';
+import { parseStoredSetup } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { type Actor, addRevision } from '../setups/setups.service.ts';
+import { addRevisionInTx } from '../setups/index.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = { workspaceId: string };
 
 const noSetup = () => fail('not_found', 'No such setup in this workspace.');
 const noFile = () => fail('not_found', 'No such dyno file for this setup.');
@@ -40,13 +40,13 @@ function toItem(r: DynoFileListRow): DynoFileItem {
   };
 }
 
-export async function listSetupDynoFiles(db: Db, ws: Ws, setupId: string): Promise<Outcome<DynoFilesResponse>> {
+export async function listSetupDynoFiles(db: Db, ws: WorkspaceRef, setupId: string): Promise<Outcome<DynoFilesResponse>> {
   if (!(await findSetup(db, ws.workspaceId, setupId))) return noSetup();
   return ok({ files: (await listDynoFiles(db, ws.workspaceId, setupId)).map(toItem) });
 }
 
 /** One file with the loop of a raw record, read again from the kept text with the kept options. */
-export async function getDynoFile(db: Db, ws: Ws, setupId: string, fileId: string): Promise<Outcome<DynoFileDetail>> {
+export async function getDynoFile(db: Db, ws: WorkspaceRef, setupId: string, fileId: string): Promise<Outcome<DynoFileDetail>> {
   const row = await findDynoFile(db, ws.workspaceId, setupId, fileId);
   if (!row) return (await findSetup(db, ws.workspaceId, setupId)) ? noFile() : noSetup();
   const item = toItem(row);
@@ -61,7 +61,7 @@ export async function getDynoFile(db: Db, ws: Ws, setupId: string, fileId: strin
  */
 export async function uploadDynoFile(
   db: Db,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   setupId: string,
   file: { text: string; filename: string; bytes: number },
@@ -86,7 +86,7 @@ export async function uploadDynoFile(
 /** Inserts a file already read, with its audit entry, in the caller's transaction (the demo seed uses this too). */
 export async function insertDynoRecord(
   trx: Queryable,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   setup: { id: string; name: string },
   file: { text: string; filename: string; bytes: number },
@@ -130,7 +130,7 @@ const roundTable = (table: [number, number][]) => table.map(([v, f]) => [v, Math
  * curves replaced as the next revision (source `dyno-fit:<file id>`), linking the file to it.
  * A fit that fails, or a curve the setup schema refuses, saves nothing.
  */
-export async function applyDynoFit(db: Db, ws: Ws, actor: Actor, setupId: string, fileId: string, input: ApplyDynoFitInput, now: Date): Promise<Outcome<ApplyDynoFitResult>> {
+export async function applyDynoFit(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, fileId: string, input: ApplyDynoFitInput, now: Date): Promise<Outcome<ApplyDynoFitResult>> {
   return db.transaction().execute(async (trx) => {
     const setup = await findSetup(trx, ws.workspaceId, setupId);
     if (!setup) return noSetup();
@@ -156,7 +156,7 @@ export async function applyDynoFit(db: Db, ws: Ws, actor: Actor, setupId: string
     const next = Setup.safeParse({ ...document, damper });
     if (!next.success) return fail('bad_request', 'The fitted curve is not a valid damper curve; nothing was saved.', fieldsOf(next.error));
 
-    const added = await addRevision(trx, ws, actor, setupId, { document: next.data, message: input.message, source: `dyno-fit:${fileId}`, basedOn: input.basedOn }, now);
+    const added = await addRevisionInTx(trx, ws, actor, setupId, { document: next.data, message: input.message, source: `dyno-fit:${fileId}`, basedOn: input.basedOn }, now);
     if (!added.ok) return added;
     await linkProducedRevision(trx, fileId, added.value.id);
     await recordAudit(trx, {

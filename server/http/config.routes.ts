@@ -1,5 +1,5 @@
 import type { AppConfig } from '../../shared/schemas/config.ts';
-import { DEMO_USERS } from '../db/seed/demo-people.ts';
+import { DEMO_USERS } from '../core/demo-people.ts';
 import type { RouteModule } from './registry.ts';
 
 export const configRoutes: RouteModule = (deps) => [

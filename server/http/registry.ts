@@ -5,7 +5,7 @@ import { ensureCsrfCookie } from '../auth/csrf.ts';
 import { requireUser } from '../auth/require-user.ts';
 import type { AppDeps } from '../deps.ts';
 import { sendError } from '../core/errors.ts';
-import { requireMember, requireRoleAnywhere } from '../workspaces/workspace-context.middleware.ts';
+import { requireMember, requireRoleAnywhere } from '../workspaces/index.ts';
 
 /**
  * Who may call a route:

@@ -13,12 +13,11 @@ import {
 import { Road } from '../../shared/schemas/road.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
-import type { Actor } from '../setups/setups.service.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = { workspaceId: string };
 
 const noRoad = () => fail('not_found', 'No such road in this workspace.');
 
@@ -59,11 +58,11 @@ async function figuresInWorker(road: Road): Promise<Outcome<RoadFigures>> {
   return done.ok ? asOutcome(done.value) : done;
 }
 
-export async function listRoadLibrary(db: Db, ws: Ws): Promise<RoadsResponse> {
+export async function listRoadLibrary(db: Db, ws: WorkspaceRef): Promise<RoadsResponse> {
   return { roads: (await listRoads(db, ws.workspaceId)).map(toListItem) };
 }
 
-export async function getRoad(db: Db, ws: Ws, roadId: string): Promise<Outcome<RoadDetail>> {
+export async function getRoad(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<RoadDetail>> {
   const row = await findRoad(db, ws.workspaceId, roadId);
   return row ? ok(toDetail(row)) : noRoad();
 }
@@ -82,17 +81,17 @@ const kindWords: Record<Road['kind'], string> = {
  * Saves a road with its figures. `source` says whether it was typed in or uploaded; the summary
  * (length, step, fitted ISO class) is computed here so lists never recompute it.
  */
-export async function saveNewRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, now: Date): Promise<Outcome<RoadDetail>> {
+export async function saveNewRoad(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, source: RoadSource, now: Date): Promise<Outcome<RoadDetail>> {
   const figures = await figuresInWorker(input.definition);
   if (!figures.ok) return figures;
-  return db.transaction().execute(async (trx) => ok(await insertRoadRecord(trx, ws, actor, input, source, figures.value, now)));
+  return db.transaction().execute(async (trx) => ok(await insertRoadRecordInTx(trx, ws, actor, input, source, figures.value, now)));
 }
 
 /**
  * Inserts a road with figures already computed, and its audit entry, in the caller's
  * transaction (the demo seed uses this too).
  */
-export async function insertRoadRecord(trx: Queryable, ws: Ws, actor: Actor, input: CreateRoadInput, source: RoadSource, figures: RoadFigures, now: Date): Promise<RoadDetail> {
+export async function insertRoadRecordInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, source: RoadSource, figures: RoadFigures, now: Date): Promise<RoadDetail> {
   const id = randomUUID();
   const at = now.toISOString();
   await insertRoad(trx, {
@@ -121,12 +120,12 @@ export async function insertRoadRecord(trx: Queryable, ws: Ws, actor: Actor, inp
   return toDetail(row);
 }
 
-export function createRoad(db: Db, ws: Ws, actor: Actor, input: CreateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
+export function createRoad(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
   return saveNewRoad(db, ws, actor, input, input.definition.kind === 'measured' ? 'measured' : 'defined', now);
 }
 
 /** Rename or redefine a road; runs that drove it keep their own copy of the old definition. */
-export async function updateRoad(db: Db, ws: Ws, actor: Actor, roadId: string, input: UpdateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
+export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId: string, input: UpdateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
   // Worked out before the transaction, in a worker thread (see figuresInWorker).
   const newFigures = input.definition ? await figuresInWorker(input.definition) : null;
   if (newFigures && !newFigures.ok) return newFigures;
@@ -172,7 +171,7 @@ export async function updateRoad(db: Db, ws: Ws, actor: Actor, roadId: string, i
 }
 
 /** Removes a road from the library; saved runs keep the road they drove (their own JSON copy). */
-export async function deleteRoad(db: Db, ws: Ws, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
+export async function deleteRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
   return db.transaction().execute(async (trx) => {
     const row = await findRoad(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
@@ -200,7 +199,7 @@ export const MEASURED_MAX_ROWS = 500_000;
  */
 export async function uploadMeasuredRoad(
   db: Db,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   file: { text: string; filename: string },
   fields: MeasuredUploadFields,
@@ -212,5 +211,5 @@ export async function uploadMeasuredRoad(
   const out = done.value;
   if (!out.ok) return fail('bad_request', out.message, out.fields);
   const input = { name: fields.name, definition: out.definition };
-  return db.transaction().execute(async (trx) => ok(await insertRoadRecord(trx, ws, actor, input, 'measured', out.figures, now)));
+  return db.transaction().execute(async (trx) => ok(await insertRoadRecordInTx(trx, ws, actor, input, 'measured', out.figures, now)));
 }

@@ -10,7 +10,7 @@ import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../core/errors.ts';
 import { deleteRunRow, findLibraryRoad, findRevisionForRun, findRunRow, insertRun, listRunRows, type RunSummaryRow, setupExists } from './runs.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 
 /** JSON with object keys sorted, so two equal documents compare equal whatever their key order. */
@@ -75,11 +75,11 @@ export async function getRun(db: Db, ws: WorkspaceContext, runId: string): Promi
  * request reproduces the figures with `npm run sim`.
  */
 export function saveRun(db: Db, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
-  return db.transaction().execute((trx) => saveRunIn(trx, ws, actor, input, now));
+  return db.transaction().execute((trx) => saveRunInTx(trx, ws, actor, input, now));
 }
 
 /** `saveRun` inside a transaction the caller holds (the demo seed, which runs in one). */
-export async function saveRunIn(db: Queryable, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
+export async function saveRunInTx(db: Queryable, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
   const revision = await findRevisionForRun(db, ws.workspaceId, input.setupId, input.revisionNumber);
   if (!revision) {
     if (!(await setupExists(db, ws.workspaceId, input.setupId))) return fail('not_found', 'No such setup in this workspace.', [{ path: 'setupId', message: 'No such setup' }]);

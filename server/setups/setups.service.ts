@@ -18,7 +18,6 @@ import {
   type UpdateSetupInput,
 } from '../../shared/schemas/setup-record.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { SetupRow } from './setups.tables.ts';
 import { fieldsOf } from '../core/errors.ts';
@@ -37,14 +36,13 @@ import {
   type SetupSummaryRow,
   updateSetupRow,
 } from './setups.repository.ts';
-import { findVehicle } from '../vehicles/vehicles.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { findVehicle } from '../vehicles/index.ts';
+import { recordAudit } from '../audit/index.ts';
 import { figuresOfRevision, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 /** Who acts, in the shape every service here needs. */
-export type Actor = Pick<SessionUser, 'id' | 'name'>;
-type Ws = Pick<WorkspaceContext, 'workspaceId'>;
 
 const noSetup = () => fail('not_found', 'No such setup in this workspace.');
 const noRevision = (n: number) => fail('not_found', `This setup has no revision ${n}.`);
@@ -88,32 +86,32 @@ async function mustDetail(db: Queryable, workspaceId: string, setupId: string): 
   return detail;
 }
 
-export async function listSetups(db: Db, ws: Ws, query: SetupsQuery): Promise<SetupsResponse> {
+export async function listSetups(db: Db, ws: WorkspaceRef, query: SetupsQuery): Promise<SetupsResponse> {
   const rows = await listSetupSummaries(db, ws.workspaceId, query.archived);
   return { setups: rows.map(toSummary) };
 }
 
-export async function getSetup(db: Db, ws: Ws, setupId: string): Promise<Outcome<SetupDetail>> {
+export async function getSetup(db: Db, ws: WorkspaceRef, setupId: string): Promise<Outcome<SetupDetail>> {
   const detail = await detailOf(db, ws.workspaceId, setupId);
   return detail ? ok(detail) : noSetup();
 }
 
 /** A page of a setup's revisions: one more row than asked tells whether older ones remain. */
-export async function getRevisions(db: Db, ws: Ws, setupId: string, page: RevisionsQuery): Promise<Outcome<RevisionsResponse>> {
+export async function getRevisions(db: Db, ws: WorkspaceRef, setupId: string, page: RevisionsQuery): Promise<Outcome<RevisionsResponse>> {
   if (!(await findSetup(db, ws.workspaceId, setupId))) return noSetup();
   const rows = await listRevisions(db, setupId, { limit: page.limit + 1, before: page.before });
   const revisions = rows.slice(0, page.limit).map(toRevisionSummary);
   return ok({ revisions, nextBefore: rows.length > page.limit ? revisions[revisions.length - 1].number : null });
 }
 
-export async function getRevision(db: Db, ws: Ws, setupId: string, number: number): Promise<Outcome<SetupRevision>> {
+export async function getRevision(db: Db, ws: WorkspaceRef, setupId: string, number: number): Promise<Outcome<SetupRevision>> {
   if (!(await findSetup(db, ws.workspaceId, setupId))) return noSetup();
   const row = await findRevision(db, setupId, number);
   return row ? ok(toRevision(row)) : noRevision(number);
 }
 
 /** The file a revision downloads as: exactly the `Setup` document, as `npm run sim --setup` reads it. */
-export async function exportRevision(db: Db, ws: Ws, setupId: string, number: number): Promise<Outcome<{ fileName: string; json: string }>> {
+export async function exportRevision(db: Db, ws: WorkspaceRef, setupId: string, number: number): Promise<Outcome<{ fileName: string; json: string }>> {
   const revision = await getRevision(db, ws, setupId, number);
   if (!revision.ok) return revision;
   const { document } = revision.value;
@@ -126,7 +124,7 @@ const cornerWord = (c: Corner) => (c === 'front' ? 'front' : 'rear');
  * Puts a setup into a vehicle's corner slot (or takes it out with `vehicleId` null), moving
  * out whichever live setup held that slot. Returns the displaced setup, if any.
  */
-export async function placeInSlot(
+export async function placeInSlotInTx(
   trx: Queryable,
   setupId: string,
   vehicleId: string | null,
@@ -170,9 +168,9 @@ const plainCreate: NewSetupSource = { source: null, action: 'setup.created', ver
  * A new setup with `document` as its revision 1, in the caller's transaction. The setup takes
  * the document's name. Other features (copies from share links) use this too.
  */
-export async function insertNewSetup(
+export async function insertNewSetupInTx(
   trx: Queryable,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   input: { document: Setup; vehicleId?: string | null; corner?: Corner | null; message?: string },
   how: NewSetupSource,
@@ -206,7 +204,7 @@ export async function insertNewSetup(
     created_at: at,
     source: how.source,
   });
-  if (vehicleId) await placeInSlot(trx, id, vehicleId, corner, actor, at);
+  if (vehicleId) await placeInSlotInTx(trx, id, vehicleId, corner, actor, at);
   await recordAudit(trx, {
     workspaceId: ws.workspaceId,
     actorId: actor.id,
@@ -219,18 +217,18 @@ export async function insertNewSetup(
   return ok(await mustDetail(trx, ws.workspaceId, id));
 }
 
-export function createSetup(db: Db, ws: Ws, actor: Actor, input: CreateSetupInput, now: Date): Promise<Outcome<SetupDetail>> {
-  return db.transaction().execute((trx) => insertNewSetup(trx, ws, actor, { ...input, document: input.setup }, plainCreate, now));
+export function createSetup(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateSetupInput, now: Date): Promise<Outcome<SetupDetail>> {
+  return db.transaction().execute((trx) => insertNewSetupInTx(trx, ws, actor, { ...input, document: input.setup }, plainCreate, now));
 }
 
 /** A setup file uploaded as it is: validated with the shared schema; nothing is saved when it fails. */
-export async function importSetup(db: Db, ws: Ws, actor: Actor, file: unknown, query: ImportSetupQuery, now: Date): Promise<Outcome<SetupDetail>> {
+export async function importSetup(db: Db, ws: WorkspaceRef, actor: Actor, file: unknown, query: ImportSetupQuery, now: Date): Promise<Outcome<SetupDetail>> {
   const parsed = Setup.safeParse(file);
   if (!parsed.success) return fail('bad_request', 'This file is not a valid setup; nothing was saved.', fieldsOf(parsed.error));
   return db
     .transaction()
     .execute((trx) =>
-      insertNewSetup(trx, ws, actor, { document: parsed.data, ...query, message: 'Imported from a setup file' }, { source: 'import', action: 'setup.imported', verb: 'imported setup' }, now),
+      insertNewSetupInTx(trx, ws, actor, { document: parsed.data, ...query, message: 'Imported from a setup file' }, { source: 'import', action: 'setup.imported', verb: 'imported setup' }, now),
     );
 }
 
@@ -248,7 +246,7 @@ export interface NewRevision {
  * document carries the setup's current name (the name belongs to the setup; renaming is not a
  * revision). Older revisions are never touched. Other features (dyno fits, studies) call this.
  */
-export async function addRevision(trx: Queryable, ws: Ws, actor: Actor, setupId: string, rev: NewRevision, now: Date): Promise<Outcome<{ id: string; number: number }>> {
+export async function addRevisionInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, setupId: string, rev: NewRevision, now: Date): Promise<Outcome<{ id: string; number: number }>> {
   const setup = await findSetup(trx, ws.workspaceId, setupId);
   if (!setup) return noSetup();
   if (setup.archived_at) return fail('conflict', 'This setup is archived; bring it back from the archive before saving to it.');
@@ -283,23 +281,23 @@ export async function addRevision(trx: Queryable, ws: Ws, actor: Actor, setupId:
   return ok({ id, number });
 }
 
-export function saveRevision(db: Db, ws: Ws, actor: Actor, setupId: string, input: SaveRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
+export function saveRevision(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, input: SaveRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
   return db.transaction().execute(async (trx) => {
-    const added = await addRevision(trx, ws, actor, setupId, { document: input.setup, message: input.message, source: null, basedOn: input.basedOn }, now);
+    const added = await addRevisionInTx(trx, ws, actor, setupId, { document: input.setup, message: input.message, source: null, basedOn: input.basedOn }, now);
     if (!added.ok) return added;
     return ok(await mustDetail(trx, ws.workspaceId, setupId));
   });
 }
 
 /** Revision `number`'s document saved again as the next revision; nothing is rewound or removed. */
-export function restoreRevision(db: Db, ws: Ws, actor: Actor, setupId: string, number: number, input: RestoreRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
+export function restoreRevision(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, number: number, input: RestoreRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
   return db.transaction().execute(async (trx) => {
     if (!(await findSetup(trx, ws.workspaceId, setupId))) return noSetup();
     const old = await findRevision(trx, setupId, number);
     if (!old) return noRevision(number);
     const document = parseStoredSetup(old.document, `of revision ${old.id}`);
     const message = input.message?.trim() || `Restored revision ${number}`;
-    const added = await addRevision(trx, ws, actor, setupId, { document, message, source: `restore:${number}` }, now);
+    const added = await addRevisionInTx(trx, ws, actor, setupId, { document, message, source: `restore:${number}` }, now);
     if (!added.ok) return added;
     return ok(await mustDetail(trx, ws.workspaceId, setupId));
   });
@@ -312,7 +310,7 @@ function describeGroup(vehicleName: string | null, corner: Corner | null): strin
 }
 
 /** Rename, regroup, archive or bring back: the setup's own facts; its revisions stay as they are. */
-export function updateSetup(db: Db, ws: Ws, actor: Actor, setupId: string, input: UpdateSetupInput, now: Date): Promise<Outcome<SetupDetail>> {
+export function updateSetup(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, input: UpdateSetupInput, now: Date): Promise<Outcome<SetupDetail>> {
   return db.transaction().execute(async (trx) => {
     const setup: SetupRow | undefined = await findSetup(trx, ws.workspaceId, setupId);
     if (!setup) return noSetup();
@@ -333,7 +331,7 @@ export function updateSetup(db: Db, ws: Ws, actor: Actor, setupId: string, input
       if (issues.length > 0) return fail('bad_request', 'The grouping needs attention.', issues);
       if (vehicleId && (setup.archived_at || input.archived)) return fail('conflict', 'An archived setup cannot hold a corner of a vehicle.');
       if (vehicleId !== setup.vehicle_id || corner !== setup.corner) {
-        const displaced = await placeInSlot(trx, setupId, vehicleId, corner, actor, at);
+        const displaced = await placeInSlotInTx(trx, setupId, vehicleId, corner, actor, at);
         const vehicle = vehicleId ? await findVehicle(trx, ws.workspaceId, vehicleId) : undefined;
         const moved = displaced ? ` "${displaced.name}" left that slot.` : '';
         await audit('setup.regrouped', `${actor.name} made "${name}" ${describeGroup(vehicle?.name ?? null, corner)}.${moved}`);

@@ -31,15 +31,3 @@ export interface SetupRevisionTable {
 }
 export type SetupRevisionRow = Selectable<SetupRevisionTable>;
 export type NewSetupRevisionRow = Insertable<SetupRevisionTable>;
-
-export interface VehicleTable {
-  id: string;
-  workspace_id: string;
-  name: string;
-  notes: string;
-  created_by: string;
-  created_at: string;
-  updated_at: string;
-}
-export type VehicleRow = Selectable<VehicleTable>;
-export type NewVehicleRow = Insertable<VehicleTable>;

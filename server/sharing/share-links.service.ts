@@ -4,15 +4,14 @@ import type { CopiedShared, CreatedShareLink, CreateShareLinkInput, ShareLink, S
 import { ShareToken } from '../../shared/schemas/share-link.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { findShareLink, findShareLinkByHash, insertShareLink, listShareLinks, revisionIdsOfSetup, revokeShareLinkRow, type ShareLinkViewRow } from './share-links.repository.ts';
-import { findSetup } from '../setups/setups.repository.ts';
-import { findMembership } from '../workspaces/workspaces.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { hashOneTimeToken, newOneTimeToken } from '../accounts/one-time-tokens.ts';
+import { findSetup } from '../setups/index.ts';
+import { findMembership } from '../workspaces/index.ts';
+import { recordAudit } from '../audit/index.ts';
+import { hashOneTimeToken, newOneTimeToken } from '../core/one-time-tokens.ts';
 import { fail, type Failure, ok, type Outcome } from '../core/outcome.ts';
-import type { Actor } from '../setups/setups.service.ts';
 import { shareableKinds } from './share-objects.service.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = { workspaceId: string };
 
 export const sharedPagePath = (token: string) => `/shared/${token}`;
 
@@ -39,7 +38,7 @@ async function toLink(db: Queryable, r: ShareLinkViewRow, now: Date): Promise<Sh
   };
 }
 
-export async function listLinks(db: Db, ws: Ws, query: ShareLinksQuery, now: Date): Promise<Outcome<ShareLinksResponse>> {
+export async function listLinks(db: Db, ws: WorkspaceRef, query: ShareLinksQuery, now: Date): Promise<Outcome<ShareLinksResponse>> {
   let objectIds: string[] | undefined;
   if (query.setupId) {
     if (!(await findSetup(db, ws.workspaceId, query.setupId))) return fail('not_found', 'No such setup in this workspace.');
@@ -50,7 +49,7 @@ export async function listLinks(db: Db, ws: Ws, query: ShareLinksQuery, now: Dat
 }
 
 /** A new link to one object of this workspace. The token is returned here once and kept only as its SHA-256. */
-export function createLink(db: Db, ws: Ws, actor: Actor, input: CreateShareLinkInput, now: Date): Promise<Outcome<CreatedShareLink>> {
+export function createLink(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateShareLinkInput, now: Date): Promise<Outcome<CreatedShareLink>> {
   return db.transaction().execute(async (trx) => {
     const kind = shareableKinds[input.objectType];
     if (!kind) return fail('bad_request', 'This kind of object cannot be shared yet.', [{ path: 'objectType', message: 'Not shareable yet' }]);
@@ -89,7 +88,7 @@ export function createLink(db: Db, ws: Ws, actor: Actor, input: CreateShareLinkI
 }
 
 /** Withdraws a link for good; the row stays for the record. Revoking twice is harmless. */
-export function revokeLink(db: Db, ws: Ws, actor: Actor, linkId: string, now: Date): Promise<Outcome<ShareLink>> {
+export function revokeLink(db: Db, ws: WorkspaceRef, actor: Actor, linkId: string, now: Date): Promise<Outcome<ShareLink>> {
   return db.transaction().execute(async (trx) => {
     const row = await findShareLink(trx, ws.workspaceId, linkId);
     if (!row) return fail('not_found', 'No such share link in this workspace.');

@@ -3,12 +3,12 @@ import type { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
-import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints } from '../studies/studies.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints } from '../studies/index.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok } from '../core/outcome.ts';
-import { insertNewSetup } from '../setups/setups.service.ts';
-import type { ShareableKind } from './share-objects.service.ts';
-import { definitionOf, detailOf } from '../studies/studies.service.ts';
+import { insertNewSetupInTx } from '../setups/index.ts';
+import type { ShareableKind } from './shareable-kind.ts';
+import { definitionOf, detailOf } from '../studies/index.ts';
 
 const gone = () => fail('gone', 'What this link pointed to is no longer there.');
 
@@ -61,7 +61,7 @@ export const studyShare: ShareableKind = {
     if (!row) return gone();
     const def = definitionOf(row);
     const document = Setup.parse(JSON.parse(row.base_document));
-    const setup = await insertNewSetup(
+    const setup = await insertNewSetupInTx(
       trx,
       { workspaceId },
       actor,

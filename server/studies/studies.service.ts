@@ -9,7 +9,6 @@ import { applyPoint } from '../../shared/study/apply-point.ts';
 import { studyRoadNames } from '../../shared/study/collect.ts';
 import { describePoint } from '../../shared/study/describe-point.ts';
 import { plannedCounts, pointValuesAt } from '../../shared/study/expand.ts';
-import type { WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { StudyPointRow } from './studies.tables.ts';
 import {
@@ -22,11 +21,11 @@ import {
   listStudyPoints,
   type StudyViewRow,
 } from './studies.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { type Actor, addRevision } from '../setups/setups.service.ts';
+import { addRevisionInTx } from '../setups/index.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = Pick<WorkspaceContext, 'workspaceId'>;
 
 const noStudy = () => fail('not_found', 'No such study in this workspace.');
 
@@ -92,17 +91,17 @@ export async function detailOf(db: Queryable, row: StudyViewRow): Promise<StudyD
   };
 }
 
-export async function mustDetail(db: Queryable, ws: Ws, studyId: string): Promise<StudyDetail> {
+export async function mustDetail(db: Queryable, ws: WorkspaceRef, studyId: string): Promise<StudyDetail> {
   const row = await findStudy(db, ws.workspaceId, studyId);
   if (!row) throw new Error(`study ${studyId} vanished inside its own transaction`);
   return detailOf(db, row);
 }
 
-export async function listStudies(db: Db, ws: Ws): Promise<StudiesResponse> {
+export async function listStudies(db: Db, ws: WorkspaceRef): Promise<StudiesResponse> {
   return { studies: (await listStudyRows(db, ws.workspaceId)).map((r) => toSummary(r)) };
 }
 
-export async function getStudy(db: Db, ws: Ws, studyId: string): Promise<Outcome<StudyDetail>> {
+export async function getStudy(db: Db, ws: WorkspaceRef, studyId: string): Promise<Outcome<StudyDetail>> {
   const row = await findStudy(db, ws.workspaceId, studyId);
   return row ? ok(await detailOf(db, row)) : noStudy();
 }
@@ -112,7 +111,7 @@ export async function getStudy(db: Db, ws: Ws, studyId: string): Promise<Outcome
  * library road too. Library roads are copied into the study (and named), so the study runs the
  * same after the library changes.
  */
-async function resolve(db: Queryable, ws: Ws, def: StudyDefinition) {
+async function resolve(db: Queryable, ws: WorkspaceRef, def: StudyDefinition) {
   const issues: FieldIssue[] = [];
   const base = await findBaseRevision(db, ws.workspaceId, def.base.setupId, def.base.revisionId);
   if (!base) issues.push({ path: 'definition.base.revisionId', message: 'No such revision of that setup in this workspace.' });
@@ -136,12 +135,12 @@ async function resolve(db: Queryable, ws: Ws, def: StudyDefinition) {
   return { ok: true as const, base, roads, def: { ...def, roads: entries } };
 }
 
-export function createStudy(db: Db, ws: Ws, actor: Actor, input: CreateStudyInput, now: Date): Promise<Outcome<StudyDetail>> {
-  return db.transaction().execute((trx) => insertNewStudy(trx, ws, actor, input, now));
+export function createStudy(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateStudyInput, now: Date): Promise<Outcome<StudyDetail>> {
+  return db.transaction().execute((trx) => insertNewStudyInTx(trx, ws, actor, input, now));
 }
 
 /** A new study in the caller's transaction (the demo seed uses this too). */
-export async function insertNewStudy(trx: Queryable, ws: Ws, actor: Actor, input: CreateStudyInput, now: Date): Promise<Outcome<StudyDetail>> {
+export async function insertNewStudyInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, input: CreateStudyInput, now: Date): Promise<Outcome<StudyDetail>> {
   const r = await resolve(trx, ws, input.definition);
   if (!r.ok) return fail('bad_request', 'The study needs attention; nothing was saved.', r.issues);
   const id = randomUUID();
@@ -180,7 +179,7 @@ export async function insertNewStudy(trx: Queryable, ws: Ws, actor: Actor, input
   return ok(await mustDetail(trx, ws, id));
 }
 
-export function deleteStudy(db: Db, ws: Ws, actor: Actor, studyId: string, now: Date): Promise<Outcome<null>> {
+export function deleteStudy(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, now: Date): Promise<Outcome<null>> {
   return db.transaction().execute(async (trx) => {
     const row = await findStudy(trx, ws.workspaceId, studyId);
     if (!row) return noStudy();
@@ -194,7 +193,7 @@ export function deleteStudy(db: Db, ws: Ws, actor: Actor, studyId: string, now: 
  * A study point as the next revision of the base setup: the base revision's document with the
  * point's values applied (the same code the runs used), saved with source `study:<id>`.
  */
-export function openPointAsSetup(db: Db, ws: Ws, actor: Actor, studyId: string, index: number, input: OpenPointAsSetupInput, now: Date): Promise<Outcome<OpenedStudyPoint>> {
+export function openPointAsSetup(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, index: number, input: OpenPointAsSetupInput, now: Date): Promise<Outcome<OpenedStudyPoint>> {
   return db.transaction().execute(async (trx) => {
     const row = await findStudy(trx, ws.workspaceId, studyId);
     if (!row) return noStudy();
@@ -206,7 +205,7 @@ export function openPointAsSetup(db: Db, ws: Ws, actor: Actor, studyId: string, 
     if (!applied.ok) return fail('conflict', `This point does not make a valid setup: ${applied.message}`);
     const label = describePoint(def.axes, values);
     const message = input.message?.trim() || `From study "${row.name}": ${label} (on revision ${row.base_revision_number})`;
-    const added = await addRevision(trx, ws, actor, row.base_setup_id, { document: applied.setup, message, source: `study:${studyId}` }, now);
+    const added = await addRevisionInTx(trx, ws, actor, row.base_setup_id, { document: applied.setup, message, source: `study:${studyId}` }, now);
     if (!added.ok) return added;
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,

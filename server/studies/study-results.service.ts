@@ -6,14 +6,13 @@ import { jobsByPoint, judgeUploadedPoint, studyRoadNames } from '../../shared/st
 import { describePoint } from '../../shared/study/describe-point.ts';
 import { expandStudy } from '../../shared/study/expand.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
-import type { WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { NewStudyPointRow } from './studies.tables.ts';
 import { findStudy, findStudyPoint, listStudyPoints, updateStudyRow, upsertStudyPoints } from './studies.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import type { Actor } from '../setups/setups.service.ts';
 import { definitionOf, mustDetail, toPointResult } from './studies.service.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 /**
  * A study's results: the points a browser run saves (checked and judged again here), the close
@@ -21,7 +20,6 @@ import { definitionOf, mustDetail, toPointResult } from './studies.service.ts';
  * transaction (the demo seed) and one opening its own.
  */
 
-type Ws = Pick<WorkspaceContext, 'workspaceId'>;
 
 const noStudy = () => fail('not_found', 'No such study in this workspace.');
 const parsed = <T>(text: string): T => JSON.parse(text) as T;
@@ -45,11 +43,11 @@ function pointRow(studyId: string, p: StudyPointResult): NewStudyPointRow {
  * code; one bad point refuses the whole slice, so nothing half-checked is stored. The run is
  * audited once, when it is finished (`finishStudyRun`), not per slice.
  */
-export function saveStudyPoints(db: Db, ws: Ws, studyId: string, input: SaveStudyPointsInput, now: Date): Promise<Outcome<{ saved: number }>> {
-  return db.transaction().execute((trx) => storeStudyPoints(trx, ws, studyId, input, now));
+export function saveStudyPoints(db: Db, ws: WorkspaceRef, studyId: string, input: SaveStudyPointsInput, now: Date): Promise<Outcome<{ saved: number }>> {
+  return db.transaction().execute((trx) => storeStudyPointsInTx(trx, ws, studyId, input, now));
 }
 
-export async function storeStudyPoints(trx: Queryable, ws: Ws, studyId: string, input: SaveStudyPointsInput, now: Date): Promise<Outcome<{ saved: number }>> {
+export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, studyId: string, input: SaveStudyPointsInput, now: Date): Promise<Outcome<{ saved: number }>> {
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
@@ -77,11 +75,11 @@ export async function storeStudyPoints(trx: Queryable, ws: Ws, studyId: string, 
  * every saved point. The study is complete when every planned point (and the base setup's runs)
  * is saved, whatever the browser says; asking for complete with points missing is refused.
  */
-export function finishStudyRun(db: Db, ws: Ws, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
-  return db.transaction().execute((trx) => closeStudyRun(trx, ws, actor, studyId, input, now));
+export function finishStudyRun(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
+  return db.transaction().execute((trx) => closeStudyRunInTx(trx, ws, actor, studyId, input, now));
 }
 
-export async function closeStudyRun(trx: Queryable, ws: Ws, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
+export async function closeStudyRunInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
@@ -127,11 +125,11 @@ export async function closeStudyRun(trx: Queryable, ws: Ws, actor: Actor, studyI
 }
 
 /** The lead's pick: a saved point becomes the study's baseline (or none, with null). */
-export function setStudyBaseline(db: Db, ws: Ws, actor: Actor, studyId: string, input: SetStudyBaselineInput, now: Date): Promise<Outcome<StudyDetail>> {
-  return db.transaction().execute((trx) => chooseStudyBaseline(trx, ws, actor, studyId, input, now));
+export function setStudyBaseline(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, input: SetStudyBaselineInput, now: Date): Promise<Outcome<StudyDetail>> {
+  return db.transaction().execute((trx) => chooseStudyBaselineInTx(trx, ws, actor, studyId, input, now));
 }
 
-export async function chooseStudyBaseline(trx: Queryable, ws: Ws, actor: Actor, studyId: string, input: SetStudyBaselineInput, now: Date): Promise<Outcome<StudyDetail>> {
+export async function chooseStudyBaselineInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, studyId: string, input: SetStudyBaselineInput, now: Date): Promise<Outcome<StudyDetail>> {
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);

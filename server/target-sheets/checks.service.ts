@@ -13,14 +13,13 @@ import {
 import { checkConformity } from '../../shared/target-sheet/conformity.ts';
 import { conformityToCsv } from '../../shared/target-sheet/to-csv.ts';
 import { z } from 'zod';
-import type { WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { type DynoCheckViewRow, findDynoCheck, findSheet, insertDynoCheck, listDynoChecks } from './target-sheets.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { type Actor, toSheet } from './target-sheets.service.ts';
+import { toSheet } from './target-sheets.service.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = Pick<WorkspaceContext, 'workspaceId'>;
 
 /** One uploaded file, as the upload middleware hands it over. */
 export interface UploadedText {
@@ -61,12 +60,12 @@ export function labelFromFileName(name: string): string {
   return (base.replace(/\.[A-Za-z0-9]{1,5}$/, '').trim() || base).slice(0, 120);
 }
 
-export async function listSheetChecks(db: Db, ws: Ws, sheetId: string): Promise<Outcome<ConformityChecksResponse>> {
+export async function listSheetChecks(db: Db, ws: WorkspaceRef, sheetId: string): Promise<Outcome<ConformityChecksResponse>> {
   if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
   return ok({ checks: (await listDynoChecks(db, sheetId)).map(toRecord) });
 }
 
-export async function sheetCheckCsv(db: Db, ws: Ws, sheetId: string, checkId: string): Promise<Outcome<{ fileName: string; csv: string }>> {
+export async function sheetCheckCsv(db: Db, ws: WorkspaceRef, sheetId: string, checkId: string): Promise<Outcome<{ fileName: string; csv: string }>> {
   const sheet = await findSheet(db, ws.workspaceId, sheetId);
   if (!sheet) return noSheet();
   const row = await findDynoCheck(db, sheetId, checkId);
@@ -110,7 +109,7 @@ export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): 
  */
 export async function runSheetCheck(
   db: Db,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   sheetId: string,
   files: UploadedText[],
@@ -120,13 +119,13 @@ export async function runSheetCheck(
   if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
   const read = readCheckFiles(files, fields);
   if (!read.ok) return read;
-  return db.transaction().execute((trx) => storeSheetCheckIn(trx, ws, actor, sheetId, files, read.value, now));
+  return db.transaction().execute((trx) => storeSheetCheckInTx(trx, ws, actor, sheetId, files, read.value, now));
 }
 
 /** Checks already-read dampers against the sheet and keeps the result, inside an open transaction. */
-export async function storeSheetCheckIn(
+export async function storeSheetCheckInTx(
   trx: Queryable,
-  ws: Ws,
+  ws: WorkspaceRef,
   actor: Actor,
   sheetId: string,
   files: UploadedText[],

@@ -1,5 +1,5 @@
 import { sheetCautions } from '../../shared/target-sheet/cautions.ts';
-import type { MailMessage } from '../mail/mailer.ts';
+import type { MailMessage } from '../mail/index.ts';
 
 // Plain-text mails about damper target sheets. Each returns everything but the recipient.
 type Template = Omit<MailMessage, 'to'>;

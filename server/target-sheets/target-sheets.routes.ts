@@ -17,19 +17,10 @@ import type { Request } from 'express';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import type { AppDeps } from '../deps.ts';
 import { unwrap } from '../core/errors.ts';
-import { textUploads, uploadedTexts } from '../uploads/text-uploads.middleware.ts';
-import { withinUploadQuota } from '../uploads/upload-quota.middleware.ts';
+import { textUploads, uploadedTexts } from '../uploads/index.ts';
+import { withinUploadQuota } from '../uploads/index.ts';
 import { listSheetChecks, runSheetCheck, sheetCheckCsv } from './checks.service.ts';
-import {
-  createTargetSheet,
-  deleteTargetSheet,
-  getTargetSheet,
-  listTargetSheets,
-  moveTargetSheet,
-  saveTargetSheet,
-  supersedeTargetSheet,
-  targetSheetCsv,
-} from './target-sheets.service.ts';
+import { createTargetSheet, deleteTargetSheet, getTargetSheet, listTargetSheets, moveTargetSheet, saveTargetSheet, supersedeTargetSheet, targetSheetCsv } from './target-sheets.service.ts';
 import type { RouteDef, RouteModule } from '../http/registry.ts';
 
 const base = '/api/workspaces/:workspaceId/target-sheets';

@@ -14,7 +14,7 @@ import { canSupersede, checkTransition, type SheetTransition } from '../../share
 import { defaultReferenceSpeeds, defaultTolerance, targetPointsFromCurve, targetSheetContentFromSetup } from '../../shared/target-sheet/reference-speeds.ts';
 import { nextSheetNumber, workspaceShortCode } from '../../shared/target-sheet/sheet-number.ts';
 import { targetSheetToCsv } from '../../shared/target-sheet/to-csv.ts';
-import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
+import type { WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { AppDeps } from '../deps.ts';
 import { fieldsOf } from '../core/errors.ts';
@@ -29,15 +29,16 @@ import {
   type SheetViewRow,
   updateSheet,
 } from './target-sheets.repository.ts';
-import { findRevision, findSetup } from '../setups/setups.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { parseStoredSetup } from '../setups/corner-figures.ts';
+import { findRevision, findSetup } from '../setups/index.ts';
+import { recordAudit } from '../audit/index.ts';
+import { parseStoredSetup } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { mailSheetDecision, type SheetMailFacts } from './sheet-mail.service.ts';
-import { workspaceSettings } from '../workspaces/settings.service.ts';
+import { workspaceSettings } from '../workspaces/index.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-export type Actor = Pick<SessionUser, 'id' | 'name'>;
-type Ws = Pick<WorkspaceContext, 'workspaceId' | 'workspaceName' | 'role'>;
+/** Sheets also need the workspace's name (mail) and the caller's role (release rules). */
+type SheetWorkspace = WorkspaceRef & Pick<WorkspaceContext, 'workspaceName' | 'role'>;
 export type SheetDeps = Pick<AppDeps, 'db' | 'mailer' | 'publicUrl' | 'clock'>;
 
 const noSheet = () => fail('not_found', 'No such target sheet in this workspace.');
@@ -90,11 +91,11 @@ async function mustDetail(db: Queryable, workspaceId: string, sheetId: string): 
   return detail;
 }
 
-export async function listTargetSheets(db: Db, ws: Ws): Promise<TargetSheetsResponse> {
+export async function listTargetSheets(db: Db, ws: SheetWorkspace): Promise<TargetSheetsResponse> {
   return { sheets: (await listSheets(db, ws.workspaceId)).map(toSheet) };
 }
 
-export async function getTargetSheet(db: Db, ws: Ws, sheetId: string): Promise<Outcome<TargetSheetDetail>> {
+export async function getTargetSheet(db: Db, ws: SheetWorkspace, sheetId: string): Promise<Outcome<TargetSheetDetail>> {
   const detail = await detailOf(db, ws.workspaceId, sheetId);
   return detail ? ok(detail) : noSheet();
 }
@@ -115,7 +116,7 @@ async function revisionDocument(db: Queryable, workspaceId: string, setupId: str
 /** Inserts a new draft with the next number of the year; shared by create and supersede. */
 async function insertDraft(
   trx: Queryable,
-  ws: Ws,
+  ws: SheetWorkspace,
   actor: Actor,
   init: { setupId: string; revision: number; content: TargetSheetContent; supersedesId: string | null },
   now: Date,
@@ -150,13 +151,13 @@ async function insertDraft(
  * A new draft whose targets are read off the damper curve of one setup revision at the chosen
  * (or default) reference speeds, with one band for every point and the damper's static gas force.
  */
-export async function createTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, input: CreateTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
+export async function createTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, input: CreateTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
-  return deps.db.transaction().execute((trx) => createTargetSheetIn(trx, ws, actor, input, now));
+  return deps.db.transaction().execute((trx) => createTargetSheetInTx(trx, ws, actor, input, now));
 }
 
 /** `createTargetSheet` inside an open transaction (the demo seed runs in one). */
-export async function createTargetSheetIn(trx: Queryable, ws: Ws, actor: Actor, input: CreateTargetSheetInput, now: Date): Promise<Outcome<TargetSheetDetail>> {
+export async function createTargetSheetInTx(trx: Queryable, ws: SheetWorkspace, actor: Actor, input: CreateTargetSheetInput, now: Date): Promise<Outcome<TargetSheetDetail>> {
   const read = await revisionDocument(trx, ws.workspaceId, input.setupId, input.revision);
   if (!read.ok) return read;
   const tolerance = { tolPct: input.tolPct ?? defaultTolerance.tolPct, floorN: input.floorN ?? defaultTolerance.floorN };
@@ -180,13 +181,13 @@ export async function createTargetSheetIn(trx: Queryable, ws: Ws, actor: Actor, 
  * Saves a draft's targets, bands, gas force and notes. A returned sheet may be edited too: the
  * save reopens it as a draft. In review and released sheets refuse (409).
  */
-export async function saveTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, sheetId: string, content: TargetSheetContent): Promise<Outcome<TargetSheetDetail>> {
+export async function saveTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, sheetId: string, content: TargetSheetContent): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
-  return deps.db.transaction().execute((trx) => saveTargetSheetIn(trx, ws, actor, sheetId, content, now));
+  return deps.db.transaction().execute((trx) => saveTargetSheetInTx(trx, ws, actor, sheetId, content, now));
 }
 
 /** `saveTargetSheet` inside an open transaction. Only the body's own fields are kept. */
-export async function saveTargetSheetIn(trx: Queryable, ws: Ws, actor: Actor, sheetId: string, content: TargetSheetContent, now: Date): Promise<Outcome<TargetSheetDetail>> {
+export async function saveTargetSheetInTx(trx: Queryable, ws: SheetWorkspace, actor: Actor, sheetId: string, content: TargetSheetContent, now: Date): Promise<Outcome<TargetSheetDetail>> {
   const row = await findSheet(trx, ws.workspaceId, sheetId);
   if (!row) return noSheet();
   if (row.status === 'released') return fail('conflict', `${row.number} is released and cannot change; draft a new sheet that supersedes it.`);
@@ -215,14 +216,14 @@ const pastTense: Record<SheetTransition['action'], string> = { submit: 'submitte
  */
 export async function moveTargetSheet(
   deps: SheetDeps,
-  ws: Ws,
+  ws: SheetWorkspace,
   actor: Actor,
   sheetId: string,
   to: TargetSheetStatus,
   reason?: string,
 ): Promise<Outcome<TargetSheetTransitionResult>> {
   const now = deps.clock();
-  const moved = await deps.db.transaction().execute((trx) => moveTargetSheetIn(trx, ws, actor, sheetId, to, reason, now));
+  const moved = await deps.db.transaction().execute((trx) => moveTargetSheetInTx(trx, ws, actor, sheetId, to, reason, now));
   if (!moved.ok) return moved;
   const { action, facts, detail } = moved.value;
   const notified = await mailSheetDecision(deps, ws, actor, action, facts);
@@ -245,9 +246,9 @@ async function wantsSecondPerson(trx: Queryable, workspaceId: string, authorId: 
 }
 
 /** `moveTargetSheet` inside an open transaction, without the mail (the demo seed sends none). */
-export async function moveTargetSheetIn(
+export async function moveTargetSheetInTx(
   trx: Queryable,
-  ws: Ws,
+  ws: SheetWorkspace,
   actor: Actor,
   sheetId: string,
   to: TargetSheetStatus,
@@ -289,7 +290,7 @@ export async function moveTargetSheetIn(
  * A new draft that replaces a released sheet. The old sheet stays released and says which sheet
  * superseded it; a sheet is superseded once (409 after that).
  */
-export async function supersedeTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, sheetId: string, input: SupersedeTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
+export async function supersedeTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, sheetId: string, input: SupersedeTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
   return deps.db.transaction().execute(async (trx) => {
     const row = await findSheet(trx, ws.workspaceId, sheetId);
@@ -329,7 +330,7 @@ export async function supersedeTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor
  * Deletes a sheet that was never released (draft or returned). A superseding draft that is
  * deleted frees its released predecessor to be superseded again.
  */
-export async function deleteTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, sheetId: string): Promise<Outcome<void>> {
+export async function deleteTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, sheetId: string): Promise<Outcome<void>> {
   const now = deps.clock();
   return deps.db.transaction().execute(async (trx) => {
     const row = await findSheet(trx, ws.workspaceId, sheetId);
@@ -353,7 +354,7 @@ export async function deleteTargetSheet(deps: SheetDeps, ws: Ws, actor: Actor, s
 }
 
 /** The target table as CSV (shared/target-sheet/to-csv.ts) and the file name to offer. */
-export async function targetSheetCsv(db: Db, ws: Ws, sheetId: string): Promise<Outcome<{ fileName: string; csv: string }>> {
+export async function targetSheetCsv(db: Db, ws: SheetWorkspace, sheetId: string): Promise<Outcome<{ fileName: string; csv: string }>> {
   const row = await findSheet(db, ws.workspaceId, sheetId);
   if (!row) return noSheet();
   return ok({ fileName: `${row.number}.csv`, csv: targetSheetToCsv(toSheet(row)) });

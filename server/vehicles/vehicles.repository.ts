@@ -1,5 +1,5 @@
 import type { Queryable } from '../db/database.ts';
-import type { NewVehicleRow, VehicleTable } from '../setups/setups.tables.ts';
+import type { NewVehicleRow, VehicleTable } from './vehicles.tables.ts';
 
 export async function insertVehicle(db: Queryable, row: NewVehicleRow): Promise<void> {
   await db.insertInto('vehicle').values(row).execute();

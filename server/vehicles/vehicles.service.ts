@@ -3,15 +3,15 @@ import type { FieldIssue } from '../../shared/errors.ts';
 import type { Corner } from '../../shared/schemas/setup-record.ts';
 import type { CornerAnalysis, CornerSlot, CreateVehicleInput, UpdateVehicleInput, VehicleDetail, VehiclesResponse, VehicleSummary } from '../../shared/schemas/vehicle.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import type { VehicleRow } from '../setups/setups.tables.ts';
-import { findSetup, findSlotHolder, listSetupSummariesOfVehicles, type SetupSummaryRow, updateSetupRow } from '../setups/setups.repository.ts';
+import type { VehicleRow } from './vehicles.tables.ts';
+import { findSetup, findSlotHolder, listSetupSummariesOfVehicles, type SetupSummaryRow, updateSetupRow } from '../setups/index.ts';
 import { deleteVehicleRow, findVehicle, insertVehicle, listVehicles as listVehicleRows, updateVehicleRow } from './vehicles.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { analyseSetup, parseStoredSetup } from '../setups/corner-figures.ts';
+import { recordAudit } from '../audit/index.ts';
+import { analyseSetup, parseStoredSetup } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { type Actor, placeInSlot, toSummary } from '../setups/setups.service.ts';
+import { placeInSlotInTx, toSummary } from '../setups/index.ts';
+import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
-type Ws = { workspaceId: string };
 
 const noVehicle = () => fail('not_found', 'No such vehicle in this workspace.');
 
@@ -53,7 +53,7 @@ async function cornersOf(db: Queryable, workspaceId: string, vehicleIds: string[
   return map;
 }
 
-export async function listVehicles(db: Db, ws: Ws): Promise<VehiclesResponse> {
+export async function listVehicles(db: Db, ws: WorkspaceRef): Promise<VehiclesResponse> {
   const rows = await listVehicleRows(db, ws.workspaceId);
   const corners = await cornersOf(db, ws.workspaceId, rows.map((v) => v.id));
   return {
@@ -73,7 +73,7 @@ async function detailOf(db: Queryable, workspaceId: string, vehicleId: string): 
   return { ...summaryOf(v, c, ratioOf(front, rear)), analysis: { front, rear } };
 }
 
-export async function getVehicle(db: Db, ws: Ws, vehicleId: string): Promise<Outcome<VehicleDetail>> {
+export async function getVehicle(db: Db, ws: WorkspaceRef, vehicleId: string): Promise<Outcome<VehicleDetail>> {
   const detail = await detailOf(db, ws.workspaceId, vehicleId);
   return detail ? ok(detail) : noVehicle();
 }
@@ -107,7 +107,7 @@ async function applySlots(trx: Queryable, workspaceId: string, vehicleId: string
         words.push(`emptied the ${corner} slot`);
       }
     } else if (holder?.id !== id) {
-      await placeInSlot(trx, id, vehicleId, corner, actor, at);
+      await placeInSlotInTx(trx, id, vehicleId, corner, actor, at);
       const setup = await findSetup(trx, workspaceId, id);
       words.push(`put "${setup?.name ?? id}" at the ${corner}`);
     }
@@ -115,7 +115,7 @@ async function applySlots(trx: Queryable, workspaceId: string, vehicleId: string
   return words;
 }
 
-export function createVehicle(db: Db, ws: Ws, actor: Actor, input: CreateVehicleInput, now: Date): Promise<Outcome<VehicleDetail>> {
+export function createVehicle(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateVehicleInput, now: Date): Promise<Outcome<VehicleDetail>> {
   return db.transaction().execute(async (trx) => {
     const slots = { front: input.frontSetupId, rear: input.rearSetupId };
     const issues = await checkSlots(trx, ws.workspaceId, slots);
@@ -139,7 +139,7 @@ export function createVehicle(db: Db, ws: Ws, actor: Actor, input: CreateVehicle
   });
 }
 
-export function updateVehicle(db: Db, ws: Ws, actor: Actor, vehicleId: string, input: UpdateVehicleInput, now: Date): Promise<Outcome<VehicleDetail>> {
+export function updateVehicle(db: Db, ws: WorkspaceRef, actor: Actor, vehicleId: string, input: UpdateVehicleInput, now: Date): Promise<Outcome<VehicleDetail>> {
   return db.transaction().execute(async (trx) => {
     const v = await findVehicle(trx, ws.workspaceId, vehicleId);
     if (!v) return noVehicle();
@@ -170,7 +170,7 @@ export function updateVehicle(db: Db, ws: Ws, actor: Actor, vehicleId: string, i
 }
 
 /** Removes the vehicle; its setups stay, ungrouped. */
-export function deleteVehicle(db: Db, ws: Ws, actor: Actor, vehicleId: string, now: Date): Promise<Outcome<void>> {
+export function deleteVehicle(db: Db, ws: WorkspaceRef, actor: Actor, vehicleId: string, now: Date): Promise<Outcome<void>> {
   return db.transaction().execute(async (trx) => {
     const v = await findVehicle(trx, ws.workspaceId, vehicleId);
     if (!v) return noVehicle();

@@ -1,9 +1,8 @@
 import { AcceptInvitationInput, type Invitation, type InvitationInfo, InviteInput } from '../../shared/schemas/workspace.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../core/errors.ts';
-import { findUserById } from '../accounts/users.repository.ts';
 import { acceptInvitation, createInvitation, invitationInfo, revokeInvitation } from './invitations.service.ts';
-import { startSession } from '../accounts/auth.routes.ts';
+import { startSession } from '../accounts/index.ts';
 import type { RouteModule } from '../http/registry.ts';
 
 export const invitationRoutes: RouteModule = (deps) => [
@@ -23,10 +22,8 @@ export const invitationRoutes: RouteModule = (deps) => [
     rateLimited: true,
     handler: async (req, res) => {
       const input = AcceptInvitationInput.parse(req.body ?? {});
-      const { userId } = unwrap(await acceptInvitation(deps, pathParam(req, 'token'), input, req.user));
-      const user = await findUserById(deps.db, userId);
-      if (!user) throw new Error(`accepted invitation for missing user ${userId}`);
-      await startSession(deps, req, res, user);
+      const who = unwrap(await acceptInvitation(deps, pathParam(req, 'token'), input, req.user));
+      await startSession(deps, req, res, who);
     },
   },
   {

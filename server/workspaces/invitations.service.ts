@@ -4,15 +4,15 @@ import type { FieldIssue } from '../../shared/errors.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import { hashPassword } from '../auth/password.ts';
 import type { AppDeps } from '../deps.ts';
-import type { InvitationRow } from '../accounts/tokens.tables.ts';
-import { invitationMail } from '../mail/templates.ts';
-import { deleteInvitation, findInvitation, findInvitationByTokenHash, insertInvitation, listPendingInvitations, markInvitationAccepted } from '../accounts/tokens.repository.ts';
-import { findUserByEmail, findUserById, insertUser } from '../accounts/users.repository.ts';
+import type { InvitationRow } from './invitations.tables.ts';
+import { invitationMail } from '../mail/index.ts';
+import { deleteInvitation, findInvitation, findInvitationByTokenHash, insertInvitation, listPendingInvitations, markInvitationAccepted } from './invitations.repository.ts';
+import { findUserByEmail, findUserById, insertUser, type SessionStart } from '../accounts/index.ts';
 import { findMembership, findWorkspace, insertMembership } from './workspaces.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
-import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../accounts/one-time-tokens.ts';
+import { recordAudit } from '../audit/index.ts';
+import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../core/one-time-tokens.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { overLimit, recordActions, type ThrottleRule } from '../limits/throttle.service.ts';
+import { overLimit, recordActions, type ThrottleRule } from '../limits/index.ts';
 import { isUniqueViolation } from '../core/sqlite-errors.ts';
 
 export const INVITATION_DAYS = 7;
@@ -122,7 +122,7 @@ export async function invitationInfo(deps: Deps, token: string): Promise<Outcome
  * Joins the invited address to the workspace. An existing account must be the signed-in caller;
  * otherwise the account is created from `name` and `password`. Returns the user to sign in.
  */
-export async function acceptInvitation(deps: Deps, token: string, input: AcceptInvitationInput, caller: SessionUser | undefined): Promise<Outcome<{ userId: string }>> {
+export async function acceptInvitation(deps: Deps, token: string, input: AcceptInvitationInput, caller: SessionUser | undefined): Promise<Outcome<SessionStart>> {
   const row = await liveInvitation(deps, token);
   if (!row) return gone();
   const account = await findUserByEmail(deps.db, row.email);
@@ -165,7 +165,7 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
         summary: `${name} (${row.email}) accepted an invitation and joined as ${row.role}.`,
         at: now,
       });
-      return ok({ userId });
+      return ok({ id: userId, session_version: account?.session_version ?? 0 });
     });
   } catch (err) {
     // Someone created the account or joined between our checks and the transaction.

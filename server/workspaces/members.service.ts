@@ -1,10 +1,10 @@
 import type { Member, MembersResponse, Role } from '../../shared/schemas/workspace.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db } from '../db/database.ts';
-import { revokeShareLinksOfCreator } from '../sharing/share-links.repository.ts';
-import { listPendingInvitations } from '../accounts/tokens.repository.ts';
+import { revokeShareLinksOfCreator } from '../sharing/index.ts';
+import { listPendingInvitations } from './invitations.repository.ts';
 import { countAdmins, deleteMembership, findMemberOfWorkspace, listMembersOfWorkspace, type MemberRow, updateMembershipRole } from './workspaces.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 import { toInvitation } from './invitations.service.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 

@@ -2,7 +2,7 @@ import type { WorkspaceSettings } from '../../shared/schemas/workspace.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { findWorkspace, updateWorkspaceSettings } from './workspaces.repository.ts';
-import { recordAudit } from '../audit/audit.service.ts';
+import { recordAudit } from '../audit/index.ts';
 
 export async function workspaceSettings(db: Queryable, workspaceId: string): Promise<WorkspaceSettings> {
   const row = await findWorkspace(db, workspaceId);

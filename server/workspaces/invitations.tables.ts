@@ -1,9 +1,8 @@
 import type { Insertable, Selectable } from 'kysely';
 import type { Role } from '../../shared/schemas/workspace.ts';
 
-// One-time links: only the SHA-256 of the token is stored, so a copy of the database
-// does not let anyone accept an invitation or reset a password.
-
+// Only the SHA-256 of the token is stored, so a copy of the database does not let anyone
+// accept an invitation.
 export interface InvitationTable {
   id: string;
   workspace_id: string;
@@ -18,14 +17,3 @@ export interface InvitationTable {
 }
 export type InvitationRow = Selectable<InvitationTable>;
 export type NewInvitationRow = Insertable<InvitationTable>;
-
-export interface PasswordResetTable {
-  id: string;
-  user_id: string;
-  token_hash: string;
-  created_at: string;
-  expires_at: string;
-  used_at: string | null;
-}
-export type PasswordResetRow = Selectable<PasswordResetTable>;
-export type NewPasswordResetRow = Insertable<PasswordResetTable>;

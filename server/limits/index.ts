@@ -1,0 +1,2 @@
+// What other parts of the server may use from this domain; everything else stays inside it.
+export { overLimit, recordActions, releaseSlot, takeSlot, type ThrottleRule } from './throttle.service.ts';
