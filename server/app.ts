@@ -77,7 +77,6 @@ export function createApp(options: AppOptions): App {
   app.use('/api', (req, res) => sendError(res, 'not_found', `No API route ${req.method} ${req.originalUrl}.`));
 
   if (deps.client.kind === 'static') mountStaticClient(app, deps.client.distDir);
-  else if (deps.client.kind === 'custom') deps.client.mount(app);
 
   app.use(errorHandler(deps.logger));
   return { app, deps, routes };

@@ -1,4 +1,3 @@
-import type { Express } from 'express';
 import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
 import type { Mailer } from './mail/index.ts';
@@ -8,8 +7,6 @@ import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/index.ts';
 export type ClientServing =
   /** Built files from `distDir` with the SPA fallback; a plain page when index.html is missing. */
   | { kind: 'static'; distDir: string }
-  /** Something else mounts after the API (e.g. Vite's middleware in development). */
-  | { kind: 'custom'; mount: (app: Express) => void }
   /** API only (tests). */
   | { kind: 'none' };
 

@@ -27,8 +27,3 @@ export async function bumpSessionVersion(db: Queryable, id: string): Promise<num
 export async function setPasswordHash(db: Queryable, id: string, passwordHash: string): Promise<void> {
   await db.updateTable('user').set({ password_hash: passwordHash }).where('id', '=', id).execute();
 }
-
-export async function countUsers(db: Queryable): Promise<number> {
-  const row = await db.selectFrom('user').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
-  return Number(row.n);
-}

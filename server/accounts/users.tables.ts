@@ -1,4 +1,4 @@
-import type { Insertable, Selectable, Updateable } from 'kysely';
+import type { Insertable, Selectable } from 'kysely';
 
 export interface UserTable {
   id: string;
@@ -13,4 +13,3 @@ export interface UserTable {
 }
 export type UserRow = Selectable<UserTable>;
 export type NewUserRow = Insertable<UserTable>;
-export type UserUpdate = Updateable<UserTable>;

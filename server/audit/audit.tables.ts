@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 export interface AuditLogTable {
   id: string;
@@ -11,5 +11,4 @@ export interface AuditLogTable {
   summary: string;
   at: string;
 }
-export type AuditLogRow = Selectable<AuditLogTable>;
 export type NewAuditLogRow = Insertable<AuditLogTable>;

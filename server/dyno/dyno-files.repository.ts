@@ -38,13 +38,7 @@ export function listDynoFiles(db: Queryable, workspaceId: string, setupId: strin
 export function findDynoFile(db: Queryable, workspaceId: string, setupId: string, fileId: string) {
   return fileQuery(db, workspaceId, setupId).select('d.content').where('d.id', '=', fileId).executeTakeFirst();
 }
-export type DynoFileDetailRow = NonNullable<Awaited<ReturnType<typeof findDynoFile>>>;
 
 export async function linkProducedRevision(db: Queryable, fileId: string, revisionId: string): Promise<void> {
   await db.updateTable('dyno_file').set({ produced_revision_id: revisionId }).where('id', '=', fileId).execute();
-}
-
-export async function countDynoFiles(db: Queryable, setupId: string): Promise<number> {
-  const row = await db.selectFrom('dyno_file').select((eb) => eb.fn.countAll<number>().as('n')).where('setup_id', '=', setupId).executeTakeFirstOrThrow();
-  return Number(row.n);
 }

@@ -1,8 +1,7 @@
 import { ApplyDynoFitInput, type ApplyDynoFitResult, DYNO_MAX_BYTES, type DynoFileDetail, type DynoFileItem, type DynoFilesResponse, DynoUploadFields } from '../../shared/schemas/dyno-file.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../core/errors.ts';
-import { singleTextUpload, uploadedText } from '../uploads/index.ts';
-import { withinUploadQuota } from '../uploads/index.ts';
+import { singleTextUpload, uploadedText, withinUploadQuota } from '../uploads/index.ts';
 import { applyDynoFit, getDynoFile, listSetupDynoFiles, uploadDynoFile } from './dyno-files.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 

@@ -15,13 +15,10 @@ import { Setup } from '../../shared/schemas/setup.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../core/errors.ts';
 import { type DynoFileListRow, findDynoFile, insertDynoFile, linkProducedRevision, listDynoFiles } from './dyno-files.repository.ts';
-import { findRevision, findSetup, latestRevisionNumber } from '../setups/index.ts';
+import { findRevision, findSetup, latestRevisionNumber, parseStoredSetup, addRevisionInTx } from '../setups/index.ts';
 import { recordAudit } from '../audit/index.ts';
-import { parseStoredSetup } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { addRevisionInTx } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
-
 
 const noSetup = () => fail('not_found', 'No such setup in this workspace.');
 const noFile = () => fail('not_found', 'No such dyno file for this setup.');

@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 export interface DynoFileTable {
   id: string;
@@ -17,5 +17,4 @@ export interface DynoFileTable {
   uploaded_by: string;
   created_at: string;
 }
-export type DynoFileRow = Selectable<DynoFileTable>;
 export type NewDynoFileRow = Insertable<DynoFileTable>;

@@ -1,8 +1,7 @@
 import { CreateRoadInput, MeasuredUploadFields, type RoadDetail, type RoadsResponse, UpdateRoadInput } from '../../shared/schemas/road-record.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../core/errors.ts';
-import { singleTextUpload, uploadedText } from '../uploads/index.ts';
-import { withinUploadQuota } from '../uploads/index.ts';
+import { singleTextUpload, uploadedText, withinUploadQuota } from '../uploads/index.ts';
 import { createRoad, deleteRoad, getRoad, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from './roads.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 

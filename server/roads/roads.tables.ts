@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 export interface RoadTable {
   id: string;
@@ -14,5 +14,4 @@ export interface RoadTable {
   updated_by: string;
   updated_at: string;
 }
-export type RoadRow = Selectable<RoadTable>;
 export type NewRoadRow = Insertable<RoadTable>;

@@ -76,7 +76,6 @@ export function findRunRow(db: Queryable, workspaceId: string, runId: string) {
     .where('run.id', '=', runId)
     .executeTakeFirst();
 }
-export type RunDetailRow = NonNullable<Awaited<ReturnType<typeof findRunRow>>>;
 
 export async function deleteRunRow(db: Queryable, workspaceId: string, runId: string): Promise<boolean> {
   const result = await db.deleteFrom('run').where('workspace_id', '=', workspaceId).where('id', '=', runId).executeTakeFirst();

@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 /** A saved run (migrations/0004_runs.ts). JSON columns hold the shared schemas' JSON. */
 export interface RunTable {
@@ -30,5 +30,4 @@ export interface RunTable {
   created_by: string;
   created_at: string;
 }
-export type RunRow = Selectable<RunTable>;
 export type NewRunRow = Insertable<RunTable>;

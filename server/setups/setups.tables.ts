@@ -29,5 +29,4 @@ export interface SetupRevisionTable {
   /** Where the revision came from: 'import', 'restore:<n>', 'copy:<share link id>', 'dyno-fit:<file id>', 'study:<id>'; null for a plain save. */
   source: string | null;
 }
-export type SetupRevisionRow = Selectable<SetupRevisionTable>;
 export type NewSetupRevisionRow = Insertable<SetupRevisionTable>;

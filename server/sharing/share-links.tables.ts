@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 export type ShareObjectTypeColumn = 'setup_revision' | 'study';
 
@@ -14,5 +14,4 @@ export interface ShareLinkTable {
   expires_at: string | null;
   revoked_at: string | null;
 }
-export type ShareLinkRow = Selectable<ShareLinkTable>;
 export type NewShareLinkRow = Insertable<ShareLinkTable>;

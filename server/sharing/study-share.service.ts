@@ -3,12 +3,11 @@ import type { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
-import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints } from '../studies/index.ts';
+import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf } from '../studies/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok } from '../core/outcome.ts';
 import { insertNewSetupInTx } from '../setups/index.ts';
 import type { ShareableKind } from './shareable-kind.ts';
-import { definitionOf, detailOf } from '../studies/index.ts';
 
 const gone = () => fail('gone', 'What this link pointed to is no longer there.');
 

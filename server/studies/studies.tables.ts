@@ -29,7 +29,6 @@ export interface StudyTable {
   created_at: string;
   updated_at: string;
 }
-export type StudyRow = Selectable<StudyTable>;
 export type NewStudyRow = Insertable<StudyTable>;
 
 /** One finished point of a study; `idx` −1 is the base setup. */

@@ -29,9 +29,8 @@ import {
   type SheetViewRow,
   updateSheet,
 } from './target-sheets.repository.ts';
-import { findRevision, findSetup } from '../setups/index.ts';
+import { findRevision, findSetup, parseStoredSetup } from '../setups/index.ts';
 import { recordAudit } from '../audit/index.ts';
-import { parseStoredSetup } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { mailSheetDecision, type SheetMailFacts } from './sheet-mail.service.ts';
 import { workspaceSettings } from '../workspaces/index.ts';

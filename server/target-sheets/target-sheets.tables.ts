@@ -1,4 +1,4 @@
-import type { Insertable, Selectable, Updateable } from 'kysely';
+import type { Insertable, Updateable } from 'kysely';
 
 export type SheetStatusColumn = 'draft' | 'in_review' | 'released' | 'returned';
 
@@ -25,7 +25,6 @@ export interface TargetSheetTable {
   created_at: string;
   updated_at: string;
 }
-export type TargetSheetRow = Selectable<TargetSheetTable>;
 export type NewTargetSheetRow = Insertable<TargetSheetTable>;
 export type TargetSheetPatch = Updateable<TargetSheetTable>;
 
@@ -39,7 +38,6 @@ export interface TargetSheetEventTable {
   reason: string | null;
   at: string;
 }
-export type TargetSheetEventRow = Selectable<TargetSheetEventTable>;
 
 /** One conformity upload: every measured damper of it checked against the sheet. */
 export interface DynoCheckTable {
@@ -54,5 +52,4 @@ export interface DynoCheckTable {
   uploaded_by: string;
   created_at: string;
 }
-export type DynoCheckRow = Selectable<DynoCheckTable>;
 export type NewDynoCheckRow = Insertable<DynoCheckTable>;

@@ -7,11 +7,9 @@ import type { VehicleRow } from './vehicles.tables.ts';
 import { findSetup, findSlotHolder, listSetupSummariesOfVehicles, type SetupSummaryRow, updateSetupRow } from '../setups/index.ts';
 import { deleteVehicleRow, findVehicle, insertVehicle, listVehicles as listVehicleRows, updateVehicleRow } from './vehicles.repository.ts';
 import { recordAudit } from '../audit/index.ts';
-import { analyseSetup, parseStoredSetup } from '../setups/index.ts';
+import { analyseSetup, parseStoredSetup, placeInSlotInTx, toSummary } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { placeInSlotInTx, toSummary } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
-
 
 const noVehicle = () => fail('not_found', 'No such vehicle in this workspace.');
 

@@ -60,7 +60,7 @@ const crashMessages = (file: string) => {
 
 describe('backup and restore', () => {
   let backupFile = '';
-  let acked: Ack[] = [];
+  const acked: Ack[] = [];
   let session: Session;
   let setupId = '';
   let workspaceId = '';

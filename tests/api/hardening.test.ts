@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import pino from 'pino';
 import request from 'supertest';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { CreatedShareLink } from '../../shared/schemas/share-link.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';

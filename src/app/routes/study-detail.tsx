@@ -65,7 +65,6 @@ export function StudyDetailRoute() {
       run();
     }
     // run() reads the same detail; starting once per ?run=1 is the intent.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [params, detail, canSave, state.phase]);
 
   const view = useMemo(() => {
