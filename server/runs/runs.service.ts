@@ -1,9 +1,9 @@
 import { randomUUID } from 'node:crypto';
-import type { Metrics } from '../../shared/schemas/metrics.ts';
-import type { ModalResult } from '../../shared/schemas/modal.ts';
+import { Metrics } from '../../shared/schemas/metrics.ts';
+import { ModalResult } from '../../shared/schemas/modal.ts';
 import { Road } from '../../shared/schemas/road.ts';
-import type { RunList, RunListQuery, RunSummary, SavedRun, SaveRunInput, StoredTraces } from '../../shared/schemas/run-record.ts';
-import { RunRequest, type RunResult } from '../../shared/schemas/run.ts';
+import { type RunList, type RunListQuery, type RunSummary, type SavedRun, type SaveRunInput, StoredTraces } from '../../shared/schemas/run-record.ts';
+import { RunRequest, RunResult } from '../../shared/schemas/run.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import { effectiveSeed, roadLabel } from '../../shared/runs/road-label.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
@@ -12,6 +12,7 @@ import { fieldsOf } from '../core/errors.ts';
 import { deleteRunRow, findLibraryRoad, findRevisionForRun, findRunRow, insertRun, listRunRows, type RunSummaryRow, setupExists } from './runs.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
+import { readStored } from '../core/stored-json.ts';
 
 /** JSON with object keys sorted, so two equal documents compare equal whatever their key order. */
 function canonical(value: unknown): string {
@@ -21,9 +22,9 @@ function canonical(value: unknown): string {
 }
 
 function toSummary(row: RunSummaryRow): RunSummary {
-  const road = JSON.parse(row.road) as Road;
-  const metrics = JSON.parse(row.metrics) as Metrics;
-  const modal = JSON.parse(row.modal) as ModalResult;
+  const road = readStored(Road, row.road, `road of run ${row.id}`);
+  const metrics = readStored(Metrics, row.metrics, `metrics of run ${row.id}`);
+  const modal = readStored(ModalResult, row.modal, `modal figures of run ${row.id}`);
   return {
     id: row.id,
     name: row.name,
@@ -57,13 +58,13 @@ export async function listRuns(db: Db, ws: WorkspaceContext, query: RunListQuery
 export async function getRun(db: Db, ws: WorkspaceContext, runId: string): Promise<Outcome<SavedRun>> {
   const row = await findRunRow(db, ws.workspaceId, runId);
   if (!row) return fail('not_found', 'No such saved run.');
-  const info = JSON.parse(row.trace_info) as Omit<StoredTraces, 'data'>;
-  const rest = JSON.parse(row.result) as Omit<RunResult, 'metrics' | 'modal'>;
+  const result = RunResult.parse({ ...JSON.parse(row.result), metrics: JSON.parse(row.metrics), modal: JSON.parse(row.modal) });
+  const traces = StoredTraces.parse({ ...JSON.parse(row.trace_info), data: Buffer.from(row.traces).toString('base64') });
   return ok({
     ...toSummary(row),
-    request: RunRequest.parse(JSON.parse(row.request)),
-    result: { ...rest, metrics: JSON.parse(row.metrics) as Metrics, modal: JSON.parse(row.modal) as ModalResult },
-    traces: { ...info, data: Buffer.from(row.traces).toString('base64') },
+    request: readStored(RunRequest, row.request, `request of run ${row.id}`),
+    result,
+    traces,
     spectra: row.spectra && row.spectra_length ? { length: row.spectra_length, data: Buffer.from(row.spectra).toString('base64') } : null,
   });
 }

@@ -1,9 +1,9 @@
 import { randomUUID } from 'node:crypto';
-import type { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
-import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf } from '../studies/index.ts';
+import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf, StoredRoads } from '../studies/index.ts';
+import { readStored } from '../core/stored-json.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok } from '../core/outcome.ts';
 import { insertNewSetupInTx } from '../setups/index.ts';
@@ -69,7 +69,7 @@ export const studyShare: ShareableKind = {
       now,
     );
     if (!setup.ok) return setup;
-    const roads = JSON.parse(row.roads) as Road[];
+    const roads = readStored(StoredRoads, row.roads, 'study roads');
     const copied: StudyDefinition = {
       ...def,
       base: { setupId: setup.value.id, revisionId: setup.value.revision.id },

@@ -1,10 +1,11 @@
 import { randomUUID } from 'node:crypto';
+import { z } from 'zod';
 import type { FieldIssue } from '../../shared/errors.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import type { CreateStudyInput, OpenedStudyPoint, OpenPointAsSetupInput, StudiesResponse, StudyDetail, StudyResultsSummary, StudySummary } from '../../shared/schemas/study-record.ts';
+import { type CreateStudyInput, type OpenedStudyPoint, type OpenPointAsSetupInput, type StudiesResponse, type StudyDetail, StudyResultsSummary, type StudySummary } from '../../shared/schemas/study-record.ts';
 import { StudyDefinition } from '../../shared/schemas/study.ts';
-import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
+import { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { applyPoint } from '../../shared/study/apply-point.ts';
 import { studyRoadNames } from '../../shared/study/collect.ts';
 import { describePoint } from '../../shared/study/describe-point.ts';
@@ -23,33 +24,35 @@ import {
 } from './studies.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
+import { readStored } from '../core/stored-json.ts';
+
+/** A study keeps its own copy of each road it ran over. */
+export const StoredRoads = z.array(Road);
 import { addRevisionInTx } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 
 const noStudy = () => fail('not_found', 'No such study in this workspace.');
 
-/** A stored JSON column read back; a parse failure is a bug (only this service writes them). */
-const parsed = <T>(text: string): T => JSON.parse(text) as T;
 
 export function definitionOf(row: Pick<StudyViewRow, 'definition'>): StudyDefinition {
-  return StudyDefinition.parse(parsed(row.definition));
+  return readStored(StudyDefinition, row.definition, 'study definition');
 }
 
 export function toPointResult(r: StudyPointRow): StudyPointResult {
-  return {
+  return StudyPointResult.parse({
     index: r.idx,
-    values: parsed(r.params),
-    runs: parsed(r.metrics),
-    figures: parsed(r.figures),
-    objectives: parsed(r.objectives),
+    values: JSON.parse(r.params),
+    runs: JSON.parse(r.metrics),
+    figures: JSON.parse(r.figures),
+    objectives: JSON.parse(r.objectives),
     feasible: r.feasible === 1,
-    violations: parsed(r.reasons),
-  };
+    violations: JSON.parse(r.reasons),
+  });
 }
 
 export function toSummary(row: StudyViewRow, def: StudyDefinition = definitionOf(row)): StudySummary {
-  const roads = parsed<Road[]>(row.roads);
+  const roads = readStored(StoredRoads, row.roads, 'study roads');
   const baselineValues = row.baseline_point_index !== null ? pointValuesAt(def.axes, row.baseline_point_index) : undefined;
   return {
     id: row.id,
@@ -61,7 +64,7 @@ export function toSummary(row: StudyViewRow, def: StudyDefinition = definitionOf
     speeds: def.speeds,
     plannedPoints: row.planned_points,
     plannedRuns: row.planned_runs,
-    results: row.results ? parsed<StudyResultsSummary>(row.results) : null,
+    results: row.results ? readStored(StudyResultsSummary, row.results, 'study results') : null,
     baseline:
       row.baseline_point_index !== null && row.chosen_by && row.chosen_at
         ? {
@@ -84,8 +87,8 @@ export async function detailOf(db: Queryable, row: StudyViewRow): Promise<StudyD
   return {
     ...toSummary(row, def),
     definition: def,
-    baseSetup: Setup.parse(parsed(row.base_document)),
-    roads: parsed<unknown[]>(row.roads).map((r) => Road.parse(r)),
+    baseSetup: readStored(Setup, row.base_document, 'study base setup'),
+    roads: readStored(StoredRoads, row.roads, 'study roads'),
     points: points.filter((p) => p.index >= 0),
     basePoint: points.find((p) => p.index === -1) ?? null,
   };
@@ -201,7 +204,7 @@ export function openPointAsSetup(db: Db, ws: WorkspaceRef, actor: Actor, studyId
     const values = pointValuesAt(def.axes, index);
     if (!values) return fail('not_found', `This study has no point ${index}.`);
     if (!row.base_setup_id || row.base_setup_name === null) return fail('conflict', 'The setup this study started from no longer exists, so there is nothing to add a revision to.');
-    const applied = applyPoint(Setup.parse(parsed(row.base_document)), values);
+    const applied = applyPoint(readStored(Setup, row.base_document, 'study base setup'), values);
     if (!applied.ok) return fail('conflict', `This point does not make a valid setup: ${applied.message}`);
     const label = describePoint(def.axes, values);
     const message = input.message?.trim() || `From study "${row.name}": ${label} (on revision ${row.base_revision_number})`;

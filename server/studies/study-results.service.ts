@@ -1,7 +1,6 @@
-import type { Road } from '../../shared/schemas/road.ts';
 import type { FieldIssue } from '../../shared/errors.ts';
 import type { FinishStudyRunInput, SaveStudyPointsInput, SetStudyBaselineInput, StudyDetail, StudyResultsSummary } from '../../shared/schemas/study-record.ts';
-import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
+import { type StudyPointResult, StudyPointValues } from '../../shared/schemas/study-result.ts';
 import { jobsByPoint, judgeUploadedPoint, studyRoadNames } from '../../shared/study/collect.ts';
 import { describePoint } from '../../shared/study/describe-point.ts';
 import { expandStudy } from '../../shared/study/expand.ts';
@@ -11,7 +10,8 @@ import type { NewStudyPointRow } from './studies.tables.ts';
 import { findStudy, findStudyPoint, listStudyPoints, updateStudyRow, upsertStudyPoints } from './studies.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { definitionOf, mustDetail, toPointResult } from './studies.service.ts';
+import { definitionOf, mustDetail, StoredRoads, toPointResult } from './studies.service.ts';
+import { readStored } from '../core/stored-json.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 /**
@@ -22,7 +22,6 @@ import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 
 const noStudy = () => fail('not_found', 'No such study in this workspace.');
-const parsed = <T>(text: string): T => JSON.parse(text) as T;
 
 function pointRow(studyId: string, p: StudyPointResult): NewStudyPointRow {
   return {
@@ -53,7 +52,7 @@ export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, stu
   const def = definitionOf(row);
   const expanded = expandStudy(def);
   const expected = jobsByPoint(expanded);
-  const names = studyRoadNames(def, parsed<Road[]>(row.roads));
+  const names = studyRoadNames(def, readStored(StoredRoads, row.roads, 'study roads'));
   const issues: FieldIssue[] = [];
   const rows: NewStudyPointRow[] = [];
   const indices = new Set<number>();
@@ -143,7 +142,7 @@ export async function chooseStudyBaselineInTx(trx: Queryable, ws: WorkspaceRef, 
   const point = await findStudyPoint(trx, studyId, input.pointIndex);
   if (!point) return fail('bad_request', 'That point has no saved results.', [{ path: 'pointIndex', message: `Point ${input.pointIndex} is not among the saved points of this study.` }]);
   await updateStudyRow(trx, studyId, { baseline_point_index: input.pointIndex, chosen_by: actor.id, chosen_at: at, updated_at: at });
-  const label = describePoint(def.axes, parsed(point.params));
+  const label = describePoint(def.axes, readStored(StudyPointValues, point.params, 'study point values'));
   await audit('study.baseline_set', `${actor.name} chose ${label} as the baseline of study "${row.name}"${point.feasible ? '' : ' (it breaks a limit)'}.`);
   return ok(await mustDetail(trx, ws, studyId));
 }
