@@ -36,9 +36,14 @@ export function listDynoFiles(db: Queryable, workspaceId: string, setupId: strin
 }
 
 export function findDynoFile(db: Queryable, workspaceId: string, setupId: string, fileId: string) {
-  return fileQuery(db, workspaceId, setupId).select('d.content').where('d.id', '=', fileId).executeTakeFirst();
+  return fileQuery(db, workspaceId, setupId).select(['d.content', 'd.loop']).where('d.id', '=', fileId).executeTakeFirst();
 }
 
 export async function linkProducedRevision(db: Queryable, fileId: string, revisionId: string): Promise<void> {
   await db.updateTable('dyno_file').set({ produced_revision_id: revisionId }).where('id', '=', fileId).execute();
+}
+
+/** Keeps the loop read from a file kept before loops were stored (filled on first opening). */
+export async function storeDynoLoop(db: Queryable, fileId: string, loop: string): Promise<void> {
+  await db.updateTable('dyno_file').set({ loop }).where('id', '=', fileId).where('loop', 'is', null).execute();
 }

@@ -1,7 +1,6 @@
 import { randomUUID } from 'node:crypto';
-import { fitDamperCurves } from '../../shared/dyno/fit-curve.ts';
-import { type DynoReadOutcome, summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
-import { DynoParseOptions, type DynoDirection } from '../../shared/schemas/dyno.ts';
+import type { DynoReadOutcome } from '../../shared/dyno-upload/summarise-dyno.ts';
+import { type DynoDirection, DynoLoop, DynoParseOptions } from '../../shared/schemas/dyno.ts';
 import {
   type ApplyDynoFitInput,
   type ApplyDynoFitResult,
@@ -14,11 +13,13 @@ import {
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../core/errors.ts';
-import { type DynoFileListRow, findDynoFile, insertDynoFile, linkProducedRevision, listDynoFiles } from './dyno-files.repository.ts';
+import { type DynoFileListRow, findDynoFile, insertDynoFile, linkProducedRevision, listDynoFiles, storeDynoLoop } from './dyno-files.repository.ts';
 import { findRevision, findSetup, latestRevisionNumber, parseStoredSetup, addRevisionInTx } from '../setups/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
+import { readStored } from '../core/stored-json.ts';
+import { runHeavy } from '../jobs/heavy-pool.ts';
 
 const noSetup = () => fail('not_found', 'No such setup in this workspace.');
 const noFile = () => fail('not_found', 'No such dyno file for this setup.');
@@ -32,8 +33,8 @@ function toItem(r: DynoFileListRow): DynoFileItem {
     uploadedBy: { id: r.uploaded_by, name: r.uploaded_by_name },
     createdAt: r.created_at,
     producedRevision: r.produced_revision_id && r.produced_revision_number !== null ? { id: r.produced_revision_id, number: r.produced_revision_number } : null,
-    options: DynoParseOptions.parse(JSON.parse(r.options)),
-    summary: DynoFileSummary.parse(JSON.parse(r.summary)),
+    options: readStored(DynoParseOptions, r.options, `options of dyno file ${r.id}`),
+    summary: readStored(DynoFileSummary, r.summary, `summary of dyno file ${r.id}`),
   };
 }
 
@@ -42,13 +43,21 @@ export async function listSetupDynoFiles(db: Db, ws: WorkspaceRef, setupId: stri
   return ok({ files: (await listDynoFiles(db, ws.workspaceId, setupId)).map(toItem) });
 }
 
-/** One file with the loop of a raw record, read again from the kept text with the kept options. */
+/**
+ * One file with the loop of a raw record. The loop is kept when the file is read at upload; a file
+ * kept before that is read once more in a worker thread, and its loop kept from then on.
+ */
 export async function getDynoFile(db: Db, ws: WorkspaceRef, setupId: string, fileId: string): Promise<Outcome<DynoFileDetail>> {
   const row = await findDynoFile(db, ws.workspaceId, setupId, fileId);
   if (!row) return (await findSetup(db, ws.workspaceId, setupId)) ? noFile() : noSetup();
   const item = toItem(row);
-  const read = summariseDyno(row.content, item.options);
+  if (item.summary.kind === 'peaks') return ok({ ...item, loop: null });
+  if (row.loop !== null) return ok({ ...item, loop: readStored(DynoLoop, row.loop, `loop of dyno file ${fileId}`) });
+  const done = await runHeavy('dynoRead', { text: row.content, options: item.options });
+  if (!done.ok) return done;
+  const read = done.value;
   if (!read.ok) throw new Error(`stored dyno file ${fileId} no longer reads: ${read.errors[0]?.message}`);
+  if (read.loop) await storeDynoLoop(db, fileId, JSON.stringify(read.loop));
   return ok({ ...item, loop: read.loop });
 }
 
@@ -68,7 +77,10 @@ export async function uploadDynoFile(
   const setup = await findSetup(db, ws.workspaceId, setupId);
   if (!setup) return noSetup();
   const given = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined)) as Partial<DynoParseOptions>;
-  const read = summariseDyno(file.text, given);
+  // A 2 MB record takes a good part of a second to read: a worker thread does it.
+  const done = await runHeavy('dynoRead', { text: file.text, options: given });
+  if (!done.ok) return done;
+  const read = done.value;
   if (!read.ok) {
     const first = read.errors[0];
     return fail(
@@ -101,6 +113,7 @@ export async function insertDynoRecord(
     content: file.text,
     options: JSON.stringify(read.options),
     summary: JSON.stringify(read.summary),
+    loop: read.loop ? JSON.stringify(read.loop) : null,
     uploaded_by: actor.id,
     created_at: now.toISOString(),
   });
@@ -128,13 +141,17 @@ const roundTable = (table: [number, number][]) => table.map(([v, f]) => [v, Math
  * A fit that fails, or a curve the setup schema refuses, saves nothing.
  */
 export async function applyDynoFit(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, fileId: string, input: ApplyDynoFitInput, now: Date): Promise<Outcome<ApplyDynoFitResult>> {
+  const before = await findDynoFile(db, ws.workspaceId, setupId, fileId);
+  if (!before) return (await findSetup(db, ws.workspaceId, setupId)) ? noFile() : noSetup();
+  // The fit runs in a worker thread, outside the transaction; a file's peaks never change after upload.
+  const fitted = await runHeavy('dynoFit', { peaks: toItem(before).summary.peaks, knots: input.knots, weighting: input.weighting });
+  if (!fitted.ok) return fitted;
+  const fit = fitted.value;
   return db.transaction().execute(async (trx) => {
     const setup = await findSetup(trx, ws.workspaceId, setupId);
     if (!setup) return noSetup();
     const row = await findDynoFile(trx, ws.workspaceId, setupId, fileId);
     if (!row) return noFile();
-    const item = toItem(row);
-    const fit = fitDamperCurves(item.summary.peaks, input.knots, { weighting: input.weighting });
     const failed = input.directions.flatMap((d) => {
       const f = fit[d];
       return f.ok ? [] : [{ path: `knots.${d}`, message: `${d}: ${f.message}` }];

@@ -14,6 +14,8 @@ export interface DynoFileTable {
   options: string;
   /** JSON of `DynoFileSummary` (shared/schemas/dyno-file.ts). */
   summary: string;
+  /** JSON of the thinned `DynoLoop` of a raw record (0011); null for peak tables, or until first opened. */
+  loop: string | null;
   uploaded_by: string;
   created_at: string;
 }

@@ -43,7 +43,7 @@ export async function closeHeavyPool(): Promise<void> {
   await p?.destroy();
 }
 
-type TaskName = 'measuredUpload' | 'roadFigures';
+type TaskName = keyof typeof Tasks;
 type TaskIn<K extends TaskName> = Parameters<(typeof Tasks)[K]>[0];
 type TaskOut<K extends TaskName> = ReturnType<(typeof Tasks)[K]>;
 

@@ -13,6 +13,7 @@ import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { definitionOf, mustDetail, StoredRoads, toPointResult } from './studies.service.ts';
 import { readStored } from '../core/stored-json.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
+import { runHeavy } from '../jobs/heavy-pool.ts';
 
 /**
  * A study's results: the points a browser run saves (checked and judged again here), the close
@@ -74,16 +75,42 @@ export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, stu
  * every saved point. The study is complete when every planned point (and the base setup's runs)
  * is saved, whatever the browser says; asking for complete with points missing is refused.
  */
-export function finishStudyRun(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
-  return db.transaction().execute((trx) => closeStudyRunInTx(trx, ws, actor, studyId, input, now));
+export async function finishStudyRun(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
+  const row = await findStudy(db, ws.workspaceId, studyId);
+  if (!row) return noStudy();
+  // Ranking thousands of points takes a while: a worker thread does it, outside the transaction.
+  const points = (await listStudyPoints(db, studyId)).map(toPointResult).filter((p) => p.index >= 0);
+  const done = await runHeavy('studyRunFigures', { def: definitionOf(row), points });
+  if (!done.ok) return done;
+  return db.transaction().execute((trx) => closeStudyRunInTx(trx, ws, actor, studyId, input, now, { pointCount: points.length, ...done.value }));
 }
 
-export async function closeStudyRunInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, studyId: string, input: FinishStudyRunInput, now: Date): Promise<Outcome<StudyDetail>> {
+/** Ranking figures worked out before the transaction, for the point count they were made from. */
+interface RankedFigures {
+  pointCount: number;
+  compromise: StudyResultsSummary['compromise'];
+  tradeOff: StudyResultsSummary['tradeOff'];
+}
+
+/**
+ * Closes a run inside the caller's transaction. Without `ranked` (the demo seed) the ranking is
+ * worked out here; with it, a slice saved meanwhile (a different point count) is refused.
+ */
+export async function closeStudyRunInTx(
+  trx: Queryable,
+  ws: WorkspaceRef,
+  actor: Actor,
+  studyId: string,
+  input: FinishStudyRunInput,
+  now: Date,
+  ranked?: RankedFigures,
+): Promise<Outcome<StudyDetail>> {
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
   const all = (await listStudyPoints(trx, studyId)).map(toPointResult);
   const points = all.filter((p) => p.index >= 0);
+  if (ranked && ranked.pointCount !== points.length) return fail('conflict', 'Points were saved while the run was being finished; finish it again.');
   const base = all.find((p) => p.index === -1);
   const needsBase = !def.axes.some((a) => a.parameter === 'speed');
   const complete = points.length === row.planned_points && (!needsBase || base !== undefined);
@@ -93,7 +120,7 @@ export async function closeStudyRunInTx(trx: Queryable, ws: WorkspaceRef, actor:
   }
   if (points.length === 0) return fail('conflict', 'No point of this study has been saved yet; save points before finishing a run.');
   const status = complete ? 'complete' : 'partial';
-  const compromise = studyBestCompromise(def, points);
+  const compromise = ranked?.compromise ?? studyBestCompromise(def, points);
   const winner = compromise.ok ? points[compromise.winner] : undefined;
   const summary: StudyResultsSummary = {
     plannedPoints: row.planned_points,
@@ -106,7 +133,7 @@ export async function closeStudyRunInTx(trx: Queryable, ws: WorkspaceRef, actor:
     ranBy: { id: actor.id, name: actor.name },
     ranAt: now.toISOString(),
     compromise,
-    tradeOff: studyTradeOff(def, points),
+    tradeOff: ranked?.tradeOff ?? studyTradeOff(def, points),
     best: winner ? { pointIndex: winner.index, label: describePoint(def.axes, winner.values) } : null,
   };
   await updateStudyRow(trx, studyId, { status, results: JSON.stringify(summary), updated_at: now.toISOString() });

@@ -1,7 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
 import { DynoParseOptions } from '../../shared/schemas/dyno.ts';
-import type { FieldIssue } from '../../shared/errors.ts';
 import {
   type ConformityChecksResponse,
   type ConformityRecordDetail,
@@ -19,14 +17,9 @@ import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { toSheet } from './target-sheets.service.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
+import { runHeavy } from '../jobs/heavy-pool.ts';
+import type { UploadedText } from './read-check-files.ts';
 
-
-/** One uploaded file, as the upload middleware hands it over. */
-export interface UploadedText {
-  text: string;
-  filename: string;
-  bytes: number;
-}
 
 /** What `dyno_check.result` holds. */
 const StoredResult = z.object({
@@ -54,12 +47,6 @@ function toRecord(r: DynoCheckViewRow): ConformityRecordDetail {
   };
 }
 
-/** A file name without folders or its extension: the default label of the damper it measured. */
-export function labelFromFileName(name: string): string {
-  const base = name.split(/[\\/]/).pop() ?? name;
-  return (base.replace(/\.[A-Za-z0-9]{1,5}$/, '').trim() || base).slice(0, 120);
-}
-
 export async function listSheetChecks(db: Db, ws: WorkspaceRef, sheetId: string): Promise<Outcome<ConformityChecksResponse>> {
   if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
   return ok({ checks: (await listDynoChecks(db, sheetId)).map(toRecord) });
@@ -71,35 +58,6 @@ export async function sheetCheckCsv(db: Db, ws: WorkspaceRef, sheetId: string, c
   const row = await findDynoCheck(db, sheetId, checkId);
   if (!row) return fail('not_found', 'No such dyno check for this sheet.');
   return ok({ fileName: `${sheet.number}-check-${row.created_at.slice(0, 10)}.csv`, csv: conformityToCsv(toRecord(row).report) });
-}
-
-/** The files of an upload read as measured dampers, or the reasons they cannot be. */
-export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): Outcome<{ measured: MeasuredDamper[]; options: Partial<DynoParseOptions> }> {
-  if (files.length === 0) return fail('bad_request', 'Choose at least one dyno file.', [{ path: 'file', message: 'Required' }]);
-  const { label: labels, ...given } = fields;
-  const options = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)) as Partial<DynoParseOptions>;
-  const problems: { file: string; line?: number; message: string }[] = [];
-  const measured: MeasuredDamper[] = [];
-  files.forEach((file, i) => {
-    const read = summariseDyno(file.text, options);
-    if (!read.ok) {
-      for (const e of read.errors) problems.push({ file: file.filename, line: e.line, message: e.message });
-      return;
-    }
-    const warnings = [...read.summary.warnings.map((w) => w.message), ...(read.summary.series?.warnings ?? [])];
-    measured.push({ label: labels[i]?.trim() || labelFromFileName(file.filename), fileName: file.filename, peaks: read.summary.peaks, warnings });
-  });
-  if (problems.length) {
-    const where = (p: (typeof problems)[number]) => `${p.file}${p.line !== undefined ? `, line ${p.line}` : ''}`;
-    const fieldIssues: FieldIssue[] = problems.map((p) => ({ path: p.line !== undefined ? `line ${p.line}` : 'file', message: `${where(p)}: ${p.message}` }));
-    return fail('bad_request', `Nothing was saved: ${where(problems[0])}: ${problems[0].message}`, fieldIssues);
-  }
-  const seen = new Set<string>();
-  for (const m of measured) {
-    if (seen.has(m.label)) return fail('bad_request', `Two dampers are labelled "${m.label}"; give each its own label. Nothing was saved.`, [{ path: 'label', message: `"${m.label}" twice` }]);
-    seen.add(m.label);
-  }
-  return ok({ measured, options });
 }
 
 /**
@@ -117,7 +75,10 @@ export async function runSheetCheck(
   now: Date,
 ): Promise<Outcome<ConformityRecordDetail>> {
   if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
-  const read = readCheckFiles(files, fields);
+  // Reading a dozen 2 MB records takes seconds: a worker thread does it.
+  const done = await runHeavy('sheetCheckFiles', { files, fields });
+  if (!done.ok) return done;
+  const read = done.value;
   if (!read.ok) return read;
   return db.transaction().execute((trx) => storeSheetCheckInTx(trx, ws, actor, sheetId, files, read.value, now));
 }

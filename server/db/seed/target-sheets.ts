@@ -1,6 +1,7 @@
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import type { TargetPoint } from '../../../shared/schemas/target-sheet.ts';
-import { readCheckFiles, storeSheetCheckInTx } from '../../target-sheets/checks.service.ts';
+import { storeSheetCheckInTx } from '../../target-sheets/checks.service.ts';
+import { readCheckFiles } from '../../target-sheets/read-check-files.ts';
 import { createTargetSheetInTx, moveTargetSheetInTx, saveTargetSheetInTx } from '../../target-sheets/target-sheets.service.ts';
 import type { Queryable } from '../database.ts';
 import { DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
