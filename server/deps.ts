@@ -1,5 +1,6 @@
 import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
+import { DEFAULT_HEAVY_JOB_LIMITS, type HeavyJobLimits } from './limits/index.ts';
 import type { Mailer } from './mail/index.ts';
 import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/index.ts';
 
@@ -26,6 +27,8 @@ export interface AppDeps {
   logger: Logger;
   /** Requests per 15 minutes per address on the sensitive public routes; 0 disables. */
   rateLimit: number;
+  /** Large jobs per person: running at once, and started per ten minutes (server/limits/heavy-jobs.middleware.ts); 0 lifts either. */
+  heavyJobs: HeavyJobLimits;
   /** Uploaded bytes a workspace may keep (server/uploads/upload-quota.service.ts); over it, uploads get 413. */
   uploadQuotaBytes: number;
   /** Express `trust proxy` setting. */
@@ -42,6 +45,7 @@ export function resolveDeps(options: AppOptions): AppDeps {
     clock: () => new Date(),
     logger: pino({ level: 'silent' }),
     rateLimit: 100,
+    heavyJobs: DEFAULT_HEAVY_JOB_LIMITS,
     uploadQuotaBytes: WORKSPACE_UPLOAD_QUOTA_BYTES,
     trustProxy: false,
     client: { kind: 'none' },

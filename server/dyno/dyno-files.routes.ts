@@ -21,6 +21,7 @@ export const dynoFileRoutes: RouteModule = (deps) => [
     method: 'post',
     path: base,
     access: 'engineer',
+    heavy: true,
     before: [singleTextUpload(DYNO_MAX_BYTES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = DynoUploadFields.parse(req.body ?? {});
@@ -42,6 +43,7 @@ export const dynoFileRoutes: RouteModule = (deps) => [
     method: 'post',
     path: `${base}/:fileId/apply`,
     access: 'engineer',
+    heavy: true,
     handler: async (req, res) => {
       const input = ApplyDynoFitInput.parse(req.body);
       const body: ApplyDynoFitResult = unwrap(

@@ -5,6 +5,7 @@ import { ensureCsrfCookie } from '../auth/csrf.ts';
 import { requireUser } from '../auth/require-user.ts';
 import type { AppDeps } from '../deps.ts';
 import { sendError } from '../core/errors.ts';
+import { heavyJobLimit } from '../limits/index.ts';
 import { requireMember, requireRoleAnywhere } from '../workspaces/index.ts';
 
 /**
@@ -27,6 +28,8 @@ export interface RouteDef {
   access: Access;
   /** Counts requests per address (sign-in, sign-up, reset, invitation accept). */
   rateLimited?: boolean;
+  /** Starts heavy work (worker pool): per-person limits apply before the body is read. */
+  heavy?: boolean;
   /** Sets the readable CSRF cookie before the access check (GET /api/config, /api/auth/me). */
   issuesCsrf?: boolean;
   /** Middleware that runs after the access check, before the handler (e.g. multer for an upload). */
@@ -62,6 +65,7 @@ function limiter(deps: AppDeps): RequestHandler | null {
 export function buildApiRouter(routes: RouteDef[], deps: AppDeps): Router {
   const router = Router();
   const seen = new Set<string>();
+  const heavyLimit = heavyJobLimit(deps.db, deps.clock, deps.heavyJobs);
   for (const route of routes) {
     const key = routeKey(route);
     if (seen.has(key)) throw new Error(`route ${key} is declared twice`);
@@ -74,7 +78,7 @@ export function buildApiRouter(routes: RouteDef[], deps: AppDeps): Router {
     const limit = route.rateLimited ? limiter(deps) : null;
     if (limit) chain.push(limit);
     if (route.issuesCsrf) chain.push((req, res, next) => (ensureCsrfCookie(req, res, deps.secret), next()));
-    chain.push(...accessCheck(route.access, deps), ...(route.before ?? []), route.handler);
+    chain.push(...accessCheck(route.access, deps), ...(route.heavy ? [heavyLimit] : []), ...(route.before ?? []), route.handler);
     router[route.method](route.path, ...chain);
   }
   return router;

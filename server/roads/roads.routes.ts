@@ -21,6 +21,7 @@ export const roadRoutes: RouteModule = (deps) => [
     method: 'post',
     path: base,
     access: 'engineer',
+    heavy: true,
     handler: async (req, res) => {
       const input = CreateRoadInput.parse(req.body);
       const road: RoadDetail = unwrap(await createRoad(deps.db, workspaceOf(req), userOf(req), input, deps.clock()));
@@ -31,6 +32,7 @@ export const roadRoutes: RouteModule = (deps) => [
     method: 'post',
     path: `${base}/measured`,
     access: 'engineer',
+    heavy: true,
     before: [singleTextUpload(MEASURED_MAX_BYTES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = MeasuredUploadFields.parse(req.body ?? {});
@@ -52,6 +54,7 @@ export const roadRoutes: RouteModule = (deps) => [
     method: 'put',
     path: `${base}/:roadId`,
     access: 'engineer',
+    heavy: true,
     handler: async (req, res) => {
       const input = UpdateRoadInput.parse(req.body);
       const road: RoadDetail = unwrap(await updateRoad(deps.db, workspaceOf(req), userOf(req), pathParam(req, 'roadId'), input, deps.clock()));

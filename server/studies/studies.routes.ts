@@ -62,6 +62,7 @@ export const studyRoutes: RouteModule = (deps) => [
     method: 'put',
     path: `${base}/:studyId/results`,
     access: 'engineer',
+    heavy: true,
     handler: async (req, res) => {
       const input = FinishStudyRunInput.parse(req.body);
       res.json(unwrap(await finishStudyRun(deps.db, workspaceOf(req), userOf(req), pathParam(req, 'studyId'), input, deps.clock())));

@@ -130,6 +130,7 @@ export const targetSheetRoutes: RouteModule = (deps) => [
     method: 'post',
     path: `${one}/checks`,
     access: 'engineer',
+    heavy: true,
     before: [textUploads(DYNO_MAX_BYTES, DYNO_CHECK_MAX_FILES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = DynoCheckFields.parse(req.body ?? {});
