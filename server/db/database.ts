@@ -5,7 +5,7 @@ import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'ky
 import { LRUCache } from 'lru-cache';
 import type { AuditLogTable } from '../audit/audit.tables.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
-import type { RoadTable } from '../roads/roads.tables.ts';
+import type { RoadTable, RoadVersionTable } from '../roads/roads.tables.ts';
 import type { DynoFileTable } from '../dyno/dyno-files.tables.ts';
 import type { RunTable } from '../runs/runs.tables.ts';
 import type { SetupRevisionTable, SetupTable } from '../setups/setups.tables.ts';
@@ -37,6 +37,7 @@ export interface Database {
   vehicle: VehicleTable;
   share_link: ShareLinkTable;
   road: RoadTable;
+  road_version: RoadVersionTable;
   dyno_file: DynoFileTable;
   run: RunTable;
   study: StudyTable;

@@ -12,7 +12,7 @@ import {
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import { deleteRoadRow, findRoad, insertRoad, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
+import { deleteRoadRow, findRoad, insertRoad, isRoadVersionReferenced, keepRoadVersion, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
@@ -144,7 +144,13 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
       summary = JSON.stringify(newFigures.value);
     }
     const at = now.toISOString();
+    // A study that ran this version keeps running it: the old definition is kept before it is replaced.
+    const version = input.definition ? row.version + 1 : row.version;
+    if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) {
+      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, created_at: at });
+    }
     await updateRoadRow(trx, ws.workspaceId, roadId, {
+      version,
       name,
       definition: JSON.stringify({ ...definition, name }),
       summary,
@@ -170,11 +176,14 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
   });
 }
 
-/** Removes a road from the library; saved runs keep the road they drove (their own JSON copy). */
+/** Removes a road from the library; saved runs keep their own copy, studies the version they refer to. */
 export async function deleteRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
   return db.transaction().execute(async (trx) => {
     const row = await findRoad(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
+    if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) {
+      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, created_at: now.toISOString() });
+    }
     await deleteRoadRow(trx, ws.workspaceId, roadId);
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,

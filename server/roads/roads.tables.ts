@@ -1,4 +1,4 @@
-import type { Insertable } from 'kysely';
+import type { Generated, Insertable } from 'kysely';
 
 export interface RoadTable {
   id: string;
@@ -7,6 +7,8 @@ export interface RoadTable {
   /** JSON of `Road` (shared/schemas/road.ts). */
   definition: string;
   source: 'defined' | 'measured';
+  /** Rises by one each time the definition changes (0012); studies refer to id + version. */
+  version: Generated<number>;
   /** JSON of `RoadFigures` (shared/schemas/road-record.ts). */
   summary: string;
   created_by: string;
@@ -15,3 +17,13 @@ export interface RoadTable {
   updated_at: string;
 }
 export type NewRoadRow = Insertable<RoadTable>;
+
+/** A replaced or removed road definition that a study still refers to (0012). */
+export interface RoadVersionTable {
+  road_id: string;
+  version: number;
+  workspace_id: string;
+  /** JSON of `Road`, as it was. */
+  definition: string;
+  created_at: string;
+}

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
-import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf, StoredRoads } from '../studies/index.ts';
+import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf, studyRoadsOf } from '../studies/index.ts';
 import { readStored } from '../core/stored-json.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok } from '../core/outcome.ts';
@@ -59,7 +59,7 @@ export const studyShare: ShareableKind = {
     const row = await findStudy(trx, link.workspace_id, link.object_id);
     if (!row) return gone();
     const def = definitionOf(row);
-    const document = Setup.parse(JSON.parse(row.base_document));
+    const document = readStored(Setup, row.base_document, 'study base setup');
     const setup = await insertNewSetupInTx(
       trx,
       { workspaceId },
@@ -69,7 +69,7 @@ export const studyShare: ShareableKind = {
       now,
     );
     if (!setup.ok) return setup;
-    const roads = readStored(StoredRoads, row.roads, 'study roads');
+    const roads = await studyRoadsOf(trx, row, def);
     const copied: StudyDefinition = {
       ...def,
       base: { setupId: setup.value.id, revisionId: setup.value.revision.id },
@@ -86,7 +86,8 @@ export const studyShare: ShareableKind = {
       base_revision_id: setup.value.revision.id,
       base_revision_number: 1,
       base_document: row.base_document,
-      roads: row.roads,
+      roads: '[]',
+      road_refs: JSON.stringify(copied.roads.map(() => null)),
       planned_points: row.planned_points,
       planned_runs: row.planned_runs,
       status: row.status,

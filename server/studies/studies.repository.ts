@@ -20,10 +20,42 @@ function studyQuery(db: Queryable, workspaceId: string) {
 
 export type StudyViewRow = NonNullable<Awaited<ReturnType<typeof findStudy>>>;
 
-/** Most recently changed first. */
+/**
+ * Most recently changed first. The list needs neither the base document nor the road copies of
+ * older studies (either can be megabytes), so it does not read them.
+ */
 export function listStudies(db: Queryable, workspaceId: string) {
-  return studyQuery(db, workspaceId).orderBy('study.updated_at', 'desc').orderBy('study.id').execute();
+  return db
+    .selectFrom('study')
+    .innerJoin('user as cu', 'cu.id', 'study.created_by')
+    .leftJoin('user as bu', 'bu.id', 'study.chosen_by')
+    .leftJoin('setup as s', 's.id', 'study.base_setup_id')
+    .select([
+      'study.id',
+      'study.name',
+      'study.status',
+      'study.definition',
+      'study.base_setup_id',
+      'study.base_revision_number',
+      'study.planned_points',
+      'study.planned_runs',
+      'study.results',
+      'study.baseline_point_index',
+      'study.chosen_by',
+      'study.chosen_at',
+      'study.created_by',
+      'study.created_at',
+      'study.updated_at',
+      'cu.name as created_by_name',
+      'bu.name as chosen_by_name',
+      's.name as base_setup_name',
+    ])
+    .where('study.workspace_id', '=', workspaceId)
+    .orderBy('study.updated_at', 'desc')
+    .orderBy('study.id')
+    .execute();
 }
+export type StudyListRow = Awaited<ReturnType<typeof listStudies>>[number];
 
 export function findStudy(db: Queryable, workspaceId: string, studyId: string) {
   return studyQuery(db, workspaceId).where('study.id', '=', studyId).executeTakeFirst();
@@ -84,8 +116,8 @@ export function findBaseRevision(db: Queryable, workspaceId: string, setupId: st
     .executeTakeFirst();
 }
 
-/** Library roads of the workspace among `ids`. */
+/** Library roads of the workspace among `ids`: names and current versions, never the (possibly large) definitions. */
 export function findLibraryRoads(db: Queryable, workspaceId: string, ids: string[]) {
   if (ids.length === 0) return Promise.resolve([]);
-  return db.selectFrom('road').select(['id', 'name', 'definition']).where('workspace_id', '=', workspaceId).where('id', 'in', ids).execute();
+  return db.selectFrom('road').select(['id', 'name', 'version']).where('workspace_id', '=', workspaceId).where('id', 'in', ids).execute();
 }

@@ -20,14 +20,44 @@ import {
   insertStudy,
   listStudies as listStudyRows,
   listStudyPoints,
+  type StudyListRow,
   type StudyViewRow,
 } from './studies.repository.ts';
+import { findRoadDefinitionTexts } from '../roads/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { readStored } from '../core/stored-json.ts';
 
-/** A study keeps its own copy of each road it ran over. */
-export const StoredRoads = z.array(Road);
+/** Studies saved before road versions keep their own copy of each road (`study.roads`). */
+const StoredRoads = z.array(Road);
+/** Per definition road: the library road and version it refers to, or null when typed in. */
+const StudyRoadRefs = z.array(z.object({ roadId: z.string(), version: z.number().int().positive() }).nullable());
+type StudyRoadRefs = z.infer<typeof StudyRoadRefs>;
+
+/** The roads typed into the definition, by position (library roads are named in their entries). */
+export const typedInRoads = (def: StudyDefinition): (Road | undefined)[] => def.roads.map((entry) => (entry.source === 'inline' ? entry.road : undefined));
+
+/**
+ * The roads a study runs over, in the definition's order: typed-in roads from the definition,
+ * library roads at the version the study refers to. A library definition was checked against the
+ * road schema when it was saved and can be megabytes, so it is read as JSON once per version,
+ * not checked again on every read.
+ */
+export async function studyRoadsOf(db: Queryable, row: Pick<StudyViewRow, 'id' | 'workspace_id' | 'roads' | 'road_refs'>, def: StudyDefinition): Promise<Road[]> {
+  if (row.road_refs === null) return readStored(StoredRoads, row.roads, 'study roads');
+  const refs = readStored(StudyRoadRefs, row.road_refs, 'study road refs');
+  const texts = await findRoadDefinitionTexts(db, row.workspace_id, refs.filter((r) => r !== null));
+  const parsed = new Map<string, Road>();
+  return def.roads.map((entry, i) => {
+    if (entry.source === 'inline') return entry.road;
+    const ref = refs[i];
+    const key = ref && `${ref.roadId}@${ref.version}`;
+    const text = key ? texts.get(key) : undefined;
+    if (!key || text === undefined) throw new Error(`study ${row.id} refers to road ${key ?? i} which is not kept`);
+    if (!parsed.has(key)) parsed.set(key, JSON.parse(text) as Road);
+    return parsed.get(key) as Road;
+  });
+}
 import { addRevisionInTx } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
@@ -51,8 +81,7 @@ export function toPointResult(r: StudyPointRow): StudyPointResult {
   });
 }
 
-export function toSummary(row: StudyViewRow, def: StudyDefinition = definitionOf(row)): StudySummary {
-  const roads = readStored(StoredRoads, row.roads, 'study roads');
+export function toSummary(row: StudyListRow, def: StudyDefinition = definitionOf(row)): StudySummary {
   const baselineValues = row.baseline_point_index !== null ? pointValuesAt(def.axes, row.baseline_point_index) : undefined;
   return {
     id: row.id,
@@ -60,7 +89,7 @@ export function toSummary(row: StudyViewRow, def: StudyDefinition = definitionOf
     status: row.status,
     base: { setupId: row.base_setup_id, setupName: row.base_setup_name, revisionNumber: row.base_revision_number },
     axes: def.axes,
-    roadNames: studyRoadNames(def, roads),
+    roadNames: studyRoadNames(def, typedInRoads(def)),
     speeds: def.speeds,
     plannedPoints: row.planned_points,
     plannedRuns: row.planned_runs,
@@ -88,7 +117,7 @@ export async function detailOf(db: Queryable, row: StudyViewRow): Promise<StudyD
     ...toSummary(row, def),
     definition: def,
     baseSetup: readStored(Setup, row.base_document, 'study base setup'),
-    roads: readStored(StoredRoads, row.roads, 'study roads'),
+    roads: await studyRoadsOf(db, row, def),
     points: points.filter((p) => p.index >= 0),
     basePoint: points.find((p) => p.index === -1) ?? null,
   };
@@ -111,8 +140,8 @@ export async function getStudy(db: Db, ws: WorkspaceRef, studyId: string): Promi
 
 /**
  * Resolves the definition against the workspace: the base revision must be in it, and each
- * library road too. Library roads are copied into the study (and named), so the study runs the
- * same after the library changes.
+ * library road too. Library roads are named and referred to at their current version (the study
+ * runs that version after the library changes); no copy is stored.
  */
 async function resolve(db: Queryable, ws: WorkspaceRef, def: StudyDefinition) {
   const issues: FieldIssue[] = [];
@@ -120,22 +149,23 @@ async function resolve(db: Queryable, ws: WorkspaceRef, def: StudyDefinition) {
   if (!base) issues.push({ path: 'definition.base.revisionId', message: 'No such revision of that setup in this workspace.' });
   const ids = def.roads.flatMap((r) => (r.source === 'library' ? [r.roadId] : []));
   const found = new Map((await findLibraryRoads(db, ws.workspaceId, ids)).map((r) => [r.id, r]));
-  const roads: Road[] = [];
+  const refs: StudyRoadRefs = [];
   const entries = def.roads.map((entry, i) => {
     if (entry.source === 'inline') {
-      roads.push(entry.road);
+      refs.push(null);
       return entry;
     }
     const row = found.get(entry.roadId);
     if (!row) {
       issues.push({ path: `definition.roads.${i}.roadId`, message: 'No such road in this workspace’s library.' });
+      refs.push(null);
       return entry;
     }
-    roads.push(Road.parse(JSON.parse(row.definition)));
+    refs.push({ roadId: row.id, version: row.version });
     return { ...entry, name: entry.name ?? row.name };
   });
   if (issues.length || !base) return { ok: false as const, issues };
-  return { ok: true as const, base, roads, def: { ...def, roads: entries } };
+  return { ok: true as const, base, refs, def: { ...def, roads: entries } };
 }
 
 export function createStudy(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateStudyInput, now: Date): Promise<Outcome<StudyDetail>> {
@@ -158,7 +188,8 @@ export async function insertNewStudyInTx(trx: Queryable, ws: WorkspaceRef, actor
     base_revision_id: r.base.id,
     base_revision_number: r.base.number,
     base_document: r.base.document,
-    roads: JSON.stringify(r.roads),
+    roads: '[]',
+    road_refs: JSON.stringify(r.refs),
     planned_points: planned.points,
     planned_runs: planned.runs,
     status: 'draft',

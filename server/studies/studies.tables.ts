@@ -15,8 +15,10 @@ export interface StudyTable {
   base_revision_number: number;
   /** JSON of the base revision's `Setup` document. */
   base_document: string;
-  /** JSON array of the resolved `Road`s, in the definition's order. */
+  /** Studies saved before 0012: JSON array of copies of their `Road`s, in the definition's order; later ones: `[]`. */
   roads: string;
+  /** JSON `StudyRoadRefs` (0012): per definition road, `{ roadId, version }` of a library road, or null when typed in; null on older studies. */
+  road_refs: string | null;
   planned_points: number;
   planned_runs: number;
   status: StudyStatusColumn;

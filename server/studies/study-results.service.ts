@@ -10,7 +10,7 @@ import type { NewStudyPointRow } from './studies.tables.ts';
 import { findStudy, findStudyPoint, listStudyPoints, updateStudyRow, upsertStudyPoints } from './studies.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
-import { definitionOf, mustDetail, StoredRoads, toPointResult } from './studies.service.ts';
+import { definitionOf, mustDetail, toPointResult, typedInRoads } from './studies.service.ts';
 import { readStored } from '../core/stored-json.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
@@ -53,7 +53,7 @@ export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, stu
   const def = definitionOf(row);
   const expanded = expandStudy(def);
   const expected = jobsByPoint(expanded);
-  const names = studyRoadNames(def, readStored(StoredRoads, row.roads, 'study roads'));
+  const names = studyRoadNames(def, typedInRoads(def));
   const issues: FieldIssue[] = [];
   const rows: NewStudyPointRow[] = [];
   const indices = new Set<number>();
