@@ -2,7 +2,7 @@ import { CreateRoadInput, MeasuredUploadFields, type RoadDetail, type RoadsRespo
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../core/errors.ts';
 import { singleTextUpload, uploadedText, withinUploadQuota } from '../uploads/index.ts';
-import { createRoad, deleteRoad, getRoad, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from './roads.service.ts';
+import { createRoad, deleteRoad, getRoadJson, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from './roads.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 
 const base = '/api/workspaces/:workspaceId/roads';
@@ -46,8 +46,8 @@ export const roadRoutes: RouteModule = (deps) => [
     path: `${base}/:roadId`,
     access: 'viewer',
     handler: async (req, res) => {
-      const road: RoadDetail = unwrap(await getRoad(deps.db, workspaceOf(req), pathParam(req, 'roadId')));
-      res.json(road);
+      // RoadDetail as JSON text (see getRoadJson).
+      res.type('application/json').send(unwrap(await getRoadJson(deps.db, workspaceOf(req), pathParam(req, 'roadId'))));
     },
   },
   {

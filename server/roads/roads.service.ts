@@ -17,6 +17,7 @@ import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
+import { withRawJson } from '../core/json-splice.ts';
 
 
 const noRoad = () => fail('not_found', 'No such road in this workspace.');
@@ -62,9 +63,13 @@ export async function listRoadLibrary(db: Db, ws: WorkspaceRef): Promise<RoadsRe
   return { roads: (await listRoads(db, ws.workspaceId)).map(toListItem) };
 }
 
-export async function getRoad(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<RoadDetail>> {
+/**
+ * A road with its definition, as JSON text: the stored definition (checked when it was saved, up
+ * to megabytes for a measured profile) is sent as it is, never parsed again on a read.
+ */
+export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<string>> {
   const row = await findRoad(db, ws.workspaceId, roadId);
-  return row ? ok(toDetail(row)) : noRoad();
+  return row ? ok(withRawJson(toListItem(row), 'definition', row.definition)) : noRoad();
 }
 
 const kindWords: Record<Road['kind'], string> = {

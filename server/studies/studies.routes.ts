@@ -3,7 +3,7 @@ import { CreateStudyInput, FinishStudyRunInput, OpenPointAsSetupInput, SaveStudy
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { HttpError, unwrap } from '../core/errors.ts';
 import { finishStudyRun, saveStudyPoints, setStudyBaseline } from './study-results.service.ts';
-import { createStudy, deleteStudy, getStudy, listStudies, openPointAsSetup } from './studies.service.ts';
+import { createStudy, deleteStudy, getStudyJson, listStudies, openPointAsSetup } from './studies.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 
 const base = '/api/workspaces/:workspaceId/studies';
@@ -37,7 +37,8 @@ export const studyRoutes: RouteModule = (deps) => [
     path: `${base}/:studyId`,
     access: 'viewer',
     handler: async (req, res) => {
-      res.json(unwrap(await getStudy(deps.db, workspaceOf(req), pathParam(req, 'studyId'))));
+      // StudyDetail as JSON text (see getStudyJson).
+      res.type('application/json').send(unwrap(await getStudyJson(deps.db, workspaceOf(req), pathParam(req, 'studyId'))));
     },
   },
   {

@@ -27,6 +27,7 @@ import { findRoadDefinitionTexts } from '../roads/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { readStored } from '../core/stored-json.ts';
+import { withRawJson } from '../core/json-splice.ts';
 
 /** Studies saved before road versions keep their own copy of each road (`study.roads`). */
 const StoredRoads = z.array(Road);
@@ -38,24 +39,29 @@ type StudyRoadRefs = z.infer<typeof StudyRoadRefs>;
 export const typedInRoads = (def: StudyDefinition): (Road | undefined)[] => def.roads.map((entry) => (entry.source === 'inline' ? entry.road : undefined));
 
 /**
- * The roads a study runs over, in the definition's order: typed-in roads from the definition,
- * library roads at the version the study refers to. A library definition was checked against the
- * road schema when it was saved and can be megabytes, so it is read as JSON once per version,
- * not checked again on every read.
+ * JSON text of each road a study runs over, in the definition's order: typed-in roads from the
+ * definition, library roads at the version the study refers to, as stored (a library definition
+ * was checked against the road schema when it was saved and can be megabytes).
  */
-export async function studyRoadsOf(db: Queryable, row: Pick<StudyViewRow, 'id' | 'workspace_id' | 'roads' | 'road_refs'>, def: StudyDefinition): Promise<Road[]> {
-  if (row.road_refs === null) return readStored(StoredRoads, row.roads, 'study roads');
+async function studyRoadTexts(db: Queryable, row: Pick<StudyViewRow, 'id' | 'workspace_id' | 'roads' | 'road_refs'>, def: StudyDefinition): Promise<string[]> {
+  if (row.road_refs === null) return readStored(StoredRoads, row.roads, 'study roads').map((r) => JSON.stringify(r));
   const refs = readStored(StudyRoadRefs, row.road_refs, 'study road refs');
   const texts = await findRoadDefinitionTexts(db, row.workspace_id, refs.filter((r) => r !== null));
-  const parsed = new Map<string, Road>();
   return def.roads.map((entry, i) => {
-    if (entry.source === 'inline') return entry.road;
+    if (entry.source === 'inline') return JSON.stringify(entry.road);
     const ref = refs[i];
-    const key = ref && `${ref.roadId}@${ref.version}`;
-    const text = key ? texts.get(key) : undefined;
-    if (!key || text === undefined) throw new Error(`study ${row.id} refers to road ${key ?? i} which is not kept`);
-    if (!parsed.has(key)) parsed.set(key, JSON.parse(text) as Road);
-    return parsed.get(key) as Road;
+    const text = ref ? texts.get(`${ref.roadId}@${ref.version}`) : undefined;
+    if (text === undefined) throw new Error(`study ${row.id} refers to road ${ref ? `${ref.roadId}@${ref.version}` : i} which is not kept`);
+    return text;
+  });
+}
+
+/** The roads a study runs over, as objects; each distinct stored definition is read once. */
+export async function studyRoadsOf(db: Queryable, row: Pick<StudyViewRow, 'id' | 'workspace_id' | 'roads' | 'road_refs'>, def: StudyDefinition): Promise<Road[]> {
+  const parsed = new Map<string, Road>();
+  return (await studyRoadTexts(db, row, def)).map((text) => {
+    if (!parsed.has(text)) parsed.set(text, JSON.parse(text) as Road);
+    return parsed.get(text) as Road;
   });
 }
 import { addRevisionInTx } from '../setups/index.ts';
@@ -136,6 +142,22 @@ export async function listStudies(db: Db, ws: WorkspaceRef): Promise<StudiesResp
 export async function getStudy(db: Db, ws: WorkspaceRef, studyId: string): Promise<Outcome<StudyDetail>> {
   const row = await findStudy(db, ws.workspaceId, studyId);
   return row ? ok(await detailOf(db, row)) : noStudy();
+}
+
+/** `StudyDetail` as JSON text for a read: the roads go out as stored, not parsed and written again. */
+export async function getStudyJson(db: Db, ws: WorkspaceRef, studyId: string): Promise<Outcome<string>> {
+  const row = await findStudy(db, ws.workspaceId, studyId);
+  if (!row) return noStudy();
+  const def = definitionOf(row);
+  const points = (await listStudyPoints(db, row.id)).map(toPointResult);
+  const head: Omit<StudyDetail, 'roads'> = {
+    ...toSummary(row, def),
+    definition: def,
+    baseSetup: readStored(Setup, row.base_document, 'study base setup'),
+    points: points.filter((p) => p.index >= 0),
+    basePoint: points.find((p) => p.index === -1) ?? null,
+  };
+  return ok(withRawJson(head, 'roads', `[${(await studyRoadTexts(db, row, def)).join(',')}]`));
 }
 
 /**
