@@ -49,6 +49,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
     publicUrl: config.publicUrl,
     mailer,
     demoMode: config.demoMode,
+    openSignUp: config.openSignUp,
     outboxEnabled: !!sink,
     logger,
     rateLimit: config.rateLimit,
