@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
@@ -12,7 +13,6 @@ import { DamperCurveEditor } from '../../features/damper-editor/components/dampe
 import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
-import { useSetup } from '../../features/setups/api/get-setup.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
 import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
 import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
@@ -29,13 +29,14 @@ import { SharePanel } from '../../features/sharing/components/share-panel.tsx';
 import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
 import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
+import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
-  const setup = useSetup(workspace.id, setupId);
+  const setup = useQuery(setupQueryOptions(workspace.id, setupId));
   if (setup.isPending) return <Loading what="the setup" />;
   if (setup.isError) {
     return (

@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
@@ -6,13 +7,13 @@ import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
-import { useSetups } from '../../features/setups/api/get-setups.ts';
 import { NewSetupForm } from '../../features/setups/components/new-setup-form.tsx';
 import { ImportSetupButton } from '../../features/setups/components/setup-file-buttons.tsx';
 import { SetupsTable } from '../../features/setups/components/setups-table.tsx';
 import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
 import { VehicleForm } from '../../features/vehicles/components/vehicle-form.tsx';
 import { VehicleList } from '../../features/vehicles/components/vehicle-list.tsx';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/corners`: every corner setup, and the vehicles that group them. */
@@ -23,8 +24,8 @@ export function CornersRoute() {
   const toast = useToast();
   const [showArchived, setShowArchived] = useState(false);
   const [adding, setAdding] = useState<'setup' | 'vehicle' | null>(null);
-  const setups = useSetups(workspace.id, showArchived ? 'include' : 'exclude');
-  const live = useSetups(workspace.id, 'exclude');
+  const setups = useQuery(setupsQueryOptions(workspace.id, showArchived ? 'include' : 'exclude'));
+  const live = useQuery(setupsQueryOptions(workspace.id, 'exclude'));
   const vehicles = useVehicles(workspace.id);
   const open = (setupId: string) => navigate(`/w/${workspace.id}/corners/${setupId}`);
   const vehicleRefs = (vehicles.data?.vehicles ?? []).map((v) => ({ id: v.id, name: v.name }));

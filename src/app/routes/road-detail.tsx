@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import type { Road } from '../../../shared/schemas/road.ts';
@@ -7,13 +8,13 @@ import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { useDeleteRoad } from '../../features/roads/api/delete-road.ts';
-import { useRoad } from '../../features/roads/api/get-road.ts';
 import { useUpdateRoad } from '../../features/roads/api/update-road.ts';
 import { RoadEditor } from '../../features/roads/components/road-editor.tsx';
 import { RoadFiguresList, RoadPreview } from '../../features/roads/components/road-preview.tsx';
 import { kindWords } from '../../features/roads/components/road-words.ts';
 import { isApiError } from '../../lib/api-client.ts';
 import { formatDateTime } from '../../lib/format.ts';
+import { roadQueryOptions } from '../../lib/queries/roads.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/roads/:roadId`: one road's figures, profile and spectrum; engineers edit or remove it. */
@@ -22,7 +23,7 @@ export function RoadDetailRoute() {
   const { roadId = '' } = useParams();
   const navigate = useNavigate();
   const toast = useToast();
-  const road = useRoad(workspace.id, roadId);
+  const road = useQuery(roadQueryOptions(workspace.id, roadId));
   const update = useUpdateRoad(workspace.id, roadId);
   const remove = useDeleteRoad(workspace.id);
   const [draft, setDraft] = useState<Road | null>(null);

@@ -10,7 +10,7 @@ import { Loading } from '../../components/ui/spinner.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { useDeleteStudy } from '../../features/studies/api/delete-study.ts';
 import { studyQueryOptions, useStudy } from '../../features/studies/api/get-study.ts';
-import { studiesKey } from '../../features/studies/api/keys.ts';
+import { studiesKey } from '../../features/studies/api/query-keys.ts';
 import { useOpenPointAsSetup } from '../../features/studies/api/open-point-as-setup.ts';
 import { useSetStudyBaseline } from '../../features/studies/api/set-study-baseline.ts';
 import { useShareStudy } from '../../features/studies/api/share-study.ts';

@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
@@ -6,11 +7,11 @@ import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
-import { useSetups } from '../../features/setups/api/get-setups.ts';
 import { useDeleteVehicle } from '../../features/vehicles/api/delete-vehicle.ts';
 import { useVehicle } from '../../features/vehicles/api/get-vehicle.ts';
 import { VehicleForm } from '../../features/vehicles/components/vehicle-form.tsx';
 import { VehicleSummaryPanel } from '../../features/vehicles/components/vehicle-summary.tsx';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/vehicles/:vehicleId`: both corners' modes and the front/rear comparison. */
@@ -19,7 +20,7 @@ export function VehicleRoute() {
   const workspace = useWorkspace();
   const canWrite = workspace.can('engineer');
   const vehicle = useVehicle(workspace.id, vehicleId);
-  const setups = useSetups(workspace.id, 'exclude');
+  const setups = useQuery(setupsQueryOptions(workspace.id, 'exclude'));
   const remove = useDeleteVehicle(workspace.id);
   const navigate = useNavigate();
   const toast = useToast();

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { runsKey } from './get-runs.ts';
+import { runsKey } from './query-keys.ts';
 
 export const deleteRun = (workspaceId: string, runId: string) =>
   api.delete(`/api/workspaces/${encodeURIComponent(workspaceId)}/runs/${encodeURIComponent(runId)}`);

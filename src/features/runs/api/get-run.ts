@@ -1,7 +1,7 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
 import { SavedRun } from '../../../../shared/schemas/run-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { runsKey } from './get-runs.ts';
+import { runsKey } from './query-keys.ts';
 
 export const getRun = (workspaceId: string, runId: string) =>
   api.get(`/api/workspaces/${encodeURIComponent(workspaceId)}/runs/${encodeURIComponent(runId)}`, SavedRun);

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { RunSummary, type SaveRunInputIn } from '../../../../shared/schemas/run-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { runsKey } from './get-runs.ts';
+import { runsKey } from './query-keys.ts';
 
 export const saveRun = (workspaceId: string, input: SaveRunInputIn) =>
   api.post(`/api/workspaces/${encodeURIComponent(workspaceId)}/runs`, input, RunSummary);

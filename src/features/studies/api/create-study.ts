@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { StudyDetail } from '../../../../shared/schemas/study-record.ts';
 import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studiesPath, studyKey } from './keys.ts';
+import { studiesKey, studiesPath, studyKey } from './query-keys.ts';
 
 export const createStudy = (workspaceId: string, definition: StudyDefinition) => api.post(studiesPath(workspaceId), { definition }, StudyDetail);
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studyPath } from './keys.ts';
+import { studiesKey, studyPath } from './query-keys.ts';
 
 export const deleteStudy = (workspaceId: string, studyId: string) => api.delete(studyPath(workspaceId, studyId));
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { StudiesResponse } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studiesPath } from './keys.ts';
+import { studiesKey, studiesPath } from './query-keys.ts';
 
 export const getStudies = (workspaceId: string) => api.get(studiesPath(workspaceId), StudiesResponse);
 

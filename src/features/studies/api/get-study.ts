@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { StudyDetail } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studyKey, studyPath } from './keys.ts';
+import { studyKey, studyPath } from './query-keys.ts';
 
 export const getStudy = (workspaceId: string, studyId: string) => api.get(studyPath(workspaceId, studyId), StudyDetail);
 

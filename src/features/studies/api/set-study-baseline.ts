@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { StudyDetail } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studyKey, studyPath } from './keys.ts';
+import { studiesKey, studyKey, studyPath } from './query-keys.ts';
 
 export const setStudyBaseline = (workspaceId: string, studyId: string, pointIndex: number | null) => api.put(`${studyPath(workspaceId, studyId)}/baseline`, { pointIndex }, StudyDetail);
 

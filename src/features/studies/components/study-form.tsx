@@ -1,4 +1,5 @@
 import { toNestErrors } from '@hookform/resolvers';
+import { useQuery } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef } from 'react';
 import { type FieldErrors, type Resolver, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { isoClasses } from '../../../../shared/schemas/road.ts';
@@ -8,9 +9,11 @@ import { plannedCounts } from '../../../../shared/study/expand.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
 import { Loading } from '../../../components/ui/spinner.tsx';
+import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
+import { roadsQueryOptions } from '../../../lib/queries/roads.ts';
+import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
 import type { RoadListItem } from '../../../../shared/schemas/road-record.ts';
 import type { SetupSummary } from '../../../../shared/schemas/setup-record.ts';
-import { useStudyRevisionChoices, useStudyRoadChoices, useStudySetupChoices } from '../api/get-study-choices.ts';
 import { figureLabel, parameterLabel } from '../model/display.ts';
 import { axisDefaults, defaultFormValues, fieldOfIssue, formToDefinition, type StudyFormValues } from '../model/study-form.ts';
 
@@ -36,8 +39,8 @@ const errorAt = (errors: FieldErrors<StudyFormValues>, path: string): string | u
  * (its messages go to the field they concern) before anything is sent.
  */
 export function StudyForm(props: StudyFormProps) {
-  const setups = useStudySetupChoices(props.workspaceId);
-  const roads = useStudyRoadChoices(props.workspaceId);
+  const setups = useQuery(setupsQueryOptions(props.workspaceId));
+  const roads = useQuery({ ...roadsQueryOptions(props.workspaceId), retry: false });
   if (setups.isPending || roads.isPending) return <Loading what="setups and roads" />;
   if (setups.isError) return <FormError message={setups.error.message} />;
   const list = setups.data.setups;
@@ -87,7 +90,7 @@ function StudyFormBody({
 
   const setupId = watched.setupId ?? '';
   const chosen = live.find((s) => s.id === setupId);
-  const revisions = useStudyRevisionChoices(workspaceId, chosen?.id);
+  const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, chosen?.id));
   revisionIds.current = (n) => revisions.data?.revisions.find((r) => r.number === n)?.id;
 
   useEffect(() => {

@@ -1,4 +1,4 @@
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
 
 /** Cache keys of the studies feature: every study query sits under the workspace's `studies` prefix. */
 export const studiesKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'studies'] as const;
