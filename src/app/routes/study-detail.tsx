@@ -1,25 +1,15 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
-import { useQueryClient } from '@tanstack/react-query';
-import { studyRoadNames } from '../../../shared/study/collect.ts';
 import { Button } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
-import { useDeleteStudy } from '../../features/studies/api/delete-study.ts';
-import { studyQueryOptions, useStudy } from '../../features/studies/api/get-study.ts';
-import { studiesKey } from '../../features/studies/api/query-keys.ts';
-import { useOpenPointAsSetup } from '../../features/studies/api/open-point-as-setup.ts';
-import { useSetStudyBaseline } from '../../features/studies/api/set-study-baseline.ts';
-import { useShareStudy } from '../../features/studies/api/share-study.ts';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
-import { studyView } from '../../features/studies/model/study-view.ts';
-import { prewarmStudyPool } from '../../features/studies/run/study-pool.ts';
-import { useStudyRun } from '../../features/studies/run/use-study-run.ts';
+import { useRunWhenAsked, useStudyPage } from '../../features/studies/run/use-study-page.ts';
 import { formatDateTime, formatSig } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { NotFoundRoute } from './not-found.tsx';
@@ -34,46 +24,11 @@ export function StudyDetailRoute() {
   const { studyId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
-  const queryClient = useQueryClient();
-  const study = useStudy(workspace.id, studyId);
   const canSave = workspace.can('engineer');
   const isLead = workspace.can('lead');
-  const { state, start, cancel } = useStudyRun({
-    workspaceId: workspace.id,
-    studyId,
-    save: canSave,
-    onSaved: (detail) => {
-      queryClient.setQueryData(studyQueryOptions(workspace.id, studyId).queryKey, detail);
-      void queryClient.invalidateQueries({ queryKey: [...studiesKey(workspace.id), 'list'] });
-    },
-  });
-  const baseline = useSetStudyBaseline(workspace.id, studyId);
-  const openAsSetup = useOpenPointAsSetup(workspace.id, studyId);
-  const share = useShareStudy(workspace.id, studyId);
-  const remove = useDeleteStudy(workspace.id);
+  const { study, state, cancel, run, running, view, roadNames, baseline, openAsSetup, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
   const [opened, setOpened] = useState<{ setupId: string; setupName: string; revisionNumber: number } | null>(null);
-
-  useEffect(() => prewarmStudyPool(), []);
-
-  const detail = study.data;
-  const running = state.phase === 'running' || state.phase === 'saving';
-  const run = () => detail && start({ definition: detail.definition, baseSetup: detail.baseSetup, roads: detail.roads });
-
-  useEffect(() => {
-    if (params.get('run') === '1' && detail && canSave && state.phase === 'idle') {
-      setParams({}, { replace: true });
-      run();
-    }
-    // run() reads the same detail; starting once per ?run=1 is the intent.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [params, detail, canSave, state.phase]);
-
-  const view = useMemo(() => {
-    if (!detail) return null;
-    if (state.phase !== 'idle') return studyView(detail.definition, state.points, state.base, state.phase === 'finished' || state.phase === 'saving');
-    return studyView(detail.definition, detail.points, detail.basePoint, true);
-  }, [detail, state.phase, state.points, state.base]);
-  const roadNames = useMemo(() => (detail ? studyRoadNames(detail.definition, detail.roads) : []), [detail]);
+  useRunWhenAsked(params.get('run') === '1', canStart, run, () => setParams({}, { replace: true }));
 
   if (study.isPending) return <Loading what="the study" />;
   if (study.isError) return study.error.code === 'not_found' ? <NotFoundRoute inShell /> : <Notice tone="danger">{study.error.message}</Notice>;
