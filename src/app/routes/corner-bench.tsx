@@ -5,9 +5,9 @@ import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
 import { staticGasForce } from '../../../shared/sim/damper.ts';
 import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
 import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
@@ -37,15 +37,11 @@ export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
   const setup = useQuery(setupQueryOptions(workspace.id, setupId));
-  if (setup.isPending) return <Loading what="the setup" />;
-  if (setup.isError) {
-    return (
-      <Notice tone="danger" title={setup.error.code === 'not_found' ? 'No such setup here' : 'The setup did not load'}>
-        {setup.error.message}
-      </Notice>
-    );
-  }
-  return <Bench key={setup.data.id} detail={setup.data} />;
+  return (
+    <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
+      {(detail) => <Bench key={detail.id} detail={detail} />}
+    </QueryGuard>
+  );
 }
 
 function Bench({ detail }: { detail: SetupDetail }) {

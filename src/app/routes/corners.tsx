@@ -3,9 +3,8 @@ import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { NewSetupForm } from '../../features/setups/components/new-setup-form.tsx';
 import { ImportSetupButton } from '../../features/setups/components/setup-file-buttons.tsx';
@@ -56,26 +55,26 @@ export function CornersRoute() {
       {adding === 'setup' && <NewSetupForm workspaceId={workspace.id} vehicles={vehicleRefs} setups={liveSetups} onCreated={(d) => open(d.id)} onCancel={() => setAdding(null)} />}
 
       <Section title="Setups">
-        {setups.isPending ? (
-          <Loading what="setups" />
-        ) : setups.isError ? (
-          <Notice tone="danger">{setups.error.message}</Notice>
-        ) : setups.data.setups.length === 0 && !showArchived ? (
-          <EmptyState title="No corner setups yet" action={canWrite && <Button onClick={() => setAdding('setup')}>New setup</Button>}>
-            A setup holds one corner: masses, spring, tyre, damper curves, stops and stroke.
-          </EmptyState>
-        ) : (
-          <SetupsTable
-            workspaceId={workspace.id}
-            setups={setups.data.setups}
-            extraFilters={
-              <label className="flex items-center gap-1.5 text-ink-soft">
-                <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} className="accent-accent" />
-                show archived
-              </label>
-            }
-          />
-        )}
+        <QueryGuard query={setups} what="setups">
+          {(data) =>
+            data.setups.length === 0 && !showArchived ? (
+              <EmptyState title="No corner setups yet" action={canWrite && <Button onClick={() => setAdding('setup')}>New setup</Button>}>
+                A setup holds one corner: masses, spring, tyre, damper curves, stops and stroke.
+              </EmptyState>
+            ) : (
+              <SetupsTable
+                workspaceId={workspace.id}
+                setups={data.setups}
+                extraFilters={
+                  <label className="flex items-center gap-1.5 text-ink-soft">
+                    <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} className="accent-accent" />
+                    show archived
+                  </label>
+                }
+              />
+            )
+          }
+        </QueryGuard>
       </Section>
 
       <Section
@@ -100,15 +99,15 @@ export function CornersRoute() {
             onCancel={() => setAdding(null)}
           />
         )}
-        {vehicles.isPending ? (
-          <Loading what="vehicles" />
-        ) : vehicles.isError ? (
-          <Notice tone="danger">{vehicles.error.message}</Notice>
-        ) : vehicles.data.vehicles.length === 0 ? (
-          <p className="text-sm text-ink-faint">No vehicles yet. A vehicle puts a front and a rear setup side by side.</p>
-        ) : (
-          <VehicleList workspaceId={workspace.id} vehicles={vehicles.data.vehicles} />
-        )}
+        <QueryGuard query={vehicles} what="vehicles">
+          {(data) =>
+            data.vehicles.length === 0 ? (
+              <p className="text-sm text-ink-faint">No vehicles yet. A vehicle puts a front and a rear setup side by side.</p>
+            ) : (
+              <VehicleList workspaceId={workspace.id} vehicles={data.vehicles} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );

@@ -8,9 +8,8 @@ import { candidateOf, defaultRoads } from '../../features/roads/model/road-field
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
 import { Field, Select } from '../../components/ui/field.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useCreateRoad } from '../../features/roads/api/create-road.ts';
 import { MeasuredUpload } from '../../features/roads/components/measured-upload.tsx';
 import { RoadEditor } from '../../features/roads/components/road-editor.tsx';
@@ -108,15 +107,15 @@ export function RoadsRoute() {
         </Section>
       )}
       <Section title="Library">
-        {roads.isPending ? (
-          <Loading what="roads" />
-        ) : roads.isError ? (
-          <Notice tone="danger">{roads.error.message}</Notice>
-        ) : roads.data.roads.length === 0 ? (
-          <EmptyState title="No roads yet">{canEdit ? 'Add a random road of an ISO 8608 class, an event, or upload a measured profile.' : 'An engineer can add roads here.'}</EmptyState>
-        ) : (
-          <RoadsTable roads={roads.data.roads} hrefOf={hrefOf} />
-        )}
+        <QueryGuard query={roads} what="roads">
+          {(data) =>
+            data.roads.length === 0 ? (
+              <EmptyState title="No roads yet">{canEdit ? 'Add a random road of an ISO 8608 class, an event, or upload a measured profile.' : 'An engineer can add roads here.'}</EmptyState>
+            ) : (
+              <RoadsTable roads={data.roads} hrefOf={hrefOf} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );
