@@ -12,10 +12,11 @@ import { ComparePicker } from '../../features/runs/components/compare/compare-pi
 import { CompareTable } from '../../features/runs/components/compare/compare-table.tsx';
 import { ScenarioFields } from '../../features/runs/components/scenario-fields.tsx';
 import { type CompareEntry, entriesFromParams, entriesToParams, likeForLikeNotes } from '../../features/runs/model/compare.ts';
-import { downloadText, figuresCsv } from '../../features/runs/model/export-csv.ts';
+import { figuresCsv } from '../../features/runs/model/export-csv.ts';
 import { useComparison } from '../../features/runs/model/use-comparison.ts';
 import { useScenario } from '../../features/runs/model/use-scenario.ts';
 import { setupsQueryOptions } from '../../lib/queries/setups.ts';
+import { downloadText } from '../../lib/download.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/compare`: two to four setups (run here on one scenario) or saved runs, side by side. */
