@@ -17,7 +17,7 @@ export interface WorkspaceContext {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
+   
   namespace Express {
     interface Request {
       user?: SessionUser;

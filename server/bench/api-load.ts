@@ -2,7 +2,9 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
-import { DEMO_PASSWORD, DEMO_USERS } from '../db/seed/demo-people.ts';
+import { Me } from '../../shared/schemas/account.ts';
+import { SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../core/demo-people.ts';
 import { prepareDatabase, startServerProcess } from './server-process.ts';
 import { callJson, sessionHeaders, signInAs } from './session-client.ts';
 
@@ -44,11 +46,11 @@ try {
   const session = await signInAs(server.url, engineer.email, DEMO_PASSWORD);
   const headers = sessionHeaders(session);
   const me = await callJson(server.url, session, 'GET', '/api/auth/me');
-  const ws = me.body.memberships[0].workspaceId as string;
-  const setups = (await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups`)).body.setups as { id: string }[];
+  const ws = Me.parse(me.body).memberships[0].workspaceId;
+  const setups = SetupsResponse.parse((await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups`)).body).setups;
   if (!setups.length) throw new Error('the demo seed has no setups to read');
   const setupId = setups[0].id;
-  const detail = (await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups/${setupId}`)).body;
+  const detail = SetupDetail.parse((await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups/${setupId}`)).body);
   const doc = detail.revision.document;
   const base = `/api/workspaces/${ws}`;
 

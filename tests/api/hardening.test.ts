@@ -1,13 +1,13 @@
 import { createHash } from 'node:crypto';
 import pino from 'pino';
 import request from 'supertest';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { CreatedShareLink } from '../../shared/schemas/share-link.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
 import { CSRF_COOKIE } from '../../server/auth/csrf.ts';
 import { SESSION_COOKIE } from '../../server/auth/session.ts';
-import { routeKey } from '../../server/routes/registry.ts';
+import { routeKey } from '../../server/http/registry.ts';
 import { browserLike, signedIn } from './helpers/agents.ts';
 import { anonymousHeaders, addMember, createUser, createWorkspace } from './helpers/people.ts';
 import { peaksCsv } from './helpers/road-dyno-fixtures.ts';

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { Me } from '../../shared/schemas/account.ts';
 import { OutboxResponse, type OutboxMessage } from '../../shared/schemas/outbox.ts';
-import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-people.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { seedDemo } from '../../server/db/seed/seed-demo.ts';
 import { type BrowserLike, browserLike, signedIn } from './helpers/agents.ts';
 import { waitForMail } from './helpers/mail.ts';

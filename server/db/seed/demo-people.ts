@@ -1,20 +1,9 @@
 import { randomUUID } from 'node:crypto';
-import type { DemoUser } from '../../../shared/schemas/config.ts';
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import { hashPassword } from '../../auth/password.ts';
 import type { Queryable } from '../database.ts';
 import type { SeedContext } from './seed-context.ts';
-
-// An invented maker and invented people; `.example` is a reserved domain.
-export const DEMO_WORKSPACE_NAME = 'Tallis & Brume — Chassis';
-export const DEMO_PASSWORD = 'ridewright-demo';
-
-export const DEMO_USERS: DemoUser[] = [
-  { role: 'admin', name: 'Ada Quill', email: 'ada.quill@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'lead', name: 'Tomas Reeve', email: 'tomas.reeve@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'engineer', name: 'Ines Marlow', email: 'ines.marlow@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'viewer', name: 'Olu Fenwick', email: 'olu.fenwick@tallisbrume.example', password: DEMO_PASSWORD },
-];
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
 
 /** The demo workspace and one user per role; the first step of `seedDemo`. */
 export async function seedDemoPeople(db: Queryable, now: Date): Promise<SeedContext> {

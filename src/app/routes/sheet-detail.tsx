@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useParams } from 'react-router';
-import { ButtonLink } from '../../components/ui/button.tsx';
+import { ButtonLink, buttonClass } from '../../components/ui/button.tsx';
 import { Caution } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
@@ -18,7 +18,6 @@ import { SheetIdentity } from '../../features/target-sheets/components/sheet-ide
 import { StatusBar } from '../../features/target-sheets/components/status-bar.tsx';
 import { TargetTableEditor } from '../../features/target-sheets/components/target-table-editor.tsx';
 import { TargetTable } from '../../features/target-sheets/components/target-table.tsx';
-import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';

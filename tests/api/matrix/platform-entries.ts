@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { hashOneTimeToken, newOneTimeToken } from '../../../server/services/one-time-tokens.ts';
+import { hashOneTimeToken, newOneTimeToken } from '../../../server/core/one-time-tokens.ts';
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { addMember, createUser, TEST_PASSWORD, uniqueEmail } from '../helpers/people.ts';
 import { type Caller, type RoleWorld, userOfCaller } from '../helpers/role-world.ts';

@@ -1,4 +1,4 @@
-import { saveRun } from '../../../server/services/runs.ts';
+import { saveRun } from '../../../server/runs/runs.service.ts';
 import { SaveRunInput } from '../../../shared/schemas/run-record.ts';
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import type { RoleWorld } from '../helpers/role-world.ts';
