@@ -65,7 +65,7 @@ export async function signUp(deps: Deps, input: SignUpInput): Promise<{ mailed: 
 }
 
 function mailTakenAddress(deps: Deps, user: Pick<UserRow, 'name' | 'email'>): Promise<boolean> {
-  return deps.mailer.send({ to: user.email, ...signUpAgainMail({ name: user.name, signInLink: `${deps.publicUrl}/sign-in`, resetLink: `${deps.publicUrl}/reset` }) });
+  return deps.mailer.send({ to: user.email, ...signUpAgainMail({ name: user.name, signInLink: `${deps.publicUrl}/signin`, resetLink: `${deps.publicUrl}/reset` }) });
 }
 
 /** Stores a confirmation link for the account's address and mails it. */
