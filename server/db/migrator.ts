@@ -11,6 +11,7 @@ import * as m0009 from '../../migrations/0009_release_second_person.ts';
 import * as m0010 from '../../migrations/0010_address_verification.ts';
 import * as m0011 from '../../migrations/0011_dyno_file_loop.ts';
 import * as m0012 from '../../migrations/0012_road_versions.ts';
+import * as m0013 from '../../migrations/0013_stored_sizes.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -30,6 +31,7 @@ export const migrations: Record<string, Migration> = {
   '0010_address_verification': m0010,
   '0011_dyno_file_loop': m0011,
   '0012_road_versions': m0012,
+  '0013_stored_sizes': m0013,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {
