@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import type { FieldIssue } from '../errors.ts';
 import type { Road } from '../schemas/road.ts';
 import { RunRequest, type RunRequestInput, type RunResult } from '../schemas/run.ts';
-import { equivalentDampingLeastSquares, equivalentDampingSecant, type EquivalentDamping } from './damper.ts';
+import { type EquivalentDamping, equivalentDampingLeastSquares, equivalentDampingSecant } from './damper-equivalent.ts';
 import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE, integrateCorner } from './integrate.ts';
 import { modalAnalysis } from './linear/modal.ts';
 import { computeMetrics } from './metrics/compute-metrics.ts';

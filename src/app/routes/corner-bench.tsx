@@ -2,7 +2,7 @@ import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
-import { staticGasForce } from '../../../shared/sim/damper.ts';
+import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
