@@ -5,7 +5,7 @@ import { type EquivalentDamping, equivalentDampingLeastSquares } from './damper-
 import { staticGasForce } from './damper-gas.ts';
 import { compileStop } from './stops.ts';
 
-/** Standard gravity used throughout, m/s² (model.md). */
+/** Standard gravity used throughout, m/s² (docs/model.md §1). */
 export const GRAVITY = 9.81;
 
 /**
