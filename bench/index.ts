@@ -11,7 +11,6 @@ import { cornerModel, staticEquilibrium } from '../shared/sim/quarter-car.ts';
 import { buildRoad } from '../shared/sim/roads/index.ts';
 import { clearIsoRoadCache } from '../shared/sim/roads/iso8608.ts';
 import { runCorner } from '../shared/sim/run-corner.ts';
-import type { TraceColumns } from '../shared/sim/trace.ts';
 import { figuresFromMetrics } from '../shared/study/figures.ts';
 import { createStudyRunner } from '../shared/study/run-jobs.ts';
 import { worstDifference } from '../shared/sim/metrics/figure-differences.ts';

@@ -5,10 +5,10 @@ import { pinoHttp } from 'pino-http';
 import { requireCsrf } from './auth/csrf.ts';
 import { loadSession } from './auth/require-user.ts';
 import { type AppDeps, type AppOptions, resolveDeps } from './deps.ts';
-import { errorHandler, sendError } from './errors.ts';
-import { redactUrl } from './middleware/redact-url.ts';
-import { allRoutes } from './routes/all-routes.ts';
-import { buildApiRouter, type RouteDef } from './routes/registry.ts';
+import { errorHandler, sendError } from './core/errors.ts';
+import { redactUrl } from './http/redact-url.ts';
+import { allRoutes } from './http/all-routes.ts';
+import { buildApiRouter, type RouteDef } from './http/registry.ts';
 import { mountStaticClient } from './static-client.ts';
 
 /** Largest JSON body the API reads; bigger ones get 413 payload_too_large. */
@@ -77,7 +77,6 @@ export function createApp(options: AppOptions): App {
   app.use('/api', (req, res) => sendError(res, 'not_found', `No API route ${req.method} ${req.originalUrl}.`));
 
   if (deps.client.kind === 'static') mountStaticClient(app, deps.client.distDir);
-  else if (deps.client.kind === 'custom') deps.client.mount(app);
 
   app.use(errorHandler(deps.logger));
   return { app, deps, routes };

@@ -1,15 +1,13 @@
-import type { Express } from 'express';
 import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
-import type { Mailer } from './mail/mailer.ts';
-import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './services/upload-quota.ts';
+import { DEFAULT_HEAVY_JOB_LIMITS, type HeavyJobLimits } from './limits/index.ts';
+import type { Mailer } from './mail/index.ts';
+import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/index.ts';
 
 /** How the app serves the client outside /api. */
 export type ClientServing =
   /** Built files from `distDir` with the SPA fallback; a plain page when index.html is missing. */
   | { kind: 'static'; distDir: string }
-  /** Something else mounts after the API (e.g. Vite's middleware in development). */
-  | { kind: 'custom'; mount: (app: Express) => void }
   /** API only (tests). */
   | { kind: 'none' };
 
@@ -22,6 +20,8 @@ export interface AppDeps {
   publicUrl: string;
   mailer: Mailer;
   demoMode: boolean;
+  /** POST /api/auth/signup is open to anyone (RIDEWRIGHT_OPEN_SIGNUP; default: in demo mode). */
+  openSignUp: boolean;
   /** True while the local mail sink runs: enables GET /api/outbox. */
   outboxEnabled: boolean;
   /** Current time; tests pass a clock they can move to check expiry. */
@@ -29,7 +29,9 @@ export interface AppDeps {
   logger: Logger;
   /** Requests per 15 minutes per address on the sensitive public routes; 0 disables. */
   rateLimit: number;
-  /** Uploaded bytes a workspace may keep (server/services/upload-quota.ts); over it, uploads get 413. */
+  /** Large jobs per person: running at once, and started per ten minutes (server/limits/heavy-jobs.middleware.ts); 0 lifts either. */
+  heavyJobs: HeavyJobLimits;
+  /** Uploaded bytes a workspace may keep (server/uploads/upload-quota.service.ts); over it, uploads get 413. */
   uploadQuotaBytes: number;
   /** Express `trust proxy` setting. */
   trustProxy: boolean | number | string;
@@ -40,11 +42,13 @@ export type AppOptions = Pick<AppDeps, 'db' | 'secret' | 'publicUrl' | 'mailer'>
 
 export function resolveDeps(options: AppOptions): AppDeps {
   return {
+    openSignUp: options.demoMode ?? false,
     demoMode: false,
     outboxEnabled: false,
     clock: () => new Date(),
     logger: pino({ level: 'silent' }),
     rateLimit: 100,
+    heavyJobs: DEFAULT_HEAVY_JOB_LIMITS,
     uploadQuotaBytes: WORKSPACE_UPLOAD_QUOTA_BYTES,
     trustProxy: false,
     client: { kind: 'none' },

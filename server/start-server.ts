@@ -8,8 +8,8 @@ import { resolveSecret, type ServerConfig } from './config.ts';
 import { type Db, openDatabase } from './db/database.ts';
 import { migrateToLatest } from './db/migrator.ts';
 import type { ClientServing } from './deps.ts';
-import { createMailer } from './mail/mailer.ts';
-import { type MailSink, startMailSink } from './mail/sink.ts';
+import { createMailer } from './mail/index.ts';
+import { type MailSink, startMailSink } from './mail/index.ts';
 
 export const DIST_DIR = fileURLToPath(new URL('../dist/', import.meta.url));
 
@@ -49,6 +49,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
     publicUrl: config.publicUrl,
     mailer,
     demoMode: config.demoMode,
+    openSignUp: config.openSignUp,
     outboxEnabled: !!sink,
     logger,
     rateLimit: config.rateLimit,

@@ -6,18 +6,7 @@ import { z } from 'zod';
  * cannot be passed where a damping coefficient is expected. Everything inside the code is SI;
  * the helpers at the bottom convert at the UI edge.
  */
-export type Kilograms = z.infer<typeof kilograms>;
-export type Meters = z.infer<typeof meters>;
-export type MetersPerSecond = z.infer<typeof metersPerSecond>;
-export type Seconds = z.infer<typeof seconds>;
-export type Hertz = z.infer<typeof hertz>;
-export type Newtons = z.infer<typeof newtons>;
-export type NewtonsPerMeter = z.infer<typeof newtonsPerMeter>;
 export type NewtonSecondsPerMeter = z.infer<typeof newtonSecondsPerMeter>;
-export type Pascals = z.infer<typeof pascals>;
-export type SquareMeters = z.infer<typeof squareMeters>;
-export type CubicMeters = z.infer<typeof cubicMeters>;
-export type CyclesPerMeter = z.infer<typeof cyclesPerMeter>;
 
 /** Base number schemas per unit; fields chain their own bounds (`newtons.nonnegative()` keeps the brand). */
 export const kilograms = z.number().brand<'Kilograms'>();
@@ -33,12 +22,7 @@ export const squareMeters = z.number().brand<'SquareMeters'>();
 export const cubicMeters = z.number().brand<'CubicMeters'>();
 export const cyclesPerMeter = z.number().brand<'CyclesPerMeter'>();
 
-/** Tags a computed number with its unit (no conversion). Use only where the unit is certain. */
-export const asNewtonsPerMeter = (x: number) => x as NewtonsPerMeter;
 export const asNewtonSecondsPerMeter = (x: number) => x as NewtonSecondsPerMeter;
-export const asKilograms = (x: number) => x as Kilograms;
-export const asMeters = (x: number) => x as Meters;
-export const asNewtons = (x: number) => x as Newtons;
 
 // UI-edge conversions. Names read "from → to"; results are plain numbers in the target unit.
 export const mmToM = (mm: number) => mm / 1000;

@@ -1,6 +1,6 @@
 import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { Request, RequestHandler, Response } from 'express';
-import { sendError } from '../errors.ts';
+import { sendError } from '../core/errors.ts';
 
 // Signed double-submit, bound to the session (OWASP CSRF cheat sheet, "signed double-submit
 // cookie"): the readable cookie holds `nonce.mac`, where mac = HMAC(secret, nonce), so nobody

@@ -1,8 +1,8 @@
 import type { RequestHandler } from 'express';
 import { LRUCache } from 'lru-cache';
 import type { AppDeps } from '../deps.ts';
-import { HttpError } from '../errors.ts';
-import { sessionUser } from '../services/accounts.ts';
+import { HttpError } from '../core/errors.ts';
+import { sessionUser } from '../accounts/index.ts';
 import { readSessionToken, SESSION_COOKIE, type SessionClaims } from './session.ts';
 
 /** Tokens whose signature has been checked; about 300 bytes each. */

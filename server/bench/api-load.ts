@@ -2,17 +2,26 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
-import { DEMO_PASSWORD, DEMO_USERS } from '../db/seed/demo-people.ts';
+import { Me } from '../../shared/schemas/account.ts';
+import { SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../core/demo-people.ts';
 import { prepareDatabase, startServerProcess } from './server-process.ts';
 import { callJson, sessionHeaders, signInAs } from './session-client.ts';
 
-// `npm run bench:api [-- --duration 5 --runs 3 --connections 10] [-- --soak 300]`
+// `npm run bench:api [-- --duration 5 --runs 3 --connections 10] [-- --soak 300] [-- --abuse …]`
+// (`--abuse`: light-read latency under heavy requests, server/bench/abuse-load.ts)
 // Starts the real server (child process, temp SQLite seeded with the demo workspace, loopback,
 // rate limit off, request logging off), signs in as the demo engineer and drives representative
 // read and write routes with autocannon. Prints requests/s, p50 and p99 latency (medians over
 // the runs), errors and non-2xx answers, and the server's resident memory before and after.
 // `--soak N` then runs a mixed read/write load for N seconds and reports errors and memory.
 // Figures, never assertions: the machine is shared.
+
+if (process.argv.includes('--abuse')) {
+  const { runAbuseBench } = await import('./abuse-load.ts');
+  await runAbuseBench();
+  process.exit(0);
+}
 
 function arg(name: string, fallback: number): number {
   const at = process.argv.indexOf(`--${name}`);
@@ -44,11 +53,11 @@ try {
   const session = await signInAs(server.url, engineer.email, DEMO_PASSWORD);
   const headers = sessionHeaders(session);
   const me = await callJson(server.url, session, 'GET', '/api/auth/me');
-  const ws = me.body.memberships[0].workspaceId as string;
-  const setups = (await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups`)).body.setups as { id: string }[];
+  const ws = Me.parse(me.body).memberships[0].workspaceId;
+  const setups = SetupsResponse.parse((await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups`)).body).setups;
   if (!setups.length) throw new Error('the demo seed has no setups to read');
   const setupId = setups[0].id;
-  const detail = (await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups/${setupId}`)).body;
+  const detail = SetupDetail.parse((await callJson(server.url, session, 'GET', `/api/workspaces/${ws}/setups/${setupId}`)).body);
   const doc = detail.revision.document;
   const base = `/api/workspaces/${ws}`;
 

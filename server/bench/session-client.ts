@@ -34,7 +34,7 @@ export async function signInAs(baseUrl: string, email: string, password: string)
 export const sessionHeaders = (session: Session): Record<string, string> => ({ 'content-type': 'application/json', cookie: session.cookie, 'x-csrf-token': session.csrf });
 
 /** A JSON call; resolves with status and parsed body (or text). */
-export async function callJson(baseUrl: string, session: Session, method: string, path: string, body?: unknown, signal?: AbortSignal): Promise<{ status: number; body: any }> {
+export async function callJson(baseUrl: string, session: Session, method: string, path: string, body?: unknown, signal?: AbortSignal): Promise<{ status: number; body: unknown }> {
   const res = await fetch(`${baseUrl}${path}`, { method, headers: sessionHeaders(session), body: body === undefined ? undefined : JSON.stringify(body), signal });
   const text = await res.text();
   let parsed: unknown = text;

@@ -3,18 +3,22 @@ import { dirname } from 'node:path';
 import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'kysely';
 import { LRUCache } from 'lru-cache';
-import type { AuditLogTable } from './audit-log-table.ts';
-import type { OutboxMessageTable, OutboxRecipientTable } from './outbox-message-table.ts';
-import type { DynoFileTable, RoadTable } from './road-dyno-tables.ts';
-import type { RunTable } from './run-table.ts';
-import type { SetupRevisionTable, SetupTable, VehicleTable } from './setup-tables.ts';
-import type { ShareLinkTable } from './share-link-table.ts';
-import type { StudyPointTable, StudyTable } from './study-tables.ts';
-import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from './target-sheet-tables.ts';
-import type { ThrottleEventTable } from './throttle-table.ts';
-import type { InvitationTable, PasswordResetTable } from './token-tables.ts';
-import type { UserTable } from './user-table.ts';
-import type { MembershipTable, WorkspaceTable } from './workspace-table.ts';
+import type { AuditLogTable } from '../audit/audit.tables.ts';
+import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
+import type { RoadTable, RoadVersionTable } from '../roads/roads.tables.ts';
+import type { DynoFileTable } from '../dyno/dyno-files.tables.ts';
+import type { RunTable } from '../runs/runs.tables.ts';
+import type { SetupRevisionTable, SetupTable } from '../setups/setups.tables.ts';
+import type { VehicleTable } from '../vehicles/vehicles.tables.ts';
+import type { ShareLinkTable } from '../sharing/share-links.tables.ts';
+import type { StudyPointTable, StudyTable } from '../studies/studies.tables.ts';
+import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from '../target-sheets/target-sheets.tables.ts';
+import type { ThrottleEventTable } from '../limits/throttle.tables.ts';
+import type { InvitationTable } from '../workspaces/invitations.tables.ts';
+import type { EmailVerificationTable } from '../accounts/email-verifications.tables.ts';
+import type { PasswordResetTable } from '../accounts/password-resets.tables.ts';
+import type { UserTable } from '../accounts/users.tables.ts';
+import type { MembershipTable, WorkspaceTable } from '../workspaces/workspaces.tables.ts';
 
 /**
  * Every table, keyed by its SQL name. A feature that adds a migration adds its table
@@ -26,6 +30,7 @@ export interface Database {
   membership: MembershipTable;
   invitation: InvitationTable;
   password_reset: PasswordResetTable;
+  email_verification: EmailVerificationTable;
   audit_log: AuditLogTable;
   outbox_message: OutboxMessageTable;
   outbox_recipient: OutboxRecipientTable;
@@ -34,6 +39,7 @@ export interface Database {
   vehicle: VehicleTable;
   share_link: ShareLinkTable;
   road: RoadTable;
+  road_version: RoadVersionTable;
   dyno_file: DynoFileTable;
   run: RunTable;
   study: StudyTable;

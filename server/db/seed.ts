@@ -1,7 +1,7 @@
 import { loadConfig } from '../config.ts';
 import { openDatabase } from './database.ts';
 import { migrateToLatest } from './migrator.ts';
-import { DEMO_WORKSPACE_NAME } from './seed/demo-people.ts';
+import { DEMO_WORKSPACE_NAME } from '../core/demo-people.ts';
 import { seedDemo } from './seed/seed-demo.ts';
 
 // `npm run seed`: the demo workspace, only when the database has no users yet.

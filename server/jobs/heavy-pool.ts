@@ -1,6 +1,6 @@
 import { Piscina } from 'piscina';
 import type * as Tasks from './heavy-tasks.ts';
-import { fail, type Failure } from '../services/outcome.ts';
+import { fail, type Failure } from '../core/outcome.ts';
 
 /**
  * Worker threads for work that can take seconds (parsing a big CSV, resampling, spectra, class
@@ -43,7 +43,7 @@ export async function closeHeavyPool(): Promise<void> {
   await p?.destroy();
 }
 
-type TaskName = 'measuredUpload' | 'roadFigures';
+type TaskName = keyof typeof Tasks;
 type TaskIn<K extends TaskName> = Parameters<(typeof Tasks)[K]>[0];
 type TaskOut<K extends TaskName> = ReturnType<(typeof Tasks)[K]>;
 

@@ -5,6 +5,15 @@ import type { MeasuredUploadFields } from '../../shared/schemas/road-record.ts';
 import type { FieldIssue } from '../../shared/errors.ts';
 import { roadFigures as figuresOfRoad, type RoadFiguresOutcome } from '../../shared/road-library/road-figures.ts';
 import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
+import { fitDamperCurves } from '../../shared/dyno/fit-curve.ts';
+import { type DynoReadOutcome, summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
+import type { DynoParseOptions, DynoPeakPoints } from '../../shared/schemas/dyno.ts';
+import type { ApplyDynoFitInput } from '../../shared/schemas/dyno-file.ts';
+import type { DynoCheckFields } from '../../shared/schemas/target-sheet.ts';
+import type { StudyDefinition } from '../../shared/schemas/study.ts';
+import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
+import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
+import { readCheckFiles, type UploadedText } from '../target-sheets/read-check-files.ts';
 
 export type MeasuredUploadResult =
   | { ok: true; definition: Road; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
@@ -34,4 +43,24 @@ export function measuredUpload(input: { text: string; filename: string; fields: 
 /** A road's figures (resampling, spectrum, class fit). */
 export function roadFigures(road: Road): RoadFiguresOutcome {
   return figuresOfRoad(road);
+}
+
+/** A dyno file read as the server keeps it: summary, peaks and the thinned loop, or what is wrong by line. */
+export function dynoRead(input: { text: string; options: Partial<DynoParseOptions> }): DynoReadOutcome {
+  return summariseDyno(input.text, input.options);
+}
+
+/** Damper curves fitted through a file's peak points at the chosen knots. */
+export function dynoFit(input: { peaks: DynoPeakPoints; knots: ApplyDynoFitInput['knots']; weighting: ApplyDynoFitInput['weighting'] }) {
+  return fitDamperCurves(input.peaks, input.knots, { weighting: input.weighting });
+}
+
+/** The files of a target-sheet check read as measured dampers (every file, every line). */
+export function sheetCheckFiles(input: { files: UploadedText[]; fields: DynoCheckFields }) {
+  return readCheckFiles(input.files, input.fields);
+}
+
+/** The best compromise and the trade-off front over a study's saved points. */
+export function studyRunFigures(input: { def: StudyDefinition; points: StudyPointResult[] }) {
+  return { compromise: studyBestCompromise(input.def, input.points), tradeOff: studyTradeOff(input.def, input.points) };
 }

@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Db } from '../db/database.ts';
-import { insertOutboxMessage } from '../repositories/outbox-messages.ts';
+import { insertOutboxMessage } from './outbox.repository.ts';
 import { WORKSPACE_HEADER } from './mailer.ts';
 
 export interface MailSink {

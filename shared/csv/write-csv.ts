@@ -15,7 +15,7 @@ export function writeCsv(rows: readonly (readonly CsvCell[])[], fields?: readonl
 }
 
 // C0 and C1 controls, DEL, and the text-direction embeddings, overrides and isolates.
-const unsafeInLine = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+const unsafeInLine = /[\p{Cc}\u202a-\u202e\u2066-\u2069]/gu;
 
 /**
  * Free text for a `#` comment line above a CSV table: line breaks, controls and direction

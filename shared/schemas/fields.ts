@@ -29,13 +29,13 @@ export const NewPassword = z
 export const GivenPassword = z.string().min(1, 'Required').max(200, 'Use at most 200 characters');
 
 /**
- * Names and labels are one line of plain text: no control characters (C0, DEL, C1) and no
+ * Names and labels are one line of plain text: no control characters (C0, DEL, C1 — `\p{Cc}`) and no
  * text-direction embeddings, overrides or isolates (U+202A–U+202E, U+2066–U+2069), which can make
  * a name read differently from what it is, or break a line of an exported file.
  */
-export const plainLine = /^[^\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]*$/;
+export const plainLine = /^[^\p{Cc}\u202a-\u202e\u2066-\u2069]*$/u;
 /** Free text (notes, messages) may keep line breaks and tabs, nothing else of the above. */
-export const plainText = /^[^\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]*$/;
+export const plainText = /^(?:[\t\n\r]|[^\p{Cc}\u202a-\u202e\u2066-\u2069])*$/u;
 export const plainLineMessage = 'Use plain text on one line: no control characters or text-direction marks';
 export const plainTextMessage = 'Use plain text: no control characters or text-direction marks';
 

@@ -19,7 +19,6 @@ export type StudyStatus = z.infer<typeof StudyStatus>;
 /** POST /studies */
 export const CreateStudyInput = z.object({ definition: StudyDefinition });
 export type CreateStudyInput = z.infer<typeof CreateStudyInput>;
-export type CreateStudyInputIn = z.input<typeof CreateStudyInput>;
 
 /**
  * One point's runs as the browser made them (index −1: the unchanged base setup). The server

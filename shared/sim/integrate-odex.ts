@@ -1,6 +1,6 @@
 import { Outcome, Solver } from 'odex';
 import { createEventTracker } from './event-tracker.ts';
-import { allocateStates, DEFAULT_TOLERANCE, outputCount, type IntegrationOptions, type IntegrationOutcome } from './integrate.ts';
+import { allocateStates, DEFAULT_TOLERANCE, outputCount, type IntegrationOptions, type IntegrationOutcome } from './integration-options.ts';
 import { newCornerForces, SWITCH_COUNT, type CornerModel } from './quarter-car.ts';
 import type { RoadExcitation } from './roads/excitation.ts';
 import { allocateTrace, writeSample } from './trace.ts';
@@ -140,7 +140,8 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
   };
 
   const restart: RestartPoint = { t: 0, y: [0, 0, 0, 0], lastStep: 0 };
-  let stalled = false;
+  // Set before each solve; the output callback raises it when the solver's step collapses.
+  let stalled: boolean;
 
   // Grid times are i·dt, compared with a hair of slack so a sample landing on a step end
   // (or on the run's end) is not lost to rounding.

@@ -1,5 +1,5 @@
 import { createEventTracker } from './event-tracker.ts';
-import { allocateStates, outputCount, type IntegrationOptions, type IntegrationOutcome } from './integrate.ts';
+import { allocateStates, outputCount, type IntegrationOptions, type IntegrationOutcome } from './integration-options.ts';
 import { newCornerForces, SWITCH_COUNT, type CornerModel } from './quarter-car.ts';
 import type { RoadExcitation } from './roads/excitation.ts';
 import { sampleRoad, stepOf, stepPlanFor } from './step-plan.ts';

@@ -19,7 +19,8 @@ export function studyPointUpload(p: StudyPointResult): { index: number; runs: St
 }
 
 /** Names of the study's roads for tables and limit messages: the entry's name, else the road's own label. */
-export function studyRoadNames(def: Pick<StudyDefinition, 'roads'>, roads: readonly Road[]): string[] {
+/** Names of the study's roads; `roads` may be sparse where an entry carries its own name. */
+export function studyRoadNames(def: Pick<StudyDefinition, 'roads'>, roads: readonly (Road | undefined)[]): string[] {
   return def.roads.map((entry, i) => entry.name ?? (roads[i] ? roadLabel(roads[i], entry.seed) : `road ${i + 1}`));
 }
 

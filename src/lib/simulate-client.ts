@@ -52,8 +52,3 @@ export async function simulate(request: RunRequestInput, options: SimulateOption
   if (outcome.status === 'cancelled') return { ok: false, cancelled: true, reason: 'cancelled' };
   return { ok: false, reason: `The simulation stopped: ${outcome.reason}` };
 }
-
-/** Starts one worker ahead of need (a page that will run soon calls this on mount). */
-export function prewarmSimulation(): void {
-  simulatePool().prewarm(1);
-}

@@ -24,8 +24,3 @@ export function useWorkspace(): CurrentWorkspace {
   if (!value) throw new Error('useWorkspace() used outside a workspace route');
   return value;
 }
-
-/** The current workspace, or null on pages outside any workspace (account, outbox). */
-export function useOptionalWorkspace(): CurrentWorkspace | null {
-  return useContext(WorkspaceContext);
-}

@@ -11,7 +11,7 @@ import { RevisionsResponse, SetupDetail } from '../../shared/schemas/setup-recor
 import { prepareDatabase, type ServerProcess, startServerProcess } from '../../server/bench/server-process.ts';
 import { callJson, type Session, signInAs } from '../../server/bench/session-client.ts';
 import { checkBackupFile } from '../../server/cli/restore-database.ts';
-import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-people.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { cornerDocument } from './helpers/setup-fixtures.ts';
 
 // `npm run backup` copies the live database while the server (a child process) keeps taking
@@ -60,7 +60,7 @@ const crashMessages = (file: string) => {
 
 describe('backup and restore', () => {
   let backupFile = '';
-  let acked: Ack[] = [];
+  const acked: Ack[] = [];
   let session: Session;
   let setupId = '';
   let workspaceId = '';

@@ -8,7 +8,8 @@ import { addMember, createUser, createWorkspace } from './helpers/people.ts';
 import { measuredCsv } from './helpers/road-dyno-fixtures.ts';
 import { createTestApp } from './helpers/test-app.ts';
 
-const t = await createTestApp();
+// One person fills the queue here: the per-person limits (tests/api/limits.test.ts) are lifted.
+const t = await createTestApp({ heavyJobs: { atOnce: 0, perWindow: 0 } });
 afterAll(async () => {
   await configureHeavyPool({});
   await t.close();

@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { Me } from '../../shared/schemas/account.ts';
 import { Invitation, InvitationInfo, MembersResponse } from '../../shared/schemas/workspace.ts';
-import { INVITATION_DAYS } from '../../server/services/invitations.ts';
+import { INVITATION_DAYS } from '../../server/workspaces/invitations.service.ts';
 import { browserLike, signedIn } from './helpers/agents.ts';
 import { linkIn, waitForMail } from './helpers/mail.ts';
 import { addMember, createUser, createWorkspace, uniqueEmail } from './helpers/people.ts';

@@ -6,6 +6,7 @@ import { ErrorBody } from '../../shared/errors.ts';
 import { browserLike, signedIn } from './helpers/agents.ts';
 import { mailCount } from './helpers/mail.ts';
 import { addMember, createUser, createWorkspace, uniqueEmail } from './helpers/people.ts';
+import { measuredCsv } from './helpers/road-dyno-fixtures.ts';
 import { createTestApp } from './helpers/test-app.ts';
 
 const t = await createTestApp();
@@ -84,5 +85,42 @@ describe('sign-in back-off per account', () => {
   it('does not count sign-ins that succeed', async () => {
     const user = await createUser(t.db);
     for (let i = 0; i < 12; i++) await signedIn(t.url, user.email, user.password);
+  });
+});
+
+describe('large jobs per person', () => {
+  it('lets one person run two large jobs at once; a third waits its turn while others go on', async () => {
+    const workspaceId = await createWorkspace(t.db, 'Heavy hands');
+    const first = await createUser(t.db, { name: 'Busy Engineer' });
+    const other = await createUser(t.db, { name: 'Other Engineer' });
+    await addMember(t.db, workspaceId, first.id, 'engineer');
+    await addMember(t.db, workspaceId, other.id, 'engineer');
+    const a = await signedIn(t.url, first.email, first.password);
+    const b = await signedIn(t.url, other.email, other.password);
+    const csv = Buffer.from(measuredCsv(120_000));
+    const upload = (s: typeof a, name: string) =>
+      s.agent.post(`/api/workspaces/${workspaceId}/roads/measured`).set('x-csrf-token', s.csrf).field('name', name).attach('file', csv, 'profile.csv');
+    const [r1, r2, r3, rOther] = await Promise.all([upload(a, 'One'), upload(a, 'Two'), upload(a, 'Three'), upload(b, 'Theirs')]);
+    const statuses = [r1.status, r2.status, r3.status].sort();
+    expect(statuses).toEqual([201, 201, 429]);
+    const refused = [r1, r2, r3].find((r) => r.status === 429)!;
+    limited(refused);
+    expect(ErrorBody.parse(refused.body).error.message).toMatch(/2 large jobs running/);
+    expect(rOther.status).toBe(201);
+    // Once those finish, the same person may start again.
+    expect((await upload(a, 'Four')).status).toBe(201);
+  });
+
+  it('counts 60 large jobs per person in ten minutes, in the database', async () => {
+    const workspaceId = await createWorkspace(t.db, 'Many roads');
+    const eng = await createUser(t.db, { name: 'Prolific Engineer' });
+    await addMember(t.db, workspaceId, eng.id, 'engineer');
+    const s = await signedIn(t.url, eng.email, eng.password);
+    const road = (i: number) => s.post(`/api/workspaces/${workspaceId}/roads`, { name: `Bump ${i}`, definition: { kind: 'bump', height: 0.04, length: 0.6, at: 10 } });
+    for (let i = 0; i < 60; i++) expect((await road(i)).status).toBe(201);
+    const retry = limited(await road(60));
+    expect(retry).toBeLessThanOrEqual(600);
+    t.clock.advance(601_000);
+    expect((await road(61)).status).toBe(201);
   });
 });

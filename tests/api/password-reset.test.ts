@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
-import { RESET_MINUTES } from '../../server/services/password-reset.ts';
+import { RESET_MINUTES } from '../../server/accounts/password-reset.service.ts';
 import { browserLike, signedIn } from './helpers/agents.ts';
 import { linkIn, mailCount, waitForMail } from './helpers/mail.ts';
 import { createUser, uniqueEmail } from './helpers/people.ts';

@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { routeKey } from '../../server/routes/registry.ts';
+import { routeKey } from '../../server/http/registry.ts';
 import { allEntries } from './matrix/all-entries.ts';
 import { expectedFor, sendAs } from './helpers/route-matrix.ts';
 import { callers, createRoleWorld } from './helpers/role-world.ts';

@@ -43,7 +43,7 @@ async function newStudy(over: Parameters<typeof studyDefinition>[1] = {}) {
 }
 
 describe('studies: define and read', () => {
-  it('stores the definition with the base revision and a library road copied in, and viewers can read it', async () => {
+  it('stores the definition with the base revision and a library road by reference, and viewers can read it', async () => {
     const road = await freshRoad(t.db, workspaceId, engineer, { kind: 'iso8608', class: 'D', seed: 3 });
     const detail = await newStudy({ roads: [{ source: 'library', roadId: road.id }], speeds: [15, 25] });
     expect(detail).toMatchObject({ status: 'draft', plannedPoints: 4, plannedRuns: 4 * 2 + 2, results: null, baseline: null, points: [], basePoint: null });

@@ -7,7 +7,7 @@ import { Me } from '../../shared/schemas/account.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
 import { bundleServer, prepareDatabase, type ServerProcess, startServerProcess } from '../../server/bench/server-process.ts';
 import { callJson, type Session, signInAs } from '../../server/bench/session-client.ts';
-import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-people.ts';
+import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { cornerDocument } from '../api/helpers/setup-fixtures.ts';
 
 // The real server (`node --import tsx server/main.ts`, its own SQLite file, demo seed, loopback,

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { routeKey, type RouteDef } from '../../server/routes/registry.ts';
+import { routeKey, type RouteDef } from '../../server/http/registry.ts';
 import { createRoleWorld } from '../api/helpers/role-world.ts';
 import { allEntries } from '../api/matrix/all-entries.ts';
 import { peaksCsv } from '../api/helpers/road-dyno-fixtures.ts';

@@ -1,20 +1,9 @@
 import { randomUUID } from 'node:crypto';
-import type { DemoUser } from '../../../shared/schemas/config.ts';
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import { hashPassword } from '../../auth/password.ts';
 import type { Queryable } from '../database.ts';
 import type { SeedContext } from './seed-context.ts';
-
-// An invented maker and invented people; `.example` is a reserved domain.
-export const DEMO_WORKSPACE_NAME = 'Tallis & Brume — Chassis';
-export const DEMO_PASSWORD = 'ridewright-demo';
-
-export const DEMO_USERS: DemoUser[] = [
-  { role: 'admin', name: 'Ada Quill', email: 'ada.quill@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'lead', name: 'Tomas Reeve', email: 'tomas.reeve@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'engineer', name: 'Ines Marlow', email: 'ines.marlow@tallisbrume.example', password: DEMO_PASSWORD },
-  { role: 'viewer', name: 'Olu Fenwick', email: 'olu.fenwick@tallisbrume.example', password: DEMO_PASSWORD },
-];
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
 
 /** The demo workspace and one user per role; the first step of `seedDemo`. */
 export async function seedDemoPeople(db: Queryable, now: Date): Promise<SeedContext> {
@@ -26,7 +15,7 @@ export async function seedDemoPeople(db: Queryable, now: Date): Promise<SeedCont
   for (const u of DEMO_USERS) {
     const id = randomUUID();
     users[u.role] = id;
-    await db.insertInto('user').values({ id, email: u.email, name: u.name, password_hash: passwordHash, session_version: 0, created_at: at }).execute();
+    await db.insertInto('user').values({ id, email: u.email, name: u.name, password_hash: passwordHash, session_version: 0, created_at: at, email_verified_at: at }).execute();
     await db.insertInto('membership').values({ workspace_id: workspaceId, user_id: id, role: u.role, created_at: at }).execute();
   }
   await db

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { listSetupDynoFiles } from '../../services/dyno-files.ts';
-import { listRoadLibrary } from '../../services/roads.ts';
-import { listSetups } from '../../services/setups.ts';
+import { listSetupDynoFiles } from '../../dyno/dyno-files.service.ts';
+import { listRoadLibrary } from '../../roads/roads.service.ts';
+import { listSetups } from '../../setups/setups.service.ts';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
 import { seedDemo } from './seed-demo.ts';

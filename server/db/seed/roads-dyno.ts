@@ -3,12 +3,12 @@ import seedrandom from 'seedrandom';
 import { summariseDyno } from '../../../shared/dyno-upload/summarise-dyno.ts';
 import { Road, type RoadInput } from '../../../shared/schemas/road.ts';
 import type { Role } from '../../../shared/schemas/workspace.ts';
-import { listSetupSummaries } from '../../repositories/setups.ts';
-import { insertDynoRecord } from '../../services/dyno-files.ts';
-import { figuresOrFail, insertRoadRecord } from '../../services/roads.ts';
-import type { Actor } from '../../services/setups.ts';
-import { DEMO_USERS } from './demo-people.ts';
+import { listSetupSummaries } from '../../setups/index.ts';
+import { insertDynoRecord } from '../../dyno/dyno-files.service.ts';
+import { figuresOrFail, insertRoadRecordInTx } from '../../roads/roads.service.ts';
+import { DEMO_USERS } from '../../core/demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
+import type { Actor } from '../../core/actor.ts';
 
 /**
  * An invented measured profile: 300 m of a worn lane sampled every 0.1 m, made from a seeded
@@ -59,7 +59,7 @@ export const seedRoadsDyno: SeedStep = async (trx, ctx) => {
     const definition = Road.parse(r.definition);
     const figures = figuresOrFail(definition);
     if (!figures.ok) throw new Error(`demo road ${r.name} refused: ${figures.message}`);
-    await insertRoadRecord(trx, ws, actorOf(r.by, ctx.users), { name: r.name, definition }, definition.kind === 'measured' ? 'measured' : 'defined', figures.value, daysBefore(ctx.now, r.daysAgo));
+    await insertRoadRecordInTx(trx, ws, actorOf(r.by, ctx.users), { name: r.name, definition }, definition.kind === 'measured' ? 'measured' : 'defined', figures.value, daysBefore(ctx.now, r.daysAgo));
   }
 
   const setup = (await listSetupSummaries(trx, ctx.workspaceId, 'exclude')).find((s) => s.name === DYNO_SETUP);

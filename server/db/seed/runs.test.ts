@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
-import { listRuns } from '../../services/runs.ts';
+import { listRuns } from '../../runs/runs.service.ts';
 import { seedDemo } from './seed-demo.ts';
 
 describe('demo runs seed', () => {

@@ -5,9 +5,9 @@ import type { Role } from '../../../shared/schemas/workspace.ts';
 import { toStoredSpectra, toStoredTraces } from '../../../shared/runs/stored-run.ts';
 import { computeSpectra } from '../../../shared/sim/metrics/compute-metrics.ts';
 import { runCorner } from '../../../shared/sim/run-corner.ts';
-import { saveRunIn } from '../../services/runs.ts';
+import { saveRunInTx } from '../../runs/runs.service.ts';
 import type { Queryable } from '../database.ts';
-import { DEMO_USERS } from './demo-people.ts';
+import { DEMO_USERS } from '../../core/demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
 
 /*
@@ -70,8 +70,8 @@ export const seedRuns: SeedStep = async (trx, ctx) => {
       spectra: toStoredSpectra(computeSpectra(run.trace, { settleTime: run.result.settleTime })),
     });
     const person = DEMO_USERS.find((u) => u.role === r.by)!;
-    const actor = { id: ctx.users[r.by], name: person.name, email: person.email, sessionVersion: 0 };
-    const saved = await saveRunIn(trx, ws, actor, input, new Date(ctx.now.getTime() - r.daysAgo * 86_400_000));
+    const actor = { id: ctx.users[r.by], name: person.name, email: person.email, sessionVersion: 0, emailVerified: true };
+    const saved = await saveRunInTx(trx, ws, actor, input, new Date(ctx.now.getTime() - r.daysAgo * 86_400_000));
     if (!saved.ok) throw new Error(`seed runs: ${r.name}: ${saved.message}`);
   }
 };

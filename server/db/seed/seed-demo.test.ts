@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { verifyPassword } from '../../auth/password.ts';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
-import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME } from './demo-people.ts';
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
 import { seedDemo } from './seed-demo.ts';
 
 describe('seedDemo', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { tableForce } from '../../../shared/sim/damper.ts';
-import { getVehicle, listVehicles } from '../../services/vehicles.ts';
-import { listSetups } from '../../services/setups.ts';
+import { getVehicle, listVehicles } from '../../vehicles/vehicles.service.ts';
+import { listSetups } from '../../setups/setups.service.ts';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
 import { seedDemo } from './seed-demo.ts';

@@ -3,12 +3,13 @@ import type { Corner } from '../../../shared/schemas/setup-record.ts';
 import { type DamperCurve, Setup, type SetupInput } from '../../../shared/schemas/setup.ts';
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import { curveFromParameters } from '../../../shared/sim/damper-builder.ts';
-import { recordAudit } from '../../services/audit.ts';
-import { type Actor, addRevision, insertNewSetup } from '../../services/setups.ts';
-import { insertVehicle } from '../../repositories/vehicles.ts';
+import { recordAudit } from '../../audit/audit.service.ts';
+import { addRevisionInTx, insertNewSetupInTx } from '../../setups/setups.service.ts';
+import { insertVehicle } from '../../vehicles/index.ts';
 import type { Queryable } from '../database.ts';
-import { DEMO_USERS } from './demo-people.ts';
+import { DEMO_USERS } from '../../core/demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
+import type { Actor } from '../../core/actor.ts';
 
 /*
  * Invented corners of the three Tallis & Brume cars. Spring rates were tuned so the body modes
@@ -201,7 +202,7 @@ export const seedSetups: SeedStep = async (trx, ctx) => {
     const [first, ...later] = c.revisions;
     const createdAt = daysBefore(ctx.now, first.daysAgo);
     vehicleIds[c.vehicle] ??= await seedVehicle(trx, ctx.workspaceId, actorOf(first.by, ctx.users), c.vehicle, createdAt);
-    const created = await insertNewSetup(
+    const created = await insertNewSetupInTx(
       trx,
       ws,
       actorOf(first.by, ctx.users),
@@ -211,7 +212,7 @@ export const seedSetups: SeedStep = async (trx, ctx) => {
     );
     if (!created.ok) throw new Error(`demo setup ${first.doc.name} refused: ${created.message}`);
     for (const r of later) {
-      const added = await addRevision(trx, ws, actorOf(r.by, ctx.users), created.value.id, { document: Setup.parse(r.doc), message: r.message, source: null }, daysBefore(ctx.now, r.daysAgo));
+      const added = await addRevisionInTx(trx, ws, actorOf(r.by, ctx.users), created.value.id, { document: Setup.parse(r.doc), message: r.message, source: null }, daysBefore(ctx.now, r.daysAgo));
       if (!added.ok) throw new Error(`demo revision of ${first.doc.name} refused: ${added.message}`);
     }
   }

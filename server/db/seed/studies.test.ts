@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { runStudyHere } from '../../../shared/study/run-all.ts';
-import { getStudy, listStudies } from '../../services/studies.ts';
+import { getStudy, listStudies } from '../../studies/studies.service.ts';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
 import { seedDemo } from './seed-demo.ts';

@@ -1,10 +1,10 @@
 import { StudyDefinition } from '../../../shared/schemas/study.ts';
 import { studyPointUpload } from '../../../shared/study/collect.ts';
 import { runStudyHere } from '../../../shared/study/run-all.ts';
-import { listSetupSummaries } from '../../repositories/setups.ts';
-import { insertNewStudy } from '../../services/studies.ts';
-import { chooseStudyBaseline, closeStudyRun, storeStudyPoints } from '../../services/study-results.ts';
-import { DEMO_USERS } from './demo-people.ts';
+import { listSetupSummaries } from '../../setups/index.ts';
+import { insertNewStudyInTx } from '../../studies/studies.service.ts';
+import { chooseStudyBaselineInTx, closeStudyRunInTx, storeStudyPointsInTx } from '../../studies/study-results.service.ts';
+import { DEMO_USERS } from '../../core/demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
 
 const BASE_SETUP = 'Brume Pipit front, baseline';
@@ -43,17 +43,17 @@ export const seedStudies: SeedStep = async (trx, ctx) => {
     ],
     constraints: { maxStrokeUsed: 0.9, maxLiftOffFraction: 0.01, minTyreLoad: 400 },
   });
-  const created = await insertNewStudy(trx, ws, engineer, { definition }, at);
+  const created = await insertNewStudyInTx(trx, ws, engineer, { definition }, at);
   if (!created.ok) throw new Error(`demo study refused: ${created.message}`);
   const detail = created.value;
   const { points, base } = runStudyHere(detail.definition, detail.baseSetup, detail.roads);
-  const stored = await storeStudyPoints(trx, ws, detail.id, { points: [...points, ...(base ? [base] : [])].map(studyPointUpload) }, at);
+  const stored = await storeStudyPointsInTx(trx, ws, detail.id, { points: [...points, ...(base ? [base] : [])].map(studyPointUpload) }, at);
   if (!stored.ok) throw new Error(`demo study points refused: ${stored.message}`);
-  const closed = await closeStudyRun(trx, ws, engineer, detail.id, { status: 'complete', elapsedMs: 900, workers: 2 }, at);
+  const closed = await closeStudyRunInTx(trx, ws, engineer, detail.id, { status: 'complete', elapsedMs: 900, workers: 2 }, at);
   if (!closed.ok) throw new Error(`demo study run refused: ${closed.message}`);
   const best = closed.value.results?.best;
   if (best) {
-    const chosen = await chooseStudyBaseline(trx, ws, { id: ctx.users.lead, name: person('lead') }, detail.id, { pointIndex: best.pointIndex }, ctx.now);
+    const chosen = await chooseStudyBaselineInTx(trx, ws, { id: ctx.users.lead, name: person('lead') }, detail.id, { pointIndex: best.pointIndex }, ctx.now);
     if (!chosen.ok) throw new Error(`demo baseline refused: ${chosen.message}`);
   }
 };

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../database.ts';
 import { migrateToLatest } from '../migrator.ts';
-import { listSheetChecks } from '../../services/target-sheet-checks.ts';
-import { listTargetSheets } from '../../services/target-sheets.ts';
+import { listSheetChecks } from '../../target-sheets/checks.service.ts';
+import { listTargetSheets } from '../../target-sheets/target-sheets.service.ts';
 import { seedDemo } from './seed-demo.ts';
 
 describe('demo target sheets', () => {

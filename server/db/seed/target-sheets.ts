@@ -1,9 +1,10 @@
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import type { TargetPoint } from '../../../shared/schemas/target-sheet.ts';
-import { readCheckFiles, storeSheetCheckIn } from '../../services/target-sheet-checks.ts';
-import { createTargetSheetIn, moveTargetSheetIn, saveTargetSheetIn } from '../../services/target-sheets.ts';
+import { storeSheetCheckInTx } from '../../target-sheets/checks.service.ts';
+import { readCheckFiles } from '../../target-sheets/read-check-files.ts';
+import { createTargetSheetInTx, moveTargetSheetInTx, saveTargetSheetInTx } from '../../target-sheets/target-sheets.service.ts';
 import type { Queryable } from '../database.ts';
-import { DEMO_USERS, DEMO_WORKSPACE_NAME } from './demo-people.ts';
+import { DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
 import type { SeedStep } from './seed-context.ts';
 
 const daysBefore = (now: Date, days: number) => new Date(now.getTime() - days * 86_400_000);
@@ -52,10 +53,10 @@ export const seedTargetSheets: SeedStep = async (trx, ctx) => {
   };
 
   const front = await setupNamed(trx, ctx.workspaceId, 'Brume Pipit front, baseline');
-  const created = must(await createTargetSheetIn(trx, ws('engineer'), engineer, { setupId: front, revision: 2 }, daysBefore(ctx.now, 10)), 'create');
+  const created = must(await createTargetSheetInTx(trx, ws('engineer'), engineer, { setupId: front, revision: 2 }, daysBefore(ctx.now, 10)), 'create');
   const id = created.sheet.id;
   must(
-    await saveTargetSheetIn(
+    await saveTargetSheetInTx(
       trx,
       ws('engineer'),
       engineer,
@@ -65,8 +66,8 @@ export const seedTargetSheets: SeedStep = async (trx, ctx) => {
     ),
     'edit',
   );
-  must(await moveTargetSheetIn(trx, ws('engineer'), engineer, id, 'in_review', undefined, daysBefore(ctx.now, 9)), 'submit');
-  const released = must(await moveTargetSheetIn(trx, ws('lead'), lead, id, 'released', undefined, daysBefore(ctx.now, 8)), 'release').detail.sheet;
+  must(await moveTargetSheetInTx(trx, ws('engineer'), engineer, id, 'in_review', undefined, daysBefore(ctx.now, 9)), 'submit');
+  const released = must(await moveTargetSheetInTx(trx, ws('lead'), lead, id, 'released', undefined, daysBefore(ctx.now, 8)), 'release').detail.sheet;
 
   const { compression, rebound } = released;
   const files = [
@@ -77,8 +78,8 @@ export const seedTargetSheets: SeedStep = async (trx, ctx) => {
     return { text, filename: `${unit.toLowerCase()}.csv`, bytes: text.length };
   });
   const read = must(readCheckFiles(files, { label: ['PF-0151', 'PF-0152'] }), 'read dyno files');
-  must(await storeSheetCheckIn(trx, ws('engineer'), engineer, id, files, read, daysBefore(ctx.now, 5)), 'dyno check');
+  must(await storeSheetCheckInTx(trx, ws('engineer'), engineer, id, files, read, daysBefore(ctx.now, 5)), 'dyno check');
 
   const rear = await setupNamed(trx, ctx.workspaceId, 'Brume Pipit rear, baseline');
-  must(await createTargetSheetIn(trx, ws('engineer'), engineer, { setupId: rear, revision: 1 }, daysBefore(ctx.now, 2)), 'draft');
+  must(await createTargetSheetInTx(trx, ws('engineer'), engineer, { setupId: rear, revision: 1 }, daysBefore(ctx.now, 2)), 'draft');
 };

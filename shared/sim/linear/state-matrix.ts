@@ -21,8 +21,6 @@ export interface StateSpace {
   E: number[];
 }
 
-export const outputNames = ['bodyAccel', 'travel', 'tyreLoad'] as const;
-
 export function stateSpace(corner: LinearCorner): StateSpace {
   const { sprungMass: ms, unsprungMass: mu, wheelRate: ks, wheelDamping: c, tyreRate: kt, tyreDamping: ct } = corner;
   const A = [

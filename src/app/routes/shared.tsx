@@ -1,5 +1,4 @@
-import { useParams } from 'react-router';
-import { Link } from 'react-router';
+import { useParams, Link } from 'react-router';
 import { Damper } from '../../../shared/schemas/setup.ts';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';

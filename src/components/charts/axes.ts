@@ -59,11 +59,6 @@ export function logSplits(_u: uPlot, _axis: number, min: number, max: number): n
   return out;
 }
 
-/** The x scale entry for a log-x chart, ready to spread into `scales`. */
-export function logXScales(range?: [number, number]): uPlot.Options['scales'] {
-  return { x: logScale(range) };
-}
-
 /** Log-log scales (x and y), e.g. a spatial PSD in m³ against wavenumber in cycles/m. */
 export function logLogScales(xRange?: [number, number], yRange?: [number, number]): uPlot.Options['scales'] {
   return { x: logScale(xRange), y: logScale(yRange) };

@@ -13,8 +13,3 @@ export function syncedCursor(key: string = TIME_CURSOR_KEY): uPlot.Cursor {
     drag: { x: true, y: false, setScale: true },
   };
 }
-
-/** The pub/sub hub of a group, for code that needs to publish to it directly. */
-export function cursorGroup(key: string = TIME_CURSOR_KEY): uPlot.SyncPubSub {
-  return uPlot.sync(key);
-}

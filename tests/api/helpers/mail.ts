@@ -1,5 +1,5 @@
 import type { Db } from '../../../server/db/database.ts';
-import type { OutboxMessageRow } from '../../../server/db/outbox-message-table.ts';
+import type { OutboxMessageRow } from '../../../server/mail/outbox.tables.ts';
 
 /**
  * The newest message the sink stored for `to` (optionally with a subject containing `subject`).

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import type { Db } from '../../../server/db/database.ts';
-import { uploadDynoFile } from '../../../server/services/dyno-files.ts';
-import { createRoad } from '../../../server/services/roads.ts';
+import { uploadDynoFile } from '../../../server/dyno/dyno-files.service.ts';
+import { createRoad } from '../../../server/roads/roads.service.ts';
 import type { DynoFileItem } from '../../../shared/schemas/dyno-file.ts';
 import type { RoadDetail } from '../../../shared/schemas/road-record.ts';
 import { Road, type RoadInput } from '../../../shared/schemas/road.ts';

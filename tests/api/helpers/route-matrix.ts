@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { hasRole } from '../../../shared/schemas/workspace.ts';
 import type { ErrorCode } from '../../../shared/errors.ts';
-import type { Access } from '../../../server/routes/registry.ts';
+import type { Access } from '../../../server/http/registry.ts';
 import { anonymousHeaders, sessionHeaders } from './people.ts';
 import { type Caller, type RoleWorld, userOfCaller } from './role-world.ts';
 

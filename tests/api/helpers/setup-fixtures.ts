@@ -2,8 +2,8 @@ import type { Setup, SetupInput } from '../../../shared/schemas/setup.ts';
 import { Setup as SetupSchema } from '../../../shared/schemas/setup.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import type { Db } from '../../../server/db/database.ts';
-import { createLink } from '../../../server/services/share-links.ts';
-import { createSetup } from '../../../server/services/setups.ts';
+import { createLink } from '../../../server/sharing/share-links.service.ts';
+import { createSetup } from '../../../server/setups/setups.service.ts';
 import type { TestUser } from './people.ts';
 
 /** An invented small-hatchback front corner (SI units), valid against the setup schema. */

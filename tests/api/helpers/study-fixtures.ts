@@ -3,8 +3,8 @@ import { StudyDefinition, type StudyDefinitionInput } from '../../../shared/sche
 import { studyPointUpload } from '../../../shared/study/collect.ts';
 import { runStudyHere } from '../../../shared/study/run-all.ts';
 import type { Db } from '../../../server/db/database.ts';
-import { finishStudyRun, saveStudyPoints } from '../../../server/services/study-results.ts';
-import { createStudy } from '../../../server/services/studies.ts';
+import { finishStudyRun, saveStudyPoints } from '../../../server/studies/study-results.service.ts';
+import { createStudy } from '../../../server/studies/studies.service.ts';
 import { exampleSetup, insertSetup } from './runs.ts';
 
 /** A small 2-D study (2 × 2 points of 4 s on one ISO class C road at 20 m/s) on a setup revision. */

@@ -1,7 +1,7 @@
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import type { TargetSheetDetail, TargetSheetStatus } from '../../../shared/schemas/target-sheet.ts';
-import { runSheetCheck } from '../../../server/services/target-sheet-checks.ts';
-import { createTargetSheet, moveTargetSheet } from '../../../server/services/target-sheets.ts';
+import { runSheetCheck } from '../../../server/target-sheets/checks.service.ts';
+import { createTargetSheet, moveTargetSheet } from '../../../server/target-sheets/target-sheets.service.ts';
 import type { TestUser } from './people.ts';
 import { freshSetup } from './setup-fixtures.ts';
 import type { TestApp } from './test-app.ts';

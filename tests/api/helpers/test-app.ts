@@ -7,7 +7,7 @@ import { migrateToLatest } from '../../../server/db/migrator.ts';
 import type { AppDeps, AppOptions } from '../../../server/deps.ts';
 import { createMailer } from '../../../server/mail/mailer.ts';
 import { type MailSink, startMailSink } from '../../../server/mail/sink.ts';
-import type { RouteDef } from '../../../server/routes/registry.ts';
+import type { RouteDef } from '../../../server/http/registry.ts';
 
 export const TEST_PUBLIC_URL = 'http://ridewright.test';
 
@@ -51,6 +51,8 @@ export async function createTestApp(overrides: Partial<AppOptions> = {}): Promis
     publicUrl: TEST_PUBLIC_URL,
     mailer,
     demoMode: false,
+    // Tests stand for a server whose owner opened sign-up (RIDEWRIGHT_OPEN_SIGNUP); closed sign-up has its own test.
+    openSignUp: true,
     outboxEnabled: true,
     clock: clock.now,
     logger,

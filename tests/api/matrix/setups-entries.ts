@@ -1,4 +1,4 @@
-import { createVehicle } from '../../../server/services/vehicles.ts';
+import { createVehicle } from '../../../server/vehicles/vehicles.service.ts';
 import { cornerDocument, freshSetup, freshShareLink } from '../helpers/setup-fixtures.ts';
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import type { RoleWorld } from '../helpers/role-world.ts';

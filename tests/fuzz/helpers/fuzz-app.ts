@@ -47,6 +47,9 @@ export async function createFuzzApp(overrides: Partial<AppOptions> = {}): Promis
     clock: clock.now,
     logger: pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' }),
     rateLimit: 0,
+    // Fuzzing sends hundreds of uploads as one person; the per-person limits have their own tests.
+    heavyJobs: { atOnce: 0, perWindow: 0 },
+    openSignUp: true,
     ...overrides,
   });
   const server: Server = await new Promise((resolve) => {

@@ -79,10 +79,10 @@ export function pathsOf(value: unknown, prefix: (string | number)[] = [], out: (
 export const REMOVE = Symbol('remove');
 export function withAt(value: unknown, path: (string | number)[], replacement: unknown): unknown {
   if (path.length === 0) return replacement === REMOVE ? undefined : replacement;
-  const copy: any = Array.isArray(value) ? [...value] : { ...(value as object) };
+  const copy = (Array.isArray(value) ? [...value] : { ...(value as object) }) as Record<string | number, unknown>;
   const [head, ...rest] = path;
   if (rest.length === 0 && replacement === REMOVE) {
-    if (Array.isArray(copy)) copy.splice(Number(head), 1);
+    if (Array.isArray(copy)) (copy as unknown[]).splice(Number(head), 1);
     else delete copy[head];
   } else copy[head] = withAt(copy[head], rest, replacement);
   return copy;

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { ErrorBody } from '../../../shared/errors.ts';
-import type { RouteDef } from '../../../server/routes/registry.ts';
+import type { RouteDef } from '../../../server/http/registry.ts';
 import type { MatrixEntry, MatrixRequest } from '../../api/helpers/route-matrix.ts';
 import { anonymousHeaders, sessionHeaders } from '../../api/helpers/people.ts';
 import { type Caller, type RoleWorld, userOfCaller } from '../../api/helpers/role-world.ts';

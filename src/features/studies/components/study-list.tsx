@@ -2,8 +2,7 @@ import { Link } from 'react-router';
 import type { StudySummary } from '../../../../shared/schemas/study-record.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
-import { formatDateTime } from '../../../lib/format.ts';
-import { units } from '../../../lib/format.ts';
+import { formatDateTime, units } from '../../../lib/format.ts';
 import { parameterLabel, parameterText, parameterUnit } from '../model/display.ts';
 
 export const statusWords: Record<StudySummary['status'], { text: string; tone: 'plain' | 'accent' | 'signal' }> = {

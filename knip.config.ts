@@ -1,0 +1,19 @@
+// knip finds unused files, exports and dependencies; `npm run lint` runs it.
+export default {
+  entry: [
+    'server/jobs/heavy-worker.mjs',
+    'server/jobs/heavy-tasks.ts',
+    'bench/sweep-worker.ts',
+    'migrations/*.ts',
+    'workers/*.ts',
+    'tests/browser/bench-*.ts',
+    'tests/browser/helpers/serve-built-client.ts',
+  ],
+  project: ['src/**/*.{ts,tsx,css}', 'server/**/*.{ts,mjs}', 'shared/**/*.ts', 'workers/**/*.ts', 'migrations/**/*.ts', 'cli/**/*.ts', 'bench/**/*.ts', 'tests/**/*.ts'],
+  ignore: ['tests/lint/fixtures/**'],
+  ignoreExportsUsedInFile: true,
+  // Stylesheets import the fonts and Tailwind: read their @import lines as imports.
+  compilers: {
+    css: (text: string) => [...text.matchAll(/(?<=@)import[^;]+/g)].join('\n'),
+  },
+};

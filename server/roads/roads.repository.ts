@@ -1,0 +1,87 @@
+import type { Queryable } from '../db/database.ts';
+import { sql } from 'kysely';
+import type { NewRoadRow, RoadTable, RoadVersionTable } from './roads.tables.ts';
+
+/** SQL for the road library. */
+
+export async function insertRoad(db: Queryable, row: NewRoadRow): Promise<void> {
+  await db.insertInto('road').values(row).execute();
+}
+
+/** Roads with the names of who made and last changed them; `withDefinition` adds the (possibly large) document. */
+function roadQuery(db: Queryable, workspaceId: string) {
+  return db
+    .selectFrom('road as r')
+    .innerJoin('user as cu', 'cu.id', 'r.created_by')
+    .innerJoin('user as uu', 'uu.id', 'r.updated_by')
+    .select([
+      'r.id',
+      'r.name',
+      'r.source',
+      'r.version',
+      'r.summary',
+      'r.created_by',
+      'r.created_at',
+      'r.updated_by',
+      'r.updated_at',
+      'cu.name as created_by_name',
+      'uu.name as updated_by_name',
+      // the kind is read from the document so lists need not load measured points
+      (eb) => eb.fn<string>('json_extract', ['r.definition', eb.val('$.kind')]).as('kind'),
+    ])
+    .where('r.workspace_id', '=', workspaceId);
+}
+
+export type RoadListRow = Awaited<ReturnType<typeof listRoads>>[number];
+
+export function listRoads(db: Queryable, workspaceId: string) {
+  return roadQuery(db, workspaceId).orderBy('r.updated_at', 'desc').orderBy('r.id').execute();
+}
+
+export function findRoad(db: Queryable, workspaceId: string, roadId: string) {
+  return roadQuery(db, workspaceId).select('r.definition').where('r.id', '=', roadId).executeTakeFirst();
+}
+export type RoadDetailRow = NonNullable<Awaited<ReturnType<typeof findRoad>>>;
+
+export async function updateRoadRow(
+  db: Queryable,
+  workspaceId: string,
+  roadId: string,
+  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
+): Promise<void> {
+  await db.updateTable('road').set(patch).where('workspace_id', '=', workspaceId).where('id', '=', roadId).execute();
+}
+
+export async function deleteRoadRow(db: Queryable, workspaceId: string, roadId: string): Promise<void> {
+  await db.deleteFrom('road').where('workspace_id', '=', workspaceId).where('id', '=', roadId).execute();
+}
+
+/** Whether any study of the workspace refers to this version of the road (`study.road_refs`). */
+export async function isRoadVersionReferenced(db: Queryable, workspaceId: string, roadId: string, version: number): Promise<boolean> {
+  const { rows } = await sql<{ hit: number }>`
+    select 1 as hit from study, json_each(study.road_refs) as ref
+    where study.workspace_id = ${workspaceId} and study.road_refs is not null
+      and json_extract(ref.value, '$.roadId') = ${roadId} and json_extract(ref.value, '$.version') = ${version}
+    limit 1`.execute(db);
+  return rows.length > 0;
+}
+
+/** Keeps a definition that is about to be replaced or removed (a study still refers to it). */
+export async function keepRoadVersion(db: Queryable, row: RoadVersionTable): Promise<void> {
+  await db.insertInto('road_version').values(row).onConflict((oc) => oc.doNothing()).execute();
+}
+
+/**
+ * The stored definition text of each `{ roadId, version }` in the workspace: the library's
+ * current one when the version matches, else the kept one. Missing refs are absent from the map.
+ */
+export async function findRoadDefinitionTexts(db: Queryable, workspaceId: string, refs: { roadId: string; version: number }[]): Promise<Map<string, string>> {
+  const out = new Map<string, string>();
+  if (refs.length === 0) return out;
+  const ids = [...new Set(refs.map((r) => r.roadId))];
+  const current = await db.selectFrom('road').select(['id', 'version', 'definition']).where('workspace_id', '=', workspaceId).where('id', 'in', ids).execute();
+  for (const r of current) out.set(`${r.id}@${r.version}`, r.definition);
+  const kept = await db.selectFrom('road_version').select(['road_id', 'version', 'definition']).where('workspace_id', '=', workspaceId).where('road_id', 'in', ids).execute();
+  for (const r of kept) if (refs.some((ref) => ref.roadId === r.road_id && ref.version === r.version)) out.set(`${r.road_id}@${r.version}`, r.definition);
+  return out;
+}
