@@ -3,7 +3,7 @@ import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
-import { staticGasForce } from '../../../shared/sim/damper.ts';
+import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
