@@ -23,6 +23,8 @@ const Env = z.object({
   RIDEWRIGHT_OPEN_SIGNUP: z.enum(['1', '0', 'true', 'false', 'yes', 'no', 'on', 'off']).optional(),
   /** Requests per 15 minutes per address on sign-in, sign-up, reset and invitation accept; 0 turns limiting off. */
   RIDEWRIGHT_RATE_LIMIT: z.coerce.number().int().min(0).default(100),
+  /** Large jobs (uploads, fits, checks, study ranking) one person may start per ten minutes; 0 lifts the limit. */
+  RIDEWRIGHT_HEAVY_JOBS_PER_10MIN: z.coerce.number().int().min(0).default(60),
   /** Express `trust proxy` value when behind a reverse proxy (e.g. `loopback` or `1`). */
   TRUST_PROXY: z.string().optional(),
   SMTP_HOST: z.string().min(1).optional(),
@@ -52,6 +54,7 @@ export interface ServerConfig {
   publicUrl: string;
   demoMode: boolean;
   openSignUp: boolean;
+  heavyJobsPerWindow: number;
   rateLimit: number;
   trustProxy?: string;
   /** Real SMTP server; undefined means run the local sink on `sinkPort`. */
@@ -79,6 +82,7 @@ export function loadConfig(env: NodeJS.ProcessEnv): ServerConfig {
     demoMode: e.RIDEWRIGHT_DEMO,
     openSignUp: e.RIDEWRIGHT_OPEN_SIGNUP === undefined ? e.RIDEWRIGHT_DEMO : ['1', 'true', 'yes', 'on'].includes(e.RIDEWRIGHT_OPEN_SIGNUP),
     rateLimit: e.RIDEWRIGHT_RATE_LIMIT,
+    heavyJobsPerWindow: e.RIDEWRIGHT_HEAVY_JOBS_PER_10MIN,
     trustProxy: e.TRUST_PROXY,
     smtp: e.SMTP_HOST
       ? { host: e.SMTP_HOST, port: e.SMTP_PORT ?? (e.SMTP_SECURE ? 465 : 587), secure: e.SMTP_SECURE, user: e.SMTP_USER, pass: e.SMTP_PASS }
