@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import uPlot from 'uplot';
-import { linearX, logTickValues } from '../../../../components/charts/axes.ts';
+import { linearX } from '../../../../components/charts/axes.ts';
 import { seriesColor, themedAxis, themedSeries } from '../../../../components/charts/chart-theme.ts';
 import { syncedCursor } from '../../../../components/charts/sync.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
@@ -23,7 +23,7 @@ export function OverlayChart({ lines, xLabel, xUnit, yLabel, yUnit, log = false,
     (): ChartOptions => ({
       height,
       scales: log ? psdScales() : { x: linearX },
-      axes: [themedAxis(theme, { label: xLabel, unit: xUnit, ...(log ? { values: logTickValues } : {}) }), themedAxis(theme, { label: yLabel, unit: yUnit, size: 64, ...(log ? { values: logTickValues } : {}) })],
+      axes: [themedAxis(theme, { label: xLabel, unit: xUnit, log }), themedAxis(theme, { label: yLabel, unit: yUnit, size: 64, log })],
       series: [{ label: xUnit }, ...lines.map((l) => ({ ...themedSeries({ label: l.label, unit: yUnit, color: seriesColor(theme, l.slot) }), spanGaps: true }))],
       cursor: syncedCursor(syncKey),
     }),
