@@ -22,10 +22,13 @@ function collectErrors(page: Page): string[] {
   return errors;
 }
 
-/** Charts draw after their data arrives; wait for every chart region on the page to have a canvas. */
+/**
+ * A page is done when its heading is there, no spinner turns (data has arrived) and every chart
+ * region has its canvas. Not network idle: a page with a live run keeps working in the background.
+ */
 async function settle(page: Page): Promise<void> {
-  await page.locator('main').waitFor();
-  await page.waitForLoadState('networkidle');
+  await page.locator('main h1').first().waitFor();
+  await page.locator('main [role="status"]').first().waitFor({ state: 'detached' });
   for (const chart of await page.locator('.rw-chart').all()) await chart.locator('canvas').waitFor();
 }
 
