@@ -43,11 +43,16 @@ export function findRoad(db: Queryable, workspaceId: string, roadId: string) {
 }
 export type RoadDetailRow = NonNullable<Awaited<ReturnType<typeof findRoad>>>;
 
+/** One road as listed, without its (possibly large) definition. */
+export function findRoadListItem(db: Queryable, workspaceId: string, roadId: string) {
+  return roadQuery(db, workspaceId).where('r.id', '=', roadId).executeTakeFirst();
+}
+
 export async function updateRoadRow(
   db: Queryable,
   workspaceId: string,
   roadId: string,
-  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
+  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'bytes' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
 ): Promise<void> {
   await db.updateTable('road').set(patch).where('workspace_id', '=', workspaceId).where('id', '=', roadId).execute();
 }

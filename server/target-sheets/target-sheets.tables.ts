@@ -49,6 +49,8 @@ export interface DynoCheckTable {
   content: string;
   /** JSON `{ report, measured, sheetStatus, options }`. */
   result: string;
+  /** UTF-8 bytes of the stored bulk of this row, for the upload quota (0013). */
+  bytes: number;
   uploaded_by: string;
   created_at: string;
 }

@@ -1,18 +1,18 @@
+import { useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
-import { staticGasForce } from '../../../shared/sim/damper.ts';
+import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
 import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
-import { useSetup } from '../../features/setups/api/get-setup.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
 import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
 import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
@@ -29,22 +29,19 @@ import { SharePanel } from '../../features/sharing/components/share-panel.tsx';
 import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
 import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
+import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
-  const setup = useSetup(workspace.id, setupId);
-  if (setup.isPending) return <Loading what="the setup" />;
-  if (setup.isError) {
-    return (
-      <Notice tone="danger" title={setup.error.code === 'not_found' ? 'No such setup here' : 'The setup did not load'}>
-        {setup.error.message}
-      </Notice>
-    );
-  }
-  return <Bench key={setup.data.id} detail={setup.data} />;
+  const setup = useQuery(setupQueryOptions(workspace.id, setupId));
+  return (
+    <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
+      {(detail) => <Bench key={detail.id} detail={detail} />}
+    </QueryGuard>
+  );
 }
 
 function Bench({ detail }: { detail: SetupDetail }) {

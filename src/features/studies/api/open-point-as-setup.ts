@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { OpenedStudyPoint } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
-import { studyPath } from './keys.ts';
+import { setupsKey } from '../../../lib/queries/setups.ts';
+import { studyPath } from './query-keys.ts';
 
 export const openPointAsSetup = (workspaceId: string, studyId: string, index: number, message?: string) =>
   api.post(`${studyPath(workspaceId, studyId)}/points/${index}/open-as-setup`, message ? { message } : {}, OpenedStudyPoint);
@@ -12,6 +12,6 @@ export function useOpenPointAsSetup(workspaceId: string, studyId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (index: number) => openPointAsSetup(workspaceId, studyId, index),
-    onSuccess: () => void queryClient.invalidateQueries({ queryKey: [...workspaceKey(workspaceId), 'setups'] }),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: setupsKey(workspaceId) }),
   });
 }
