@@ -1,4 +1,4 @@
-import { sql } from 'kysely';
+import { insertionOrder } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewDynoCheckRow, NewTargetSheetRow, TargetSheetEventTable, TargetSheetPatch } from './target-sheets.tables.ts';
 
@@ -58,7 +58,7 @@ export function listSheetEvents(db: Queryable, sheetId: string) {
     .where('e.sheet_id', '=', sheetId)
     .orderBy('e.at')
     // several steps can share a timestamp (a seed, a fixed clock): insertion order breaks ties
-    .orderBy(sql`e.rowid`)
+    .orderBy(insertionOrder(db, 'e'))
     .execute();
 }
 

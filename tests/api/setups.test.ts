@@ -1,4 +1,4 @@
-import { sql } from 'kysely';
+import { insertionOrder } from '../../server/db/dialect.ts';
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { RevisionsResponse, SetupDetail, SetupRevision, SetupsResponse } from '../../shared/schemas/setup-record.ts';
@@ -31,7 +31,7 @@ async function create(name: string, extra: object = {}): Promise<SetupDetail> {
 const revisionRows = (setupId: string) => t.db.selectFrom('setup_revision').selectAll().where('setup_id', '=', setupId).orderBy('number').execute();
 const count = async (table: 'setup' | 'setup_revision' | 'audit_log') => Number((await t.db.selectFrom(table).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n);
 const auditActions = async (entityId: string) =>
-  (await t.db.selectFrom('audit_log').select('action').where('entity_id', '=', entityId).orderBy(sql`rowid`).execute()).map((r) => r.action);
+  (await t.db.selectFrom('audit_log').select('action').where('entity_id', '=', entityId).orderBy(insertionOrder(t.db, 'audit_log')).execute()).map((r) => r.action);
 
 describe('setups and their revisions', () => {
   it('creates a setup as revision 1 and lists it with its revision, author and figures', async () => {
