@@ -1,8 +1,8 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { useQueryClient } from '@tanstack/react-query';
 import { studyRoadNames } from '../../../shared/study/collect.ts';
-import { Button } from '../../components/ui/button.tsx';
+import { Button, buttonClass } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
@@ -11,7 +11,6 @@ import { Tag } from '../../components/ui/tag.tsx';
 import { useDeleteStudy } from '../../features/studies/api/delete-study.ts';
 import { studyQueryOptions, useStudy } from '../../features/studies/api/get-study.ts';
 import { studiesKey } from '../../features/studies/api/keys.ts';
-import { useOpenPointAsSetup } from '../../features/studies/api/open-point-as-setup.ts';
 import { useSetStudyBaseline } from '../../features/studies/api/set-study-baseline.ts';
 import { useShareStudy } from '../../features/studies/api/share-study.ts';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
@@ -26,8 +25,8 @@ import { NotFoundRoute } from './not-found.tsx';
 
 /**
  * `/w/:workspaceId/studies/:studyId`: the study's results (saved, or the run going on now), run
- * it (engineers save; viewers may preview, nothing saved), pick a point, open it as a setup
- * revision, mark the lead's baseline, share it read-only, export.
+ * it (engineers save; viewers may preview, nothing saved), pick a point, open it on the corner bench as an unsaved draft
+ * (saving is done there), mark the lead's baseline, share it read-only, export.
  */
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
@@ -48,10 +47,8 @@ export function StudyDetailRoute() {
     },
   });
   const baseline = useSetStudyBaseline(workspace.id, studyId);
-  const openAsSetup = useOpenPointAsSetup(workspace.id, studyId);
   const share = useShareStudy(workspace.id, studyId);
   const remove = useDeleteStudy(workspace.id);
-  const [opened, setOpened] = useState<{ setupId: string; setupName: string; revisionNumber: number } | null>(null);
 
   useEffect(() => prewarmStudyPool(), []);
 
@@ -82,16 +79,14 @@ export function StudyDetailRoute() {
 
   const pointActions = (index: number) => (
     <>
-      {canSave && (
-        <Button
-          size="sm"
-          variant="primary"
-          busy={openAsSetup.isPending && openAsSetup.variables === index}
-          disabled={!s.base.setupId || running}
-          onClick={() => openAsSetup.mutate(index, { onSuccess: (r) => setOpened(r) })}
+      {canSave && s.base.setupId && !running && (
+        <Link
+          className={buttonClass('primary', 'sm')}
+          to={`/w/${workspace.id}/corners/${s.base.setupId}?study=${encodeURIComponent(s.id)}&point=${index}`}
+          title="Opens the corner bench with this point as unsaved changes; nothing is saved until you save it there."
         >
-          Open as setup revision
-        </Button>
+          Open as setup draft
+        </Link>
       )}
       {isLead && hasSaved && s.points.some((p) => p.index === index) && (
         <Button size="sm" busy={baseline.isPending} disabled={running} onClick={() => baseline.mutate(s.baseline?.pointIndex === index ? null : index)}>
@@ -176,16 +171,6 @@ export function StudyDetailRoute() {
           </Notice>
         )}
         {share.error && <Notice tone="danger">{share.error.message}</Notice>}
-        {opened && (
-          <Notice tone="ok" title="Saved as a setup revision">
-            Revision <span className="figures">{opened.revisionNumber}</span> of{' '}
-            <Link to={`/w/${workspace.id}/corners/${opened.setupId}`} className="text-accent underline">
-              {opened.setupName}
-            </Link>{' '}
-            now holds this point.
-          </Notice>
-        )}
-        {openAsSetup.error && <Notice tone="danger">{openAsSetup.error.message}</Notice>}
         {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
         <RunPanel state={state} onCancel={cancel} />
         {s.status === 'partial' && state.phase === 'idle' && (
