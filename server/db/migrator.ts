@@ -10,6 +10,7 @@ import * as m0008 from '../../migrations/0008_throttle_events.ts';
 import * as m0009 from '../../migrations/0009_release_second_person.ts';
 import * as m0011 from '../../migrations/0011_dyno_file_loop.ts';
 import * as m0012 from '../../migrations/0012_road_versions.ts';
+import * as m0013 from '../../migrations/0013_one_released_sheet.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -28,6 +29,7 @@ export const migrations: Record<string, Migration> = {
   '0009_release_second_person': m0009,
   '0011_dyno_file_loop': m0011,
   '0012_road_versions': m0012,
+  '0013_one_released_sheet': m0013,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

@@ -94,15 +94,22 @@ describe('studies in the browser', () => {
     expect(after.revision.message).toBe(message);
     expect(new URL(page.url()).search).toBe('');
 
-    // The same point a second time: the save is refused and points at the revision that holds it.
+    // The same point again while it is the latest revision: nothing to save, and the page says so.
     await openDraft();
-    await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 1}` }).click();
+    await page.getByText(`Revision ${after.latestRevision}, the latest, already holds exactly this point`).waitFor();
+    expect(await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 1}` }).isDisabled()).toBe(true);
+
+    // Someone saves another change; the same point opened once more is refused on save, with a link to the revision that holds it.
+    const tweak = { setup: { ...after.revision.document, springRate: after.revision.document.springRate + 1000 }, message: 'Spring +1 N/mm', basedOn: after.latestRevision };
+    expect((await apiWrite({ page, context }, 'POST', `${setupUrl}/revisions`, tweak)).status()).toBe(201);
+    await openDraft();
+    await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 2}` }).click();
     const refusal = bar.getByRole('alert').filter({ hasText: `revision ${after.latestRevision} already holds exactly these values` });
     await refusal.waitFor();
     await screenshot(page, 'bench-study-duplicate-1280');
     await refusal.getByRole('link', { name: `See revision ${after.latestRevision}` }).click();
     expect(new URL(page.url()).hash).toBe(`#revision-${after.latestRevision}`);
-    expect(SetupDetail.parse(await (await page.request.get(setupUrl)).json()).latestRevision).toBe(after.latestRevision);
+    expect(SetupDetail.parse(await (await page.request.get(setupUrl)).json()).latestRevision).toBe(after.latestRevision + 1);
     await page.goto(studyPage);
 
     await page.reload();

@@ -73,7 +73,6 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
   const toast = useToast();
   const [saveError, setSaveError] = useState<ReactNode>(null);
   const [, setParams] = useSearchParams();
-  const [studyNoteOpen, setStudyNoteOpen] = useState(studyDraft !== undefined);
 
   // A study point arrives as unsaved changes on top of the latest revision; nothing is stored until the engineer saves.
   const { load } = draft;
@@ -160,7 +159,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
         </Notice>
       )}
 
-      {studyDraft && studyNoteOpen && canWrite && (
+      {studyDraft && canWrite && (
         <Notice className="mb-4" title="A study point, not saved yet">
           The form holds point {studyDraft.pointLabel} from{' '}
           <Link to={`/w/${workspace.id}/studies/${studyId}`} className="text-accent underline">
@@ -174,7 +173,14 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
               <span className="figures">{studyDraft.baseRevisionNumber}</span>, so check what changed since)
             </>
           )}
-          . Review it, run it, and save it as a revision when you are sure; or discard the changes.
+          .{' '}
+          {draft.isDirty ? (
+            'Review it, run it, and save it as a revision when you are sure; or discard the changes.'
+          ) : (
+            <strong>
+              Revision {detail.latestRevision}, the latest, already holds exactly this point: there is nothing to save.
+            </strong>
+          )}
         </Notice>
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[21rem_minmax(0,1fr)]">
@@ -188,10 +194,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
                   saving={save.isPending}
                   error={saveError}
                   initialMessage={studyDraft?.message}
-                  onSave={(setup, message) => {
-                    setStudyNoteOpen(false);
-                    onSave(setup, message);
-                  }}
+                  onSave={onSave}
                 />
               </div>
               <SetupForm form={draft.form} />

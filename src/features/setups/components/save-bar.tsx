@@ -1,4 +1,4 @@
-import { type ReactNode, useId, useMemo, useState } from 'react';
+import { type ReactNode, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Setup } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { describePath } from '../model/setup-diff.ts';
@@ -39,10 +39,16 @@ export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '',
   const problems = useProblems(draft.values);
   const canSave = draft.isDirty && problems.length === 0 && message.trim().length > 0 && !saving;
 
-  const submit = draft.form.handleSubmit((setup) => {
-    onSave(setup, message.trim());
-    setMessage('');
-  });
+  // The message is cleared once a save has made a new revision; a refused save keeps it for another try.
+  const savedFrom = useRef(draft.baseRevision);
+  useEffect(() => {
+    if (draft.baseRevision !== savedFrom.current) {
+      savedFrom.current = draft.baseRevision;
+      setMessage('');
+    }
+  }, [draft.baseRevision]);
+
+  const submit = draft.form.handleSubmit((setup) => onSave(setup, message.trim()));
 
   return (
     <form
@@ -72,6 +78,7 @@ export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '',
           value={message}
           maxLength={500}
           onChange={(e) => setMessage(e.target.value)}
+          title={message || undefined}
           placeholder="What changed, in a few words"
           disabled={!draft.isDirty}
           className="h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
