@@ -19,8 +19,12 @@ const Env = z.object({
   RIDEWRIGHT_SECRET: z.string().min(32, 'Use at least 32 characters').optional(),
   PUBLIC_URL: z.url().optional(),
   RIDEWRIGHT_DEMO: flag(true),
+  /** Anyone may sign up; unset: on in demo mode, off otherwise (accounts then come by invitation). */
+  RIDEWRIGHT_OPEN_SIGNUP: z.enum(['1', '0', 'true', 'false', 'yes', 'no', 'on', 'off']).optional(),
   /** Requests per 15 minutes per address on sign-in, sign-up, reset and invitation accept; 0 turns limiting off. */
   RIDEWRIGHT_RATE_LIMIT: z.coerce.number().int().min(0).default(100),
+  /** Large jobs (uploads, fits, checks, study ranking) one person may start per ten minutes; 0 lifts the limit. */
+  RIDEWRIGHT_HEAVY_JOBS_PER_10MIN: z.coerce.number().int().min(0).default(60),
   /** Express `trust proxy` value when behind a reverse proxy (e.g. `loopback` or `1`). */
   TRUST_PROXY: z.string().optional(),
   SMTP_HOST: z.string().min(1).optional(),
@@ -49,6 +53,8 @@ export interface ServerConfig {
   secret?: string;
   publicUrl: string;
   demoMode: boolean;
+  openSignUp: boolean;
+  heavyJobsPerWindow: number;
   rateLimit: number;
   trustProxy?: string;
   /** Real SMTP server; undefined means run the local sink on `sinkPort`. */
@@ -74,7 +80,9 @@ export function loadConfig(env: NodeJS.ProcessEnv): ServerConfig {
     secret: e.RIDEWRIGHT_SECRET,
     publicUrl: (e.PUBLIC_URL ?? `http://${shownHost}:${e.PORT}`).replace(/\/+$/, ''),
     demoMode: e.RIDEWRIGHT_DEMO,
+    openSignUp: e.RIDEWRIGHT_OPEN_SIGNUP === undefined ? e.RIDEWRIGHT_DEMO : ['1', 'true', 'yes', 'on'].includes(e.RIDEWRIGHT_OPEN_SIGNUP),
     rateLimit: e.RIDEWRIGHT_RATE_LIMIT,
+    heavyJobsPerWindow: e.RIDEWRIGHT_HEAVY_JOBS_PER_10MIN,
     trustProxy: e.TRUST_PROXY,
     smtp: e.SMTP_HOST
       ? { host: e.SMTP_HOST, port: e.SMTP_PORT ?? (e.SMTP_SECURE ? 465 : 587), secure: e.SMTP_SECURE, user: e.SMTP_USER, pass: e.SMTP_PASS }

@@ -20,6 +20,8 @@ export interface AppDeps {
   publicUrl: string;
   mailer: Mailer;
   demoMode: boolean;
+  /** POST /api/auth/signup is open to anyone (RIDEWRIGHT_OPEN_SIGNUP; default: in demo mode). */
+  openSignUp: boolean;
   /** True while the local mail sink runs: enables GET /api/outbox. */
   outboxEnabled: boolean;
   /** Current time; tests pass a clock they can move to check expiry. */
@@ -40,6 +42,7 @@ export type AppOptions = Pick<AppDeps, 'db' | 'secret' | 'publicUrl' | 'mailer'>
 
 export function resolveDeps(options: AppOptions): AppDeps {
   return {
+    openSignUp: options.demoMode ?? false,
     demoMode: false,
     outboxEnabled: false,
     clock: () => new Date(),

@@ -7,6 +7,7 @@ import { createApp } from './app.ts';
 import { resolveSecret, type ServerConfig } from './config.ts';
 import { type Db, openDatabase } from './db/database.ts';
 import { migrateToLatest } from './db/migrator.ts';
+import { DEFAULT_HEAVY_JOB_LIMITS } from './limits/index.ts';
 import type { ClientServing } from './deps.ts';
 import { createMailer } from './mail/index.ts';
 import { type MailSink, startMailSink } from './mail/index.ts';
@@ -49,6 +50,8 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
     publicUrl: config.publicUrl,
     mailer,
     demoMode: config.demoMode,
+    openSignUp: config.openSignUp,
+    heavyJobs: { ...DEFAULT_HEAVY_JOB_LIMITS, perWindow: config.heavyJobsPerWindow },
     outboxEnabled: !!sink,
     logger,
     rateLimit: config.rateLimit,

@@ -3,6 +3,10 @@ import type { Me, PasswordChangeInput, SignInInput, SignUpInput } from '../../sh
 import type { SessionUser } from '../auth/request-context.ts';
 import { decoyHash, hashPassword, verifyPassword } from '../auth/password.ts';
 import type { Db, Queryable } from '../db/database.ts';
+import type { AppDeps } from '../deps.ts';
+import { addressCheckMail, signUpAgainMail } from '../mail/index.ts';
+import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../core/one-time-tokens.ts';
+import { findEmailVerificationByTokenHash, insertEmailVerification, markEmailVerificationUsed, markEmailVerified } from './email-verifications.repository.ts';
 import type { UserRow } from './users.tables.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, insertUser, setPasswordHash } from './users.repository.ts';
 import { expireOpenResets } from './password-resets.repository.ts';
@@ -14,18 +18,29 @@ import { isUniqueViolation } from '../core/sqlite-errors.ts';
 
 export type SessionStart = Pick<UserRow, 'id' | 'session_version'>;
 
-const emailTaken = () => fail('conflict', 'An account with this e-mail already exists.', [{ path: 'email', message: 'Already registered; sign in or reset the password' }]);
+type Deps = Pick<AppDeps, 'db' | 'mailer' | 'publicUrl' | 'clock'>;
 
-/** Creates the account and a workspace it administers. */
-export async function signUp(db: Db, input: SignUpInput, now: Date): Promise<Outcome<SessionStart>> {
-  if (await findUserByEmail(db, input.email)) return emailTaken();
+/** How long an address-confirmation link works. */
+export const ADDRESS_CHECK_HOURS = 24;
+
+/**
+ * Signs up without saying whether the address already has an account: a new address gets an
+ * unconfirmed account, a workspace it administers and a mailed confirmation link; a taken one
+ * gets a mail saying so (sign in or reset instead). Either way the answer is the same and the
+ * person signs in after confirming. The mail goes out in the background; `mailed` settles when sent.
+ */
+export async function signUp(deps: Deps, input: SignUpInput): Promise<{ mailed: Promise<boolean> }> {
+  const now = deps.clock();
+  // Worked out either way, so a taken address answers in about the same time.
   const passwordHash = await hashPassword(input.password);
+  const existing = await findUserByEmail(deps.db, input.email);
+  if (existing) return { mailed: mailTakenAddress(deps, existing) };
   const userId = randomUUID();
   const workspaceId = randomUUID();
   const at = now.toISOString();
   try {
-    await db.transaction().execute(async (trx) => {
-      await insertUser(trx, { id: userId, email: input.email, name: input.name, password_hash: passwordHash, session_version: 0, created_at: at });
+    await deps.db.transaction().execute(async (trx) => {
+      await insertUser(trx, { id: userId, email: input.email, name: input.name, password_hash: passwordHash, session_version: 0, created_at: at, email_verified_at: null });
       await insertWorkspace(trx, { id: workspaceId, name: input.workspaceName, created_at: at });
       await insertMembership(trx, { workspace_id: workspaceId, user_id: userId, role: 'admin', created_at: at });
       await recordAudit(trx, {
@@ -39,10 +54,56 @@ export async function signUp(db: Db, input: SignUpInput, now: Date): Promise<Out
       });
     });
   } catch (err) {
-    if (isUniqueViolation(err)) return emailTaken();
+    // The same address signed up a moment ago: answer as for any taken address.
+    if (isUniqueViolation(err)) {
+      const taken = await findUserByEmail(deps.db, input.email);
+      return { mailed: taken ? mailTakenAddress(deps, taken) : Promise.resolve(false) };
+    }
     throw err;
   }
-  return ok({ id: userId, session_version: 0 });
+  return { mailed: mailAddressCheck(deps, { id: userId, name: input.name, email: input.email }) };
+}
+
+function mailTakenAddress(deps: Deps, user: Pick<UserRow, 'name' | 'email'>): Promise<boolean> {
+  return deps.mailer.send({ to: user.email, ...signUpAgainMail({ name: user.name, signInLink: `${deps.publicUrl}/signin`, resetLink: `${deps.publicUrl}/reset` }) });
+}
+
+/** Stores a confirmation link for the account's address and mails it. */
+async function mailAddressCheck(deps: Deps, user: Pick<UserRow, 'id' | 'name' | 'email'>): Promise<boolean> {
+  const now = deps.clock();
+  const { token, hash } = newOneTimeToken();
+  const expiresAt = minutesAfter(now, ADDRESS_CHECK_HOURS * 60);
+  await insertEmailVerification(deps.db, { id: randomUUID(), user_id: user.id, token_hash: hash, created_at: now.toISOString(), expires_at: expiresAt.toISOString(), used_at: null });
+  return deps.mailer.send({ to: user.email, ...addressCheckMail({ name: user.name, link: `${deps.publicUrl}/confirm/${token}`, expiresAt }) });
+}
+
+/** Confirmation mails per account per hour. */
+export const addressCheckRule = (userId: string): ThrottleRule => ({ key: `address-check:user:${userId}`, limit: 3, windowMs: 60 * 60_000, what: 'confirmation mails' });
+
+/** Mails a new confirmation link to a signed-in account whose address is not confirmed yet. */
+export async function resendAddressCheck(deps: Deps, user: SessionUser): Promise<Outcome<{ mailed: Promise<boolean> }>> {
+  const row = await findUserById(deps.db, user.id);
+  if (!row) return fail('unauthenticated', 'Please sign in again.');
+  if (row.email_verified_at !== null) return fail('conflict', 'Your address is already confirmed.');
+  const limited = await takeSlot(deps.db, [addressCheckRule(user.id)], deps.clock());
+  if (limited) return limited;
+  return ok({ mailed: mailAddressCheck(deps, row) });
+}
+
+/** Proves the address behind a live link, uses the link up, and starts a session for the account. */
+export async function confirmAddress(deps: Deps, token: string): Promise<Outcome<SessionStart>> {
+  const now = deps.clock();
+  const at = now.toISOString();
+  const row = await findEmailVerificationByTokenHash(deps.db, hashOneTimeToken(token));
+  if (!row || row.used_at !== null || row.expires_at <= at) return fail('gone', 'This link has expired or was already used. Sign in and ask for a new one.');
+  return deps.db.transaction().execute(async (trx) => {
+    if (!(await markEmailVerificationUsed(trx, row.id, at))) return fail('gone', 'This link was already used.');
+    const user = await findUserById(trx, row.user_id);
+    if (!user) return fail('gone', 'This account no longer exists.');
+    await markEmailVerified(trx, user.id, at);
+    await recordAudit(trx, { workspaceId: null, actorId: user.id, action: 'account.address_confirmed', entityType: 'user', entityId: user.id, summary: `${user.name} confirmed the address ${user.email}.`, at: now });
+    return ok(user);
+  });
 }
 
 const MINUTE = 60_000;
@@ -113,7 +174,7 @@ export async function changePassword(db: Db, user: SessionUser, input: PasswordC
 export async function sessionUser(db: Queryable, userId: string, sessionVersion: number): Promise<SessionUser | null> {
   const row = await findUserById(db, userId);
   if (!row || row.session_version !== sessionVersion) return null;
-  return { id: row.id, name: row.name, email: row.email, sessionVersion: row.session_version };
+  return { id: row.id, name: row.name, email: row.email, sessionVersion: row.session_version, emailVerified: row.email_verified_at !== null };
 }
 
 export async function loadMe(db: Queryable, userId: string): Promise<Me> {
@@ -121,7 +182,7 @@ export async function loadMe(db: Queryable, userId: string): Promise<Me> {
   if (!row) throw new Error(`user ${userId} vanished while building Me`);
   const memberships = await listMembershipsOfUser(db, userId);
   return {
-    user: { id: row.id, name: row.name, email: row.email },
+    user: { id: row.id, name: row.name, email: row.email, emailVerified: row.email_verified_at !== null },
     memberships: memberships.map((m) => ({ workspaceId: m.workspace_id, workspaceName: m.workspace_name, role: m.role })),
   };
 }

@@ -1,8 +1,8 @@
-import { PasswordChangeInput, ResetConfirmInput, ResetRequestInput, SignInInput, SignUpInput, type Me } from '../../shared/schemas/account.ts';
+import { ConfirmAddressInput, PasswordChangeInput, ResetConfirmInput, ResetRequestInput, SignInInput, SignUpInput, type Me, type SignUpAnswer } from '../../shared/schemas/account.ts';
 import { userOf } from '../auth/request-context.ts';
 import { clearSessionCookie, setSessionCookie } from '../auth/session.ts';
-import { unwrap } from '../core/errors.ts';
-import { changePassword, loadMe, signIn, signOutEverywhere, signUp } from './accounts.service.ts';
+import { HttpError, unwrap } from '../core/errors.ts';
+import { changePassword, confirmAddress, loadMe, resendAddressCheck, signIn, signOutEverywhere, signUp } from './accounts.service.ts';
 import { startSession } from './session-start.ts';
 import { confirmPasswordReset, requestPasswordReset } from './password-reset.service.ts';
 import type { RouteModule } from '../http/registry.ts';
@@ -14,9 +14,32 @@ export const authRoutes: RouteModule = (deps) => [
     access: 'public',
     rateLimited: true,
     handler: async (req, res) => {
+      if (!deps.openSignUp) throw new HttpError('forbidden', 'Sign-up is closed on this server: ask a workspace administrator for an invitation.');
       const input = SignUpInput.parse(req.body);
-      const who = unwrap(await signUp(deps.db, input, deps.clock()));
-      await startSession(deps, req, res, who, 201);
+      await signUp(deps, input);
+      // The same answer whether or not the address had an account; the rest goes by mail.
+      const body: SignUpAnswer = { email: input.email, message: `We sent a message to ${input.email}. Open the link in it to finish.` };
+      res.status(202).json(body);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/auth/confirm',
+    access: 'public',
+    rateLimited: true,
+    handler: async (req, res) => {
+      const { token } = ConfirmAddressInput.parse(req.body);
+      const who = unwrap(await confirmAddress(deps, token));
+      await startSession(deps, req, res, who);
+    },
+  },
+  {
+    method: 'post',
+    path: '/api/auth/confirm/resend',
+    access: 'user',
+    handler: async (req, res) => {
+      unwrap(await resendAddressCheck(deps, userOf(req)));
+      res.status(202).end();
     },
   },
   {

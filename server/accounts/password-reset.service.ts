@@ -5,6 +5,7 @@ import { passwordResetMail } from '../mail/index.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, setPasswordHash } from './users.repository.ts';
 import { expireOpenResets, findPasswordResetByTokenHash, insertPasswordReset, markPasswordResetUsed } from './password-resets.repository.ts';
 import { recordAudit } from '../audit/index.ts';
+import { markEmailVerified } from './email-verifications.repository.ts';
 import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../core/one-time-tokens.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 
@@ -48,6 +49,8 @@ export async function confirmPasswordReset(deps: Deps, token: string, password: 
     const user = await findUserById(trx, reset.user_id);
     if (!user) return gone();
     await setPasswordHash(trx, user.id, passwordHash);
+    // The link was mailed to the address, so using it proves the address too.
+    await markEmailVerified(trx, user.id, now.toISOString());
     await bumpSessionVersion(trx, user.id);
     await expireOpenResets(trx, user.id, now.toISOString());
     await recordAudit(trx, {

@@ -10,6 +10,8 @@ export interface UserTable {
   /** Bumped on sign-out and password change; session tokens carry it and die when it moves. */
   session_version: number;
   created_at: string;
+  /** When the address was proved by a mailed link (or by accepting a mailed invitation); null until then (0010). */
+  email_verified_at: string | null;
 }
 export type UserRow = Selectable<UserTable>;
 export type NewUserRow = Insertable<UserTable>;

@@ -7,6 +7,8 @@ export interface SessionUser {
   name: string;
   email: string;
   sessionVersion: number;
+  /** The address was proved by a mailed link (or a mailed invitation). */
+  emailVerified: boolean;
 }
 
 /** The caller's membership of the workspace in the path, set by `requireMember`. */

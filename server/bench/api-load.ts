@@ -8,13 +8,20 @@ import { DEMO_PASSWORD, DEMO_USERS } from '../core/demo-people.ts';
 import { prepareDatabase, startServerProcess } from './server-process.ts';
 import { callJson, sessionHeaders, signInAs } from './session-client.ts';
 
-// `npm run bench:api [-- --duration 5 --runs 3 --connections 10] [-- --soak 300]`
+// `npm run bench:api [-- --duration 5 --runs 3 --connections 10] [-- --soak 300] [-- --abuse …]`
+// (`--abuse`: light-read latency under heavy requests, server/bench/abuse-load.ts)
 // Starts the real server (child process, temp SQLite seeded with the demo workspace, loopback,
 // rate limit off, request logging off), signs in as the demo engineer and drives representative
 // read and write routes with autocannon. Prints requests/s, p50 and p99 latency (medians over
 // the runs), errors and non-2xx answers, and the server's resident memory before and after.
 // `--soak N` then runs a mixed read/write load for N seconds and reports errors and memory.
 // Figures, never assertions: the machine is shared.
+
+if (process.argv.includes('--abuse')) {
+  const { runAbuseBench } = await import('./abuse-load.ts');
+  await runAbuseBench();
+  process.exit(0);
+}
 
 function arg(name: string, fallback: number): number {
   const at = process.argv.indexOf(`--${name}`);

@@ -34,6 +34,8 @@ export interface ServerProcessOptions {
   bundle?: string;
   /** Extra node flags before the script, e.g. `--cpu-prof` (not allowed in NODE_OPTIONS). */
   nodeArgs?: string[];
+  /** Another checkout to run `server/main.ts` from (before/after benchmarks); default this one. */
+  root?: string;
 }
 
 /** A fixed session key, so a session survives a restart of the child. */
@@ -81,7 +83,7 @@ export function startServerProcess(options: ServerProcessOptions): Promise<Serve
     ...options.env,
   });
   const args = [...(options.nodeArgs ?? []), ...(options.bundle ? [options.bundle] : ['--import', 'tsx', 'server/main.ts'])];
-  const child = spawn(process.execPath, args, { cwd: ROOT, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, args, { cwd: options.root ?? ROOT, env, stdio: ['ignore', 'pipe', 'pipe'] });
   const gone = new Promise<void>((resolve) => child.once('exit', () => resolve()));
   let stderr = '';
   child.stderr!.on('data', (d: Buffer) => void (stderr = (stderr + d.toString()).slice(-4000)));

@@ -15,6 +15,7 @@ import type { StudyPointTable, StudyTable } from '../studies/studies.tables.ts';
 import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from '../target-sheets/target-sheets.tables.ts';
 import type { ThrottleEventTable } from '../limits/throttle.tables.ts';
 import type { InvitationTable } from '../workspaces/invitations.tables.ts';
+import type { EmailVerificationTable } from '../accounts/email-verifications.tables.ts';
 import type { PasswordResetTable } from '../accounts/password-resets.tables.ts';
 import type { UserTable } from '../accounts/users.tables.ts';
 import type { MembershipTable, WorkspaceTable } from '../workspaces/workspaces.tables.ts';
@@ -29,6 +30,7 @@ export interface Database {
   membership: MembershipTable;
   invitation: InvitationTable;
   password_reset: PasswordResetTable;
+  email_verification: EmailVerificationTable;
   audit_log: AuditLogTable;
   outbox_message: OutboxMessageTable;
   outbox_recipient: OutboxRecipientTable;

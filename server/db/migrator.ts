@@ -8,9 +8,11 @@ import * as m0006 from '../../migrations/0006_target_sheets.ts';
 import * as m0007 from '../../migrations/0007_outbox_audience.ts';
 import * as m0008 from '../../migrations/0008_throttle_events.ts';
 import * as m0009 from '../../migrations/0009_release_second_person.ts';
+import * as m0010 from '../../migrations/0010_address_verification.ts';
 import * as m0011 from '../../migrations/0011_dyno_file_loop.ts';
 import * as m0012 from '../../migrations/0012_road_versions.ts';
-import * as m0013 from '../../migrations/0013_one_released_sheet.ts';
+import * as m0013 from '../../migrations/0013_stored_sizes.ts';
+import * as m0014 from '../../migrations/0014_one_released_sheet.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -27,9 +29,11 @@ export const migrations: Record<string, Migration> = {
   '0007_outbox_audience': m0007,
   '0008_throttle_events': m0008,
   '0009_release_second_person': m0009,
+  '0010_address_verification': m0010,
   '0011_dyno_file_loop': m0011,
   '0012_road_versions': m0012,
-  '0013_one_released_sheet': m0013,
+  '0013_stored_sizes': m0013,
+  '0014_one_released_sheet': m0014,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

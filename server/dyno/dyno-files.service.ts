@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { DynoReadOutcome } from '../../shared/dyno-upload/summarise-dyno.ts';
 import { readGasDeclaration } from '../../shared/dyno/gas-declaration.ts';
-import { staticGasForce } from '../../shared/sim/damper.ts';
+import { staticGasForce } from '../../shared/sim/damper-gas.ts';
 import { type DynoDirection, DynoLoop, DynoParseOptions } from '../../shared/schemas/dyno.ts';
 import {
   type ApplyDynoFitInput,

@@ -15,6 +15,8 @@ export interface OutboxReader {
   userId: string;
   /** Lower-cased, as stored on the user. */
   email: string;
+  /** Until the address is confirmed, mail about workspaces sent to it (an invitation) stays hidden. */
+  emailVerified: boolean;
 }
 
 /**
@@ -22,6 +24,8 @@ export interface OutboxReader {
  * a workspace the reader administers (invitations, sheet mail). Account mail about someone else
  * (a password reset) is never shown to anyone but its recipient, so administering a workspace,
  * which anyone can do on a demo instance by signing up, does not open other people's accounts.
+ * An account that has not confirmed its address sees only account mail sent to it (the
+ * confirmation itself), never an invitation to that address.
  */
 export function listOutboxMessagesFor(db: Queryable, reader: OutboxReader, limit: number): Promise<OutboxMessageRow[]> {
   return db
@@ -34,7 +38,8 @@ export function listOutboxMessagesFor(db: Queryable, reader: OutboxReader, limit
             .selectFrom('outbox_recipient')
             .select(sql`1`.as('one'))
             .whereRef('outbox_recipient.message_id', '=', 'outbox_message.id')
-            .where('outbox_recipient.address', '=', reader.email.toLowerCase()),
+            .where('outbox_recipient.address', '=', reader.email.toLowerCase())
+            .where((w) => (reader.emailVerified ? w.lit(true) : w('outbox_message.workspace_id', 'is', null))),
         ),
         eb(
           'outbox_message.workspace_id',

@@ -6,8 +6,8 @@ import { listOutboxMessagesFor } from './outbox.repository.ts';
 const OUTBOX_LIMIT = 200;
 
 /** The newest mail the local sink caught that was sent to `me` (by address or as a recipient). */
-export async function outboxOf(db: Queryable, me: Pick<SessionUser, 'id' | 'email'>): Promise<OutboxResponse> {
-  const rows = await listOutboxMessagesFor(db, { userId: me.id, email: me.email }, OUTBOX_LIMIT);
+export async function outboxOf(db: Queryable, me: Pick<SessionUser, 'id' | 'email' | 'emailVerified'>): Promise<OutboxResponse> {
+  const rows = await listOutboxMessagesFor(db, { userId: me.id, email: me.email, emailVerified: me.emailVerified }, OUTBOX_LIMIT);
   return {
     messages: rows.map((r) => ({
       id: r.id,

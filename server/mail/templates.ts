@@ -36,3 +36,24 @@ export function passwordResetMail(args: { name: string; link: string; expiresAt:
       footer,
   };
 }
+
+export function addressCheckMail(args: { name: string; link: string; expiresAt: Date }): Template {
+  return {
+    subject: 'Confirm your address for Ridewright',
+    text:
+      `Hello ${args.name},\n\nA Ridewright account was made with this address. Open this link to confirm it is yours ` +
+      `(it works once, until ${when(args.expiresAt)}):\n\n${args.link}\n\n` +
+      `Until then the account cannot join other teams' workspaces.\n` +
+      footer,
+  };
+}
+
+export function signUpAgainMail(args: { name: string; signInLink: string; resetLink: string }): Template {
+  return {
+    subject: 'Someone tried to make a second Ridewright account with your address',
+    text:
+      `Hello ${args.name},\n\nSomeone (perhaps you) tried to sign up with this address, which already has an account. ` +
+      `Nothing was changed.\n\nTo sign in: ${args.signInLink}\nIf you forgot your password: ${args.resetLink}\n` +
+      footer,
+  };
+}

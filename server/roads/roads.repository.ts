@@ -47,7 +47,7 @@ export async function updateRoadRow(
   db: Queryable,
   workspaceId: string,
   roadId: string,
-  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
+  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'bytes' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
 ): Promise<void> {
   await db.updateTable('road').set(patch).where('workspace_id', '=', workspaceId).where('id', '=', roadId).execute();
 }

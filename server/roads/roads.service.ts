@@ -99,11 +99,13 @@ export async function saveNewRoad(db: Db, ws: WorkspaceRef, actor: Actor, input:
 export async function insertRoadRecordInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, source: RoadSource, figures: RoadFigures, now: Date): Promise<RoadDetail> {
   const id = randomUUID();
   const at = now.toISOString();
+  const definition = JSON.stringify({ ...input.definition, name: input.name });
   await insertRoad(trx, {
     id,
     workspace_id: ws.workspaceId,
     name: input.name,
-    definition: JSON.stringify({ ...input.definition, name: input.name }),
+    definition,
+    bytes: Buffer.byteLength(definition),
     source,
     summary: JSON.stringify(figures),
     created_by: actor.id,
@@ -152,12 +154,14 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
     // A study that ran this version keeps running it: the old definition is kept before it is replaced.
     const version = input.definition ? row.version + 1 : row.version;
     if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, created_at: at });
+      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: at });
     }
+    const definitionText = JSON.stringify({ ...definition, name });
     await updateRoadRow(trx, ws.workspaceId, roadId, {
       version,
       name,
-      definition: JSON.stringify({ ...definition, name }),
+      definition: definitionText,
+      bytes: Buffer.byteLength(definitionText),
       summary,
       source: definition.kind === 'measured' ? 'measured' : 'defined',
       updated_by: actor.id,
@@ -187,7 +191,7 @@ export async function deleteRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
     const row = await findRoad(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
     if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, created_at: now.toISOString() });
+      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: now.toISOString() });
     }
     await deleteRoadRow(trx, ws.workspaceId, roadId);
     await recordAudit(trx, {

@@ -11,6 +11,8 @@ export interface RoadTable {
   version: Generated<number>;
   /** JSON of `RoadFigures` (shared/schemas/road-record.ts). */
   summary: string;
+  /** UTF-8 bytes of the stored bulk of this row, for the upload quota (0013). */
+  bytes: number;
   created_by: string;
   created_at: string;
   updated_by: string;
@@ -25,5 +27,7 @@ export interface RoadVersionTable {
   workspace_id: string;
   /** JSON of `Road`, as it was. */
   definition: string;
+  /** UTF-8 bytes of `definition` (0013). */
+  bytes: number;
   created_at: string;
 }

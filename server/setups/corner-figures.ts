@@ -2,7 +2,7 @@ import { LRUCache } from 'lru-cache';
 import type { ModalResult } from '../../shared/schemas/modal.ts';
 import type { CornerFigures } from '../../shared/schemas/setup-record.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import { equivalentDampingLeastSquares } from '../../shared/sim/damper.ts';
+import { equivalentDampingLeastSquares } from '../../shared/sim/damper-equivalent.ts';
 import { modalAnalysis } from '../../shared/sim/linear/modal.ts';
 import { linearCorner } from '../../shared/sim/quarter-car.ts';
 

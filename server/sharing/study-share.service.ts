@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { PublicStudy, StudyDetail } from '../../shared/schemas/study-record.ts';
-import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, definitionOf, detailOf, studyRoadsOf } from '../studies/index.ts';
+import { findStudy, findStudyById, insertStudy, listStudyPoints, upsertStudyPoints, withStudyBytes, definitionOf, detailOf, studyRoadsOf } from '../studies/index.ts';
 import { readStored } from '../core/stored-json.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok } from '../core/outcome.ts';
@@ -77,7 +77,7 @@ export const studyShare: ShareableKind = {
     };
     const id = randomUUID();
     const at = now.toISOString();
-    await insertStudy(trx, {
+    await insertStudy(trx, withStudyBytes({
       id,
       workspace_id: workspaceId,
       name: row.name,
@@ -98,7 +98,7 @@ export const studyShare: ShareableKind = {
       created_by: actor.id,
       created_at: at,
       updated_at: at,
-    });
+    }));
     const points = await listStudyPoints(trx, row.id);
     await upsertStudyPoints(trx, points.map((p) => ({ ...p, study_id: id })));
     await recordAudit(trx, {

@@ -3,6 +3,12 @@ import type { NewStudyPointRow, NewStudyRow, StudyTable } from './studies.tables
 
 /** SQL for studies and their points. Study rows come back with the names of the people and the base setup. */
 
+/** A study row with its stored size filled in (definition, base document, road copies), for the upload quota. */
+export const withStudyBytes = (row: Omit<NewStudyRow, 'bytes'>): NewStudyRow => ({
+  ...row,
+  bytes: Buffer.byteLength(row.definition) + Buffer.byteLength(row.base_document) + Buffer.byteLength(row.roads),
+});
+
 export async function insertStudy(db: Queryable, row: NewStudyRow): Promise<void> {
   await db.insertInto('study').values(row).execute();
 }

@@ -22,6 +22,7 @@ import {
   listStudyPoints,
   type StudyListRow,
   type StudyViewRow,
+  withStudyBytes,
 } from './studies.repository.ts';
 import { findRoadDefinitionTexts } from '../roads/index.ts';
 import { recordAudit } from '../audit/index.ts';
@@ -200,7 +201,7 @@ export async function insertNewStudyInTx(trx: Queryable, ws: WorkspaceRef, actor
   const id = randomUUID();
   const at = now.toISOString();
   const planned = plannedCounts(r.def);
-  await insertStudy(trx, {
+  await insertStudy(trx, withStudyBytes({
     id,
     workspace_id: ws.workspaceId,
     name: r.def.name,
@@ -221,7 +222,7 @@ export async function insertNewStudyInTx(trx: Queryable, ws: WorkspaceRef, actor
     created_by: actor.id,
     created_at: at,
     updated_at: at,
-  });
+  }));
   await recordAudit(trx, {
     workspaceId: ws.workspaceId,
     actorId: actor.id,

@@ -20,6 +20,8 @@ export interface StudyTable {
   /** JSON `StudyRoadRefs` (0012): per definition road, `{ roadId, version }` of a library road, or null when typed in; null on older studies. */
   road_refs: string | null;
   planned_points: number;
+  /** UTF-8 bytes of the stored bulk of this row, for the upload quota (0013). */
+  bytes: number;
   planned_runs: number;
   status: StudyStatusColumn;
   /** JSON of `StudyResultsSummary`; null until a run is finished. */

@@ -99,11 +99,13 @@ export async function storeSheetCheckInTx(
   const sheet = toSheet(row);
   const report = checkConformity(sheet, measured.map((m) => ({ label: m.label, peaks: m.peaks })));
   const id = randomUUID();
+  const content = JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text })));
   await insertDynoCheck(trx, {
     id,
     sheet_id: sheetId,
     filename: files.map((f) => f.filename).join(', '),
-    content: JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text }))),
+    content,
+    bytes: Buffer.byteLength(content),
     result: JSON.stringify({ report, measured, sheetStatus: sheet.status, options: DynoParseOptions.parse(options) }),
     uploaded_by: actor.id,
     created_at: now.toISOString(),

@@ -40,7 +40,7 @@ export function listSheets(db: Queryable, workspaceId: string) {
   return sheetQuery(db, workspaceId).orderBy('s.updated_at', 'desc').orderBy('s.number', 'desc').execute();
 }
 
-/** The released sheet of a setup that no sheet has superseded (at most one; see migrations/0013), other than `exceptId`. */
+/** The released sheet of a setup that no sheet has superseded (at most one; see migrations/0014), other than `exceptId`. */
 export function findSheetInForce(db: Queryable, workspaceId: string, setupId: string, exceptId: string) {
   return sheetQuery(db, workspaceId).where('s.setup_id', '=', setupId).where('s.status', '=', 'released').where('s.superseded_by_id', 'is', null).where('s.id', '!=', exceptId).executeTakeFirst();
 }

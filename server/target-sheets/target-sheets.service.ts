@@ -272,7 +272,7 @@ export async function moveTargetSheetInTx(
   }
   const why = action === 'return' ? reason!.trim() : action === 'release' ? comment?.trim() || null : null;
   // Releasing supersedes the sheet in force for the same setup, in this same step: there is never
-  // a moment with two released sheets in force (the partial unique index of migration 0013 holds it).
+  // a moment with two released sheets in force (the partial unique index of migration 0014 holds it).
   const replaced = action === 'release' ? await findSheetInForce(trx, ws.workspaceId, row.setup_id, sheetId) : undefined;
   if (replaced) await updateSheet(trx, replaced.id, { superseded_by_id: sheetId });
   await updateSheet(trx, sheetId, {

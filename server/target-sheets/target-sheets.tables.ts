@@ -20,7 +20,7 @@ export interface TargetSheetTable {
   decided_by: string | null;
   decided_at: string | null;
   released_at: string | null;
-  /** The releasing lead's comment (migrations/0013_one_released_sheet.ts). */
+  /** The releasing lead's comment (migrations/0014_one_released_sheet.ts). */
   release_comment: string | null;
   supersedes_id: string | null;
   superseded_by_id: string | null;
@@ -51,6 +51,8 @@ export interface DynoCheckTable {
   content: string;
   /** JSON `{ report, measured, sheetStatus, options }`. */
   result: string;
+  /** UTF-8 bytes of the stored bulk of this row, for the upload quota (0013). */
+  bytes: number;
   uploaded_by: string;
   created_at: string;
 }

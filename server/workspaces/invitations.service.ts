@@ -137,6 +137,10 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
   if (account) {
     if (!caller) return fail('unauthenticated', `Sign in as ${row.email} to accept this invitation.`);
     if (caller.id !== account.id) return fail('forbidden', `This invitation is for ${row.email}; sign in with that address to accept it.`);
+    // An account joins other teams only once it has proved it owns its address.
+    if (account.email_verified_at === null) {
+      return fail('forbidden', `Confirm your address first: open the link we mailed to ${row.email} (your account page sends a new one), then accept.`);
+    }
     if (await findMembership(deps.db, row.workspace_id, account.id)) return fail('conflict', 'You are already a member of this workspace.');
   } else {
     const missing: FieldIssue[] = [];
@@ -153,7 +157,8 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
       const userId = account?.id ?? randomUUID();
       const name = account?.name ?? input.name ?? '';
       if (!account) {
-        await insertUser(trx, { id: userId, email: row.email, name, password_hash: passwordHash ?? '', session_version: 0, created_at: at });
+        // The invitation link went to this address: following it proves the address.
+        await insertUser(trx, { id: userId, email: row.email, name, password_hash: passwordHash ?? '', session_version: 0, created_at: at, email_verified_at: at });
       }
       await insertMembership(trx, { workspace_id: row.workspace_id, user_id: userId, role: row.role, created_at: at });
       await recordAudit(trx, {

@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { DamperCurve } from '../schemas/setup.ts';
-import { damperForce } from '../sim/damper.ts';
+import { damperForce } from '../sim/damper-force.ts';
 import { synthesiseDynoSeries, type SineBlock } from './synthetic-series.ts';
 
 /**

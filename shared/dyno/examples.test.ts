@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { curveForce } from '../sim/damper.ts';
+import { curveForce } from '../sim/damper-force.ts';
 import { exampleDamperCurves, exampleGasForce, exampleRecordCsv } from './example-record.ts';
 import { fitDamperCurves, suggestFitKnots } from './fit-curve.ts';
 import { parseDynoCsv } from './parse-dyno-csv.ts';

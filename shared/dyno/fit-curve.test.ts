@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DamperCurve } from '../schemas/setup.ts';
 import { DynoDirectionFit, type DynoPoint } from '../schemas/dyno.ts';
-import { tableForce } from '../sim/damper.ts';
+import { tableForce } from '../sim/damper-force.ts';
 import { fitDamperCurve, fitDamperCurves, suggestFitKnots } from './fit-curve.ts';
 
 const sse = (table: [number, number][], pts: DynoPoint[]) => pts.reduce((s, p) => s + (p.force - tableForce(table, p.velocity)) ** 2, 0);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DynoSeriesAnalysis, type DynoTimeSeries } from '../schemas/dyno.ts';
-import { curveForce, damperForce } from '../sim/damper.ts';
+import { curveForce, damperForce } from '../sim/damper-force.ts';
 import { exampleDamperCurves, exampleProgramme, exampleProgrammeSpeeds } from './example-record.ts';
 import { centralDifferenceVelocity, seriesToPeaks } from './series-to-peaks.ts';
 import { synthesiseDynoSeries } from './synthetic-series.ts';

@@ -11,6 +11,14 @@ export const SignUpInput = z.object({
 });
 export type SignUpInput = z.infer<typeof SignUpInput>;
 
+/** The answer to POST /api/auth/signup, the same whether or not the address had an account. */
+export const SignUpAnswer = z.object({ email: z.string(), message: z.string() });
+export type SignUpAnswer = z.infer<typeof SignUpAnswer>;
+
+/** POST /api/auth/confirm: the token of a mailed address-confirmation link. */
+export const ConfirmAddressInput = z.object({ token: z.string().min(1).max(200) });
+export type ConfirmAddressInput = z.infer<typeof ConfirmAddressInput>;
+
 /** POST /api/auth/signin */
 export const SignInInput = z.object({ email: Email, password: GivenPassword });
 export type SignInInput = z.infer<typeof SignInInput>;
@@ -27,7 +35,7 @@ export type ResetRequestInput = z.infer<typeof ResetRequestInput>;
 export const ResetConfirmInput = z.object({ token: z.string().min(1, 'Required').max(200), password: NewPassword });
 export type ResetConfirmInput = z.infer<typeof ResetConfirmInput>;
 
-export const User = z.object({ id: Id, name: z.string(), email: z.string() });
+export const User = z.object({ id: Id, name: z.string(), email: z.string(), emailVerified: z.boolean() });
 export type User = z.infer<typeof User>;
 
 /** GET /api/auth/me, and the answer to sign-up, sign-in and accepting an invitation. */

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { Damper, DamperCurve } from '../schemas/setup.ts';
 import { curveFromParameters, parametricForce, scaleDamper, splitDamper, type CurveParameters } from './damper-builder.ts';
-import { curveForce, equivalentDampingLeastSquares } from './damper.ts';
+import { equivalentDampingLeastSquares } from './damper-equivalent.ts';
+import { curveForce } from './damper-force.ts';
 
 const base = { lowSpeedSlope: 4000, kneeVelocity: 0.06, highSpeedSlope: 1200 };
 const shapes = (['digressive', 'linear', 'progressive'] as const).map((shape): CurveParameters => ({ ...base, shape }));

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Damper, DamperCurve } from '../schemas/setup.ts';
-import { equivalentDampingLeastSquares, type LeastSquaresRange } from './damper.ts';
+import { equivalentDampingLeastSquares, type LeastSquaresRange } from './damper-equivalent.ts';
 
 /**
  * Damper curves from a few numbers, and the scalings a sweep applies to a curve.

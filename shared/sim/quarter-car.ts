@@ -1,9 +1,11 @@
 import type { Setup } from '../schemas/setup.ts';
 import type { LinearCorner } from './linear/linear-corner.ts';
-import { compileDamperForce, compileGasChange, equivalentDampingLeastSquares, staticGasForce, type EquivalentDamping } from './damper.ts';
+import { compileDamperForce, compileGasChange } from './damper-compiled.ts';
+import { type EquivalentDamping, equivalentDampingLeastSquares } from './damper-equivalent.ts';
+import { staticGasForce } from './damper-gas.ts';
 import { compileStop } from './stops.ts';
 
-/** Standard gravity used throughout, m/s² (model.md). */
+/** Standard gravity used throughout, m/s² (docs/model.md §1). */
 export const GRAVITY = 9.81;
 
 /**

@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import type { FieldIssue } from '../errors.ts';
 import type { Road } from '../schemas/road.ts';
 import { RunRequest, type RunRequestInput, type RunResult } from '../schemas/run.ts';
-import { equivalentDampingLeastSquares, equivalentDampingSecant, type EquivalentDamping } from './damper.ts';
+import { equivalentDampingLeastSquares, equivalentDampingSecant, type EquivalentDamping } from './damper-equivalent.ts';
 import { integrateCorner } from './integrate.ts';
 import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE } from './integration-options.ts';
 import { modalAnalysis } from './linear/modal.ts';

@@ -1,5 +1,6 @@
 import type { EndStop, StopLaw } from '../schemas/setup.ts';
-import { compileTableForce, tableForce } from './damper.ts';
+import { compileTableForce } from './damper-compiled.ts';
+import { tableForce } from './damper-force.ts';
 
 /**
  * End stops at the wheel. Travel x is positive in compression and measured from the static

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { Setup, type SetupInput } from '../schemas/setup.ts';
-import { staticGasForce } from '../sim/damper.ts';
+import { staticGasForce } from '../sim/damper-gas.ts';
 import { applyPoint, classicBodyDampingRatio } from './apply-point.ts';
 
 const pipit = Setup.parse(JSON.parse(readFileSync(new URL('../../examples/pipit-front.setup.json', import.meta.url), 'utf8')) as SetupInput);

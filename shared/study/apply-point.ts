@@ -1,7 +1,7 @@
 import type { EquivalentDampingChoice } from '../schemas/run.ts';
 import { Setup, type DamperCurve, type SetupInput } from '../schemas/setup.ts';
 import type { StudyPointValues } from '../schemas/study-result.ts';
-import { equivalentDampingLeastSquares, equivalentDampingSecant } from '../sim/damper.ts';
+import { equivalentDampingLeastSquares, equivalentDampingSecant } from '../sim/damper-equivalent.ts';
 import { linearCorner } from '../sim/quarter-car.ts';
 
 export type ApplyPointResult = { ok: true; setup: Setup; notes: string[] } | { ok: false; message: string };

@@ -1,6 +1,7 @@
 import type { DamperCurve, Setup } from '../schemas/setup.ts';
 import type { TargetPoint, TargetSheetContent } from '../schemas/target-sheet.ts';
-import { curveForce, staticGasForce } from '../sim/damper.ts';
+import { curveForce } from '../sim/damper-force.ts';
+import { staticGasForce } from '../sim/damper-gas.ts';
 
 /**
  * Default reference piston speeds, m/s: a spread from the bleed range through the knee to high

@@ -2,7 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { ToastProvider } from '../components/ui/toast.tsx';
 import { createQueryClient } from '../lib/query-client.ts';
-import { meKey } from '../lib/query-keys.ts';
+import { meKey } from '../lib/queries/query-keys.ts';
 
 /** Server state and toasts for the whole app. A lapsed session makes `me` refetch, which sends the person to sign-in. */
 export function Providers({ children }: { children: ReactNode }) {

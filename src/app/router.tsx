@@ -7,6 +7,7 @@ import { AcceptInviteRoute } from './routes/accept-invite.tsx';
 import { AccountRoute } from './routes/account.tsx';
 import { HomeRedirect } from './routes/home-redirect.tsx';
 import { NotFoundRoute } from './routes/not-found.tsx';
+import { ConfirmAddressRoute } from './routes/confirm-address.tsx';
 import { OutboxRoute } from './routes/outbox.tsx';
 import { ResetConfirmRoute } from './routes/reset-confirm.tsx';
 import { ResetRequestRoute } from './routes/reset-request.tsx';
@@ -26,6 +27,7 @@ export const routes: RouteObject[] = [
       { path: 'reset', element: <ResetRequestRoute /> },
       { path: 'reset/:token', element: <ResetConfirmRoute /> },
       { path: 'invite/:token', element: <AcceptInviteRoute /> },
+      { path: 'confirm/:token', element: <ConfirmAddressRoute /> },
       ...sections.flatMap((s) => s.publicRoutes ?? []),
       {
         element: <RequireSignedIn />,

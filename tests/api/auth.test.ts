@@ -1,9 +1,11 @@
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
-import { Me } from '../../shared/schemas/account.ts';
+import { Me, SignUpAnswer } from '../../shared/schemas/account.ts';
+import { AppConfig } from '../../shared/schemas/config.ts';
 import { SESSION_COOKIE } from '../../server/auth/session.ts';
 import { browserLike, cookieValue, signedIn } from './helpers/agents.ts';
+import { linkIn, waitForMail } from './helpers/mail.ts';
 import { uniqueEmail } from './helpers/people.ts';
 import { createTestApp } from './helpers/test-app.ts';
 
@@ -20,29 +22,56 @@ async function signUp(email = uniqueEmail('owner'), password = 'a sound password
 }
 
 describe('sign-up', () => {
-  it('creates the account, a workspace it administers, a session and an audit entry', async () => {
+  it('answers 202 without a session, makes an unconfirmed account with its workspace, and the mailed link signs it in once', async () => {
     const { b, res, email } = await signUp();
-    expect(res.status).toBe(201);
-    const me = Me.parse(res.body);
-    expect(me.user).toMatchObject({ name: 'Wren Castell', email });
+    expect(res.status).toBe(202);
+    expect(SignUpAnswer.parse(res.body).email).toBe(email);
+    expect(cookieValue(res.headers['set-cookie'], SESSION_COOKIE)).toBeUndefined();
+    const row = await t.db.selectFrom('user').select(['id', 'email_verified_at']).where('email', '=', email).executeTakeFirstOrThrow();
+    expect(row.email_verified_at).toBeNull();
+
+    const mail = await waitForMail(t.db, email, 'Confirm your address');
+    const { token } = linkIn(mail.text_body, '/confirm/');
+    const confirmed = await b.post('/api/auth/confirm', { token }).expect(200);
+    const me = Me.parse(confirmed.body);
+    expect(me.user).toMatchObject({ name: 'Wren Castell', email, emailVerified: true });
     expect(me.memberships).toEqual([{ workspaceId: expect.any(String), workspaceName: 'Castell bench', role: 'admin' }]);
-    const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+    const cookie = (confirmed.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
     expect(cookie).toMatch(/HttpOnly/);
     expect(cookie).toMatch(/SameSite=Lax/);
     expect(cookie).not.toMatch(/Secure/); // plain http on loopback
     expect(Me.parse((await b.get('/api/auth/me').expect(200)).body).user.email).toBe(email);
     const audit = await t.db.selectFrom('audit_log').selectAll().where('workspace_id', '=', me.memberships[0].workspaceId).execute();
     expect(audit.map((a) => [a.action, a.actor_id])).toEqual([['workspace.created', me.user.id]]);
+    // the link works once
+    expect(ErrorBody.parse((await (await browserLike(t.url)).post('/api/auth/confirm', { token }).expect(410)).body).error.code).toBe('gone');
   });
 
-  it('stores the e-mail lower-cased and refuses the same address twice with 409', async () => {
+  it('answers a taken address exactly as a new one, creates nothing, and tells the owner by mail', async () => {
     const email = uniqueEmail('dup');
-    expect((await signUp(`  ${email.toUpperCase()} `)).res.status).toBe(201);
-    const users = await count('user');
-    const again = await signUp(email);
-    expect(again.res.status).toBe(409);
-    expect(ErrorBody.parse(again.res.body).error.fields).toEqual([{ path: 'email', message: expect.any(String) }]);
-    expect(await count('user')).toBe(users);
+    const first = await signUp(`  ${email.toUpperCase()} `);
+    expect(first.res.status).toBe(202);
+    const before = await Promise.all([count('user'), count('workspace'), count('membership')]);
+    const again = await signUp(email, 'another sound password');
+    expect(again.res.status).toBe(202);
+    expect(Object.keys(again.res.body).sort()).toEqual(Object.keys(first.res.body).sort());
+    expect(again.res.body).toEqual(first.res.body);
+    expect(await Promise.all([count('user'), count('workspace'), count('membership')])).toEqual(before);
+    const notice = await waitForMail(t.db, email, 'second Ridewright account');
+    expect(notice.text_body).toContain('/reset');
+  });
+
+  it('is closed unless the server opens it, and the sign-in page is told so', async () => {
+    const closed = await createTestApp({ openSignUp: false });
+    try {
+      const b = await browserLike(closed.url);
+      expect(AppConfig.parse((await b.get('/api/config').expect(200)).body).signUpOpen).toBe(false);
+      const res = await b.post('/api/auth/signup', { name: 'Shut Out', email: uniqueEmail('closed'), password: 'a sound password', workspaceName: 'Nope' }).expect(403);
+      expect(ErrorBody.parse(res.body).error.message).toMatch(/invitation/);
+      expect(Number((await closed.db.selectFrom('user').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n)).toBe(0);
+    } finally {
+      await closed.close();
+    }
   });
 
   it('answers a bad body with 400, naming every bad field, and saves nothing', async () => {

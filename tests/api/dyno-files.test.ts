@@ -3,7 +3,7 @@ import { CSRF_HEADER } from '../../server/auth/csrf.ts';
 import { ErrorBody } from '../../shared/errors.ts';
 import { ApplyDynoFitResult, DynoFileDetail, DynoFileItem, DynoFilesResponse } from '../../shared/schemas/dyno-file.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
-import { curveForce } from '../../shared/sim/damper.ts';
+import { curveForce } from '../../shared/sim/damper-force.ts';
 import { signedIn } from './helpers/agents.ts';
 import { addMember, createUser, createWorkspace } from './helpers/people.ts';
 import { peaksCsv, seriesCsv } from './helpers/road-dyno-fixtures.ts';

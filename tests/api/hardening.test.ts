@@ -38,8 +38,12 @@ const rowCounts = async (t: TestApp) => {
   return counts;
 };
 
+/**
+ * Every stored row, except the limits' own counting (`throttle_event`): a refused large job still
+ * counts against its sender's per-person limit, which is the point of the limit.
+ */
 const tableDump = async (t: TestApp) => {
-  const tables = await t.db.introspection.getTables();
+  const tables = (await t.db.introspection.getTables()).filter((table) => table.name !== 'throttle_event');
   let out = '';
   for (const table of tables) out += JSON.stringify(await t.db.selectFrom(table.name as 'user').selectAll().execute());
   return out;

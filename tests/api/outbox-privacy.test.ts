@@ -1,11 +1,13 @@
 import { afterAll, describe, expect, it } from 'vitest';
+import { ErrorBody } from '../../shared/errors.ts';
 import { Me } from '../../shared/schemas/account.ts';
 import { OutboxResponse, type OutboxMessage } from '../../shared/schemas/outbox.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { seedDemo } from '../../server/db/seed/seed-demo.ts';
 import { type BrowserLike, browserLike, signedIn } from './helpers/agents.ts';
-import { waitForMail } from './helpers/mail.ts';
+import { linkIn, waitForMail } from './helpers/mail.ts';
 import { uniqueEmail } from './helpers/people.ts';
+import { signUpConfirmed } from './helpers/sign-up.ts';
 import { createTestApp } from './helpers/test-app.ts';
 
 // On a demo instance anyone may sign up and so administer a workspace of their own. The outbox
@@ -22,10 +24,8 @@ async function outboxOf(b: BrowserLike): Promise<OutboxMessage[]> {
 }
 
 async function signUpStranger(): Promise<{ b: BrowserLike; workspaceId: string }> {
-  const b = await browserLike(t.url);
-  const email = uniqueEmail('stranger');
-  const res = await b.post('/api/auth/signup', { name: 'Sly Stranger', email, password: 'stranger-password-1', workspaceName: 'Stranger bench' }).expect(201);
-  return { b, workspaceId: res.body.memberships[0].workspaceId as string };
+  const { b, me } = await signUpConfirmed(t, { name: 'Sly Stranger', email: uniqueEmail('stranger'), password: 'stranger-password-1', workspaceName: 'Stranger bench' });
+  return { b, workspaceId: me.memberships[0].workspaceId };
 }
 
 describe('who reads which mail in the demo outbox', () => {
@@ -73,5 +73,29 @@ describe('who reads which mail in the demo outbox', () => {
     await (await browserLike(t.url)).post('/api/auth/reset/request', { email: me.email }).expect(202);
     const reset = await waitForMail(t.db, me.email, 'password');
     expect((await outboxOf(stranger)).map((m) => m.id)).toContain(reset.id);
+  });
+
+  it('an account that has not confirmed its address reads its confirmation mail, never an invitation to that address, and cannot accept one', async () => {
+    // someone signs up with the address a team is about to invite
+    const email = uniqueEmail('future.hire');
+    const squatter = await browserLike(t.url);
+    await squatter.post('/api/auth/signup', { name: 'Early Bird', email, password: 'early-bird-password', workspaceName: 'Perch' }).expect(202);
+    await squatter.post('/api/auth/signin', { email, password: 'early-bird-password' }).expect(200);
+    const admin = await signedIn(t.url, demo('admin').email, DEMO_PASSWORD);
+    const workspaceId = (await admin.get('/api/auth/me').expect(200)).body.memberships[0].workspaceId as string;
+    await admin.post(`/api/workspaces/${workspaceId}/invitations`, { email, role: 'engineer' }).expect(201);
+    const invitation = await waitForMail(t.db, email, 'asks you to join');
+    const confirmation = await waitForMail(t.db, email, 'Confirm your address');
+
+    const seen = (await outboxOf(squatter)).map((m) => m.id);
+    expect(seen).toContain(confirmation.id);
+    expect(seen).not.toContain(invitation.id);
+    // even holding the link (say it leaked), an unconfirmed account cannot accept
+    const { token } = linkIn(invitation.text_body, '/invite/');
+    const refused = await squatter.post(`/api/invitations/${token}/accept`, {}).expect(403);
+    expect(ErrorBody.parse(refused.body).error.message).toMatch(/Confirm your address first/);
+    // once the address is proved, the same account accepts
+    await squatter.post('/api/auth/confirm', { token: linkIn(confirmation.text_body, '/confirm/').token }).expect(200);
+    expect(Me.parse((await squatter.post(`/api/invitations/${token}/accept`, {}).expect(200)).body).memberships.map((m) => m.workspaceId)).toContain(workspaceId);
   });
 });

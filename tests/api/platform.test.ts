@@ -32,7 +32,7 @@ describe('CSRF', () => {
     await b.agent.post('/api/auth/signup').set('x-csrf-token', 'x'.repeat(b.csrf.length)).send(body).expect(403);
     await request(t.url).post('/api/auth/signup').set('x-csrf-token', b.csrf).send(body).expect(403); // header but no cookie
     expect(await count()).toBe(before);
-    await b.post('/api/auth/signup', body).expect(201);
+    await b.post('/api/auth/signup', body).expect(202);
   });
 
   it('does not let a signed-in session act without the token', async () => {
@@ -117,7 +117,7 @@ describe('config, outbox and the client', () => {
     expect(cfg.demoUsers.map((u) => u.role).sort()).toEqual(['admin', 'engineer', 'lead', 'viewer']);
     const plain = await createTestApp({ demoMode: false, outboxEnabled: false });
     try {
-      expect(AppConfig.parse((await request(plain.url).get('/api/config').expect(200)).body)).toEqual({ demoMode: false, demoUsers: [] });
+      expect(AppConfig.parse((await request(plain.url).get('/api/config').expect(200)).body)).toEqual({ demoMode: false, demoUsers: [], signUpOpen: true });
       const ws = await createWorkspace(plain.db);
       const u = await createUser(plain.db);
       await addMember(plain.db, ws, u.id, 'admin');

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { roles, type Role } from '../../shared/schemas/workspace.ts';
 import { ConformityChecksResponse, ConformityRecordDetail, type TargetSheetContent, TargetSheetDetail, TargetSheetsResponse, TargetSheetTransitionResult, type TargetSheetStatus } from '../../shared/schemas/target-sheet.ts';
 import { defaultReferenceSpeeds } from '../../shared/target-sheet/reference-speeds.ts';
-import { curveForce } from '../../shared/sim/damper.ts';
+import { curveForce } from '../../shared/sim/damper-force.ts';
 import { mailCount, waitForMail } from './helpers/mail.ts';
 import { addMember, createUser, createWorkspace, sessionHeaders, type TestUser } from './helpers/people.ts';
 import { cornerDocument, freshSetup, parsed } from './helpers/setup-fixtures.ts';

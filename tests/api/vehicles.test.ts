@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
 import { VehicleDetail, VehiclesResponse } from '../../shared/schemas/vehicle.ts';
-import { equivalentDampingLeastSquares } from '../../shared/sim/damper.ts';
+import { equivalentDampingLeastSquares } from '../../shared/sim/damper-equivalent.ts';
 import { modalAnalysis } from '../../shared/sim/linear/modal.ts';
 import { linearCorner } from '../../shared/sim/quarter-car.ts';
 import { signedIn } from './helpers/agents.ts';

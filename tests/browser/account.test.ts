@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { freshEmail, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { signUpAndConfirm } from './helpers/sign-up.ts';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -19,14 +20,7 @@ describe('account page', () => {
     const second = 'replacement-password-2';
 
     const here = await newSession(browser, baseUrl);
-    await here.page.goto('/signup');
-    const signup = here.page.getByRole('form', { name: 'Create an account' });
-    await signup.getByLabel('Your name').fill('Ysolde Crane');
-    await signup.getByLabel('E-mail').fill(email);
-    await signup.getByLabel('Password').fill(first);
-    await signup.getByLabel('Workspace name').fill('Crane rig');
-    await signup.getByRole('button', { name: 'Create account and workspace' }).click();
-    await here.page.waitForURL('**/w/*');
+    await signUpAndConfirm(here.page, baseUrl, { name: 'Ysolde Crane', email, password: first, workspaceName: 'Crane rig' });
 
     const elsewhere = await newSession(browser, baseUrl);
     await signIn(elsewhere.page, email, first);

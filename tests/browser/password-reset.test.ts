@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { apiSession, freshEmail, launchBrowser, linkIn, newSession, signIn, signOut, waitForMail } from './helpers/browser.ts';
+import { signUpAndConfirm } from './helpers/sign-up.ts';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -19,14 +20,7 @@ describe('password reset by e-mailed link', () => {
     const oldPassword = 'first-password-1';
     const newPassword = 'second-password-2';
     const { page, context } = await newSession(browser, baseUrl);
-    await page.goto('/signup');
-    const signup = page.getByRole('form', { name: 'Create an account' });
-    await signup.getByLabel('Your name').fill('Pell Harrow');
-    await signup.getByLabel('E-mail').fill(email);
-    await signup.getByLabel('Password').fill(oldPassword);
-    await signup.getByLabel('Workspace name').fill('Harrow test bench');
-    await signup.getByRole('button', { name: 'Create account and workspace' }).click();
-    await page.waitForURL('**/w/*');
+    await signUpAndConfirm(page, baseUrl, { name: 'Pell Harrow', email, password: oldPassword, workspaceName: 'Harrow test bench' });
     await page.getByText(/Your role:\s*admin/).waitFor();
     await signOut(page);
 

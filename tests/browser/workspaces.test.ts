@@ -30,9 +30,15 @@ describe('belonging to two workspaces', () => {
       data: { name: 'Odile Tarn', email, password, workspaceName: 'Tarn spring lab' },
       headers: { 'x-csrf-token': await csrf(own) },
     });
-    expect(signup.status()).toBe(201);
-    const ownWorkspaceId: string = (await signup.json()).memberships[0].workspaceId;
+    expect(signup.status()).toBe(202);
     await own.dispose();
+    // they confirm the address from the mailed link (read as themselves from the demo outbox)
+    const mailbox = await apiSession(baseUrl, email, password);
+    const token = linkIn(await waitForMail(mailbox, email, /Confirm your address/), '/confirm/').split('/confirm/')[1];
+    const confirmed = await mailbox.post('/api/auth/confirm', { data: { token }, headers: { 'x-csrf-token': await csrf(mailbox) } });
+    expect(confirmed.status()).toBe(200);
+    const ownWorkspaceId: string = (await confirmed.json()).memberships[0].workspaceId;
+    await mailbox.dispose();
 
     // the demo admin invites that address as a lead
     const demoWorkspaceId: string = (await (await admin.get('/api/auth/me')).json()).memberships[0].workspaceId;

@@ -5,7 +5,7 @@ import { noiseModel, type Corner } from './quarter-car-noise.ts';
 import { bandMeanSquares } from './road-integral.ts';
 
 /**
- * Linear corner on an ISO 8608 road (ISO 8608:2016, class values from memory; model.md):
+ * Linear corner on an ISO 8608 road (ISO 8608:2016, class values from memory; docs/model.md §3 and §7):
  * the band-limited integral ∫|H|²·G df from the project's frequency response and Wk weighting,
  * against the Lyapunov covariance of the same corner driven by white road velocity of
  * two-sided intensity q = 2π²·n0²·Gd(n0)·V, built and solved in the test with ml-matrix

@@ -7,7 +7,7 @@ import { bandMeanSquares } from './road-integral.ts';
 /**
  * Time-domain run of a linear corner (symmetric linear damper, no stops, no lift-off) on an
  * ISO 8608 road (ISO 8608:2016, class values from memory) against the band-limited integral
- * ∫|H(f)|²·G(f) df over the band the generator actually produced, G(f) = Gd(f/V)/V (model.md).
+ * ∫|H(f)|²·G(f) df over the band the generator actually produced, G(f) = Gd(f/V)/V (docs/model.md §3).
  * The integral itself is checked against an ml-matrix Lyapunov solution in
  * linear-road-rms.test.ts.
  *

@@ -77,7 +77,7 @@ describe('modal analysis against ml-matrix EigenvalueDecomposition', () => {
 });
 
 /**
- * Classic single-mode estimates (model.md) against the exact two-mass figures. Their known
+ * Classic single-mode estimates (docs/model.md §7) against the exact two-mass figures. Their known
  * error comes from ignoring the coupling of the two masses. Measured for these corners:
  * body and wheel-hop frequency estimates within 0.12 % of the exact undamped frequencies;
  * against the damped system's natural frequencies |λ|/2π the body estimate reads 1.4–5.0 %

@@ -1,7 +1,7 @@
 /**
  * Quarter car driven by white road velocity u = żr, written in the test independently of the
  * project's code. States x = (zs − zr, żs, zu − zr, żu) are stationary although zr itself is a
- * random walk. Optional: the ISO 2631-1 Wk weighting (Annex A stages from model.md) appended as
+ * random walk. Optional: the ISO 2631-1 Wk weighting (Annex A stages in docs/model.md §5) appended as
  * four second-order sections in controllable form, fed by the body acceleration.
  */
 export interface Corner {

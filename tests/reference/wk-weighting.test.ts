@@ -4,7 +4,7 @@ import { rms } from '../../shared/sim/metrics/stats.ts';
 
 /**
  * ISO 2631-1:1997, Table 3, vertical weighting Wk (values from memory, as listed in
- * model.md). The table rounds to three digits, i.e. ±0.12 % at worst (0.405 at 31.5 Hz).
+ * docs/model.md §5). The table rounds to three digits, i.e. ±0.12 % at worst (0.405 at 31.5 Hz).
  * Measured: the four-stage product (Annex A) deviates by at most 0.10 % (at 1 Hz).
  */
 const table3: ReadonlyArray<[number, number]> = [

@@ -15,7 +15,7 @@ export async function seedDemoPeople(db: Queryable, now: Date): Promise<SeedCont
   for (const u of DEMO_USERS) {
     const id = randomUUID();
     users[u.role] = id;
-    await db.insertInto('user').values({ id, email: u.email, name: u.name, password_hash: passwordHash, session_version: 0, created_at: at }).execute();
+    await db.insertInto('user').values({ id, email: u.email, name: u.name, password_hash: passwordHash, session_version: 0, created_at: at, email_verified_at: at }).execute();
     await db.insertInto('membership').values({ workspace_id: workspaceId, user_id: id, role: u.role, created_at: at }).execute();
   }
   await db

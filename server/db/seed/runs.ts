@@ -70,7 +70,7 @@ export const seedRuns: SeedStep = async (trx, ctx) => {
       spectra: toStoredSpectra(computeSpectra(run.trace, { settleTime: run.result.settleTime })),
     });
     const person = DEMO_USERS.find((u) => u.role === r.by)!;
-    const actor = { id: ctx.users[r.by], name: person.name, email: person.email, sessionVersion: 0 };
+    const actor = { id: ctx.users[r.by], name: person.name, email: person.email, sessionVersion: 0, emailVerified: true };
     const saved = await saveRunInTx(trx, ws, actor, input, new Date(ctx.now.getTime() - r.daysAgo * 86_400_000));
     if (!saved.ok) throw new Error(`seed runs: ${r.name}: ${saved.message}`);
   }

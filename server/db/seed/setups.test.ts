@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { tableForce } from '../../../shared/sim/damper.ts';
+import { tableForce } from '../../../shared/sim/damper-force.ts';
 import { getVehicle, listVehicles } from '../../vehicles/vehicles.service.ts';
 import { listSetups } from '../../setups/setups.service.ts';
 import { openDatabase } from '../database.ts';

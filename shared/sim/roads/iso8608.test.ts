@@ -29,7 +29,7 @@ describe('ISO 8608 road generation', () => {
   });
 
   it('its variance equals the integral of the class PSD over the band', () => {
-    // ISO 8608 (from memory, model.md): Gd(n) = Gd(n0)(n/n0)^−2, n0 = 0.1 cycle/m.
+    // ISO 8608 (from memory, docs/model.md §3): Gd(n) = Gd(n0)(n/n0)^−2, n0 = 0.1 cycle/m.
     // ∫ Gd dn from n1 to n2 = Gd(n0)·n0²·(1/n1 − 1/n2); the harmonics sample it every 1/L.
     const p = generateIso8608Profile(road());
     let mean = 0;

@@ -6,7 +6,7 @@ import { atSpeed, footprintGain, type RoadExcitation } from './excitation.ts';
 import { gridSpline, type GridSpline } from './spline.ts';
 
 /**
- * ISO 8608 random road (ISO 8608:2016; class values from memory, model.md): displacement PSD
+ * ISO 8608 random road (ISO 8608:2016; class values from memory, docs/model.md §3): displacement PSD
  * Gd(n) = Gd(n0)·(n/n0)^−w, n0 = 0.1 cycle/m, one-sided, m³.
  *
  * Generation: harmonic superposition with deterministic amplitudes and seeded random phases,
@@ -140,7 +140,7 @@ function cachedSpline(road: Iso8608Road, footprint: number | undefined) {
   if (!hit) {
     const profile = generateIso8608Profile(road, { footprint });
     // Shifted so the tyre starts at zero elevation: the corner starts in static equilibrium
-    // on a level road (model.md); a constant offset changes nothing else.
+    // on a level road (docs/model.md §1); a constant offset changes nothing else.
     const z0 = profile.z[0];
     const shifted = new Float64Array(profile.z.length);
     for (let i = 0; i < shifted.length; i++) shifted[i] = profile.z[i] - z0;

@@ -3,6 +3,7 @@ import { Notice } from '../../components/ui/notice.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';
+import { AddressCheckNotice } from '../../features/auth/components/address-check-notice.tsx';
 import { ChangePasswordForm } from '../../features/auth/components/change-password-form.tsx';
 import { PageBody } from '../layouts/app-shell.tsx';
 import { Link } from 'react-router';
@@ -15,6 +16,7 @@ export function AccountRoute() {
   return (
     <PageBody>
       <PageHeader title="Your account" detail={`${me.user.name} · ${me.user.email}`} />
+      {!me.user.emailVerified && <AddressCheckNotice email={me.user.email} className="mb-6" />}
       <Section title="Workspaces">
         {me.memberships.length === 0 ? (
           <Notice>You are not a member of any workspace. Ask a workspace admin to invite you.</Notice>

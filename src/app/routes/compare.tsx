@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
@@ -6,15 +7,16 @@ import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Spinner } from '../../components/ui/spinner.tsx';
 import { useRuns } from '../../features/runs/api/get-runs.ts';
-import { useSetupChoices } from '../../features/runs/api/get-setup-choices.ts';
 import { CompareCharts } from '../../features/runs/components/compare/compare-charts.tsx';
 import { ComparePicker } from '../../features/runs/components/compare/compare-picker.tsx';
 import { CompareTable } from '../../features/runs/components/compare/compare-table.tsx';
 import { ScenarioFields } from '../../features/runs/components/scenario-fields.tsx';
 import { type CompareEntry, entriesFromParams, entriesToParams, likeForLikeNotes } from '../../features/runs/model/compare.ts';
-import { downloadText, figuresCsv } from '../../features/runs/model/export-csv.ts';
+import { figuresCsv } from '../../features/runs/model/export-csv.ts';
 import { useComparison } from '../../features/runs/model/use-comparison.ts';
 import { useScenario } from '../../features/runs/model/use-scenario.ts';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
+import { downloadText } from '../../lib/download.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/compare`: two to four setups (run here on one scenario) or saved runs, side by side. */
@@ -22,7 +24,7 @@ export function CompareRoute() {
   const workspace = useWorkspace();
   const [params, setParams] = useSearchParams();
   const [entries, setEntries] = useState<CompareEntry[]>(() => entriesFromParams(params));
-  const setups = useSetupChoices(workspace.id);
+  const setups = useQuery(setupsQueryOptions(workspace.id));
   const runs = useRuns(workspace.id);
   const scenario = useScenario(workspace.id);
   const { state, compare, cancel } = useComparison(workspace.id);

@@ -1,19 +1,20 @@
+import { useQuery } from '@tanstack/react-query';
 import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router';
 import type { StudyPointDraft } from '../../../shared/schemas/study-record.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
-import { staticGasForce } from '../../../shared/sim/damper.ts';
+import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
 import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
-import { useSetup } from '../../features/setups/api/get-setup.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
 import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
 import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
@@ -31,27 +32,20 @@ import { SharePanel } from '../../features/sharing/components/share-panel.tsx';
 import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
 import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
+import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
-  const setup = useSetup(workspace.id, setupId);
+  const setup = useQuery(setupQueryOptions(workspace.id, setupId));
   const [params] = useSearchParams();
   const studyId = params.get('study');
   const point = Number(params.get('point'));
   const fromStudy = studyId !== null && Number.isInteger(point) && point >= 0 && workspace.can('engineer');
   const pointDraft = usePointDraft(workspace.id, studyId ?? '', point, fromStudy);
-  if (setup.isPending || (fromStudy && pointDraft.isPending)) return <Loading what="the setup" />;
-  if (setup.isError) {
-    return (
-      <Notice tone="danger" title={setup.error.code === 'not_found' ? 'No such setup here' : 'The setup did not load'}>
-        {setup.error.message}
-      </Notice>
-    );
-  }
-  const studyDraft = fromStudy && pointDraft.data?.setupId === setup.data.id ? pointDraft.data : undefined;
+  if (fromStudy && pointDraft.isPending) return <Loading what="the study point" />;
   return (
     <>
       {fromStudy && pointDraft.isError && (
@@ -59,7 +53,12 @@ export function CornerBenchRoute() {
           {pointDraft.error.message}
         </Notice>
       )}
-      <Bench key={`${setup.data.id}:${studyId ?? ''}:${studyDraft ? point : ''}`} detail={setup.data} studyDraft={studyDraft} studyId={studyId ?? undefined} />
+      <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
+        {(detail) => {
+          const studyDraft = fromStudy && pointDraft.data?.setupId === detail.id ? pointDraft.data : undefined;
+          return <Bench key={`${detail.id}:${studyId ?? ''}:${studyDraft ? point : ''}`} detail={detail} studyDraft={studyDraft} studyId={studyId ?? undefined} />;
+        }}
+      </QueryGuard>
     </>
   );
 }

@@ -1,18 +1,18 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
-import { useSetups } from '../../features/setups/api/get-setups.ts';
 import { NewSetupForm } from '../../features/setups/components/new-setup-form.tsx';
 import { ImportSetupButton } from '../../features/setups/components/setup-file-buttons.tsx';
 import { SetupsTable } from '../../features/setups/components/setups-table.tsx';
 import { useVehicles } from '../../features/vehicles/api/get-vehicles.ts';
 import { VehicleForm } from '../../features/vehicles/components/vehicle-form.tsx';
 import { VehicleList } from '../../features/vehicles/components/vehicle-list.tsx';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/corners`: every corner setup, and the vehicles that group them. */
@@ -23,8 +23,8 @@ export function CornersRoute() {
   const toast = useToast();
   const [showArchived, setShowArchived] = useState(false);
   const [adding, setAdding] = useState<'setup' | 'vehicle' | null>(null);
-  const setups = useSetups(workspace.id, showArchived ? 'include' : 'exclude');
-  const live = useSetups(workspace.id, 'exclude');
+  const setups = useQuery(setupsQueryOptions(workspace.id, showArchived ? 'include' : 'exclude'));
+  const live = useQuery(setupsQueryOptions(workspace.id, 'exclude'));
   const vehicles = useVehicles(workspace.id);
   const open = (setupId: string) => navigate(`/w/${workspace.id}/corners/${setupId}`);
   const vehicleRefs = (vehicles.data?.vehicles ?? []).map((v) => ({ id: v.id, name: v.name }));
@@ -55,26 +55,26 @@ export function CornersRoute() {
       {adding === 'setup' && <NewSetupForm workspaceId={workspace.id} vehicles={vehicleRefs} setups={liveSetups} onCreated={(d) => open(d.id)} onCancel={() => setAdding(null)} />}
 
       <Section title="Setups">
-        {setups.isPending ? (
-          <Loading what="setups" />
-        ) : setups.isError ? (
-          <Notice tone="danger">{setups.error.message}</Notice>
-        ) : setups.data.setups.length === 0 && !showArchived ? (
-          <EmptyState title="No corner setups yet" action={canWrite && <Button onClick={() => setAdding('setup')}>New setup</Button>}>
-            A setup holds one corner: masses, spring, tyre, damper curves, stops and stroke.
-          </EmptyState>
-        ) : (
-          <SetupsTable
-            workspaceId={workspace.id}
-            setups={setups.data.setups}
-            extraFilters={
-              <label className="flex items-center gap-1.5 text-ink-soft">
-                <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} className="accent-accent" />
-                show archived
-              </label>
-            }
-          />
-        )}
+        <QueryGuard query={setups} what="setups">
+          {(data) =>
+            data.setups.length === 0 && !showArchived ? (
+              <EmptyState title="No corner setups yet" action={canWrite && <Button onClick={() => setAdding('setup')}>New setup</Button>}>
+                A setup holds one corner: masses, spring, tyre, damper curves, stops and stroke.
+              </EmptyState>
+            ) : (
+              <SetupsTable
+                workspaceId={workspace.id}
+                setups={data.setups}
+                extraFilters={
+                  <label className="flex items-center gap-1.5 text-ink-soft">
+                    <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} className="accent-accent" />
+                    show archived
+                  </label>
+                }
+              />
+            )
+          }
+        </QueryGuard>
       </Section>
 
       <Section
@@ -99,15 +99,15 @@ export function CornersRoute() {
             onCancel={() => setAdding(null)}
           />
         )}
-        {vehicles.isPending ? (
-          <Loading what="vehicles" />
-        ) : vehicles.isError ? (
-          <Notice tone="danger">{vehicles.error.message}</Notice>
-        ) : vehicles.data.vehicles.length === 0 ? (
-          <p className="text-sm text-ink-faint">No vehicles yet. A vehicle puts a front and a rear setup side by side.</p>
-        ) : (
-          <VehicleList workspaceId={workspace.id} vehicles={vehicles.data.vehicles} />
-        )}
+        <QueryGuard query={vehicles} what="vehicles">
+          {(data) =>
+            data.vehicles.length === 0 ? (
+              <p className="text-sm text-ink-faint">No vehicles yet. A vehicle puts a front and a rear setup side by side.</p>
+            ) : (
+              <VehicleList workspaceId={workspace.id} vehicles={data.vehicles} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );

@@ -15,7 +15,7 @@ describe('safeNext', () => {
 });
 
 describe('landingPath', () => {
-  const user = { id: 'u1', name: 'A', email: 'a@x.example' };
+  const user = { id: 'u1', name: 'A', email: 'a@x.example', emailVerified: true };
   it('opens the first workspace when none was remembered (no storage in node)', () => {
     const me = { user, memberships: [{ workspaceId: 'w1', workspaceName: 'One', role: 'viewer' as const }, { workspaceId: 'w2', workspaceName: 'Two', role: 'admin' as const }] };
     expect(landingPath(me)).toBe('/w/w1');

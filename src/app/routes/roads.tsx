@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useCallback, useState } from 'react';
 import { useNavigate } from 'react-router';
 import type { RoadListItem } from '../../../shared/schemas/road-record.ts';
@@ -7,17 +8,16 @@ import { candidateOf, defaultRoads } from '../../features/roads/model/road-field
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
 import { Field, Select } from '../../components/ui/field.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useCreateRoad } from '../../features/roads/api/create-road.ts';
-import { useRoads } from '../../features/roads/api/get-roads.ts';
 import { MeasuredUpload } from '../../features/roads/components/measured-upload.tsx';
 import { RoadEditor } from '../../features/roads/components/road-editor.tsx';
 import { RoadPreview } from '../../features/roads/components/road-preview.tsx';
 import { kindWords } from '../../features/roads/components/road-words.ts';
 import { RoadsTable } from '../../features/roads/components/roads-table.tsx';
 import { isApiError } from '../../lib/api-client.ts';
+import { roadsQueryOptions } from '../../lib/queries/roads.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** The preview shown before anything is typed: the kind's starting values. */
@@ -83,7 +83,7 @@ function NewRoad({ workspaceId, onDone }: { workspaceId: string; onDone: (roadId
 /** `/w/:workspaceId/roads`: the road library, and adding a road (defined or uploaded). */
 export function RoadsRoute() {
   const workspace = useWorkspace();
-  const roads = useRoads(workspace.id);
+  const roads = useQuery(roadsQueryOptions(workspace.id));
   const [adding, setAdding] = useState(false);
   const hrefOf = useCallback((r: RoadListItem) => `/w/${workspace.id}/roads/${r.id}`, [workspace.id]);
   const canEdit = workspace.can('engineer');
@@ -107,15 +107,15 @@ export function RoadsRoute() {
         </Section>
       )}
       <Section title="Library">
-        {roads.isPending ? (
-          <Loading what="roads" />
-        ) : roads.isError ? (
-          <Notice tone="danger">{roads.error.message}</Notice>
-        ) : roads.data.roads.length === 0 ? (
-          <EmptyState title="No roads yet">{canEdit ? 'Add a random road of an ISO 8608 class, an event, or upload a measured profile.' : 'An engineer can add roads here.'}</EmptyState>
-        ) : (
-          <RoadsTable roads={roads.data.roads} hrefOf={hrefOf} />
-        )}
+        <QueryGuard query={roads} what="roads">
+          {(data) =>
+            data.roads.length === 0 ? (
+              <EmptyState title="No roads yet">{canEdit ? 'Add a random road of an ISO 8608 class, an event, or upload a measured profile.' : 'An engineer can add roads here.'}</EmptyState>
+            ) : (
+              <RoadsTable roads={data.roads} hrefOf={hrefOf} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );

@@ -2,8 +2,8 @@ import { useMemo } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import { Button, ButtonLink } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { useDeleteRun } from '../../features/runs/api/delete-run.ts';
 import { useSavedRun } from '../../features/runs/api/get-run.ts';
 import { ExportButtons, runTitle } from '../../features/runs/components/run-actions.tsx';
@@ -22,62 +22,65 @@ export function RunDetailRoute() {
   const remove = useDeleteRun(workspace.id);
   const view = useMemo(() => (saved.data ? viewOfSaved(saved.data) : null), [saved.data]);
 
-  if (saved.isPending) return <Loading what="the saved run" />;
-  if (saved.isError) return saved.error.code === 'not_found' ? <NotFoundRoute inShell /> : <Notice tone="danger">{saved.error.message}</Notice>;
-  const run = saved.data;
-  const runAgain = `/w/${workspace.id}/runs?setup=${run.setupId}&rev=${run.revisionNumber}`;
-
   return (
-    <>
-      <PageHeader
-        eyebrow={
-          <Link to={`/w/${workspace.id}/runs`} className="hover:text-ink">
-            Runs
-          </Link>
-        }
-        title={run.name}
-        detail={
+    <QueryGuard query={saved} what="the saved run" notFound={<NotFoundRoute inShell />}>
+      {(run) => {
+        const runAgain = `/w/${workspace.id}/runs?setup=${run.setupId}&rev=${run.revisionNumber}`;
+
+        return (
           <>
-            {view?.ok ? runTitle(view.view, run.revisionNumber) : run.setupName} — saved {formatDateTime(run.createdAt)} by {run.createdBy.name}. Opened from the stored figures and traces; nothing was run again.
-          </>
-        }
-        actions={
-          <>
-            {view?.ok && <ExportButtons view={view.view} name={run.name} />}
-            <ButtonLink to={runAgain} size="sm">
-              Run again
-            </ButtonLink>
-            {workspace.can('engineer') && (
-              <Button
-                size="sm"
-                variant="danger"
-                busy={remove.isPending}
-                onClick={() => {
-                  if (window.confirm(`Delete the saved run “${run.name}”?`)) remove.mutate(run.id, { onSuccess: () => navigate(`/w/${workspace.id}/runs`) });
-                }}
-              >
-                Delete
-              </Button>
+            <PageHeader
+              eyebrow={
+                <Link to={`/w/${workspace.id}/runs`} className="hover:text-ink">
+                  Runs
+                </Link>
+              }
+              title={run.name}
+              detail={
+                <>
+                  {view?.ok ? runTitle(view.view, run.revisionNumber) : run.setupName} — saved {formatDateTime(run.createdAt)} by {run.createdBy.name}. Opened from the stored figures and traces; nothing was run again.
+                </>
+              }
+              actions={
+                <>
+                  {view?.ok && <ExportButtons view={view.view} name={run.name} />}
+                  <ButtonLink to={runAgain} size="sm">
+                    Run again
+                  </ButtonLink>
+                  {workspace.can('engineer') && (
+                    <Button
+                      size="sm"
+                      variant="danger"
+                      busy={remove.isPending}
+                      onClick={() => {
+                        if (window.confirm(`Delete the saved run “${run.name}”?`)) remove.mutate(run.id, { onSuccess: () => navigate(`/w/${workspace.id}/runs`) });
+                      }}
+                    >
+                      Delete
+                    </Button>
+                  )}
+                </>
+              }
+            />
+            {run.latestRevision > run.revisionNumber && (
+              <Notice tone="signal" className="mb-4" title={`From revision ${run.revisionNumber}; the setup is now at r${run.latestRevision}.`}>
+                These figures belong to the older revision. <Link className="underline" to={`/w/${workspace.id}/runs?setup=${run.setupId}&rev=${run.latestRevision}`}>Run the latest revision</Link> on the same road to see where it stands now.
+              </Notice>
+            )}
+            {view && !view.ok && <Notice tone="danger">{view.reason}</Notice>}
+            {view?.ok && (
+              <>
+                {view.view.thinned === 'bucket-extremes' && (
+                  <p className="mb-3 text-xs text-ink-faint">
+                    Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run.
+                  </p>
+                )}
+                <RunDashboard view={view.view} />
+              </>
             )}
           </>
-        }
-      />
-      {run.latestRevision > run.revisionNumber && (
-        <Notice tone="signal" className="mb-4" title={`From revision ${run.revisionNumber}; the setup is now at r${run.latestRevision}.`}>
-          These figures belong to the older revision. <Link className="underline" to={`/w/${workspace.id}/runs?setup=${run.setupId}&rev=${run.latestRevision}`}>Run the latest revision</Link> on the same road to see where it stands now.
-        </Notice>
-      )}
-      {view && !view.ok && <Notice tone="danger">{view.reason}</Notice>}
-      {view?.ok && (
-        <>
-          {view.view.thinned === 'bucket-extremes' && (
-            <p className="mb-3 text-xs text-ink-faint">
-              Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run.
-            </p>
-          )}
-          <RunDashboard view={view.view} />
-        </>
-      )}
-    </>
+        );
+      }}
+    </QueryGuard>
   );
 }

@@ -1,10 +1,10 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/button.tsx';
 import { Select } from '../../components/ui/field.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { useSetupChoices } from '../../features/runs/api/get-setup-choices.ts';
 import { ExportButtons, runTitle, SaveRunForm, type SaveTarget } from '../../features/runs/components/run-actions.tsx';
 import { LiveTryout } from '../../features/runs/components/live-tryout.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
@@ -13,6 +13,7 @@ import { RunStatus } from '../../features/runs/components/run-status.tsx';
 import { SetupRunsList } from '../../features/runs/components/setup-runs-list.tsx';
 import { useSimulation } from '../../features/runs/model/use-simulation.ts';
 import { formatQuantityText } from '../../lib/format.ts';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/runs`: run a setup revision on a road, read the result, save it; saved runs below. */
@@ -95,7 +96,7 @@ export function RunsRoute() {
 
 function SavedRuns({ workspaceId, canDelete }: { workspaceId: string; canDelete: boolean }) {
   const [setupId, setSetupId] = useState('');
-  const setups = useSetupChoices(workspaceId);
+  const setups = useQuery(setupsQueryOptions(workspaceId));
   return (
     <>
       <div className="mb-2 flex items-center gap-2 text-sm">

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { useParams } from 'react-router';
 import { ButtonLink, buttonClass } from '../../components/ui/button.tsx';
-import { Caution, Notice } from '../../components/ui/notice.tsx';
+import { Caution } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
@@ -37,108 +38,104 @@ export function SheetDetailRoute() {
   const save = useSaveSheet(workspace.id, sheetId);
   const [plotted, setPlotted] = useState<string | null>(null);
 
-  if (detail.isPending) return <Loading what="target sheet" />;
-  if (detail.isError) {
-    if (detail.error.code === 'not_found') return <NotFoundRoute inShell />;
-    return (
-      <Notice tone="danger" title="This sheet did not load">
-        {detail.error.message}
-      </Notice>
-    );
-  }
-  const { sheet, history, replaces } = detail.data;
-  const editable = (sheet.status === 'draft' || sheet.status === 'returned') && workspace.can('engineer');
-  const list = checks.data?.checks ?? [];
-  const shown = list.find((c) => c.id === plotted) ?? list[0];
-
   return (
-    <>
-      <PageHeader
-        eyebrow="Target sheet"
-        title={<span className="figures">{sheet.number}</span>}
-        detail={`${sheet.setupName}, revision ${sheet.setupRevision}`}
-        actions={
+    <QueryGuard query={detail} what="target sheet" notFound={<NotFoundRoute inShell />} errorTitle="This sheet did not load">
+      {({ sheet, history, replaces }) => {
+        const editable = (sheet.status === 'draft' || sheet.status === 'returned') && workspace.can('engineer');
+        const list = checks.data?.checks ?? [];
+        const shown = list.find((c) => c.id === plotted) ?? list[0];
+
+        return (
           <>
-            <a className={buttonClass('secondary', 'sm')} href={sheetCsvHref(workspace.id, sheet.id)} download>
-              Download CSV
-            </a>
-            <ButtonLink size="sm" to={`/w/${workspace.id}/sheets/${sheet.id}/print`}>
-              Print view
-            </ButtonLink>
-          </>
-        }
-      />
-      <StatusBar sheet={sheet} replaces={replaces} workspaceId={workspace.id} role={workspace.role} secondPerson={workspace.settings.releaseNeedsSecondPerson ? { userId: me.data?.user.id ?? '' } : null} />
-      <Section title="Identity">
-        <SheetIdentity sheet={sheet} workspaceId={workspace.id} replaces={replaces} />
-      </Section>
+            <PageHeader
+              eyebrow="Target sheet"
+              title={<span className="figures">{sheet.number}</span>}
+              detail={`${sheet.setupName}, revision ${sheet.setupRevision}`}
+              actions={
+                <>
+                  <a className={buttonClass('secondary', 'sm')} href={sheetCsvHref(workspace.id, sheet.id)} download>
+                    Download CSV
+                  </a>
+                  <ButtonLink size="sm" to={`/w/${workspace.id}/sheets/${sheet.id}/print`}>
+                    Print view
+                  </ButtonLink>
+                </>
+              }
+            />
+            <StatusBar sheet={sheet} replaces={replaces} workspaceId={workspace.id} role={workspace.role} secondPerson={workspace.settings.releaseNeedsSecondPerson ? { userId: me.data?.user.id ?? '' } : null} />
+            <Section title="Identity">
+              <SheetIdentity sheet={sheet} workspaceId={workspace.id} replaces={replaces} />
+            </Section>
 
-      {replaces && sheet.status !== 'released' && (
-        <Section title="Against the sheet in force">
-          <ReplacementDifference sheet={sheet} inForce={replaces} workspaceId={workspace.id} />
-        </Section>
-      )}
+            {replaces && sheet.status !== 'released' && (
+              <Section title="Against the sheet in force">
+                <ReplacementDifference sheet={sheet} inForce={replaces} workspaceId={workspace.id} />
+              </Section>
+            )}
 
-      <Section title="Targets">
-        {editable ? (
-          <TargetTableEditor
-            key={`${sheet.id}-${sheet.updatedAt}`}
-            initial={{ compression: sheet.compression, rebound: sheet.rebound, gasForce: sheet.gasForce, notes: sheet.notes }}
-            saving={save.isPending}
-            onSave={(content) => save.mutateAsync(content)}
-            reopens={sheet.status === 'returned'}
-          />
-        ) : (
-          <div className="space-y-3">
-            <div className="grid gap-5 lg:grid-cols-2">
-              <TargetTable title="Compression" points={sheet.compression} />
-              <TargetTable title="Rebound" points={sheet.rebound} />
-            </div>
-            <p className="text-sm">
-              Gas force <strong className="figures">{sheet.gasForce} N</strong> <span className="text-ink-soft">(stated on the sheet; the targets exclude it)</span>
-            </p>
-            <Caution>{sheetCautions.gas}</Caution>
-            {sheet.notes.trim() && <p className="whitespace-pre-wrap text-sm text-ink-soft">{sheet.notes}</p>}
-          </div>
-        )}
-      </Section>
-
-      <Section title="Band and measured dampers">
-        <BandPlot
-          compression={sheet.compression}
-          rebound={sheet.rebound}
-          measured={shown?.measured ?? []}
-          exportName={`${sheet.number}-band`}
-        />
-        <p className="mt-1 text-xs text-ink-faint">
-          Shaded: the tolerance band. Piston speed and force are signed, compression positive, so rebound is drawn below the axis on the left.
-          {shown ? ` Measured: the check of ${formatDateTime(shown.createdAt)}.` : ' No measured dampers yet.'}
-        </p>
-      </Section>
-
-      <Section title="Dyno checks">
-        {workspace.can('engineer') && <CheckUpload workspaceId={workspace.id} sheetId={sheet.id} gasForce={sheet.gasForce} />}
-        <div className="mt-4 space-y-6">
-          {checks.isPending && <Loading what="dyno checks" />}
-          {checks.data && list.length === 0 && <p className="text-sm text-ink-soft">No dampers have been checked against this sheet yet.</p>}
-          {list.map((c) => (
-            <div key={c.id} className="border-t border-rule pt-3">
-              <CheckResults check={c} workspaceId={workspace.id} />
-              {list.length > 1 && (
-                <label className="mt-2 flex items-center gap-2 text-sm">
-                  <input type="radio" name="plotted-check" checked={shown?.id === c.id} onChange={() => setPlotted(c.id)} />
-                  Show on the band plot
-                </label>
+            <Section title="Targets">
+              {editable ? (
+                <TargetTableEditor
+                  key={`${sheet.id}-${sheet.updatedAt}`}
+                  initial={{ compression: sheet.compression, rebound: sheet.rebound, gasForce: sheet.gasForce, notes: sheet.notes }}
+                  saving={save.isPending}
+                  onSave={(content) => save.mutateAsync(content)}
+                  reopens={sheet.status === 'returned'}
+                />
+              ) : (
+                <div className="space-y-3">
+                  <div className="grid gap-5 lg:grid-cols-2">
+                    <TargetTable title="Compression" points={sheet.compression} />
+                    <TargetTable title="Rebound" points={sheet.rebound} />
+                  </div>
+                  <p className="text-sm">
+                    Gas force <strong className="figures">{sheet.gasForce} N</strong> <span className="text-ink-soft">(stated on the sheet; the targets exclude it)</span>
+                  </p>
+                  <Caution>{sheetCautions.gas}</Caution>
+                  {sheet.notes.trim() && <p className="whitespace-pre-wrap text-sm text-ink-soft">{sheet.notes}</p>}
+                </div>
               )}
-            </div>
-          ))}
-        </div>
-      </Section>
+            </Section>
 
-      <Section title="History">
-        <SheetHistory history={history} />
-      </Section>
-      <ResultsCaution />
-    </>
+            <Section title="Band and measured dampers">
+              <BandPlot
+                compression={sheet.compression}
+                rebound={sheet.rebound}
+                measured={shown?.measured ?? []}
+                exportName={`${sheet.number}-band`}
+              />
+              <p className="mt-1 text-xs text-ink-faint">
+                Shaded: the tolerance band. Piston speed and force are signed, compression positive, so rebound is drawn below the axis on the left.
+                {shown ? ` Measured: the check of ${formatDateTime(shown.createdAt)}.` : ' No measured dampers yet.'}
+              </p>
+            </Section>
+
+            <Section title="Dyno checks">
+              {workspace.can('engineer') && <CheckUpload workspaceId={workspace.id} sheetId={sheet.id} gasForce={sheet.gasForce} />}
+              <div className="mt-4 space-y-6">
+                {checks.isPending && <Loading what="dyno checks" />}
+                {checks.data && list.length === 0 && <p className="text-sm text-ink-soft">No dampers have been checked against this sheet yet.</p>}
+                {list.map((c) => (
+                  <div key={c.id} className="border-t border-rule pt-3">
+                    <CheckResults check={c} workspaceId={workspace.id} />
+                    {list.length > 1 && (
+                      <label className="mt-2 flex items-center gap-2 text-sm">
+                        <input type="radio" name="plotted-check" checked={shown?.id === c.id} onChange={() => setPlotted(c.id)} />
+                        Show on the band plot
+                      </label>
+                    )}
+                  </div>
+                ))}
+              </div>
+            </Section>
+
+            <Section title="History">
+              <SheetHistory history={history} />
+            </Section>
+            <ResultsCaution />
+          </>
+        );
+      }}
+    </QueryGuard>
   );
 }

@@ -1,8 +1,7 @@
 import { useNavigate } from 'react-router';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useSheets } from '../../features/target-sheets/api/get-sheets.ts';
 import { NewSheetForm } from '../../features/target-sheets/components/new-sheet-form.tsx';
 import { SheetList } from '../../features/target-sheets/components/sheet-list.tsx';
@@ -25,17 +24,15 @@ export function SheetsRoute() {
         </Section>
       )}
       <Section title="Sheets">
-        {sheets.isPending ? (
-          <Loading what="target sheets" />
-        ) : sheets.isError ? (
-          <Notice tone="danger" title="The sheets did not load">
-            {sheets.error.message}
-          </Notice>
-        ) : sheets.data.sheets.length === 0 ? (
-          <EmptyState title="No target sheets yet">Draft one from a setup revision: its damper curve gives the forces at the reference speeds.</EmptyState>
-        ) : (
-          <SheetList sheets={sheets.data.sheets} workspaceId={workspace.id} />
-        )}
+        <QueryGuard query={sheets} what="target sheets" errorTitle="The sheets did not load">
+          {(data) =>
+            data.sheets.length === 0 ? (
+              <EmptyState title="No target sheets yet">Draft one from a setup revision: its damper curve gives the forces at the reference speeds.</EmptyState>
+            ) : (
+              <SheetList sheets={data.sheets} workspaceId={workspace.id} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );

@@ -26,9 +26,13 @@ export function SignInRoute() {
     <AuthLayout
       title="Sign in"
       intro={
-        <>
-          New here? <Link to="/signup" className={linkClass}>Create an account</Link> and a workspace for your team.
-        </>
+        config.data?.signUpOpen ? (
+          <>
+            New here? <Link to="/signup" className={linkClass}>Create an account</Link> and a workspace for your team.
+          </>
+        ) : (
+          'New here? Ask a workspace administrator to invite you.'
+        )
       }
       aside={config.data?.demoMode ? <DemoUsers users={config.data.demoUsers} onPick={(u) => setFill({ email: u.email, password: u.password })} /> : null}
     >

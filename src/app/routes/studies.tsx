@@ -3,9 +3,8 @@ import { useNavigate } from 'react-router';
 import type { FieldIssue } from '../../../shared/errors.ts';
 import { Button } from '../../components/ui/button.tsx';
 import { EmptyState } from '../../components/ui/empty-state.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useCreateStudy } from '../../features/studies/api/create-study.ts';
 import { useStudies } from '../../features/studies/api/get-studies.ts';
 import { StudyForm } from '../../features/studies/components/study-form.tsx';
@@ -48,17 +47,17 @@ export function StudiesRoute() {
         </Section>
       )}
       <Section title="Saved studies">
-        {studies.isPending ? (
-          <Loading what="studies" />
-        ) : studies.isError ? (
-          <Notice tone="danger">{studies.error.message}</Notice>
-        ) : studies.data.studies.length === 0 ? (
-          <EmptyState title="No studies yet">
-            {canDefine ? 'Start one with “New study”: pick a setup revision, what to sweep, the roads and speeds, and what to judge by.' : 'Engineers define and run studies; they appear here for everyone.'}
-          </EmptyState>
-        ) : (
-          <StudyList workspaceId={workspace.id} studies={studies.data.studies} />
-        )}
+        <QueryGuard query={studies} what="studies">
+          {(data) =>
+            data.studies.length === 0 ? (
+              <EmptyState title="No studies yet">
+                {canDefine ? 'Start one with “New study”: pick a setup revision, what to sweep, the roads and speeds, and what to judge by.' : 'Engineers define and run studies; they appear here for everyone.'}
+              </EmptyState>
+            ) : (
+              <StudyList workspaceId={workspace.id} studies={data.studies} />
+            )
+          }
+        </QueryGuard>
       </Section>
     </>
   );

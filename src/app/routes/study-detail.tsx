@@ -1,194 +1,154 @@
-import { useEffect, useMemo } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
-import { useQueryClient } from '@tanstack/react-query';
-import { studyRoadNames } from '../../../shared/study/collect.ts';
 import { Button, buttonClass } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
-import { useDeleteStudy } from '../../features/studies/api/delete-study.ts';
-import { studyQueryOptions, useStudy } from '../../features/studies/api/get-study.ts';
-import { studiesKey } from '../../features/studies/api/keys.ts';
-import { useSetStudyBaseline } from '../../features/studies/api/set-study-baseline.ts';
-import { useShareStudy } from '../../features/studies/api/share-study.ts';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
-import { studyView } from '../../features/studies/model/study-view.ts';
-import { prewarmStudyPool } from '../../features/studies/run/study-pool.ts';
-import { useStudyRun } from '../../features/studies/run/use-study-run.ts';
+import { useRunWhenAsked, useStudyPage } from '../../features/studies/run/use-study-page.ts';
 import { formatDateTime, formatSig } from '../../lib/format.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { NotFoundRoute } from './not-found.tsx';
 
 /**
  * `/w/:workspaceId/studies/:studyId`: the study's results (saved, or the run going on now), run
- * it (engineers save; viewers may preview, nothing saved), pick a point, open it on the corner bench as an unsaved draft
- * (saving is done there), mark the lead's baseline, share it read-only, export.
+ * it (engineers save; viewers may preview, nothing saved), pick a point, open it on the corner
+ * bench as an unsaved draft (saving is done there), mark the lead's baseline, share it read-only, export.
  */
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
   const { studyId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
-  const queryClient = useQueryClient();
-  const study = useStudy(workspace.id, studyId);
   const canSave = workspace.can('engineer');
   const isLead = workspace.can('lead');
-  const { state, start, cancel } = useStudyRun({
-    workspaceId: workspace.id,
-    studyId,
-    save: canSave,
-    onSaved: (detail) => {
-      queryClient.setQueryData(studyQueryOptions(workspace.id, studyId).queryKey, detail);
-      void queryClient.invalidateQueries({ queryKey: [...studiesKey(workspace.id), 'list'] });
-    },
-  });
-  const baseline = useSetStudyBaseline(workspace.id, studyId);
-  const share = useShareStudy(workspace.id, studyId);
-  const remove = useDeleteStudy(workspace.id);
-
-  useEffect(() => prewarmStudyPool(), []);
-
-  const detail = study.data;
-  const running = state.phase === 'running' || state.phase === 'saving';
-  const run = () => detail && start({ definition: detail.definition, baseSetup: detail.baseSetup, roads: detail.roads });
-
-  useEffect(() => {
-    if (params.get('run') === '1' && detail && canSave && state.phase === 'idle') {
-      setParams({}, { replace: true });
-      run();
-    }
-    // run() reads the same detail; starting once per ?run=1 is the intent.
-  }, [params, detail, canSave, state.phase]);
-
-  const view = useMemo(() => {
-    if (!detail) return null;
-    if (state.phase !== 'idle') return studyView(detail.definition, state.points, state.base, state.phase === 'finished' || state.phase === 'saving');
-    return studyView(detail.definition, detail.points, detail.basePoint, true);
-  }, [detail, state.phase, state.points, state.base]);
-  const roadNames = useMemo(() => (detail ? studyRoadNames(detail.definition, detail.roads) : []), [detail]);
-
-  if (study.isPending) return <Loading what="the study" />;
-  if (study.isError) return study.error.code === 'not_found' ? <NotFoundRoute inShell /> : <Notice tone="danger">{study.error.message}</Notice>;
-  const s = study.data;
-  const status = statusWords[s.status];
-  const hasSaved = s.points.length > 0;
-
-  const pointActions = (index: number) => (
-    <>
-      {canSave && s.base.setupId && !running && (
-        <Link
-          className={buttonClass('primary', 'sm')}
-          to={`/w/${workspace.id}/corners/${s.base.setupId}?study=${encodeURIComponent(s.id)}&point=${index}`}
-          title="Opens the corner bench with this point as unsaved changes; nothing is saved until you save it there."
-        >
-          Open as setup draft
-        </Link>
-      )}
-      {isLead && hasSaved && s.points.some((p) => p.index === index) && (
-        <Button size="sm" busy={baseline.isPending} disabled={running} onClick={() => baseline.mutate(s.baseline?.pointIndex === index ? null : index)}>
-          {s.baseline?.pointIndex === index ? 'Clear the baseline' : 'Mark as baseline'}
-        </Button>
-      )}
-    </>
-  );
+  const { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
+  useRunWhenAsked(params.get('run') === '1', canStart, run, () => setParams({}, { replace: true }));
 
   return (
-    <>
-      <PageHeader
-        eyebrow={
-          <Link to={`/w/${workspace.id}/studies`} className="hover:text-ink">
-            Studies
-          </Link>
-        }
-        title={s.name}
-        detail={
-          <>
-            <p>
-              From{' '}
-              {s.base.setupId && s.base.setupName ? (
-                <Link to={`/w/${workspace.id}/corners/${s.base.setupId}`} className="text-accent hover:underline">
-                  {s.base.setupName}
-                </Link>
-              ) : (
-                'a setup that no longer exists'
-              )}{' '}
-              <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
-              {s.speeds.length > 0 && <span className="figures"> at {s.speeds.join(', ')} m/s</span>} · <span className="figures">{s.definition.duration}</span> s runs
-            </p>
-            <p className="mt-1 flex flex-wrap items-center gap-2">
-              <Tag tone={status.tone}>{status.text}</Tag>
-              {s.results && (
-                <span className="text-xs text-ink-faint">
-                  {s.results.savedPoints} of {s.results.plannedPoints} points saved by {s.results.ranBy.name}, {formatDateTime(s.results.ranAt)}, in{' '}
-                  <span className="figures">{formatSig(s.results.elapsedMs / 1000, 3)}</span> s
-                </span>
-              )}
-              {s.baseline && (
-                <Tag tone="accent">
-                  baseline: {s.baseline.label} (by {s.baseline.chosenBy.name})
-                </Tag>
-              )}
-            </p>
-          </>
-        }
-        actions={
-          <>
-            {!running && (
-              <Button variant={canSave ? 'primary' : 'secondary'} onClick={run} title={canSave ? undefined : 'Viewers can watch a run here; the results stay in this browser and are not saved.'}>
-                {canSave ? (hasSaved ? 'Run again and save' : 'Run and save') : 'Preview a run (not saved)'}
-              </Button>
-            )}
-            {canSave && (
-              <Button busy={share.isPending} onClick={() => share.mutate()}>
-                Share read-only link
-              </Button>
-            )}
-            {canSave && (
-              <Button
-                variant="danger"
-                disabled={running}
-                onClick={() => {
-                  if (window.confirm(`Delete the study “${s.name}” and its saved results?`)) remove.mutate(s.id, { onSuccess: () => navigate(`/w/${workspace.id}/studies`) });
-                }}
-              >
-                Delete
-              </Button>
-            )}
-          </>
-        }
-      />
+    <QueryGuard query={study} what="the study" notFound={<NotFoundRoute inShell />}>
+      {(s) => {
+        const status = statusWords[s.status];
+        const hasSaved = s.points.length > 0;
 
-      <div className="space-y-4">
-        {!canSave && <p className="text-sm text-ink-soft">A preview run happens in this browser and is not saved; saving results and making revisions is for engineers.</p>}
-        {share.data && (
-          <Notice tone="ok" title="Read-only link made">
-            Anyone with this link can read the study until it is withdrawn (shown once):{' '}
-            <code className="figures break-all select-all">{`${window.location.origin}${share.data.path}`}</code>
-          </Notice>
-        )}
-        {share.error && <Notice tone="danger">{share.error.message}</Notice>}
-        {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
-        <RunPanel state={state} onCancel={cancel} />
-        {s.status === 'partial' && state.phase === 'idle' && (
-          <Notice tone="signal">Partial results: the last run was stopped after {s.results?.savedPoints} of {s.plannedPoints} points. Figures and the best compromise cover only those.</Notice>
-        )}
-        {view && (view.points.length > 0 || state.phase !== 'idle') ? (
-          <StudyResults
-            view={view}
-            roadNames={roadNames}
-            baselineIndex={s.baseline?.pointIndex ?? null}
-            running={state.phase === 'running'}
-            pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
-          />
-        ) : (
-          <Notice>This study has not been run yet. {canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}</Notice>
-        )}
-      </div>
-      <ResultsCaution />
-    </>
+        const pointActions = (index: number) => (
+          <>
+            {canSave && s.base.setupId && !running && (
+              <Link
+                className={buttonClass('primary', 'sm')}
+                to={`/w/${workspace.id}/corners/${s.base.setupId}?study=${encodeURIComponent(s.id)}&point=${index}`}
+                title="Opens the corner bench with this point as unsaved changes; nothing is saved until you save it there."
+              >
+                Open as setup draft
+              </Link>
+            )}
+            {isLead && hasSaved && s.points.some((p) => p.index === index) && (
+              <Button size="sm" busy={baseline.isPending} disabled={running} onClick={() => baseline.mutate(s.baseline?.pointIndex === index ? null : index)}>
+                {s.baseline?.pointIndex === index ? 'Clear the baseline' : 'Mark as baseline'}
+              </Button>
+            )}
+          </>
+        );
+
+        return (
+          <>
+            <PageHeader
+              eyebrow={
+                <Link to={`/w/${workspace.id}/studies`} className="hover:text-ink">
+                  Studies
+                </Link>
+              }
+              title={s.name}
+              detail={
+                <>
+                  <p>
+                    From{' '}
+                    {s.base.setupId && s.base.setupName ? (
+                      <Link to={`/w/${workspace.id}/corners/${s.base.setupId}`} className="text-accent hover:underline">
+                        {s.base.setupName}
+                      </Link>
+                    ) : (
+                      'a setup that no longer exists'
+                    )}{' '}
+                    <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
+                    {s.speeds.length > 0 && <span className="figures"> at {s.speeds.join(', ')} m/s</span>} · <span className="figures">{s.definition.duration}</span> s runs
+                  </p>
+                  <p className="mt-1 flex flex-wrap items-center gap-2">
+                    <Tag tone={status.tone}>{status.text}</Tag>
+                    {s.results && (
+                      <span className="text-xs text-ink-faint">
+                        {s.results.savedPoints} of {s.results.plannedPoints} points saved by {s.results.ranBy.name}, {formatDateTime(s.results.ranAt)}, in{' '}
+                        <span className="figures">{formatSig(s.results.elapsedMs / 1000, 3)}</span> s
+                      </span>
+                    )}
+                    {s.baseline && (
+                      <Tag tone="accent">
+                        baseline: {s.baseline.label} (by {s.baseline.chosenBy.name})
+                      </Tag>
+                    )}
+                  </p>
+                </>
+              }
+              actions={
+                <>
+                  {!running && (
+                    <Button variant={canSave ? 'primary' : 'secondary'} onClick={run} title={canSave ? undefined : 'Viewers can watch a run here; the results stay in this browser and are not saved.'}>
+                      {canSave ? (hasSaved ? 'Run again and save' : 'Run and save') : 'Preview a run (not saved)'}
+                    </Button>
+                  )}
+                  {canSave && (
+                    <Button busy={share.isPending} onClick={() => share.mutate()}>
+                      Share read-only link
+                    </Button>
+                  )}
+                  {canSave && (
+                    <Button
+                      variant="danger"
+                      disabled={running}
+                      onClick={() => {
+                        if (window.confirm(`Delete the study “${s.name}” and its saved results?`)) remove.mutate(s.id, { onSuccess: () => navigate(`/w/${workspace.id}/studies`) });
+                      }}
+                    >
+                      Delete
+                    </Button>
+                  )}
+                </>
+              }
+            />
+
+            <div className="space-y-4">
+              {!canSave && <p className="text-sm text-ink-soft">A preview run happens in this browser and is not saved; saving results and making revisions is for engineers.</p>}
+              {share.data && (
+                <Notice tone="ok" title="Read-only link made">
+                  Anyone with this link can read the study until it is withdrawn (shown once):{' '}
+                  <code className="figures break-all select-all">{`${window.location.origin}${share.data.path}`}</code>
+                </Notice>
+              )}
+              {share.error && <Notice tone="danger">{share.error.message}</Notice>}
+              {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
+              <RunPanel state={state} onCancel={cancel} />
+              {s.status === 'partial' && state.phase === 'idle' && (
+                <Notice tone="signal">Partial results: the last run was stopped after {s.results?.savedPoints} of {s.plannedPoints} points. Figures and the best compromise cover only those.</Notice>
+              )}
+              {view && (view.points.length > 0 || state.phase !== 'idle') ? (
+                <StudyResults
+                  view={view}
+                  roadNames={roadNames}
+                  baselineIndex={s.baseline?.pointIndex ?? null}
+                  running={state.phase === 'running'}
+                  pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
+                />
+              ) : (
+                <Notice>This study has not been run yet. {canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}</Notice>
+              )}
+            </div>
+            <ResultsCaution />
+          </>
+        );
+      }}
+    </QueryGuard>
   );
 }

@@ -1,6 +1,5 @@
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';
 import { useMembers } from '../../features/team/api/get-members.ts';
 import { InvitationsTable } from '../../features/team/components/invitations-table.tsx';
@@ -31,13 +30,9 @@ export function TeamRoute() {
         </Section>
       )}
       <Section title="Members">
-        {members.isPending ? (
-          <Loading what="members" />
-        ) : members.isError ? (
-          <Notice tone="danger">{members.error.message}</Notice>
-        ) : (
-          <MembersTable workspaceId={workspace.id} members={members.data.members} currentUserId={me?.user.id ?? ''} canManage={isAdmin} />
-        )}
+        <QueryGuard query={members} what="members">
+          {(data) => <MembersTable workspaceId={workspace.id} members={data.members} currentUserId={me?.user.id ?? ''} canManage={isAdmin} />}
+        </QueryGuard>
       </Section>
       {isAdmin && (
         <Section title="Rules">

@@ -1,16 +1,16 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
-import { Notice } from '../../components/ui/notice.tsx';
+import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
-import { Loading } from '../../components/ui/spinner.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
-import { useSetups } from '../../features/setups/api/get-setups.ts';
 import { useDeleteVehicle } from '../../features/vehicles/api/delete-vehicle.ts';
 import { useVehicle } from '../../features/vehicles/api/get-vehicle.ts';
 import { VehicleForm } from '../../features/vehicles/components/vehicle-form.tsx';
 import { VehicleSummaryPanel } from '../../features/vehicles/components/vehicle-summary.tsx';
+import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/vehicles/:vehicleId`: both corners' modes and the front/rear comparison. */
@@ -19,74 +19,77 @@ export function VehicleRoute() {
   const workspace = useWorkspace();
   const canWrite = workspace.can('engineer');
   const vehicle = useVehicle(workspace.id, vehicleId);
-  const setups = useSetups(workspace.id, 'exclude');
+  const setups = useQuery(setupsQueryOptions(workspace.id, 'exclude'));
   const remove = useDeleteVehicle(workspace.id);
   const navigate = useNavigate();
   const toast = useToast();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
 
-  if (vehicle.isPending) return <Loading what="the vehicle" />;
-  if (vehicle.isError) return <Notice tone="danger" title={vehicle.error.code === 'not_found' ? 'No such vehicle here' : 'The vehicle did not load'}>{vehicle.error.message}</Notice>;
-  const v = vehicle.data;
-
   return (
-    <>
-      <PageHeader
-        eyebrow="Vehicle"
-        title={v.name}
-        detail={v.notes || undefined}
-        actions={
-          canWrite &&
-          !editing && (
-            <>
-              <Button onClick={() => setEditing(true)}>Edit vehicle</Button>
-              {!confirming ? (
-                <Button variant="quiet" onClick={() => setConfirming(true)}>
-                  Remove…
-                </Button>
-              ) : (
-                <span className="flex items-center gap-2 text-sm text-ink-soft">
-                  Remove the vehicle? Its setups stay, ungrouped.
-                  <Button
-                    size="sm"
-                    variant="danger"
-                    busy={remove.isPending}
-                    onClick={() =>
-                      remove.mutate(v.id, {
-                        onSuccess: () => {
-                          toast.show(`${v.name} removed; its setups are kept.`);
-                          navigate(`/w/${workspace.id}/corners`);
-                        },
-                        onError: (e) => toast.show(e.message, 'danger'),
-                      })
-                    }
-                  >
-                    Remove
-                  </Button>
-                  <Button size="sm" variant="quiet" onClick={() => setConfirming(false)}>
-                    Keep
-                  </Button>
-                </span>
-              )}
-            </>
-          )
-        }
-      />
-      {editing && (
-        <VehicleForm
-          workspaceId={workspace.id}
-          vehicle={v}
-          setupChoices={setups.data?.setups ?? []}
-          onDone={() => {
-            setEditing(false);
-            toast.show('Vehicle saved.');
-          }}
-          onCancel={() => setEditing(false)}
-        />
-      )}
-      <VehicleSummaryPanel workspaceId={workspace.id} vehicle={v} />
-      <ResultsCaution />
-    </>
+    <QueryGuard query={vehicle} what="the vehicle" errorTitle={(e) => (e.code === 'not_found' ? 'No such vehicle here' : 'The vehicle did not load')}>
+      {(v) => {
+
+        return (
+          <>
+            <PageHeader
+              eyebrow="Vehicle"
+              title={v.name}
+              detail={v.notes || undefined}
+              actions={
+                canWrite &&
+                !editing && (
+                  <>
+                    <Button onClick={() => setEditing(true)}>Edit vehicle</Button>
+                    {!confirming ? (
+                      <Button variant="quiet" onClick={() => setConfirming(true)}>
+                        Remove…
+                      </Button>
+                    ) : (
+                      <span className="flex items-center gap-2 text-sm text-ink-soft">
+                        Remove the vehicle? Its setups stay, ungrouped.
+                        <Button
+                          size="sm"
+                          variant="danger"
+                          busy={remove.isPending}
+                          onClick={() =>
+                            remove.mutate(v.id, {
+                              onSuccess: () => {
+                                toast.show(`${v.name} removed; its setups are kept.`);
+                                navigate(`/w/${workspace.id}/corners`);
+                              },
+                              onError: (e) => toast.show(e.message, 'danger'),
+                            })
+                          }
+                        >
+                          Remove
+                        </Button>
+                        <Button size="sm" variant="quiet" onClick={() => setConfirming(false)}>
+                          Keep
+                        </Button>
+                      </span>
+                    )}
+                  </>
+                )
+              }
+            />
+            {editing && (
+              <VehicleForm
+                workspaceId={workspace.id}
+                vehicle={v}
+                setupChoices={setups.data?.setups ?? []}
+                onDone={() => {
+                  setEditing(false);
+                  toast.show('Vehicle saved.');
+                }}
+                onCancel={() => setEditing(false)}
+              />
+            )}
+            <VehicleSummaryPanel workspaceId={workspace.id} vehicle={v} />
+            <ResultsCaution />
+          </>
+        );
+      }}
+    </QueryGuard>
   );
 }

@@ -1,5 +1,6 @@
 import type uPlot from 'uplot';
 import { readChartTheme } from './chart-theme.ts';
+import { downloadBlob } from '../../lib/download.ts';
 
 /**
  * Saves a chart as a PNG: the plot canvas on the paper colour, with an optional title above it.
@@ -45,14 +46,6 @@ export function chartToCanvas(chart: uPlot, title?: string): HTMLCanvasElement {
 export function exportPng(chart: uPlot, filename = 'chart', title?: string): void {
   const canvas = chartToCanvas(chart, title);
   canvas.toBlob((blob) => {
-    if (!blob) return;
-    const url = URL.createObjectURL(blob);
-    const a = document.createElement('a');
-    a.href = url;
-    a.download = filename.endsWith('.png') ? filename : `${filename}.png`;
-    document.body.append(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(url), 1000);
+    if (blob) downloadBlob(blob, filename.endsWith('.png') ? filename : `${filename}.png`);
   }, 'image/png');
 }

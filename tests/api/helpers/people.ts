@@ -25,12 +25,20 @@ export function uniqueEmail(prefix = 'person'): string {
   return `${prefix}.${counter}.${randomUUID().slice(0, 6)}@ridewright.test`;
 }
 
-/** Inserts a user straight into the database (no HTTP, no audit entry). */
-export async function createUser(db: Db, init: Partial<Omit<TestUser, 'id' | 'password'>> = {}): Promise<TestUser> {
+/** Inserts a user straight into the database (no HTTP, no audit entry), address confirmed unless `unconfirmed`. */
+export async function createUser(db: Db, init: Partial<Omit<TestUser, 'id' | 'password'>> & { unconfirmed?: boolean } = {}): Promise<TestUser> {
   const user = { id: randomUUID(), email: init.email ?? uniqueEmail(), name: init.name ?? `Test Person ${counter}`, password: TEST_PASSWORD };
   await db
     .insertInto('user')
-    .values({ id: user.id, email: user.email, name: user.name, password_hash: await testPasswordHash(), session_version: 0, created_at: new Date().toISOString() })
+    .values({
+      id: user.id,
+      email: user.email,
+      name: user.name,
+      password_hash: await testPasswordHash(),
+      session_version: 0,
+      created_at: new Date().toISOString(),
+      email_verified_at: init.unconfirmed ? null : new Date().toISOString(),
+    })
     .execute();
   return user;
 }

@@ -51,6 +51,8 @@ export async function createTestApp(overrides: Partial<AppOptions> = {}): Promis
     publicUrl: TEST_PUBLIC_URL,
     mailer,
     demoMode: false,
+    // Tests stand for a server whose owner opened sign-up (RIDEWRIGHT_OPEN_SIGNUP); closed sign-up has its own test.
+    openSignUp: true,
     outboxEnabled: true,
     clock: clock.now,
     logger,

@@ -44,6 +44,18 @@ async function freshResetToken(w: RoleWorld): Promise<string> {
   return token;
 }
 
+/** A live address-confirmation token for a new unconfirmed account. */
+async function freshAddressToken(w: RoleWorld): Promise<string> {
+  const user = await createUser(w.t.db, { unconfirmed: true });
+  const token = `confirm-${randomUUID()}`;
+  const now = w.t.clock.now();
+  await w.t.db
+    .insertInto('email_verification')
+    .values({ id: randomUUID(), user_id: user.id, token_hash: hashOneTimeToken(token), created_at: now.toISOString(), expires_at: new Date(now.getTime() + 600_000).toISOString(), used_at: null })
+    .execute();
+  return token;
+}
+
 function callerPassword(w: RoleWorld, caller: Caller): string {
   return userOfCaller(w, caller)?.password ?? TEST_PASSWORD;
 }
@@ -54,8 +66,19 @@ export const platformEntries: MatrixEntries = {
 
   'POST /api/auth/signup': {
     access: 'public',
-    ok: 201,
+    ok: 202,
     build: () => ({ path: '/api/auth/signup', body: { name: 'New Person', email: uniqueEmail('signup'), password: 'long-enough-pw', workspaceName: 'Fresh bench' } }),
+  },
+  'POST /api/auth/confirm': { access: 'public', ok: 200, build: async (w) => ({ path: '/api/auth/confirm', body: { token: await freshAddressToken(w) } }) },
+  'POST /api/auth/confirm/resend': {
+    access: 'user',
+    ok: 202,
+    // Only an unconfirmed address gets a new link: each caller is made unconfirmed first.
+    build: async (w, caller) => {
+      const user = userOfCaller(w, caller);
+      if (user) await w.t.db.updateTable('user').set({ email_verified_at: null }).where('id', '=', user.id).execute();
+      return { path: '/api/auth/confirm/resend' };
+    },
   },
   'POST /api/auth/signin': { access: 'public', ok: 200, build: (w) => ({ path: '/api/auth/signin', body: { email: w.spare.email, password: w.spare.password } }) },
   'POST /api/auth/signout': { access: 'public', ok: 204, build: () => ({ path: '/api/auth/signout' }) },

@@ -49,6 +49,7 @@ export async function createFuzzApp(overrides: Partial<AppOptions> = {}): Promis
     rateLimit: 0,
     // Fuzzing sends hundreds of uploads as one person; the per-person limits have their own tests.
     heavyJobs: { atOnce: 0, perWindow: 0 },
+    openSignUp: true,
     ...overrides,
   });
   const server: Server = await new Promise((resolve) => {

@@ -1,7 +1,7 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { AuditResponse } from '../../../../shared/schemas/audit.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
 
 export const PAGE_SIZE = 50;
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { Me } from '../../../../shared/schemas/account.ts';
 import { api, isApiError } from '../../../lib/api-client.ts';
-import { meKey } from '../../../lib/query-keys.ts';
+import { meKey } from '../../../lib/queries/query-keys.ts';
 
 export const meQueryKey = meKey;
 

@@ -1,17 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { Me, type SignUpInput } from '../../../../shared/schemas/account.ts';
+import { useMutation } from '@tanstack/react-query';
+import { SignUpAnswer, type SignUpInput } from '../../../../shared/schemas/account.ts';
 import { api } from '../../../lib/api-client.ts';
-import { meQueryKey } from './get-me.ts';
 
-export const signUp = (input: SignUpInput) => api.post('/api/auth/signup', input, Me);
+/** Sign-up answers the same for every address and finishes by mail: nobody is signed in yet. */
+export const signUp = (input: SignUpInput) => api.post('/api/auth/signup', input, SignUpAnswer);
 
-export function useSignUp() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: signUp,
-    onSuccess: (me) => {
-      queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== 'config' });
-      queryClient.setQueryData(meQueryKey, me);
-    },
-  });
-}
+export const useSignUp = () => useMutation({ mutationFn: signUp });

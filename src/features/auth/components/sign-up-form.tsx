@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { SignUpInput, type Me } from '../../../../shared/schemas/account.ts';
+import { SignUpInput, type SignUpAnswer } from '../../../../shared/schemas/account.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input } from '../../../components/ui/field.tsx';
 import { applyServerErrors } from '../../../lib/form-errors.ts';
 import { useSignUp } from '../api/sign-up.ts';
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: (me: Me) => void }) {
+export function SignUpForm({ onSignedUp }: { onSignedUp: (answer: SignUpAnswer) => void }) {
   const signUp = useSignUp();
   const [formError, setFormError] = useState('');
   const { register, handleSubmit, setError, formState } = useForm({

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { CurveParameters, curveFromParameters, type DamperShape, damperShapes } from '../../../../shared/sim/damper-builder.ts';
-import { curveForce } from '../../../../shared/sim/damper.ts';
+import { curveForce } from '../../../../shared/sim/damper-force.ts';
 import type { Damper, DamperCurve } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { GasCharge } from '../../../../shared/schemas/setup.ts';
 import { barToPa, cm3ToM3, m3ToCm3, paToBar } from '../../../../shared/units.ts';
-import { staticGasForce } from '../../../../shared/sim/damper.ts';
+import { staticGasForce } from '../../../../shared/sim/damper-gas.ts';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';
 import { Caution } from '../../../components/ui/notice.tsx';
 import { Figure } from '../../../components/ui/figure.tsx';

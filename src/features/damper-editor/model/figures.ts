@@ -1,5 +1,5 @@
 import type { Damper } from '../../../../shared/schemas/setup.ts';
-import { equivalentDampingLeastSquares } from '../../../../shared/sim/damper.ts';
+import { equivalentDampingLeastSquares } from '../../../../shared/sim/damper-equivalent.ts';
 import { modalAnalysis } from '../../../../shared/sim/linear/modal.ts';
 
 /** The corner figures the damping ratio needs (SI). */

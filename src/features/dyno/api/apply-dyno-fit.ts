@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type ApplyDynoFitInput, ApplyDynoFitResult } from '../../../../shared/schemas/dyno-file.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
-import { dynoFilesPath } from './get-dyno-files.ts';
+import { invalidateAfterSetupWrite } from '../../../lib/queries/setups.ts';
+import { dynoFilesPath } from './query-keys.ts';
 
 export const applyDynoFit = (workspaceId: string, setupId: string, fileId: string, input: ApplyDynoFitInput) =>
   api.post(`${dynoFilesPath(workspaceId, setupId)}/${encodeURIComponent(fileId)}/apply`, input, ApplyDynoFitResult);
@@ -12,7 +12,6 @@ export function useApplyDynoFit(workspaceId: string, setupId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ fileId, input }: { fileId: string; input: ApplyDynoFitInput }) => applyDynoFit(workspaceId, setupId, fileId, input),
-    onSuccess: () =>
-      Promise.all(['setups', 'vehicles', 'share-links', 'runs'].map((prefix) => client.invalidateQueries({ queryKey: [...workspaceKey(workspaceId), prefix] }))),
+    onSuccess: () => invalidateAfterSetupWrite(client, workspaceId),
   });
 }

@@ -1,7 +1,7 @@
 import { queryOptions, skipToken, useQuery } from '@tanstack/react-query';
 import { DynoFileDetail } from '../../../../shared/schemas/dyno-file.ts';
 import { api } from '../../../lib/api-client.ts';
-import { dynoFilesKey, dynoFilesPath } from './get-dyno-files.ts';
+import { dynoFilesKey, dynoFilesPath } from './query-keys.ts';
 
 export const getDynoFile = (workspaceId: string, setupId: string, fileId: string) => api.get(`${dynoFilesPath(workspaceId, setupId)}/${encodeURIComponent(fileId)}`, DynoFileDetail);
 

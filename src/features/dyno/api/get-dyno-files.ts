@@ -1,12 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { DynoFilesResponse } from '../../../../shared/schemas/dyno-file.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
-
-/** Dyno files sit under the setup's key prefix, so a setup refresh refreshes them too. */
-export const dynoFilesKey = (workspaceId: string, setupId: string) => [...workspaceKey(workspaceId), 'setups', 'detail', setupId, 'dyno-files'] as const;
-export const dynoFilesPath = (workspaceId: string, setupId: string) =>
-  `/api/workspaces/${encodeURIComponent(workspaceId)}/setups/${encodeURIComponent(setupId)}/dyno-files`;
+import { dynoFilesKey, dynoFilesPath } from './query-keys.ts';
 
 export const getDynoFiles = (workspaceId: string, setupId: string) => api.get(dynoFilesPath(workspaceId, setupId), DynoFilesResponse);
 

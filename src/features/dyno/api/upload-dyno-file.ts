@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { DynoFileItem, type DynoUploadFields } from '../../../../shared/schemas/dyno-file.ts';
 import { api } from '../../../lib/api-client.ts';
-import { dynoFilesKey, dynoFilesPath } from './get-dyno-files.ts';
+import { dynoFilesKey, dynoFilesPath } from './query-keys.ts';
 
 export interface DynoUpload {
   file: File;

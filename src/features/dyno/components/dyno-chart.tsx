@@ -2,7 +2,7 @@ import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
 import type { DynoLoop, DynoPeakPoints } from '../../../../shared/schemas/dyno.ts';
 import type { DamperCurve } from '../../../../shared/schemas/setup.ts';
-import { curveForce } from '../../../../shared/sim/damper.ts';
+import { curveForce } from '../../../../shared/sim/damper-force.ts';
 import { linearX } from '../../../components/charts/axes.ts';
 import { seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';

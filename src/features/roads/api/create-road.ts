@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type CreateRoadInput, RoadDetail } from '../../../../shared/schemas/road-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { roadsKey, roadsPath } from './get-roads.ts';
+import { roadsKey, roadsPath } from '../../../lib/queries/roads.ts';
 
 export const createRoad = (workspaceId: string, input: CreateRoadInput) => api.post(roadsPath(workspaceId), input, RoadDetail);
 

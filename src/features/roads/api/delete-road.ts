@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { roadsKey, roadsPath } from './get-roads.ts';
+import { roadsKey, roadsPath } from '../../../lib/queries/roads.ts';
 
 export const deleteRoad = (workspaceId: string, roadId: string) => api.delete(`${roadsPath(workspaceId)}/${encodeURIComponent(roadId)}`);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type MeasuredUploadFields, RoadDetail } from '../../../../shared/schemas/road-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { roadsKey, roadsPath } from './get-roads.ts';
+import { roadsKey, roadsPath } from '../../../lib/queries/roads.ts';
 
 export interface MeasuredUpload {
   file: File;

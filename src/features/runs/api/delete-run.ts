@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { runsKey } from './get-runs.ts';
+import { runDetailKey, runListKey } from './query-keys.ts';
 
 export const deleteRun = (workspaceId: string, runId: string) =>
   api.delete(`/api/workspaces/${encodeURIComponent(workspaceId)}/runs/${encodeURIComponent(runId)}`);
@@ -10,8 +10,8 @@ export function useDeleteRun(workspaceId: string) {
   return useMutation({
     mutationFn: (runId: string) => deleteRun(workspaceId, runId),
     onSuccess: (_v, runId) => {
-      client.removeQueries({ queryKey: [...runsKey(workspaceId), 'detail', runId] });
-      return client.invalidateQueries({ queryKey: [...runsKey(workspaceId), 'list'] });
+      client.removeQueries({ queryKey: runDetailKey(workspaceId, runId) });
+      return client.invalidateQueries({ queryKey: runListKey(workspaceId) });
     },
   });
 }

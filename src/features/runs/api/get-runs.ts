@@ -1,9 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { RunList } from '../../../../shared/schemas/run-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
-
-export const runsKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'runs'] as const;
+import { runListKey } from './query-keys.ts';
 
 /** Saved runs of the workspace, or of one setup; newest first. */
 export const getRuns = (workspaceId: string, setupId?: string) =>
@@ -11,7 +9,7 @@ export const getRuns = (workspaceId: string, setupId?: string) =>
 
 export const runsQueryOptions = (workspaceId: string, setupId?: string) =>
   queryOptions({
-    queryKey: [...runsKey(workspaceId), 'list', { setupId: setupId ?? null }],
+    queryKey: [...runListKey(workspaceId), { setupId: setupId ?? null }],
     queryFn: () => getRuns(workspaceId, setupId),
   });
 

@@ -7,7 +7,8 @@ import { Field, FormError, Input } from '../../../components/ui/field.tsx';
 import { useToast } from '../../../components/ui/toast.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
 import { useSaveRun } from '../api/save-run.ts';
-import { downloadText, fileStem, figuresCsv, tracesCsv } from '../model/export-csv.ts';
+import { downloadText } from '../../../lib/download.ts';
+import { fileStem, figuresCsv, tracesCsv } from '../model/export-csv.ts';
 import type { RunView } from '../model/run-view.ts';
 
 /** "Pipit front r3 · class C, seed 7 · 60 km/h · 20 s". */

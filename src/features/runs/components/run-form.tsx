@@ -1,8 +1,10 @@
+import { useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Select } from '../../../components/ui/field.tsx';
-import { useRevision, useRevisionChoices, useSetupChoices } from '../api/get-setup-choices.ts';
+import { latestRevisionsQueryOptions, revisionQueryOptions } from '../../../lib/queries/revisions.ts';
+import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
 import type { Scenario } from '../model/scenario.ts';
 import { useScenario } from '../model/use-scenario.ts';
 import { ScenarioFields } from './scenario-fields.tsx';
@@ -26,7 +28,7 @@ export interface RunFormProps {
 
 /** The scenario of one run: which setup revision, over which road, how fast and for how long. */
 export function RunForm({ workspaceId, initialSetupId, initialRevision, running, onRun, onCancel }: RunFormProps) {
-  const setups = useSetupChoices(workspaceId);
+  const setups = useQuery(setupsQueryOptions(workspaceId));
   const scenario = useScenario(workspaceId);
   const [setupId, setSetupId] = useState(initialSetupId ?? '');
   const [revision, setRevision] = useState<number | undefined>(initialRevision);
@@ -41,11 +43,11 @@ export function RunForm({ workspaceId, initialSetupId, initialRevision, running,
     }
   }, [setupId, live]);
   const chosen = live.find((s) => s.id === setupId);
-  const revisions = useRevisionChoices(workspaceId, chosen?.id);
+  const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, chosen?.id));
   useEffect(() => {
     if (chosen && (revision === undefined || revision > chosen.latestRevision)) setRevision(chosen.latestRevision);
   }, [chosen, revision]);
-  const revisionDoc = useRevision(workspaceId, chosen?.id, revision);
+  const revisionDoc = useQuery(revisionQueryOptions(workspaceId, chosen?.id, revision));
 
   const submit = (e: React.FormEvent) => {
     e.preventDefault();

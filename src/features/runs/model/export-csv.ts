@@ -64,16 +64,3 @@ export function fileStem(name: string): string {
     .slice(0, 80);
   return stem || 'run';
 }
-
-/** Starts a download of `text` as `filename`. */
-export function downloadText(text: string, filename: string, type = 'text/csv'): void {
-  const url = URL.createObjectURL(new Blob([text], { type: `${type};charset=utf-8` }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = filename;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
-

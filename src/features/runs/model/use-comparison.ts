@@ -1,8 +1,8 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef, useState } from 'react';
+import { revisionQueryOptions } from '../../../lib/queries/revisions.ts';
 import { simulate } from '../../../lib/simulate-client.ts';
 import { runQueryOptions } from '../api/get-run.ts';
-import { revisionQueryOptions } from '../api/get-setup-choices.ts';
 import { type CompareEntry, type ComparedRun, entryKey } from './compare.ts';
 import { viewOfFresh, viewOfSaved } from './run-view.ts';
 import type { Scenario } from './scenario.ts';

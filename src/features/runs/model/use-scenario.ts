@@ -1,13 +1,14 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useRoad, useRoadChoices } from '../api/get-road-choices.ts';
+import { roadQueryOptions, roadsQueryOptions } from '../../../lib/queries/roads.ts';
 import { initialScenario, INLINE_ROAD, resolveScenario, type ScenarioDraft, type ScenarioErrors } from './scenario.ts';
 
 /** Draft state of a scenario plus what ScenarioFields needs; `resolve()` checks it and sets errors. */
 export function useScenario(workspaceId: string) {
   const [draft, setDraft] = useState<ScenarioDraft>(initialScenario);
   const [errors, setErrors] = useState<ScenarioErrors>({});
-  const roads = useRoadChoices(workspaceId);
-  const libraryRoad = useRoad(workspaceId, draft.roadChoice !== INLINE_ROAD ? draft.roadChoice : undefined);
+  const roads = useQuery({ ...roadsQueryOptions(workspaceId), retry: false });
+  const libraryRoad = useQuery(roadQueryOptions(workspaceId, draft.roadChoice !== INLINE_ROAD ? draft.roadChoice : undefined));
   const definition = libraryRoad.data?.definition;
 
   const resolve = () => {

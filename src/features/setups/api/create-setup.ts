@@ -3,7 +3,7 @@ import { SetupDetail } from '../../../../shared/schemas/setup-record.ts';
 import type { Corner } from '../../../../shared/schemas/setup-record.ts';
 import type { SetupInput } from '../../../../shared/schemas/setup.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterSetupWrite, setupsPath } from './setup-keys.ts';
+import { invalidateAfterSetupWrite, setupsPath } from '../../../lib/queries/setups.ts';
 
 export interface CreateSetupBody {
   setup: SetupInput;

@@ -1,4 +1,4 @@
-import { setupPath } from './setup-keys.ts';
+import { setupPath } from '../../../lib/queries/setups.ts';
 
 /**
  * Where a revision downloads as its setup file. A plain link does it: the server answers with

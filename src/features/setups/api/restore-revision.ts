@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { SetupDetail } from '../../../../shared/schemas/setup-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterSetupWrite, setupKey, setupPath } from './setup-keys.ts';
+import { invalidateAfterSetupWrite, setupKey, setupPath } from '../../../lib/queries/setups.ts';
 
 export const restoreRevision = (workspaceId: string, setupId: string, number: number, message?: string) =>
   api.post(`${setupPath(workspaceId, setupId)}/revisions/${number}/restore`, message ? { message } : {}, SetupDetail);

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { SetupDetail } from '../../../../shared/schemas/setup-record.ts';
 import type { SetupInput } from '../../../../shared/schemas/setup.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterSetupWrite, setupKey, setupPath } from './setup-keys.ts';
+import { invalidateAfterSetupWrite, setupKey, setupPath } from '../../../lib/queries/setups.ts';
 
 export interface SaveRevisionBody {
   setup: SetupInput;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { SetupDetail, type Corner } from '../../../../shared/schemas/setup-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterSetupWrite, setupKey, setupPath } from './setup-keys.ts';
+import { invalidateAfterSetupWrite, setupKey, setupPath } from '../../../lib/queries/setups.ts';
 
 export interface UpdateSetupBody {
   name?: string;

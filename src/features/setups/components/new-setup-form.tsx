@@ -6,8 +6,8 @@ import { type SetupDetail, SetupName, type SetupSummary } from '../../../../shar
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
 import { applyServerErrors } from '../../../lib/form-errors.ts';
+import { getSetup } from '../../../lib/queries/setups.ts';
 import { useCreateSetup } from '../api/create-setup.ts';
-import { getSetup } from '../api/get-setup.ts';
 import { newSetupTemplate } from '../model/setup-template.ts';
 
 const NewSetupValues = z.object({

@@ -1,3 +1,4 @@
+import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import type { RevisionSummary, SetupDetail } from '../../../../shared/schemas/setup-record.ts';
 import { Button } from '../../../components/ui/button.tsx';
@@ -6,9 +7,8 @@ import { Loading } from '../../../components/ui/spinner.tsx';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { useToast } from '../../../components/ui/toast.tsx';
 import { formatDateTime } from '../../../lib/format.ts';
+import { revisionQueryOptions, revisionsQueryOptions } from '../../../lib/queries/revisions.ts';
 import { exportRevisionUrl } from '../api/export-revision.ts';
-import { useRevision } from '../api/get-revision.ts';
-import { useRevisions } from '../api/get-revisions.ts';
 import { useRestoreRevision } from '../api/restore-revision.ts';
 import { RevisionDiff } from './revision-diff.tsx';
 
@@ -36,8 +36,8 @@ function sourceWords(source: string | null): string | null {
 }
 
 function Comparison({ workspaceId, setupId, a, b }: { workspaceId: string; setupId: string; a: number; b: number }) {
-  const ra = useRevision(workspaceId, setupId, a);
-  const rb = useRevision(workspaceId, setupId, b);
+  const ra = useQuery(revisionQueryOptions(workspaceId, setupId, a));
+  const rb = useQuery(revisionQueryOptions(workspaceId, setupId, b));
   if (ra.isError || rb.isError) return <Notice tone="danger">{(ra.error ?? rb.error)?.message}</Notice>;
   if (!ra.data || !rb.data) return <Loading what="the two revisions" />;
   return <RevisionDiff a={ra.data} b={rb.data} />;
@@ -48,7 +48,7 @@ function Comparison({ workspaceId, setupId, a, b }: { workspaceId: string; setup
  * between them field by field; download any of them as a file; restore one as a new revision.
  */
 export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftDirty, onRestored }: RevisionHistoryProps) {
-  const revisions = useRevisions(workspaceId, setupId);
+  const revisions = useInfiniteQuery(revisionsQueryOptions(workspaceId, setupId));
   const restore = useRestoreRevision(workspaceId, setupId);
   const toast = useToast();
   const [pair, setPair] = useState<{ a: number; b: number }>({ a: Math.max(1, latest - 1), b: latest });

@@ -1,6 +1,6 @@
 import type { ModalResult } from '../../../../shared/schemas/modal.ts';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
-import { equivalentDampingLeastSquares, type EquivalentDamping } from '../../../../shared/sim/damper.ts';
+import { type EquivalentDamping, equivalentDampingLeastSquares } from '../../../../shared/sim/damper-equivalent.ts';
 import { modalAnalysis } from '../../../../shared/sim/linear/modal.ts';
 import { linearCorner, wheelRate } from '../../../../shared/sim/quarter-car.ts';
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { CopiedShared } from '../../../../shared/schemas/share-link.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
 
 export const copyShared = (token: string, workspaceId: string) => api.post(`/api/shared/${encodeURIComponent(token)}/copy`, { workspaceId }, CopiedShared);
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { ShareLinksResponse } from '../../../../shared/schemas/share-link.ts';
 import { api } from '../../../lib/api-client.ts';
-import { shareLinksKey, shareLinksPath } from './share-keys.ts';
+import { shareLinksKey, shareLinksPath } from './query-keys.ts';
 
 export const getShareLinks = (workspaceId: string, setupId?: string) => api.get(shareLinksPath(workspaceId), ShareLinksResponse, { query: { setupId } });
 

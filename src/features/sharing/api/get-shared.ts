@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { SharedObject } from '../../../../shared/schemas/share-link.ts';
 import { api } from '../../../lib/api-client.ts';
-import { sharedKey } from './share-keys.ts';
+import { sharedKey } from './query-keys.ts';
 
 export const getShared = (token: string) => api.get(`/api/shared/${encodeURIComponent(token)}`, SharedObject);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ShareLink } from '../../../../shared/schemas/share-link.ts';
 import { api } from '../../../lib/api-client.ts';
-import { shareLinksKey, shareLinksPath } from './share-keys.ts';
+import { shareLinksKey, shareLinksPath } from './query-keys.ts';
 
 export const revokeShareLink = (workspaceId: string, linkId: string) => api.delete(`${shareLinksPath(workspaceId)}/${encodeURIComponent(linkId)}`, ShareLink);
 

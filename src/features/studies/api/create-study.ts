@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { StudyDetail } from '../../../../shared/schemas/study-record.ts';
 import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studiesPath, studyKey } from './keys.ts';
+import { rememberStudy, studiesPath } from './query-keys.ts';
 
 export const createStudy = (workspaceId: string, definition: StudyDefinition) => api.post(studiesPath(workspaceId), { definition }, StudyDetail);
 
@@ -11,9 +11,6 @@ export function useCreateStudy(workspaceId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (definition: StudyDefinition) => createStudy(workspaceId, definition),
-    onSuccess: (detail) => {
-      queryClient.setQueryData([...studyKey(workspaceId, detail.id), 'detail'], detail);
-      void queryClient.invalidateQueries({ queryKey: [...studiesKey(workspaceId), 'list'] });
-    },
+    onSuccess: (detail) => rememberStudy(queryClient, workspaceId, detail),
   });
 }

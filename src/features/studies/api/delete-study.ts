@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studyPath } from './keys.ts';
+import { studyKey, studyListKey, studyPath } from './query-keys.ts';
 
 export const deleteStudy = (workspaceId: string, studyId: string) => api.delete(studyPath(workspaceId, studyId));
 
@@ -9,8 +9,8 @@ export function useDeleteStudy(workspaceId: string) {
   return useMutation({
     mutationFn: (studyId: string) => deleteStudy(workspaceId, studyId),
     onSuccess: (_r, studyId) => {
-      queryClient.removeQueries({ queryKey: [...studiesKey(workspaceId), studyId] });
-      void queryClient.invalidateQueries({ queryKey: [...studiesKey(workspaceId), 'list'] });
+      queryClient.removeQueries({ queryKey: studyKey(workspaceId, studyId) });
+      void queryClient.invalidateQueries({ queryKey: studyListKey(workspaceId) });
     },
   });
 }

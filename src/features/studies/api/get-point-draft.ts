@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { StudyPointDraft } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studyKey, studyPath } from './keys.ts';
+import { studyKey, studyPath } from './query-keys.ts';
 
 export const getPointDraft = (workspaceId: string, studyId: string, index: number) => api.get(`${studyPath(workspaceId, studyId)}/points/${index}/draft`, StudyPointDraft);
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { StudyPointUpload } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studyPath } from './keys.ts';
+import { studyPath } from './query-keys.ts';
 
 const Saved = z.object({ saved: z.number().int() });
 

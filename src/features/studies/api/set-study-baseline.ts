@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { StudyDetail } from '../../../../shared/schemas/study-record.ts';
 import { api } from '../../../lib/api-client.ts';
-import { studiesKey, studyKey, studyPath } from './keys.ts';
+import { rememberStudy, studyPath } from './query-keys.ts';
 
 export const setStudyBaseline = (workspaceId: string, studyId: string, pointIndex: number | null) => api.put(`${studyPath(workspaceId, studyId)}/baseline`, { pointIndex }, StudyDetail);
 
@@ -10,9 +10,6 @@ export function useSetStudyBaseline(workspaceId: string, studyId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (pointIndex: number | null) => setStudyBaseline(workspaceId, studyId, pointIndex),
-    onSuccess: (detail) => {
-      queryClient.setQueryData([...studyKey(workspaceId, studyId), 'detail'], detail);
-      void queryClient.invalidateQueries({ queryKey: [...studiesKey(workspaceId), 'list'] });
-    },
+    onSuccess: (detail) => rememberStudy(queryClient, workspaceId, detail),
   });
 }

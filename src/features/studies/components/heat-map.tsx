@@ -6,6 +6,7 @@ import { heatGrid } from '../model/chart-data.ts';
 import { figureLabel, parameterLabel } from '../model/display.ts';
 import { positionOf, type StudyView } from '../model/study-view.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
+import { downloadBlob } from '../../../lib/download.ts';
 
 /** Sequential ramp, light (low) to deep (high): sand, teal, ink-blue. Our own stops, read in order by lightness. */
 const RAMP: [number, number, number][] = [
@@ -160,13 +161,7 @@ export function HeatMap({ view, figure, baselineIndex, selected, onSelect }: Hea
   };
   const save = () =>
     canvasRef.current?.toBlob((blob) => {
-      if (!blob) return;
-      const url = URL.createObjectURL(blob);
-      const link = document.createElement('a');
-      link.href = url;
-      link.download = `${view.definition.name} – ${studyFigureInfo[figure].label}.png`;
-      link.click();
-      setTimeout(() => URL.revokeObjectURL(url), 1000);
+      if (blob) downloadBlob(blob, `${view.definition.name} – ${studyFigureInfo[figure].label}.png`);
     }, 'image/png');
 
   return (

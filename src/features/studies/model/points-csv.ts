@@ -32,15 +32,3 @@ export function pointsCsv(view: StudyView): string {
   const rows = [...(view.base ? [row(view.base, null)] : []), ...view.points.map((p, pos) => row(p, pos))];
   return `${writeCsv([header, ...rows])}\n`;
 }
-
-/** Offers `text` as a download. */
-export function downloadText(text: string, filename: string, type = 'text/csv'): void {
-  const url = URL.createObjectURL(new Blob([text], { type: `${type};charset=utf-8` }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = filename;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}

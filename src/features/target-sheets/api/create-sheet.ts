@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type CreateTargetSheetInput, TargetSheetDetail } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateSheets, sheetsPath } from './sheet-keys.ts';
+import { invalidateSheets, sheetsPath } from './query-keys.ts';
 
 export const createSheet = (workspaceId: string, input: CreateTargetSheetInput) => api.post(sheetsPath(workspaceId), input, TargetSheetDetail);
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateSheets, sheetKey, sheetPath } from './sheet-keys.ts';
+import { invalidateSheets, sheetKey, sheetPath } from './query-keys.ts';
 
 export const deleteSheet = (workspaceId: string, sheetId: string) => api.delete(sheetPath(workspaceId, sheetId));
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { ConformityChecksResponse } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { checksKey, sheetPath } from './sheet-keys.ts';
+import { checksKey, sheetPath } from './query-keys.ts';
 
 export const getChecks = (workspaceId: string, sheetId: string) => api.get(`${sheetPath(workspaceId, sheetId)}/checks`, ConformityChecksResponse);
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { TargetSheetDetail } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { sheetKey, sheetPath } from './sheet-keys.ts';
+import { sheetKey, sheetPath } from './query-keys.ts';
 
 export const getSheet = (workspaceId: string, sheetId: string) => api.get(sheetPath(workspaceId, sheetId), TargetSheetDetail);
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { TargetSheetsResponse } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { sheetListKey, sheetsPath } from './sheet-keys.ts';
+import { sheetListKey, sheetsPath } from './query-keys.ts';
 
 export const getSheets = (workspaceId: string) => api.get(sheetsPath(workspaceId), TargetSheetsResponse);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { TargetSheetTransitionResult } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateSheets, sheetKey, sheetPath } from './sheet-keys.ts';
+import { invalidateSheets, sheetKey, sheetPath } from './query-keys.ts';
 
 /**
  * The four life-cycle steps are four routes of one shape (POST …/:sheetId/<step>), so they share

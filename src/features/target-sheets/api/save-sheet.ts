@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type TargetSheetContent, TargetSheetDetail } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateSheets, sheetKey, sheetPath } from './sheet-keys.ts';
+import { invalidateSheets, sheetKey, sheetPath } from './query-keys.ts';
 
 export const saveSheet = (workspaceId: string, sheetId: string, content: TargetSheetContent) => api.put(sheetPath(workspaceId, sheetId), content, TargetSheetDetail);
 

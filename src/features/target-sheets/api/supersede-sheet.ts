@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type SupersedeTargetSheetInput, TargetSheetDetail } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateSheets, sheetPath } from './sheet-keys.ts';
+import { invalidateSheets, sheetPath } from './query-keys.ts';
 
 export const supersedeSheet = (workspaceId: string, sheetId: string, input: SupersedeTargetSheetInput) =>
   api.post(`${sheetPath(workspaceId, sheetId)}/supersede`, input, TargetSheetDetail);

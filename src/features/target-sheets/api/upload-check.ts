@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ConformityRecordDetail } from '../../../../shared/schemas/target-sheet.ts';
 import { api } from '../../../lib/api-client.ts';
-import { checksKey, sheetPath } from './sheet-keys.ts';
+import { checksKey, sheetPath } from './query-keys.ts';
 
 export interface CheckUpload {
   /** One file per measured damper. */

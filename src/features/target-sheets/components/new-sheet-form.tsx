@@ -1,9 +1,11 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { defaultReferenceSpeeds, defaultTolerance } from '../../../../shared/target-sheet/reference-speeds.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
+import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
+import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
 import { useCreateSheet } from '../api/create-sheet.ts';
-import { useSheetRevisionChoices, useSheetSetupChoices } from '../api/get-setup-choices.ts';
 
 /** Reads "0.025, 0.05 0.1" as speeds in m/s; undefined when the text is not a list of numbers. */
 export function parseSpeeds(text: string): number[] | undefined {
@@ -17,9 +19,9 @@ export function parseSpeeds(text: string): number[] | undefined {
  * optionally the reference speeds and the band every point starts with.
  */
 export function NewSheetForm({ workspaceId, onCreated }: { workspaceId: string; onCreated: (sheetId: string) => void }) {
-  const setups = useSheetSetupChoices(workspaceId);
+  const setups = useQuery(setupsQueryOptions(workspaceId));
   const [setupId, setSetupId] = useState('');
-  const revisions = useSheetRevisionChoices(workspaceId, setupId || undefined);
+  const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, setupId || undefined));
   const [revision, setRevision] = useState('');
   const [speeds, setSpeeds] = useState(defaultReferenceSpeeds.join(', '));
   const [tolPct, setTolPct] = useState(String(defaultTolerance.tolPct));

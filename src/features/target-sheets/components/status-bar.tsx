@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import type { TargetSheet } from '../../../../shared/schemas/target-sheet.ts';
@@ -7,9 +8,9 @@ import { allowedTransitions, canSupersede } from '../../../../shared/target-shee
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Select, Textarea } from '../../../components/ui/field.tsx';
 import { Caution, Notice } from '../../../components/ui/notice.tsx';
+import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
 import { useDeleteSheet } from '../api/delete-sheet.ts';
 import { type SheetStep, useMoveSheet } from '../api/move-sheet.ts';
-import { useSheetRevisionChoices } from '../api/get-setup-choices.ts';
 import { useSupersedeSheet } from '../api/supersede-sheet.ts';
 import { StatusTag } from './status-tag.tsx';
 
@@ -50,7 +51,7 @@ export function StatusBar({
   const [reason, setReason] = useState('');
   const [reasonError, setReasonError] = useState<string>();
   const [comment, setComment] = useState('');
-  const revisions = useSheetRevisionChoices(workspaceId, panel === 'replace' ? sheet.setupId : undefined);
+  const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, panel === 'replace' ? sheet.setupId : undefined));
   const [fromRevision, setFromRevision] = useState<number | null>(null);
   const [outcome, setOutcome] = useState<{ notice: string | null; notified: number; step: SheetStep } | null>(null);
 

@@ -1,9 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { MembersResponse } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceKey } from '../../../lib/query-keys.ts';
-
-export const membersQueryKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'members'] as const;
+import { membersQueryKey } from './query-keys.ts';
 
 export const getMembers = (workspaceId: string) => api.get(`/api/workspaces/${encodeURIComponent(workspaceId)}/members`, MembersResponse);
 

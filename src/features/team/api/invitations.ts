@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { Invitation, type InviteInput } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
-import { membersQueryKey } from './get-members.ts';
+import { membersQueryKey } from './query-keys.ts';
 
 const base = (workspaceId: string) => `/api/workspaces/${encodeURIComponent(workspaceId)}/invitations`;
 

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { Member, type Role } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
-import { meKey, workspaceInfoKey } from '../../../lib/query-keys.ts';
-import { membersQueryKey } from './get-members.ts';
+import { meKey, workspaceInfoKey } from '../../../lib/queries/query-keys.ts';
+import { membersQueryKey } from './query-keys.ts';
 
 const memberPath = (workspaceId: string, userId: string) =>
   `/api/workspaces/${encodeURIComponent(workspaceId)}/members/${encodeURIComponent(userId)}`;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { VehicleDetail } from '../../../../shared/schemas/vehicle.ts';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterVehicleWrite, vehiclesPath } from './vehicle-keys.ts';
+import { invalidateAfterVehicleWrite, vehiclesPath } from './query-keys.ts';
 
 export interface CreateVehicleBody {
   name: string;

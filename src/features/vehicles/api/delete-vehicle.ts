@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client.ts';
-import { invalidateAfterVehicleWrite, vehiclePath } from './vehicle-keys.ts';
+import { invalidateAfterVehicleWrite, vehiclePath } from './query-keys.ts';
 
 export const deleteVehicle = (workspaceId: string, vehicleId: string) => api.delete(vehiclePath(workspaceId, vehicleId));
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { VehicleDetail } from '../../../../shared/schemas/vehicle.ts';
 import { api } from '../../../lib/api-client.ts';
-import { vehicleKey, vehiclePath } from './vehicle-keys.ts';
+import { vehicleKey, vehiclePath } from './query-keys.ts';
 
 export const getVehicle = (workspaceId: string, vehicleId: string) => api.get(vehiclePath(workspaceId, vehicleId), VehicleDetail);
 export const vehicleQueryOptions = (workspaceId: string, vehicleId: string) =>

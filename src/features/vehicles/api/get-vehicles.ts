@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { VehiclesResponse } from '../../../../shared/schemas/vehicle.ts';
 import { api } from '../../../lib/api-client.ts';
-import { vehiclesKey, vehiclesPath } from './vehicle-keys.ts';
+import { vehiclesKey, vehiclesPath } from './query-keys.ts';
 
 export const getVehicles = (workspaceId: string) => api.get(vehiclesPath(workspaceId), VehiclesResponse);
 export const vehiclesQueryOptions = (workspaceId: string) => queryOptions({ queryKey: [...vehiclesKey(workspaceId), 'list'], queryFn: () => getVehicles(workspaceId) });

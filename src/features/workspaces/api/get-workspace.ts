@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { WorkspaceInfo } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceInfoKey } from '../../../lib/query-keys.ts';
+import { workspaceInfoKey } from '../../../lib/queries/query-keys.ts';
 
 export const getWorkspace = (workspaceId: string) => api.get(`/api/workspaces/${encodeURIComponent(workspaceId)}`, WorkspaceInfo);
 

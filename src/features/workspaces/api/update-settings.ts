@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { type WorkspaceInfo, WorkspaceSettings } from '../../../../shared/schemas/workspace.ts';
 import { api } from '../../../lib/api-client.ts';
-import { workspaceInfoKey } from '../../../lib/query-keys.ts';
+import { workspaceInfoKey } from '../../../lib/queries/query-keys.ts';
 
 export const updateWorkspaceSettings = (workspaceId: string, settings: WorkspaceSettings) =>
   api.put(`/api/workspaces/${encodeURIComponent(workspaceId)}/settings`, settings, WorkspaceSettings);

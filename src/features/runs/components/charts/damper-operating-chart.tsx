@@ -4,7 +4,7 @@ import { linearX } from '../../../../components/charts/axes.ts';
 import { themedAxis, themedSeries } from '../../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
 import type { Damper } from '../../../../../shared/schemas/setup.ts';
-import { damperForce } from '../../../../../shared/sim/damper.ts';
+import { damperForce } from '../../../../../shared/sim/damper-force.ts';
 import { refLinesHook } from './draw-hooks.ts';
 
 export interface CurveSeries {

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
 
 /** Keys and paths of target-sheet data; everything sits under `[workspace, 'target-sheets']`. */
 export const sheetsKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'target-sheets'] as const;

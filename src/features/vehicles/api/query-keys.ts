@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
+import { setupsKey } from '../../../lib/queries/setups.ts';
 
 export const vehiclesKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'vehicles'] as const;
 export const vehicleKey = (workspaceId: string, vehicleId: string) => [...vehiclesKey(workspaceId), vehicleId] as const;
@@ -8,4 +9,4 @@ export const vehiclePath = (workspaceId: string, vehicleId: string) => `${vehicl
 
 /** Grouping changes touch the setups too (their vehicle and corner), under the setups prefix. */
 export const invalidateAfterVehicleWrite = (queryClient: QueryClient, workspaceId: string) =>
-  Promise.all([queryClient.invalidateQueries({ queryKey: vehiclesKey(workspaceId) }), queryClient.invalidateQueries({ queryKey: [...workspaceKey(workspaceId), 'setups'] })]);
+  Promise.all([queryClient.invalidateQueries({ queryKey: vehiclesKey(workspaceId) }), queryClient.invalidateQueries({ queryKey: setupsKey(workspaceId) })]);

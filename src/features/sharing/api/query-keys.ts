@@ -1,4 +1,4 @@
-import { workspaceKey } from '../../../lib/query-keys.ts';
+import { workspaceKey } from '../../../lib/queries/query-keys.ts';
 
 export const shareLinksKey = (workspaceId: string) => [...workspaceKey(workspaceId), 'share-links'] as const;
 export const shareLinksPath = (workspaceId: string) => `/api/workspaces/${encodeURIComponent(workspaceId)}/share-links`;

@@ -1,0 +1,25 @@
+import { Field, Input } from '../../../../components/ui/field.tsx';
+import { useFieldError, useStudyFormContext } from './field-error.ts';
+
+/** Limits every road and speed must keep for a point to count as acceptable. */
+export function LimitsFieldset() {
+  const { register } = useStudyFormContext();
+  const e = useFieldError();
+  return (
+    <fieldset className="rounded border border-rule p-3" aria-label="Limits">
+      <legend className="px-1 text-sm font-semibold">Limits (on every road and speed)</legend>
+      <div className="grid grid-cols-3 items-end gap-2">
+        <Field label="Most stroke used [%]" error={e('maxStrokeUsed')}>
+          <Input inputMode="decimal" {...register('maxStrokeUsed')} />
+        </Field>
+        <Field label="Most time off the road [%]" error={e('maxLiftOff')}>
+          <Input inputMode="decimal" {...register('maxLiftOff')} />
+        </Field>
+        <Field label="Least tyre load [N]" error={e('minTyreLoad')}>
+          <Input inputMode="decimal" {...register('minTyreLoad')} />
+        </Field>
+      </div>
+      <p className="mt-2 text-xs text-ink-faint">Leave a limit blank for none. A point meets the limits only if every road at every speed does; the others stay on the charts, marked.</p>
+    </fieldset>
+  );
+}
