@@ -298,8 +298,10 @@ async function revisionHolding(db: Queryable, setupId: string, document: Setup):
  */
 export function saveRevision(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, input: SaveRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
   return db.transaction().execute(async (trx) => {
-    if (!(await findSetup(trx, ws.workspaceId, setupId))) return noSetup();
-    const existing = await revisionHolding(trx, setupId, input.setup);
+    const setup = await findSetup(trx, ws.workspaceId, setupId);
+    if (!setup) return noSetup();
+    // An archived setup refuses every save (addRevisionInTx says why) before content is compared.
+    const existing = setup.archived_at ? undefined : await revisionHolding(trx, setupId, input.setup);
     if (existing !== undefined) {
       return { ...fail('conflict', `Nothing to save: revision ${existing} already holds exactly these values.`), see: { kind: 'setup_revision', setupId, number: existing } };
     }
