@@ -16,7 +16,7 @@ import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-com
 import { readCheckFiles, type UploadedText } from '../target-sheets/read-check-files.ts';
 
 export type MeasuredUploadResult =
-  | { ok: true; definition: Road; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
+  | { ok: true; definitionJson: string; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
   | { ok: false; message: string; fields?: FieldIssue[] };
 
 /** A measured-profile CSV → the road definition and its figures, or what is wrong (by line or field). */
@@ -37,7 +37,8 @@ export function measuredUpload(input: { text: string; filename: string; fields: 
   }
   const figures = figuresOfRoad(definition.data);
   if (!figures.ok) return { ok: false, message: `${filename} was not saved: ${figures.reason}` };
-  return { ok: true, definition: definition.data, figures: figures.figures };
+  // Text, not the object: a string crosses to the request thread in one copy, 500 000 points would not.
+  return { ok: true, definitionJson: JSON.stringify(definition.data), figures: figures.figures };
 }
 
 /** A road's figures (resampling, spectrum, class fit). */

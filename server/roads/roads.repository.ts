@@ -43,6 +43,11 @@ export function findRoad(db: Queryable, workspaceId: string, roadId: string) {
 }
 export type RoadDetailRow = NonNullable<Awaited<ReturnType<typeof findRoad>>>;
 
+/** One road as listed, without its (possibly large) definition. */
+export function findRoadListItem(db: Queryable, workspaceId: string, roadId: string) {
+  return roadQuery(db, workspaceId).where('r.id', '=', roadId).executeTakeFirst();
+}
+
 export async function updateRoadRow(
   db: Queryable,
   workspaceId: string,

@@ -37,8 +37,8 @@ export const roadRoutes: RouteModule = (deps) => [
     handler: async (req, res) => {
       const fields = MeasuredUploadFields.parse(req.body ?? {});
       const file = uploadedText(req.file);
-      const road: RoadDetail = unwrap(await uploadMeasuredRoad(deps.db, workspaceOf(req), userOf(req), file, fields, deps.clock()));
-      res.status(201).json(road);
+      // RoadDetail as JSON text (see uploadMeasuredRoad).
+      res.status(201).type('application/json').send(unwrap(await uploadMeasuredRoad(deps.db, workspaceOf(req), userOf(req), file, fields, deps.clock())));
     },
   },
   {

@@ -12,7 +12,7 @@ import {
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import { deleteRoadRow, findRoad, insertRoad, isRoadVersionReferenced, keepRoadVersion, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
+import { deleteRoadRow, findRoad, findRoadListItem, insertRoad, isRoadVersionReferenced, keepRoadVersion, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
@@ -97,15 +97,31 @@ export async function saveNewRoad(db: Db, ws: WorkspaceRef, actor: Actor, input:
  * transaction (the demo seed uses this too).
  */
 export async function insertRoadRecordInTx(trx: Queryable, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, source: RoadSource, figures: RoadFigures, now: Date): Promise<RoadDetail> {
+  const definition = JSON.stringify({ ...input.definition, name: input.name });
+  const id = await insertRoadRowInTx(trx, ws, actor, { name: input.name, kind: input.definition.kind, definition }, source, figures, now);
+  const row = await findRoad(trx, ws.workspaceId, id);
+  if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
+  return toDetail(row);
+}
+
+/** The road row and its audit entry; `definition` is the road's JSON text, already checked. */
+async function insertRoadRowInTx(
+  trx: Queryable,
+  ws: WorkspaceRef,
+  actor: Actor,
+  road: { name: string; kind: Road['kind']; definition: string },
+  source: RoadSource,
+  figures: RoadFigures,
+  now: Date,
+): Promise<string> {
   const id = randomUUID();
   const at = now.toISOString();
-  const definition = JSON.stringify({ ...input.definition, name: input.name });
   await insertRoad(trx, {
     id,
     workspace_id: ws.workspaceId,
-    name: input.name,
-    definition,
-    bytes: Buffer.byteLength(definition),
+    name: road.name,
+    definition: road.definition,
+    bytes: Buffer.byteLength(road.definition),
     source,
     summary: JSON.stringify(figures),
     created_by: actor.id,
@@ -119,12 +135,10 @@ export async function insertRoadRecordInTx(trx: Queryable, ws: WorkspaceRef, act
     action: source === 'measured' ? 'road.uploaded' : 'road.created',
     entityType: 'road',
     entityId: id,
-    summary: `${actor.name} ${source === 'measured' ? 'uploaded' : 'added'} the ${kindWords[input.definition.kind]} "${input.name}".`,
+    summary: `${actor.name} ${source === 'measured' ? 'uploaded' : 'added'} the ${kindWords[road.kind]} "${road.name}".`,
     at: now,
   });
-  const row = await findRoad(trx, ws.workspaceId, id);
-  if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
-  return toDetail(row);
+  return id;
 }
 
 export function createRoad(db: Db, ws: WorkspaceRef, actor: Actor, input: CreateRoadInput, now: Date): Promise<Outcome<RoadDetail>> {
@@ -222,12 +236,18 @@ export async function uploadMeasuredRoad(
   file: { text: string; filename: string },
   fields: MeasuredUploadFields,
   now: Date,
-): Promise<Outcome<RoadDetail>> {
-  // Parsing, checking and the figures of up to 500 000 rows run in a worker thread.
+): Promise<Outcome<string>> {
+  // Parsing, checking, the figures and the JSON text of up to 500 000 rows are made in a worker
+  // thread; this thread stores the text and answers with it, never parsing it again.
   const done = await runHeavy('measuredUpload', { text: file.text, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
   if (!done.ok) return done;
   const out = done.value;
   if (!out.ok) return fail('bad_request', out.message, out.fields);
-  const input = { name: fields.name, definition: out.definition };
-  return db.transaction().execute(async (trx) => ok(await insertRoadRecordInTx(trx, ws, actor, input, 'measured', out.figures, now)));
+  const road = { name: fields.name, kind: 'measured' as const, definition: out.definitionJson };
+  return db.transaction().execute(async (trx) => {
+    const id = await insertRoadRowInTx(trx, ws, actor, road, 'measured', out.figures, now);
+    const row = await findRoadListItem(trx, ws.workspaceId, id);
+    if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
+    return ok(withRawJson(toListItem(row), 'definition', out.definitionJson));
+  });
 }

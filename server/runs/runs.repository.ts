@@ -8,17 +8,6 @@ export async function insertRun(db: Queryable, row: NewRunRow): Promise<void> {
   await db.insertInto('run').values(row).execute();
 }
 
-/** A revision of a setup in the workspace, by number, with the setup's newest revision number. */
-export function findRevisionForRun(db: Queryable, workspaceId: string, setupId: string, number: number) {
-  return db
-    .selectFrom('setup_revision as r')
-    .innerJoin('setup as s', 's.id', 'r.setup_id')
-    .select(['r.id', 'r.number', 'r.document', 's.name as setup_name'])
-    .where('s.workspace_id', '=', workspaceId)
-    .where('s.id', '=', setupId)
-    .where('r.number', '=', number)
-    .executeTakeFirst();
-}
 
 export function setupExists(db: Queryable, workspaceId: string, setupId: string) {
   return db.selectFrom('setup').select('id').where('workspace_id', '=', workspaceId).where('id', '=', setupId).executeTakeFirst();

@@ -9,8 +9,9 @@ import { effectiveSeed, roadLabel } from '../../shared/runs/road-label.ts';
 import type { SessionUser, WorkspaceContext } from '../auth/request-context.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import { fieldsOf } from '../core/errors.ts';
-import { deleteRunRow, findLibraryRoad, findRevisionForRun, findRunRow, insertRun, listRunRows, type RunSummaryRow, setupExists } from './runs.repository.ts';
+import { deleteRunRow, findLibraryRoad, findRunRow, insertRun, listRunRows, type RunSummaryRow, setupExists } from './runs.repository.ts';
 import { recordAudit } from '../audit/index.ts';
+import { findRevisionInWorkspace } from '../setups/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { readStored } from '../core/stored-json.ts';
 
@@ -81,7 +82,7 @@ export function saveRun(db: Db, ws: WorkspaceContext, actor: SessionUser, input:
 
 /** `saveRun` inside a transaction the caller holds (the demo seed, which runs in one). */
 export async function saveRunInTx(db: Queryable, ws: WorkspaceContext, actor: SessionUser, input: SaveRunInput, now: Date): Promise<Outcome<RunSummary>> {
-  const revision = await findRevisionForRun(db, ws.workspaceId, input.setupId, input.revisionNumber);
+  const revision = await findRevisionInWorkspace(db, ws.workspaceId, input.setupId, { number: input.revisionNumber });
   if (!revision) {
     if (!(await setupExists(db, ws.workspaceId, input.setupId))) return fail('not_found', 'No such setup in this workspace.', [{ path: 'setupId', message: 'No such setup' }]);
     return fail('not_found', `The setup has no revision ${input.revisionNumber}.`, [{ path: 'revisionNumber', message: 'No such revision' }]);

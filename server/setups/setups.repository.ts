@@ -122,3 +122,17 @@ export function findSlotHolder(db: Queryable, vehicleId: string, corner: CornerC
     .where('archived_at', 'is', null)
     .executeTakeFirst();
 }
+
+/**
+ * A revision of a setup in the workspace, by its number or its id, with the setup's name: what
+ * runs and studies check a request against before they copy the revision's document.
+ */
+export function findRevisionInWorkspace(db: Queryable, workspaceId: string, setupId: string, which: { number: number } | { id: string }) {
+  const q = db
+    .selectFrom('setup_revision as r')
+    .innerJoin('setup as s', 's.id', 'r.setup_id')
+    .select(['r.id', 'r.number', 'r.document', 's.name as setup_name'])
+    .where('s.workspace_id', '=', workspaceId)
+    .where('s.id', '=', setupId);
+  return ('id' in which ? q.where('r.id', '=', which.id) : q.where('r.number', '=', which.number)).executeTakeFirst();
+}

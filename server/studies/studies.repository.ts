@@ -110,17 +110,6 @@ export function findStudyPoint(db: Queryable, studyId: string, idx: number) {
   return db.selectFrom('study_point').selectAll().where('study_id', '=', studyId).where('idx', '=', idx).executeTakeFirst();
 }
 
-/** The revision a study starts from, checked against the workspace and the setup. */
-export function findBaseRevision(db: Queryable, workspaceId: string, setupId: string, revisionId: string) {
-  return db
-    .selectFrom('setup_revision as r')
-    .innerJoin('setup as s', 's.id', 'r.setup_id')
-    .select(['r.id', 'r.number', 'r.document', 's.name as setup_name'])
-    .where('s.workspace_id', '=', workspaceId)
-    .where('s.id', '=', setupId)
-    .where('r.id', '=', revisionId)
-    .executeTakeFirst();
-}
 
 /** Library roads of the workspace among `ids`: names and current versions, never the (possibly large) definitions. */
 export function findLibraryRoads(db: Queryable, workspaceId: string, ids: string[]) {

@@ -14,7 +14,6 @@ import type { Db, Queryable } from '../db/database.ts';
 import type { StudyPointRow } from './studies.tables.ts';
 import {
   deleteStudyRow,
-  findBaseRevision,
   findLibraryRoads,
   findStudy,
   insertStudy,
@@ -65,6 +64,7 @@ export async function studyRoadsOf(db: Queryable, row: Pick<StudyViewRow, 'id' |
     return parsed.get(text) as Road;
   });
 }
+import { findRevisionInWorkspace } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 
@@ -167,7 +167,7 @@ export async function getStudyJson(db: Db, ws: WorkspaceRef, studyId: string): P
  */
 async function resolve(db: Queryable, ws: WorkspaceRef, def: StudyDefinition) {
   const issues: FieldIssue[] = [];
-  const base = await findBaseRevision(db, ws.workspaceId, def.base.setupId, def.base.revisionId);
+  const base = await findRevisionInWorkspace(db, ws.workspaceId, def.base.setupId, { id: def.base.revisionId });
   if (!base) issues.push({ path: 'definition.base.revisionId', message: 'No such revision of that setup in this workspace.' });
   const ids = def.roads.flatMap((r) => (r.source === 'library' ? [r.roadId] : []));
   const found = new Map((await findLibraryRoads(db, ws.workspaceId, ids)).map((r) => [r.id, r]));

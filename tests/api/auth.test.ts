@@ -4,6 +4,7 @@ import { ErrorBody } from '../../shared/errors.ts';
 import { Me, SignUpAnswer } from '../../shared/schemas/account.ts';
 import { AppConfig } from '../../shared/schemas/config.ts';
 import { SESSION_COOKIE } from '../../server/auth/session.ts';
+import { loadConfig } from '../../server/config.ts';
 import { browserLike, cookieValue, signedIn } from './helpers/agents.ts';
 import { linkIn, waitForMail } from './helpers/mail.ts';
 import { uniqueEmail } from './helpers/people.ts';
@@ -72,6 +73,37 @@ describe('sign-up', () => {
     } finally {
       await closed.close();
     }
+  });
+
+  it('refuses a confirmation link older than 24 hours with 410 and leaves the address unconfirmed', async () => {
+    const { email } = await signUp();
+    const { token } = linkIn((await waitForMail(t.db, email, 'Confirm your address')).text_body, '/confirm/');
+    t.clock.advance(24 * 3600_000 + 1000);
+    expect(ErrorBody.parse((await (await browserLike(t.url)).post('/api/auth/confirm', { token }).expect(410)).body).error.code).toBe('gone');
+    const row = await t.db.selectFrom('user').select('email_verified_at').where('email', '=', email).executeTakeFirstOrThrow();
+    expect(row.email_verified_at).toBeNull();
+  });
+
+  it('mails a new link only to an unconfirmed account, three times an hour, counted in the database', async () => {
+    const { email, password } = await signUp();
+    await waitForMail(t.db, email, 'Confirm your address');
+    const s = await signedIn(t.url, email, password);
+    for (let i = 0; i < 3; i += 1) await s.post('/api/auth/confirm/resend').expect(202);
+    expect(ErrorBody.parse((await s.post('/api/auth/confirm/resend').expect(429)).body).error.code).toBe('rate_limited');
+    const counted = await t.db.selectFrom('throttle_event').select('key').where('key', 'like', 'address-check:user:%').execute();
+    expect(counted.length).toBeGreaterThanOrEqual(3);
+    // the newest link confirms; after that there is nothing to resend
+    const newest = linkIn((await waitForMail(t.db, email, 'Confirm your address')).text_body, '/confirm/').token;
+    await (await browserLike(t.url)).post('/api/auth/confirm', { token: newest }).expect(200);
+    const done = await signedIn(t.url, email, password);
+    expect(ErrorBody.parse((await done.post('/api/auth/confirm/resend').expect(409)).body).error.code).toBe('conflict');
+  });
+
+  it('RIDEWRIGHT_OPEN_SIGNUP defaults to on in demo mode and off otherwise, and overrides either way', () => {
+    expect(loadConfig({}).openSignUp).toBe(true); // demo mode is the default
+    expect(loadConfig({ RIDEWRIGHT_DEMO: '0' }).openSignUp).toBe(false);
+    expect(loadConfig({ RIDEWRIGHT_DEMO: '0', RIDEWRIGHT_OPEN_SIGNUP: '1' }).openSignUp).toBe(true);
+    expect(loadConfig({ RIDEWRIGHT_DEMO: '1', RIDEWRIGHT_OPEN_SIGNUP: '0' }).openSignUp).toBe(false);
   });
 
   it('answers a bad body with 400, naming every bad field, and saves nothing', async () => {

@@ -24,6 +24,33 @@ async function invite(email: string, role = 'engineer'): Promise<{ invitation: I
 }
 
 describe('invitations', () => {
+  it('an account signed up under the invited address cannot accept until the address is confirmed by mail', async () => {
+    const target = uniqueEmail('new.hire');
+    const password = 'squatter-password-1';
+    await (await browserLike(t.url)).post('/api/auth/signup', { name: 'Early Bird', email: target, password, workspaceName: 'Perch' }).expect(202);
+    await waitForMail(t.db, target, 'Confirm your address');
+    // unconfirmed, but able to sign in with the password it chose
+    const squatter = await signedIn(t.url, target, password);
+    const squatterId = Me.parse((await squatter.get('/api/auth/me').expect(200)).body).user.id;
+    const { token } = await invite(target, 'engineer');
+
+    const refused = await squatter.post(`/api/invitations/${token}/accept`, {}).expect(403);
+    expect(ErrorBody.parse(refused.body).error.message).toMatch(/confirm your address/i);
+    expect(await t.db.selectFrom('membership').selectAll().where('workspace_id', '=', workspaceId).where('user_id', '=', squatterId).execute()).toEqual([]);
+    const still = MembersResponse.parse((await adminSession.get(`/api/workspaces/${workspaceId}/members`).expect(200)).body);
+    expect(still.invitations.map((i) => i.email)).toContain(target);
+
+    // the address's real holder takes the account over with a reset link, which also confirms the address and ends the squatter's session
+    await (await browserLike(t.url)).post('/api/auth/reset/request', { email: target }).expect(202);
+    const reset = linkIn((await waitForMail(t.db, target, 'password')).text_body, `${TEST_PUBLIC_URL}/reset/`).token;
+    await (await browserLike(t.url)).post('/api/auth/reset/confirm', { token: reset, password: 'the real holder pw' }).expect(204);
+    await squatter.get('/api/auth/me').expect(401);
+    const holder = await signedIn(t.url, target, 'the real holder pw');
+    expect(Me.parse((await holder.get('/api/auth/me').expect(200)).body).user.emailVerified).toBe(true);
+    const joined = Me.parse((await holder.post(`/api/invitations/${token}/accept`, {}).expect(200)).body);
+    expect(joined.memberships.map((m) => m.workspaceId)).toContain(workspaceId);
+  });
+
   it('lets a new person follow the mailed link, create an account and land in the workspace', async () => {
     const email = uniqueEmail('newcomer');
     const { invitation, token, text } = await invite(email, 'engineer');

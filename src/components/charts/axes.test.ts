@@ -20,6 +20,19 @@ describe('log axes', () => {
     const wide = [0.01, 0.02, 0.1, 1, 10, 20, 100];
     expect(logTickValues(u, wide)).toEqual(['0.01', '', '0.1', '1', '10', '', '100']);
   });
+
+  test('one notation per log axis: powers of ten throughout once any label leaves 0.001…10 000', () => {
+    const u = {} as uPlot;
+    expect(logTickValues(u, [1e-5, 1e-4, 1e-3, 1e-2])).toEqual(['10⁻⁵', '10⁻⁴', '10⁻³', '10⁻²']);
+    expect(logTickValues(u, [1e3, 1e4, 1e5])).toEqual(['10³', '10⁴', '10⁵']);
+    expect(logTickValues(u, [1e-6, 2e-6, 5e-6, 1e-5])).toEqual(['10⁻⁶', '2×10⁻⁶', '5×10⁻⁶', '10⁻⁵']);
+  });
+
+  test('splits uPlot blanked (null) get an empty label instead of throwing', () => {
+    const u = {} as uPlot;
+    expect(logTickValues(u, [0.1, null, 1, null, 10])).toEqual(['0.1', '', '1', '', '10']);
+    expect(formatTick(null)).toBe('');
+  });
 });
 
 describe('logDecadeRange', () => {

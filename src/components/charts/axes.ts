@@ -1,5 +1,5 @@
 import type uPlot from 'uplot';
-import { formatTick } from './chart-theme.ts';
+import { formatTick } from './tick-format.ts';
 
 /**
  * Scale and axis helpers for charts whose x is not a calendar date (uPlot defaults to time) and
@@ -27,19 +27,43 @@ export function decadesIn(min: number, max: number): number[] {
   return out;
 }
 
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+/** `powerOfTen(2, -5)` → "2×10⁻⁵"; a mantissa of 1 is left out ("10⁻⁵"). */
+function powerOfTen(mantissa: number, exponent: number): string {
+  const power = `10${String(exponent).replace(/./g, (c) => SUPERSCRIPT[c] ?? c)}`;
+  return mantissa === 1 ? power : `${mantissa}×${power}`;
+}
+
+/** Plain decimals read best between 0.001 and 10 000; beyond that every label is a power of ten. */
+const PLAIN_MIN = 1e-3;
+const PLAIN_MAX = 1e4;
+
 /**
  * Tick labels for a log axis: label the decades and the 2× and 5× steps only when there are few
- * decades, so the axis never crowds.
+ * decades, so the axis never crowds. One notation per axis: plain decimals when every label fits
+ * them, powers of ten ("10⁻⁵", "2×10⁻⁵") for all labels otherwise, never a mix. uPlot may hand
+ * null for a split it filtered out; it gets an empty label.
  */
-export function logTickValues(_u: uPlot, splits: number[]): string[] {
-  const lo = splits[0] ?? 1;
-  const hi = splits[splits.length - 1] ?? 1;
+export function logTickValues(_u: uPlot, splits: (number | null)[]): string[] {
+  const shown = splits.filter((v): v is number => v != null && v > 0);
+  const lo = shown[0] ?? 1;
+  const hi = shown[shown.length - 1] ?? 1;
   const decades = Math.log10(hi / lo);
+  const plain = lo >= PLAIN_MIN * (1 - 1e-9) && hi <= PLAIN_MAX * (1 + 1e-9);
   return splits.map((v) => {
-    const mantissa = Math.round(v / 10 ** Math.floor(Math.log10(v) + 1e-9));
+    if (v == null || !(v > 0)) return '';
+    const exponent = Math.floor(Math.log10(v) + 1e-9);
+    const mantissa = Math.round(v / 10 ** exponent);
     const keep = mantissa === 1 || (decades <= 3 && (mantissa === 2 || mantissa === 5));
-    return keep ? formatTick(v) : '';
+    if (!keep) return '';
+    return plain ? formatTick(v) : powerOfTen(mantissa, exponent);
   });
+}
+
+/** uPlot's own log filter blanks splits it judges crowded (as null); ours already chose them. */
+export function keepAllSplits(_u: uPlot, splits: number[]): number[] {
+  return splits;
 }
 
 /**

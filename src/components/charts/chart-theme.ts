@@ -1,4 +1,8 @@
 import type uPlot from 'uplot';
+import { keepAllSplits, logSplits, logTickValues } from './axes.ts';
+import { formatTick } from './tick-format.ts';
+
+export { formatTick };
 
 /**
  * Chart colours and fonts come from the CSS design tokens in `src/index.css`, so charts follow
@@ -81,6 +85,8 @@ export interface ThemedAxisOptions {
   values?: uPlot.Axis['values'];
   splits?: uPlot.Axis['splits'];
   size?: number;
+  /** A base-10 log axis: decade splits, one tick notation, no labels dropped by uPlot. */
+  log?: boolean;
 }
 
 /** One axis in the house style: monospace ticks, thin light grid, label with unit. */
@@ -99,6 +105,11 @@ export function themedAxis(theme: ChartTheme, opts: ThemedAxisOptions = {}): uPl
     axis.side = opts.side;
     // a second y axis shares the grid of the first; drawing both makes a cluttered mesh
     if (opts.side === 1) axis.grid = { show: false };
+  }
+  if (opts.log) {
+    axis.splits = logSplits;
+    axis.values = logTickValues;
+    axis.filter = keepAllSplits;
   }
   if (opts.values !== undefined) axis.values = opts.values;
   if (opts.splits !== undefined) axis.splits = opts.splits;
@@ -133,12 +144,4 @@ export function themedSeries(opts: ThemedSeriesOptions): uPlot.Series {
     series.value = (_u, v) => (v == null ? '–' : `${formatTick(v)} ${unit}`);
   }
   return series;
-}
-
-/** Compact number for ticks and legend values (3 significant figures, no trailing zeros). */
-export function formatTick(v: number): string {
-  if (v === 0) return '0';
-  const abs = Math.abs(v);
-  if (abs >= 1e5 || abs < 1e-3) return v.toExponential(2).replace(/\.?0+e/, 'e').replaceAll('-', '−');
-  return Number(v.toPrecision(3)).toString().replaceAll('-', '−');
 }

@@ -27,6 +27,8 @@ import 'uplot/dist/uPlot.min.css';
 import './uplot-chart.css';
 import { readChartTheme, type ChartTheme } from './chart-theme.ts';
 import { exportPng } from './export-png.ts';
+import { withDotMarkers } from './legend-markers.ts';
+import { withLevelYTitles } from './y-titles.ts';
 
 export type ChartOptions = Omit<uPlot.Options, 'width' | 'height'> & { height?: number };
 
@@ -62,7 +64,7 @@ export function UChart({ options, data, className = '', onReady, resetScales = t
   useEffect(() => {
     const host = hostRef.current;
     if (!host) return;
-    const { height = DEFAULT_HEIGHT, ...rest } = options;
+    const { height = DEFAULT_HEIGHT, ...rest } = withDotMarkers(withLevelYTitles(options));
     const width = Math.max(120, Math.floor(host.clientWidth));
     const chart = new uPlot({ ...rest, width, height }, dataRef.current, host);
     chartRef.current = chart;

@@ -3,7 +3,7 @@ import type uPlot from 'uplot';
 import { isoClasses } from '../../../../shared/schemas/road.ts';
 import { isoClassBounds } from '../../../../shared/sim/roads/iso-fit.ts';
 import { ISO_N0 as N0 } from '../../../../shared/sim/roads/iso8608.ts';
-import { logDecadeRange, logLogScales, logSplits, logTickValues } from '../../../components/charts/axes.ts';
+import { logDecadeRange, logLogScales } from '../../../components/charts/axes.ts';
 import { type ChartTheme, formatTick, seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
 import type { PsdPreview } from '../model/preview.ts';
@@ -77,8 +77,8 @@ export function RoadPsdChart({ psd }: { psd: PsdPreview }) {
       height: 280,
       scales: { ...logLogScales(), y: { time: false, distr: 3, log: 10, range: () => yRange.current } },
       axes: [
-        themedAxis(theme, { label: 'Spatial frequency', unit: 'cycle/m', splits: logSplits, values: logTickValues }),
-        themedAxis(theme, { label: 'Displacement PSD', unit: 'm³', size: 64, splits: logSplits, values: (_u, splits) => splits.map((v) => formatTick(v)) }),
+        themedAxis(theme, { label: 'Spatial frequency', unit: 'cycle/m', log: true }),
+        themedAxis(theme, { label: 'Displacement PSD', unit: 'm³', size: 64, log: true }),
       ],
       series: [
         { label: 'n', value: (_u, v) => (v == null ? '–' : `${formatTick(v)} cycle/m`) },

@@ -18,4 +18,15 @@ describe('figure rows', () => {
     expect(bestIndex(rowByKey('bodyHz'), [1.1, 1.3])).toBeNull();
     expect(bestIndex(rowByKey('aw'), [0.5])).toBeNull();
   });
+
+  it('names a best only when it beats the runner-up by more than 1 %', () => {
+    // a 0.15 % difference is no winner; 1.5 % is
+    expect(bestIndex(rowByKey('aw'), [1.0, 0.9985])).toBeNull();
+    expect(bestIndex(rowByKey('aw'), [1.0, 0.985])).toBe(1);
+    // the margin is measured against the runner-up, not the worst run
+    expect(bestIndex(rowByKey('aw'), [0.9, 0.999, 0.995])).toBe(0);
+    expect(bestIndex(rowByKey('aw'), [1.2, 0.999, 0.995])).toBeNull();
+    expect(bestIndex(rowByKey('loadMin'), [1500, 1490, 1200])).toBeNull();
+    expect(bestIndex(rowByKey('loadMin'), [1500, 1480, 1200])).toBe(0);
+  });
 });

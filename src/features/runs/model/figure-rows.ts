@@ -79,16 +79,24 @@ export const rowByKey = (key: string): FigureRow => {
 };
 
 /**
- * Index of the best value among runs for a ranked row (ties: the first); null when the row is
- * unranked, fewer than two values exist, or all values are equal at `digits` significant figures.
+ * How much better than every other run a figure must be to be called best: 1 % of the larger
+ * of the two. Below that a difference is within what a change of road seed or step size moves
+ * (common practice for comparing simulated figures), so naming a winner would mislead.
  */
-export function bestIndex(row: FigureRow, values: (number | undefined)[], digits = 3): number | null {
+export const BEST_MARGIN = 0.01;
+
+/**
+ * Index of the best value among runs for a ranked row; null when the row is unranked, fewer than
+ * two values exist, or the best does not beat the runner-up by more than `BEST_MARGIN`.
+ */
+export function bestIndex(row: FigureRow, values: (number | undefined)[], margin = BEST_MARGIN): number | null {
   if (row.better === 'unranked') return null;
   const present = values.map((v, i) => [v, i] as const).filter((p): p is readonly [number, number] => p[0] !== undefined && Number.isFinite(p[0]));
   if (present.length < 2) return null;
-  const shown = present.map(([v]) => Number(v.toPrecision(digits)));
-  if (shown.every((v) => v === shown[0])) return null;
-  let best = present[0];
-  for (const p of present) if (row.better === 'lower' ? p[0] < best[0] : p[0] > best[0]) best = p;
+  const sign = row.better === 'lower' ? 1 : -1;
+  const ranked = [...present].sort((a, b) => sign * (a[0] - b[0]));
+  const [best, runnerUp] = ranked as [readonly [number, number], readonly [number, number]];
+  const scale = Math.max(Math.abs(best[0]), Math.abs(runnerUp[0]));
+  if (!(Math.abs(runnerUp[0] - best[0]) > margin * scale)) return null;
   return best[1];
 }

@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
 import type uPlot from 'uplot';
-import { logScale, logTickValues } from '../../../../components/charts/axes.ts';
+import { logScale } from '../../../../components/charts/axes.ts';
 import { themedAxis, themedSeries } from '../../../../components/charts/chart-theme.ts';
 import { syncedCursor } from '../../../../components/charts/sync.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
@@ -41,14 +41,14 @@ export function ResponseCharts({ series, marks = [], title = 'Frequency response
         ...common,
         height: 210,
         scales: { x: logScale([0.1, 50]), y: logScale() },
-        axes: [themedAxis(theme, { values: logTickValues }), themedAxis(theme, { label: `Gain, ${meta.label.toLowerCase()}`, unit: meta.unit, size: 64, values: logTickValues })],
+        axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', log: true }), themedAxis(theme, { label: `Gain, ${meta.label.toLowerCase()}`, unit: meta.unit, size: 64, log: true })],
         series: [{ label: 'Hz' }, ...lines],
       },
       {
         ...common,
         height: 150,
         scales: { x: logScale([0.1, 50]), y: { range: (_u, min, max) => [Math.floor(Math.min(min, -180) / 90) * 90, Math.ceil(Math.max(max, 0) / 90) * 90] } },
-        axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', values: logTickValues }), themedAxis(theme, { label: 'Phase', unit: '°', size: 64, splits: (_u, _a, min, max) => ticks90(min, max) })],
+        axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', log: true }), themedAxis(theme, { label: 'Phase', unit: '°', size: 64, splits: (_u, _a, min, max) => ticks90(min, max) })],
         series: [{ label: 'Hz' }, ...series.map((s) => themedSeries({ label: s.label, unit: '°', color: s.color, width: 1.5 }))],
         legend: { show: false },
       },

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import type uPlot from 'uplot';
-import { logScale, logTickValues } from '../../../../components/charts/axes.ts';
+import { logScale } from '../../../../components/charts/axes.ts';
 import { themedAxis, themedSeries } from '../../../../components/charts/chart-theme.ts';
 import { syncedCursor } from '../../../../components/charts/sync.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
@@ -40,7 +40,7 @@ export function SpectraCharts({ spectra }: { spectra: Spectra | null }) {
         (p): ChartOptions => ({
           height: 200,
           scales: psdScales(),
-          axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', values: logTickValues }), themedAxis(theme, { label: p.title, unit: p.unit, size: 64, values: logTickValues })],
+          axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', log: true }), themedAxis(theme, { label: p.title, unit: p.unit, size: 64, log: true })],
           series: [{ label: 'Hz' }, themedSeries({ label: p.title, unit: p.unit, color: p.pick(theme) })],
           cursor: syncedCursor('rw-run-psd'),
         }),

@@ -62,7 +62,7 @@ export function TimeHistoryCharts({ traces, setup, staticLoad, settleTime, syncK
         const refs = lane.refs(setup, staticLoad, theme);
         if (settleTime > 0) refs.push({ axis: 'x', value: settleTime, color: theme.inkFaint, dash: [1, 3] });
         return {
-          height: i === lanes.length - 1 ? 130 : 150,
+          height: i === lanes.length - 1 ? 200 : 150,
           scales: { x: linearX },
           axes: [themedAxis(theme, i === lanes.length - 1 ? { label: 'Time', unit: 's' } : {}), themedAxis(theme, { label: lane.title, unit: lane.unit, size: 64 })],
           series: [{ label: 'Time' }, themedSeries({ label: lane.title, unit: lane.unit, color: lane.colorOf(theme) })],

@@ -40,10 +40,10 @@ export function CompareCharts({ runs }: { runs: ComparedRun[] }) {
         </ChartCard>
         <ResponseCharts series={responses} title="Frequency responses" />
       </div>
-      <ChartCard title="Time histories" detail="Drag to zoom; the cursor is shared. Saved runs show their stored (thinned) traces.">
-        <OverlayChart lines={lanes.accel} xLabel="Time" xUnit="s" yLabel="Body acceleration" yUnit="m/s²" syncKey="rw-compare-time" exportName="compare-body-accel" />
-        <OverlayChart lines={lanes.travel} xLabel="Time" xUnit="s" yLabel="Travel (+ compression)" yUnit="mm" syncKey="rw-compare-time" exportName="compare-travel" />
-        <OverlayChart lines={lanes.load} xLabel="Time" xUnit="s" yLabel="Tyre load" yUnit="N" syncKey="rw-compare-time" exportName="compare-tyre-load" />
+      <ChartCard title="Time histories" detail="Drag to zoom; the cursor is shared. Dashed: each run minus the reference (the first run), so zero means no change. Saved runs show their stored (thinned) traces.">
+        <OverlayChart lines={lanes.accel} xLabel="Time" xUnit="s" yLabel="Body acceleration" yUnit="m/s²" syncKey="rw-compare-time" difference exportName="compare-body-accel" />
+        <OverlayChart lines={lanes.travel} xLabel="Time" xUnit="s" yLabel="Travel (+ compression)" yUnit="mm" syncKey="rw-compare-time" difference exportName="compare-travel" />
+        <OverlayChart lines={lanes.load} xLabel="Time" xUnit="s" yLabel="Tyre load" yUnit="N" syncKey="rw-compare-time" difference exportName="compare-tyre-load" />
       </ChartCard>
       <ChartCard title="Spectra" detail="Welch PSD of the analysed part, log axes.">
         <div className="grid gap-2 lg:grid-cols-2">

@@ -1,5 +1,5 @@
 import { Figure } from '../../../../components/ui/figure.tsx';
-import { betterRules, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
+import { BEST_MARGIN, betterRules, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
 import { type ComparedRun, differenceText } from '../../model/compare.ts';
 import { Swatch } from './swatch.tsx';
 
@@ -12,6 +12,9 @@ const groups: FigureGroup[] = ['comfort', 'grip', 'package', 'damper', 'modal'];
 export function CompareTable({ runs }: { runs: ComparedRun[] }) {
   return (
     <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
+      <p className="px-3 pt-2 text-xs text-ink-soft">
+        “best” marks a figure more than {BEST_MARGIN * 100} % better than every other run; closer than that, no run is named.
+      </p>
       <table className="w-full border-collapse text-sm" aria-label="Figures compared">
         <thead className="border-b border-rule-strong bg-paper-sunk/70 text-left">
           <tr>
@@ -60,7 +63,7 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                           ) : (
                             <span className="inline-flex items-baseline gap-1">
                               {best === i && (
-                                <span className="text-2xs font-semibold text-ok" title={`best here: ${betterRules[row.better]}`}>
+                                <span className="text-2xs font-semibold text-ok" title={`best here: ${betterRules[row.better]}, by more than ${BEST_MARGIN * 100} %`}>
                                   best
                                 </span>
                               )}
