@@ -86,7 +86,7 @@ describe('damper target sheet, from draft to dyno check and print', () => {
 
     // Back with the engineer: the sheet is released and read-only; two dampers go on the dyno.
     await eng.page.reload();
-    await eng.page.getByText('Released: final.').waitFor();
+    await eng.page.getByText(/^Released: final, and the sheet in force/).waitFor();
     expect(await eng.page.getByRole('form', { name: 'Edit targets' }).count()).toBe(0);
     const released = TargetSheetDetail.parse(await (await eng.page.request.get(`/api/workspaces/${workspaceId}/target-sheets/${sheetId}`)).json()).sheet;
     expect(released.approver?.name).toBe(lead.name);
