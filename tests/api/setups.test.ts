@@ -224,7 +224,7 @@ describe('setups and their revisions', () => {
     const renamed = SetupDetail.parse((await eng.patch(`${setups}/${created.id}`, { name: 'Corrie front, touring' }).expect(200)).body);
     expect(renamed).toMatchObject({ name: 'Corrie front, touring', latestRevision: 1 });
     expect(renamed.revision.document.name).toBe('Old name');
-    const saved = SetupDetail.parse((await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Old name'), message: 'Same corner' }).expect(201)).body);
+    const saved = SetupDetail.parse((await eng.post(`${setups}/${created.id}/revisions`, { setup: { ...cornerDocument('Old name'), sprungMass: cornerDocument('Old name').sprungMass + 5 }, message: 'Five kilograms more' }).expect(201)).body);
     expect(saved.revision.document.name).toBe('Corrie front, touring');
     expect(await auditActions(created.id)).toEqual(['setup.created', 'setup.renamed', 'setup.revised']);
   });
@@ -240,7 +240,7 @@ describe('setups and their revisions', () => {
     const res = await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Put away'), message: 'x' }).expect(409);
     expect(ErrorBody.parse(res.body).error.message).toMatch(/archived/);
     await eng.patch(`${setups}/${created.id}`, { archived: false }).expect(200);
-    await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Put away'), message: 'Back in use' }).expect(201);
+    await eng.post(`${setups}/${created.id}/revisions`, { setup: { ...cornerDocument('Put away'), sprungMass: cornerDocument('Put away').sprungMass + 5 }, message: 'Back in use' }).expect(201);
     expect(await auditActions(created.id)).toEqual(['setup.created', 'setup.archived', 'setup.unarchived', 'setup.revised']);
   });
 
