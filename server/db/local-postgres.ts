@@ -1,8 +1,8 @@
 import { spawn, spawnSync } from 'node:child_process';
-import { chownSync, existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import pg from 'pg';
 
 /**
@@ -47,22 +47,37 @@ const asRoot = process.getuid?.() === 0;
 /** The command line, run as the `postgres` user when we are root. */
 const asOwner = (cmd: string[]): [string, string[]] => (asRoot ? ['runuser', ['-u', 'postgres', '--', ...cmd]] : [cmd[0], cmd.slice(1)]);
 
-export async function startLocalPostgres(opts: { fast?: boolean } = {}): Promise<LocalPostgres> {
+export interface LocalPostgresOptions {
+  /** Relax durability (fsync off): for tests and benchmarks that never crash PostgreSQL itself. */
+  fast?: boolean;
+  /** Keep the cluster in this folder (created by initdb the first time) instead of a temp folder removed on stop. */
+  dataDir?: string;
+  port?: number;
+}
+
+export async function startLocalPostgres(opts: LocalPostgresOptions = {}): Promise<LocalPostgres> {
   const binDir = postgresBinDir();
   if (!binDir) throw new Error('PostgreSQL is not installed: install Debian\'s "postgresql" package (see README, "Running for a team")');
-  const dir = mkdtempSync(join(tmpdir(), 'ridewright-pg-'));
+  const kept = opts.dataDir ? resolve(opts.dataDir) : null;
+  if (kept) mkdirSync(kept, { recursive: true });
+  const dir = kept ?? mkdtempSync(join(tmpdir(), 'ridewright-pg-'));
   const data = join(dir, 'data');
+  const removeDir = () => {
+    if (!kept) rmSync(dir, { recursive: true, force: true });
+  };
   if (asRoot) {
     const id = spawnSync('id', ['-u', 'postgres'], { encoding: 'utf8' });
     const gid = spawnSync('id', ['-g', 'postgres'], { encoding: 'utf8' });
     if (id.status !== 0) throw new Error('running as root needs the "postgres" user that Debian\'s postgresql package creates');
     chownSync(dir, Number(id.stdout.trim()), Number(gid.stdout.trim()));
   }
-  const [initCmd, initArgs] = asOwner([join(binDir, 'initdb'), '-D', data, '-U', USER, '--auth=trust', '-E', 'UTF8', '--locale=C', '--no-sync']);
-  const init = spawnSync(initCmd, initArgs, { encoding: 'utf8' });
-  if (init.status !== 0) throw new Error(`initdb failed: ${init.stderr || init.stdout}`);
+  if (!existsSync(join(data, 'PG_VERSION'))) {
+    const [initCmd, initArgs] = asOwner([join(binDir, 'initdb'), '-D', data, '-U', USER, '--auth=trust', '-E', 'UTF8', '--locale=C', ...(kept ? [] : ['--no-sync'])]);
+    const init = spawnSync(initCmd, initArgs, { encoding: 'utf8' });
+    if (init.status !== 0) throw new Error(`initdb failed: ${init.stderr || init.stdout}`);
+  }
 
-  const port = await freePort();
+  const port = opts.port ?? (await freePort());
   // Tests and benchmarks never crash PostgreSQL itself, only the server processes in front of it,
   // so durability to disk can be relaxed there for speed; a commit is still a commit.
   const tuning = opts.fast ? ['-c', 'fsync=off', '-c', 'synchronous_commit=off', '-c', 'full_page_writes=off'] : [];
@@ -87,7 +102,7 @@ export async function startLocalPostgres(opts: { fast?: boolean } = {}): Promise
     } catch (err) {
       await client.end().catch(() => undefined);
       if (Date.now() > deadline || child.exitCode !== null) {
-        rmSync(dir, { recursive: true, force: true });
+        removeDir();
         throw new Error(`PostgreSQL did not start: ${String(err)}\n${log}`, { cause: err });
       }
       await new Promise((r) => setTimeout(r, 100));
@@ -109,7 +124,7 @@ export async function startLocalPostgres(opts: { fast?: boolean } = {}): Promise
         }
         await Promise.race([exited, new Promise((r) => setTimeout(r, 10_000))]);
       }
-      rmSync(dir, { recursive: true, force: true });
+      removeDir();
     },
   };
 }
