@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { Setup } from '../schemas/setup.ts';
+import { Road } from '../schemas/road.ts';
 import { integrateCorner } from './integrate.ts';
 import { cornerModel, endOfStrokeRate, GRAVITY, newCornerForces, staticEquilibrium, wheelRate } from './quarter-car.ts';
 import { runCorner } from './run-corner.ts';
@@ -42,7 +43,7 @@ describe('end of stroke', () => {
     const s = Setup.parse({ ...front, damper: { compression: [[1, 1e-9]], rebound: [[1, 1e-9]] }, tyreDamping: 0 });
     const st = staticEquilibrium(s);
     if (!st.ok) throw new Error(st.reason);
-    const level = buildRoad({ kind: 'sine', name: 'flat', amplitude: 1e-9, wavelength: 1000 }, 1, 2);
+    const level = buildRoad(Road.parse({ kind: 'sine', name: 'flat', amplitude: 1e-9, wavelength: 1000 }), 1, 2);
     if (!level.ok) throw new Error(level.reason);
     // wheel thrown up fast from rest: it runs through the bump stop into the end of the stroke
     const WHEEL_SPEED = 8;
