@@ -137,8 +137,10 @@ function Bench({ detail }: { detail: SetupDetail }) {
           <section aria-label="Damper">
             <h2 className="mb-2 text-sm font-semibold text-ink">Damper</h2>
             <DamperCurveEditor
+              key={draft.generation}
               value={damper}
               onChange={draft.setDamper}
+              onProblemsChange={draft.setTableProblems}
               readOnly={!canWrite}
               motionRatio={shown.motionRatio}
               sprungMass={shown.sprungMass}
@@ -150,7 +152,7 @@ function Bench({ detail }: { detail: SetupDetail }) {
           </section>
           <section aria-label="Live run">
             <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2">
-              <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.isDirty ? ' of the unsaved draft' : ''}</h2>
+              <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.hasChanges ? ' of the unsaved draft' : ''}</h2>
               <BenchScenarioPicker value={scenario} onChange={setScenario} />
             </div>
             <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} hideTitle />
@@ -169,13 +171,13 @@ function Bench({ detail }: { detail: SetupDetail }) {
         />
       </Section>
       <Section title="Revisions" className="mt-8">
-        <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.isDirty} onRestored={(d) => draft.resetTo(d.revision)} />
+        <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.hasChanges} onRestored={(d) => draft.resetTo(d.revision)} />
       </Section>
       <Section title="Read-only links">
         <SharePanel workspaceId={workspace.id} setupId={detail.id} revision={{ id: r.id, number: r.number }} canWrite={workspace.can('engineer')} />
       </Section>
       <ResultsCaution />
-      <UnsavedGuard when={canWrite && draft.isDirty && !save.isPending} />
+      <UnsavedGuard when={canWrite && draft.hasChanges && !save.isPending} invalid={draft.tableProblems.length > 0 || (draft.isDirty && !draft.valid)} />
     </>
   );
 }
