@@ -46,7 +46,8 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
     }
   }
   const read = useMemo(() => readDraft(shown, value), [shown, value]);
-  const problems = useMemo(() => draftProblems(read), [read]);
+  const [gasProblems, setGasProblems] = useState<Problem[]>([]);
+  const problems = useMemo(() => [...draftProblems(read), ...gasProblems], [read, gasProblems]);
   useEffect(() => {
     if (!readOnly) onProblemsChange?.(problems);
   }, [problems, readOnly, onProblemsChange]);
@@ -124,7 +125,7 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
         </details>
       )}
 
-      <GasEntry gas={value.gas} readOnly={readOnly} onChange={(gas) => onChange(Damper.parse({ compression: value.compression, rebound: value.rebound, ...(gas ? { gas } : {}) }))} />
+      <GasEntry gas={value.gas} readOnly={readOnly} onProblemsChange={setGasProblems} onChange={(gas) => onChange(Damper.parse({ compression: value.compression, rebound: value.rebound, ...(gas ? { gas } : {}) }))} />
     </div>
   );
 }

@@ -19,7 +19,7 @@ export function DampingFiguresPanel({ figures, motionRatio }: { figures: Damping
     <section aria-label="Damping figures" className="@container min-w-0 rounded border border-rule bg-paper-raised px-3 py-2">
       <h3 className="text-sm font-semibold text-ink">Equivalent damping</h3>
       <p className="mb-1 text-2xs text-ink-faint">Linear coefficient: {figures.definition}.</p>
-      <dl className="grid gap-x-8 @xl:grid-cols-2">
+      <dl className="grid gap-x-8 @3xl:grid-cols-2">
         <Row label="At the damper">
           <Figure value={figures.atDamper} unit="Nspm" label="equivalent coefficient at the damper" />
         </Row>

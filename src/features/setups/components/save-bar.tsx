@@ -64,7 +64,7 @@ export function SaveBar({ draft, nextNumber, saving, error, onSave }: SaveBarPro
           </button>
         )}
       </div>
-      <div className="flex gap-2">
+      <div className="flex flex-wrap gap-2">
         <label htmlFor={id} className="sr-only">
           What changed
         </label>
@@ -75,9 +75,9 @@ export function SaveBar({ draft, nextNumber, saving, error, onSave }: SaveBarPro
           onChange={(e) => setMessage(e.target.value)}
           placeholder="What changed, in a few words"
           disabled={!draft.hasChanges}
-          className="h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
+          className="h-8 min-w-48 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
         />
-        <Button type="submit" variant="primary" size="sm" className="h-8" disabled={!canSave} busy={saving}>
+        <Button type="submit" variant="primary" size="sm" className="ml-auto h-8" disabled={!canSave} busy={saving}>
           Save my edits as revision {nextNumber}
         </Button>
       </div>
