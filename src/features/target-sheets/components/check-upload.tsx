@@ -71,24 +71,24 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
           <p className="mb-1 text-xs text-ink-faint">Each file is read in its own units and signs; a unit written in a column header wins over the choice here.</p>
           <ul className="grid gap-2" aria-label="Dampers to check">
             {files.map((f, i) => (
-              <li key={`${f.file.name}-${i}`} className="flex flex-wrap items-center gap-2">
-                <span className="min-w-0 flex-1 basis-40 truncate text-sm text-ink-soft" title={f.file.name}>
+              <li key={`${f.file.name}-${i}`} className="grid grid-cols-2 items-center gap-2 md:grid-cols-[minmax(8rem,1fr)_9rem_11rem_11rem_11rem]">
+                <span className="col-span-2 min-w-0 truncate text-sm text-ink-soft md:col-span-1" title={f.file.name}>
                   {f.file.name}
                 </span>
-                <Input aria-label={`Damper label for ${f.file.name}`} value={f.label} maxLength={120} className="h-8 w-36 text-sm" onChange={(e) => setFile(i, { label: e.target.value })} />
-                <Select aria-label={`Speed unit of ${f.file.name}`} value={f.velocityUnit} className="h-8 w-36 text-sm" onChange={(e) => setFile(i, { velocityUnit: e.target.value as FileReading['velocityUnit'] })}>
+                <Input aria-label={`Damper label for ${f.file.name}`} value={f.label} maxLength={120} className="h-8 text-sm" onChange={(e) => setFile(i, { label: e.target.value })} />
+                <Select aria-label={`Speed unit of ${f.file.name}`} value={f.velocityUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { velocityUnit: e.target.value as FileReading['velocityUnit'] })}>
                   <option value="">speed: header, else m/s</option>
                   <option value="m/s">m/s</option>
                   <option value="mm/s">mm/s</option>
                   <option value="in/s">in/s</option>
                 </Select>
-                <Select aria-label={`Force unit of ${f.file.name}`} value={f.forceUnit} className="h-8 w-36 text-sm" onChange={(e) => setFile(i, { forceUnit: e.target.value as FileReading['forceUnit'] })}>
+                <Select aria-label={`Force unit of ${f.file.name}`} value={f.forceUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { forceUnit: e.target.value as FileReading['forceUnit'] })}>
                   <option value="">force: header, else N</option>
                   <option value="N">N</option>
                   <option value="kN">kN</option>
                   <option value="lbf">lbf</option>
                 </Select>
-                <Select aria-label={`Sign convention of ${f.file.name}`} value={f.sign} className="h-8 w-44 text-sm" onChange={(e) => setFile(i, { sign: e.target.value as FileReading['sign'] })}>
+                <Select aria-label={`Sign convention of ${f.file.name}`} value={f.sign} className="h-8 text-sm" onChange={(e) => setFile(i, { sign: e.target.value as FileReading['sign'] })}>
                   <option value="">compression positive</option>
                   <option value="extension-positive">extension positive</option>
                 </Select>
