@@ -50,10 +50,6 @@ export const m3ToCm3 = (m3: number) => m3 * 1e6;
 export const METERS_PER_INCH = 0.0254;
 /** The pound-force, exactly 4.4482216152605 N (NIST SP 811, appendix B: standard gravity × the avoirdupois pound). */
 export const NEWTONS_PER_POUND_FORCE = 4.4482216152605;
-/** Length: in → m. */
-export const inToM = (inches: number) => inches * METERS_PER_INCH;
-/** Force: lbf → N. */
-export const lbfToN = (lbf: number) => lbf * NEWTONS_PER_POUND_FORCE;
 /** Speed: km/h → m/s. */
 export const kmhToMPerS = (kmh: number) => kmh / 3.6;
 export const mPerSToKmh = (mPerS: number) => mPerS * 3.6;
