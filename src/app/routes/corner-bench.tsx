@@ -1,11 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
-import { useMemo, useRef, useState } from 'react';
-import { useParams, useSearchParams } from 'react-router';
+import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import type { StudyPointDraft } from '../../../shared/schemas/study-record.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
 import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { Tabs } from '../../components/ui/tabs.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
@@ -18,7 +20,8 @@ import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
 import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
 import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
 import { SetupForm } from '../../features/setups/components/form/setup-form.tsx';
-import { RevisionHistory } from '../../features/setups/components/revision-history.tsx';
+import { RevisionHistory, revisionAnchor } from '../../features/setups/components/revision-history.tsx';
+import { usePointDraft } from '../../features/studies/api/get-point-draft.ts';
 import { SaveBar } from '../../features/setups/components/save-bar.tsx';
 import { ArchiveButton, GroupingControl, SetupNameHeading } from '../../features/setups/components/setup-facts.tsx';
 import { LoadSetupFileButton } from '../../features/setups/components/setup-file-buttons.tsx';
@@ -38,10 +41,26 @@ export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
   const setup = useQuery(setupQueryOptions(workspace.id, setupId));
+  const [params] = useSearchParams();
+  const studyId = params.get('study');
+  const point = Number(params.get('point'));
+  const fromStudy = studyId !== null && Number.isInteger(point) && point >= 0 && workspace.can('engineer');
+  const pointDraft = usePointDraft(workspace.id, studyId ?? '', point, fromStudy);
+  if (fromStudy && pointDraft.isPending) return <Loading what="the study point" />;
   return (
-    <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
-      {(detail) => <Bench key={detail.id} detail={detail} />}
-    </QueryGuard>
+    <>
+      {fromStudy && pointDraft.isError && (
+        <Notice tone="danger" className="mb-4" title="The study point did not open">
+          {pointDraft.error.message}
+        </Notice>
+      )}
+      <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
+        {(detail) => {
+          const studyDraft = fromStudy && pointDraft.data?.setupId === detail.id ? pointDraft.data : undefined;
+          return <Bench key={`${detail.id}:${studyId ?? ''}:${studyDraft ? point : ''}`} detail={detail} studyDraft={studyDraft} studyId={studyId ?? undefined} />;
+        }}
+      </QueryGuard>
+    </>
   );
 }
 
@@ -49,18 +68,42 @@ export function CornerBenchRoute() {
 const parts = ['bench', 'dyno', 'revisions', 'links'] as const;
 type Part = (typeof parts)[number];
 
-function Bench({ detail }: { detail: SetupDetail }) {
+function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraft?: StudyPointDraft; studyId?: string }) {
   const workspace = useWorkspace();
   const canWrite = workspace.can('engineer') && !detail.archivedAt;
   const vehicles = useVehicles(workspace.id).data?.vehicles.map((v) => ({ id: v.id, name: v.name })) ?? [];
   const draft = useSetupDraft(detail.revision);
   const save = useSaveRevision(workspace.id, detail.id);
   const toast = useToast();
-  const [saveError, setSaveError] = useState('');
-  const [scenario, setScenario] = useState(defaultScenario);
+  const [saveError, setSaveError] = useState<ReactNode>(null);
   const [params, setParams] = useSearchParams();
   const part = parts.find((p) => p === params.get('part')) ?? 'bench';
-  const setPart = (next: Part) => setParams(next === 'bench' ? {} : { part: next }, { replace: true });
+  // only `part` changes: a study point's own parameters stay until it is saved
+  const setPart = (next: Part) =>
+    setParams(
+      (prev) => {
+        const out = new URLSearchParams(prev);
+        if (next === 'bench') out.delete('part');
+        else out.set('part', next);
+        return out;
+      },
+      { replace: true },
+    );
+  const navigate = useNavigate();
+  /** Opens the revisions tab at one revision, with its anchor in the address (the panel stays mounted, so the row is there to scroll to). */
+  const showRevision = (n: number) => {
+    const next = new URLSearchParams(params);
+    next.set('part', 'revisions');
+    navigate({ search: `?${next}`, hash: revisionAnchor(n) }, { replace: true });
+    requestAnimationFrame(() => document.getElementById(revisionAnchor(n))?.scrollIntoView({ block: 'center' }));
+  };
+
+  // A study point arrives as unsaved changes on top of the latest revision; nothing is stored until the engineer saves.
+  const { load } = draft;
+  useEffect(() => {
+    if (studyDraft && canWrite) load(studyDraft.setup);
+  }, [studyDraft, canWrite, load]);
+  const [scenario, setScenario] = useState(defaultScenario);
 
   // The panels on the right follow the draft; while a field is wrong they keep the last valid state.
   const lastValid = useRef<Setup>(detail.revision.document);
@@ -73,17 +116,38 @@ function Bench({ detail }: { detail: SetupDetail }) {
   }, [canWrite, draft.values.damper, shown.damper]);
 
   const onSave = (setup: Setup, message: string) => {
-    setSaveError('');
+    setSaveError(null);
     save.mutate(
       { setup, message, basedOn: draft.baseRevision },
       {
         onSuccess: (d) => {
           draft.resetTo(d.revision);
+          // A reload must not bring the saved study point back as a fresh draft.
+          if (studyDraft) setParams({}, { replace: true });
           toast.show(`Saved as revision ${d.latestRevision}.`);
         },
         onError: (error) => {
           for (const f of error.fields) if (f.path.startsWith('setup.')) draft.form.setError(f.path.slice(6) as never, { type: 'server', message: f.message });
-          setSaveError(error.message);
+          const see = error.see;
+          setSaveError(
+            see?.kind === 'setup_revision' && see.setupId === detail.id ? (
+              <>
+                {error.message}{' '}
+                <a
+                  className="font-semibold underline"
+                  href={`#${revisionAnchor(see.number)}`}
+                  onClick={(e) => {
+                    e.preventDefault();
+                    showRevision(see.number);
+                  }}
+                >
+                  See revision {see.number}
+                </a>
+              </>
+            ) : (
+              error.message
+            ),
+          );
         },
       },
     );
@@ -126,6 +190,30 @@ function Bench({ detail }: { detail: SetupDetail }) {
         </Notice>
       )}
 
+      {studyDraft && canWrite && (
+        <Notice className="mb-4" title="A study point, not saved yet">
+          The form holds point {studyDraft.pointLabel} from{' '}
+          <Link to={`/w/${workspace.id}/studies/${studyId}`} className="text-accent underline">
+            the study
+          </Link>
+          , built on revision <span className="figures">{studyDraft.baseRevisionNumber}</span>
+          {studyDraft.baseRevisionNumber !== detail.latestRevision && (
+            <>
+              {' '}
+              (the latest is revision <span className="figures">{detail.latestRevision}</span>: every value comes from revision{' '}
+              <span className="figures">{studyDraft.baseRevisionNumber}</span>, so check what changed since)
+            </>
+          )}
+          .{' '}
+          {draft.isDirty ? (
+            'Review it, run it, and save it as a revision when you are sure; or discard the changes.'
+          ) : (
+            <strong>
+              Revision {detail.latestRevision}, the latest, already holds exactly this point: there is nothing to save.
+            </strong>
+          )}
+        </Notice>
+      )}
       {/* The bench and the dyno fit each save a revision of their own: they get separate tabs, each
           with its button beside what it saves. Tabs also keep each view a screen or two long. */}
       <Tabs
@@ -144,7 +232,14 @@ function Bench({ detail }: { detail: SetupDetail }) {
                   {canWrite ? (
                     <>
                       <div className="sticky top-0 z-10 -mx-1 mb-3 bg-paper px-1 pt-1 pb-2">
-                        <SaveBar draft={draft} nextNumber={detail.latestRevision + 1} saving={save.isPending} error={saveError} onSave={onSave} />
+                        <SaveBar
+                          draft={draft}
+                          nextNumber={detail.latestRevision + 1}
+                          saving={save.isPending}
+                          error={saveError}
+                          initialMessage={studyDraft?.message}
+                          onSave={onSave}
+                        />
                       </div>
                       <SetupForm form={draft.form} />
                     </>
@@ -201,6 +296,7 @@ function Bench({ detail }: { detail: SetupDetail }) {
             key: 'revisions',
             label: 'Revisions',
             count: detail.latestRevision,
+            keepMounted: true,
             panel: <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.hasChanges} onRestored={(d) => draft.resetTo(d.revision)} />,
           },
           {
