@@ -69,6 +69,13 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
       {files.length > 0 && (
         <div>
           <p className="mb-1 text-xs text-ink-faint">Each file is read in its own units and signs; a unit written in a column header wins over the choice here.</p>
+          <div aria-hidden="true" className="mb-1 hidden grid-cols-[minmax(8rem,1fr)_9rem_11rem_11rem_11rem] gap-2 text-xs text-ink-faint md:grid">
+            <span>File</span>
+            <span>Damper label</span>
+            <span>Speed unit</span>
+            <span>Force unit</span>
+            <span>Sign convention</span>
+          </div>
           <ul className="grid gap-2" aria-label="Dampers to check">
             {files.map((f, i) => (
               <li key={`${f.file.name}-${i}`} className="grid grid-cols-2 items-center gap-2 md:grid-cols-[minmax(8rem,1fr)_9rem_11rem_11rem_11rem]">
@@ -77,20 +84,20 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
                 </span>
                 <Input aria-label={`Damper label for ${f.file.name}`} value={f.label} maxLength={120} className="h-8 text-sm" onChange={(e) => setFile(i, { label: e.target.value })} />
                 <Select aria-label={`Speed unit of ${f.file.name}`} value={f.velocityUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { velocityUnit: e.target.value as FileReading['velocityUnit'] })}>
-                  <option value="">speed: header, else m/s</option>
+                  <option value="">as headed, else m/s</option>
                   <option value="m/s">m/s</option>
                   <option value="mm/s">mm/s</option>
                   <option value="in/s">in/s</option>
                 </Select>
                 <Select aria-label={`Force unit of ${f.file.name}`} value={f.forceUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { forceUnit: e.target.value as FileReading['forceUnit'] })}>
-                  <option value="">force: header, else N</option>
+                  <option value="">as headed, else N</option>
                   <option value="N">N</option>
                   <option value="kN">kN</option>
                   <option value="lbf">lbf</option>
                 </Select>
                 <Select aria-label={`Sign convention of ${f.file.name}`} value={f.sign} className="h-8 text-sm" onChange={(e) => setFile(i, { sign: e.target.value as FileReading['sign'] })}>
-                  <option value="">compression positive</option>
-                  <option value="extension-positive">extension positive</option>
+                  <option value="">compression +</option>
+                  <option value="extension-positive">extension +</option>
                 </Select>
               </li>
             ))}
