@@ -69,7 +69,7 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
       {files.length > 0 && (
         <div>
           <p className="mb-1 text-xs text-ink-faint">Each file is read in its own units and signs; a unit written in a column header wins over the choice here.</p>
-          <div aria-hidden="true" className="mb-1 hidden grid-cols-[minmax(8rem,1fr)_9rem_11rem_11rem_11rem] gap-2 text-xs text-ink-faint md:grid">
+          <div aria-hidden="true" className="mb-1 hidden grid-cols-[minmax(8rem,1fr)_9rem_12rem_12rem_9rem] gap-2 text-xs text-ink-faint md:grid">
             <span>File</span>
             <span>Damper label</span>
             <span>Speed unit</span>
@@ -78,7 +78,7 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
           </div>
           <ul className="grid gap-2" aria-label="Dampers to check">
             {files.map((f, i) => (
-              <li key={`${f.file.name}-${i}`} className="grid grid-cols-2 items-center gap-2 md:grid-cols-[minmax(8rem,1fr)_9rem_11rem_11rem_11rem]">
+              <li key={`${f.file.name}-${i}`} className="grid grid-cols-2 items-center gap-2 md:grid-cols-[minmax(8rem,1fr)_9rem_12rem_12rem_9rem]">
                 <span className="col-span-2 min-w-0 truncate text-sm text-ink-soft md:col-span-1" title={f.file.name}>
                   {f.file.name}
                 </span>
