@@ -43,7 +43,7 @@ export function RunDetailRoute() {
               }
               actions={
                 <>
-                  {view?.ok && <ExportButtons view={view.view} name={run.name} />}
+                  {view?.ok && <ExportButtons view={view.view} request={run.request} revision={run.revisionNumber} />}
                   <ButtonLink to={runAgain} size="sm">
                     Run again
                   </ButtonLink>

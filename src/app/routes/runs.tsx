@@ -62,7 +62,7 @@ export function RunsRoute() {
               </p>
             </div>
             <div className="flex flex-wrap gap-2">
-              <ExportButtons view={state.view} name={runTitle(state.view, target.revisionNumber)} />
+              <ExportButtons view={state.view} request={state.request} revision={target.revisionNumber} />
             </div>
           </div>
           {target.revisionNumber < target.latestRevision && (
