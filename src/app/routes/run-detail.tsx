@@ -6,7 +6,9 @@ import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { useDeleteRun } from '../../features/runs/api/delete-run.ts';
 import { useSavedRun } from '../../features/runs/api/get-run.ts';
-import { ExportButtons, runTitle } from '../../features/runs/components/run-actions.tsx';
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
+import { ExportButtons, runSubject, runTitle } from '../../features/runs/components/run-actions.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
 import { viewOfSaved } from '../../features/runs/model/run-view.ts';
 import { formatDateTime } from '../../lib/format.ts';
@@ -75,7 +77,9 @@ export function RunDetailRoute() {
                     Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run.
                   </p>
                 )}
-                <RunDashboard view={view.view} />
+                <ChartExportProvider value={{ stem: exportStem(runSubject(view.view, run.revisionNumber)), context: `${runTitle(view.view, run.revisionNumber)} · run saved ${formatDateTime(run.createdAt)}` }}>
+                  <RunDashboard view={view.view} />
+                </ChartExportProvider>
               </>
             )}
           </>

@@ -153,6 +153,7 @@ export function StudyDetailRoute() {
                   roadNames={roadNames}
                   baselineIndex={s.baseline?.pointIndex ?? null}
                   running={state.phase === 'running'}
+                  base={s.base.setupName ? { setupName: s.base.setupName, revisionNumber: s.base.revisionNumber } : undefined}
                   pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
                 />
               ) : (
