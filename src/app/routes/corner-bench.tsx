@@ -1,3 +1,5 @@
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
@@ -83,7 +85,7 @@ function Bench({ detail }: { detail: SetupDetail }) {
 
   const r = detail.revision;
   return (
-    <>
+    <ChartExportProvider value={{ stem: exportStem({ setupName: detail.name, revision: detail.latestRevision }), context: `${detail.name} r${detail.latestRevision}${draft.isDirty ? ', with unsaved edits' : ''}` }}>
       <PageHeader
         eyebrow={`Corner setup · revision ${detail.latestRevision}`}
         title={<SetupNameHeading workspaceId={workspace.id} detail={detail} canWrite={canWrite} />}
@@ -176,6 +178,6 @@ function Bench({ detail }: { detail: SetupDetail }) {
       </Section>
       <ResultsCaution />
       <UnsavedGuard when={canWrite && draft.isDirty && !save.isPending} />
-    </>
+    </ChartExportProvider>
   );
 }
