@@ -1,11 +1,12 @@
 import { readFileSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import { join } from 'node:path';
+import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { StudiesResponse } from '../../shared/schemas/study-record.ts';
 import { RunList } from '../../shared/schemas/run-record.ts';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { TargetSheetsResponse } from '../../shared/schemas/target-sheet.ts';
-import { apiWrite, demoUser, launchBrowser, newSession, screenshot, type Session, signIn } from './helpers/browser.ts';
+import { apiWrite, demoUser, RESULTS_DIR, launchBrowser, newSession, screenshot, type Session, signIn } from './helpers/browser.ts';
 
 /**
  * Exports and the smaller faults around them: full-rate trace CSVs of a saved run with a name
@@ -46,6 +47,13 @@ async function pictures(page: Page, name: string) {
   }
 }
 
+/** Clicks the "Save PNG" of `host`, keeps the image in test-results/ to look at, answers its file name. */
+async function savePng(page: Page, host: Locator, keepAs: string): Promise<string> {
+  const [download] = await Promise.all([page.waitForEvent('download'), host.getByRole('button', { name: 'Save PNG' }).click()]);
+  await download.saveAs(join(RESULTS_DIR, keepAs));
+  return download.suggestedFilename();
+}
+
 describe('exports', () => {
   it('exports a saved run’s traces at every sample, evenly spaced, with the rate in the header and a name that says which run', async () => {
     const { page, context, workspaceId } = await signedIn('engineer');
@@ -65,6 +73,10 @@ describe('exports', () => {
     expect(times.length).toBeGreaterThan(1000);
     for (let i = 1; i < times.length; i++) expect(times[i] - times[i - 1]).toBeCloseTo(0.001, 9);
     expect(text).not.toMatch(/\d\.\d{13,}/);
+
+    // a saved chart image is named for the run too (its title, context line and legend: compose-image.test.ts)
+    const png = await savePng(page, page.getByRole('figure', { name: 'Body acceleration', exact: true }), 'exports-run-body-accel.png');
+    expect(png).toMatch(/^[A-Za-z0-9_-]+-r\d+_[A-Za-z0-9-]+_\d+kmh_time-bodyaccel\.png$/);
     await pictures(page, 'exports-saved-run');
     await context.close();
   }, LIMIT);
@@ -153,6 +165,8 @@ describe('smaller faults', () => {
     expect(await fresh.getByLabel('Share link').inputValue()).toMatch(/\/shared\/[A-Za-z0-9_-]{43,}$/);
     expect(await fresh.getByText(/expires on/).count()).toBe(1);
     await pictures(page, 'study-share-link');
+    const map = await savePng(page, page.getByRole('img', { name: /over .* and .*; hatched cells break a limit/ }).locator('..'), 'exports-study-map.png');
+    expect(map).toMatch(/^[a-z0-9-]+_[a-z0-9-]+-r\d+_[A-Za-z0-9_-]+_map-[a-z0-9-]+\.png$/);
 
     // the setup's share panel uses the same control
     const setups = SetupsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups`)).json()).setups;

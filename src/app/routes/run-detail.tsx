@@ -74,7 +74,7 @@ export function RunDetailRoute() {
               <>
                 {view.view.thinned === 'bucket-extremes' && (
                   <p className="mb-3 text-xs text-ink-faint">
-                    Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run.
+                    Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run; Traces CSV runs the stored inputs again in this browser to give every sample, evenly spaced.
                   </p>
                 )}
                 <ChartExportProvider value={{ stem: exportStem(runSubject(view.view, run.revisionNumber)), context: `${runTitle(view.view, run.revisionNumber)} · run saved ${formatDateTime(run.createdAt)}` }}>
