@@ -1,18 +1,18 @@
 import { ChartExportProvider } from '../../components/charts/export-context.tsx';
 import { exportStem } from '../../lib/export-name.ts';
 import { useQuery } from '@tanstack/react-query';
-import { useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
 import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
-import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
@@ -33,6 +33,9 @@ import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+// below the fold, with the CSV parser: loads after the bench itself so the first view stays light
+const DynoPanel = lazy(async () => ({ default: (await import('../../features/dyno/components/dyno-panel.tsx')).DynoPanel }));
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
@@ -161,14 +164,16 @@ function Bench({ detail }: { detail: SetupDetail }) {
       </div>
 
       <Section title="Dyno files" className="mt-8">
-        <DynoPanel
-          workspaceId={workspace.id}
-          setupId={detail.id}
-          latestRevision={detail.latestRevision}
-          readOnly={!canWrite}
-          gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
-          onApplied={(n) => toast.show(`Saved the dyno fit as revision ${n}.`)}
-        />
+        <Suspense fallback={<Loading what="dyno files" />}>
+          <DynoPanel
+            workspaceId={workspace.id}
+            setupId={detail.id}
+            latestRevision={detail.latestRevision}
+            readOnly={!canWrite}
+            gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
+            onApplied={(n) => toast.show(`Saved the dyno fit as revision ${n}.`)}
+          />
+        </Suspense>
       </Section>
       <Section title="Revisions" className="mt-8">
         <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.isDirty} onRestored={(d) => draft.resetTo(d.revision)} />
