@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { StudiesResponse } from '../../shared/schemas/study-record.ts';
+import { RoadsResponse } from '../../shared/schemas/road-record.ts';
 import { RunList } from '../../shared/schemas/run-record.ts';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { TargetSheetsResponse } from '../../shared/schemas/target-sheet.ts';
@@ -97,6 +98,40 @@ describe('exports', () => {
     expect(await page.getByRole('radio', { name: /Compare (from|to) revision/ }).count()).toBe(0);
     await page.getByRole('heading', { name: 'Changes between revisions' }).scrollIntoViewIfNeeded();
     await pictures(page, 'exports-one-revision');
+    await context.close();
+  }, LIMIT);
+});
+
+describe('export controls on the other pages that name their run', () => {
+  it('a fresh run exports figures and traces at its own rate, named for setup, revision, road and speed; compare and road pages look right', async () => {
+    const { page, context, workspaceId } = await signedIn('engineer');
+    page.setDefaultTimeout(60_000);
+    await page.goto(`/w/${workspaceId}/runs`);
+    const form = page.getByRole('form', { name: 'Run a setup' });
+    await form.getByRole('button', { name: 'Run', exact: true }).and(page.locator(':enabled')).waitFor();
+    await page.getByLabel('Duration, s').fill('4');
+    await form.getByRole('button', { name: 'Run', exact: true }).click();
+    await page.getByTestId('run-dashboard').waitFor({ timeout: 90_000 });
+    expect(await page.getByLabel('Trace sample rate').inputValue()).toBe('500');
+    const [figures] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Figures CSV' }).click()]);
+    expect(figures.suggestedFilename()).toMatch(/^[a-z0-9-]+-r\d+_iso-C_60kmh_figures\.csv$/);
+    const text = readFileSync(await figures.path(), 'utf8');
+    expect(text).not.toMatch(/\d\.\d{13,}/);
+    await pictures(page, 'exports-fresh-run');
+
+    const setups = SetupsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups`)).json()).setups.slice(0, 2);
+    await page.goto(`/w/${workspaceId}/compare?${setups.map((x) => `s=${x.id}:${x.latestRevision}`).join('&')}`);
+    await page.getByLabel('Duration, s').fill('4');
+    await page.getByRole('button', { name: 'Compare', exact: true }).click();
+    await page.getByTestId('comparison').waitFor({ timeout: 90_000 });
+    const [compared] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Figures CSV' }).click()]);
+    expect(compared.suggestedFilename()).toMatch(/^compare-[a-z0-9-]+_[A-Za-z0-9-]+_\d+kmh_figures\.csv$/);
+    await pictures(page, 'exports-compare');
+
+    const roads = RoadsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/roads`)).json()).roads;
+    await page.goto(`/w/${workspaceId}/roads/${roads[0].id}`);
+    await page.getByRole('button', { name: 'Save PNG' }).first().waitFor();
+    await pictures(page, 'exports-road');
     await context.close();
   }, LIMIT);
 });
