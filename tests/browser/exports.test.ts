@@ -69,8 +69,9 @@ describe('exports', () => {
     const text = readFileSync(await download.path(), 'utf8');
     const lines = text.trim().split('\n');
     expect(lines[1]).toBe('# sample rate 1000 Hz: every computed sample, evenly spaced 0.001 s apart');
-    expect(lines[2].startsWith('time_s,')).toBe(true);
-    const times = lines.slice(3).map((l) => Number(l.split(',')[0]));
+    expect(lines[2]).toMatch(/^# computed again from the stored inputs: Wk-weighted body acceleration [\d.]+ m\/s² \(stored run [\d.]+ m\/s², /);
+    expect(lines[3].startsWith('time_s,')).toBe(true);
+    const times = lines.slice(4).map((l) => Number(l.split(',')[0]));
     expect(times.length).toBeGreaterThan(1000);
     for (let i = 1; i < times.length; i++) expect(times[i] - times[i - 1]).toBeCloseTo(0.001, 9);
     expect(text).not.toMatch(/\d\.\d{13,}/);

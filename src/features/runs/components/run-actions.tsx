@@ -11,7 +11,7 @@ import { useSaveRun } from '../api/save-run.ts';
 import { downloadText } from '../../../lib/download.ts';
 import { exportFileName, exportStem, type ExportSubject } from '../../../lib/export-name.ts';
 import { figuresCsv, tracesCsv } from '../model/export-csv.ts';
-import { fullRateTrace, TRACE_RATES } from '../model/full-rate-trace.ts';
+import { fullRateTrace, rerunNote, TRACE_RATES } from '../model/full-rate-trace.ts';
 import type { RunView } from '../model/run-view.ts';
 
 /** "Pipit front r3 · class C, seed 7 · 60 km/h · 20 s". */
@@ -46,7 +46,7 @@ export function ExportButtons({ view, request, revision }: { view: RunView; requ
     setBusy(true);
     try {
       const got = await fullRateTrace(view, request, rate);
-      if (got.ok) downloadText(tracesCsv(got.trace, about), exportFileName(stem, `traces ${rate}Hz`, 'csv'));
+      if (got.ok) downloadText(tracesCsv(got.trace, about, got.rerun ? [rerunNote(view.result, got.rerun)] : []), exportFileName(stem, `traces ${rate}Hz`, 'csv'));
       else toast.show(`The traces could not be computed again: ${got.reason}`, 'danger');
     } finally {
       setBusy(false);

@@ -7,6 +7,7 @@ import type { SetupInput } from '../../../../shared/schemas/setup.ts';
 import { simulateJob } from '../../../../shared/runs/simulate-job.ts';
 import { fromStoredTraces, toStoredTraces } from '../../../../shared/runs/stored-run.ts';
 import { tracesCsv } from './export-csv.ts';
+import { rerunNote } from './full-rate-trace.ts';
 
 const example = <T>(name: string): T => JSON.parse(readFileSync(new URL(`../../../../examples/${name}`, import.meta.url), 'utf8'));
 
@@ -49,5 +50,6 @@ describe('full-rate trace export', () => {
     const again = simulateJob(request, { spectra: false, response: false });
     if (!again.ok) throw new Error(again.reason);
     expect(again.result.metrics).toEqual(first.result.metrics);
+    expect(rerunNote(first.result, again.result)).toMatch(/^computed again from the stored inputs: .* m\/s² \(stored run .* m\/s², the same\)$/);
   });
 });

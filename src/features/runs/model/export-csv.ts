@@ -37,9 +37,9 @@ export function figuresCsv(runs: NamedResult[]): string {
 /**
  * Time histories in SI, one row per computed sample: evenly spaced at the run's output rate,
  * which the header states (`# sample rate 1000 Hz …`) so an outside FFT can take it as it is.
- * `about` names the run (setup, revision, road, speed) on the first `#` line.
+ * `about` names the run (setup, revision, road, speed) on the first `#` line; `notes` follow as `#` lines.
  */
-export function tracesCsv(trace: TraceColumns, about: string): string {
+export function tracesCsv(trace: TraceColumns, about: string, notes: readonly string[] = []): string {
   const rate = csvNumber(1 / trace.dt) ?? 0;
   const header = ['time_s', 'body_accel_m_s2', 'travel_m', 'tyre_load_N', 'damper_velocity_m_s', 'damper_force_N', 'road_m'];
   const f = (x: number) => csvNumber(x, FIGURE_DIGITS);
@@ -47,6 +47,6 @@ export function tracesCsv(trace: TraceColumns, about: string): string {
   for (let i = 0; i < trace.bodyAccel.length; i++) {
     rows.push([i * trace.dt, f(trace.bodyAccel[i]), f(trace.travel[i]), f(trace.tyreLoad[i]), f(trace.damperVelocity[i]), f(trace.damperForce[i]), f(trace.road[i])]);
   }
-  const head = [`# ${commentText(about)}`, `# sample rate ${rate} Hz: every computed sample, evenly spaced ${csvNumber(trace.dt)} s apart`];
+  const head = [`# ${commentText(about)}`, `# sample rate ${rate} Hz: every computed sample, evenly spaced ${csvNumber(trace.dt)} s apart`, ...notes.map((n) => `# ${commentText(n)}`)];
   return `${head.join('\n')}\n${writeCsv([header, ...rows])}\n`;
 }
