@@ -1,5 +1,7 @@
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
 import { useQuery } from '@tanstack/react-query';
-import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
+import { lazy, type ReactNode, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import type { StudyPointDraft } from '../../../shared/schemas/study-record.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
@@ -13,7 +15,6 @@ import { Tabs } from '../../components/ui/tabs.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
-import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
@@ -35,6 +36,9 @@ import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+// below the fold, with the CSV parser: loads after the bench itself so the first view stays light
+const DynoPanel = lazy(async () => ({ default: (await import('../../features/dyno/components/dyno-panel.tsx')).DynoPanel }));
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
@@ -155,7 +159,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
 
   const r = detail.revision;
   return (
-    <>
+    <ChartExportProvider value={{ stem: exportStem({ setupName: detail.name, revision: detail.latestRevision }), context: `${detail.name} r${detail.latestRevision}${draft.isDirty ? ', with unsaved edits' : ''}` }}>
       <PageHeader
         eyebrow={`Corner setup · revision ${detail.latestRevision}`}
         title={<SetupNameHeading workspaceId={workspace.id} detail={detail} canWrite={canWrite} />}
@@ -281,6 +285,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
             key: 'dyno',
             label: 'Dyno fit',
             panel: (
+              <Suspense fallback={<Loading what="dyno files" />}>
               <DynoPanel
                 workspaceId={workspace.id}
                 setupId={detail.id}
@@ -290,6 +295,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
                 gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
                 onApplied={(n) => toast.show(`Saved the fitted dyno curve as revision ${n}.`)}
               />
+              </Suspense>
             ),
           },
           {
@@ -308,6 +314,6 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
       />
       <ResultsCaution />
       <UnsavedGuard when={canWrite && draft.hasChanges && !save.isPending} invalid={draft.tableProblems.length > 0 || (draft.isDirty && !draft.valid)} />
-    </>
+    </ChartExportProvider>
   );
 }
