@@ -110,5 +110,14 @@ export const Metrics = z.object({
   damperPowerMean: z.number(),
   /** Energy dissipated in the damper over the analysed time, J. */
   damperEnergy: z.number(),
+  /**
+   * The damper's linear equivalent on this road, N·s/m at the damper: ΣF·v / Σv², the viscous
+   * coefficient that dissipates the same energy over the same piston motion (energy-equivalent,
+   * statistical linearisation). It depends on the road and speed; the modal figures use the
+   * road-free least-squares fit instead. Absent on runs saved before it was computed.
+   */
+  damperEquivalentOnRoad: z.number().nonnegative().optional(),
+  /** Mean travel over the analysed time, m (+ compression): the shift an asymmetric damper makes. */
+  travelMean: z.number().optional(),
 });
 export type Metrics = z.infer<typeof Metrics>;

@@ -7,6 +7,7 @@ import { integrateCorner } from './integrate.ts';
 import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE } from './integration-options.ts';
 import { modalAnalysis } from './linear/modal.ts';
 import { computeMetrics, firstSample } from './metrics/compute-metrics.ts';
+import { roadDampingFigures } from './metrics/road-damping.ts';
 import { strokeAndTableFigures } from './metrics/stroke-limits.ts';
 import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
 import { buildRoad } from './roads/index.ts';
@@ -77,6 +78,7 @@ export function runCorner(input: RunRequestInput): RunOutcome {
       histogramBins: req.histogramBins,
     }),
     ...strokeAndTableFigures(trace, firstSample(trace, settleTime), setup),
+    ...roadDampingFigures(trace, firstSample(trace, settleTime)),
   };
 
   const eq: EquivalentDamping =

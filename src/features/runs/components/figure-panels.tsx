@@ -65,9 +65,14 @@ export function FigurePanels({ result, setup, roadName }: { result: RunResult; s
             { name: 'compShare', label: 'Moving in compression', value: bands.compression, unit: 'percent' },
             { name: 'power', label: 'Mean power dissipated', value: m.damperPowerMean, unit: 'W' },
             { name: 'energy', label: 'Energy dissipated', value: m.damperEnergy, unit: 'J' },
+            { name: 'eqRoad', label: 'Equivalent damping on this road (ΣF·v / Σv²)', value: m.damperEquivalentOnRoad, unit: 'Nspm' },
+            { name: 'eqFit', label: 'Equivalent damping the modes use (least squares, 0–0.3 m/s)', value: result.modal.equivalentDamping.wheelDamping / setup.motionRatio ** 2, unit: 'Nspm' },
+            { name: 'travelMean', label: 'Mean travel (shift from static, + compression)', value: m.travelMean, unit: 'mm' },
           ]}
         />
-        <p className="mt-1.5 text-2xs leading-snug text-ink-faint">Band shares are of time, on |piston velocity|. Figures {analysed}.</p>
+        <p className="mt-1.5 text-2xs leading-snug text-ink-faint">
+          Band shares are of time, on |piston velocity|. Equivalent damping at the damper: the first depends on this road and speed, the second is the road-free fit the modes and linear figures use. Figures {analysed}.
+        </p>
       </FigurePanel>
 
       <FigurePanel title="Modes of the linearised corner">
