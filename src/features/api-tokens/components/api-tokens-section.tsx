@@ -109,7 +109,7 @@ export function ApiTokensSection({ memberships }: { memberships: Me['memberships
           <Field label="Name" error={errors.name} className="w-56">
             <Input value={name} maxLength={80} placeholder="e.g. nightly sweep" onChange={(e) => setName(e.target.value)} />
           </Field>
-          <Field label="Workspace" className="w-52">
+          <Field label="Workspace" className="w-64">
             <Select value={workspaceId} onChange={(e) => setWorkspaceId(e.target.value)}>
               {memberships.map((m) => (
                 <option key={m.workspaceId} value={m.workspaceId}>
