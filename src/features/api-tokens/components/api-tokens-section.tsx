@@ -28,7 +28,7 @@ function FreshToken({ created, onDone }: { created: CreatedApiToken; onDone: () 
         New {created.apiToken.scope} token “{created.apiToken.name}” for {created.apiToken.workspaceName}
       </p>
       <div className="mt-1.5 flex gap-2">
-        <input aria-label="API token" readOnly value={created.token} onFocus={(e) => e.target.select()} className="figures h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-xs" />
+        <input aria-label="New API token" readOnly value={created.token} onFocus={(e) => e.target.select()} className="figures h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-xs" />
         <Button size="sm" className="h-8" onClick={() => void copyToClipboard(created.token).then(setCopied)}>
           {copied ? 'Copied' : 'Copy token'}
         </Button>
