@@ -35,8 +35,8 @@ function FreshToken({ created, onDone }: { created: CreatedApiToken; onDone: () 
       </div>
       <p className="mt-1.5 text-xs text-ink-soft">
         Copy it now: it is shown only this once. Keep it secret, like a password — anyone holding it acts as you in this workspace until {formatDate(created.apiToken.expiresAt)} or until you
-        revoke it. Send it as <code className="figures">Authorization: Bearer …</code>.{' '}
-        <button type="button" className="text-accent underline" onClick={onDone}>
+        revoke it. Scripts send it in the header <code className="figures">Authorization: Bearer &lt;token&gt;</code>{' '}
+        · <button type="button" className="text-accent underline" onClick={onDone}>
           Done
         </button>
       </p>
