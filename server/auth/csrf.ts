@@ -64,6 +64,9 @@ function sameOrigin(req: Request, publicUrl: string): boolean {
 export function requireCsrf(deps: { secret: Uint8Array; publicUrl: string }): RequestHandler {
   return (req, res, next) => {
     if (safeMethods.has(req.method)) return next();
+    // A bearer-token request carries no cookie (loadSession refuses one beside it), and a page on
+    // another site cannot add an Authorization header without a CORS grant the server never gives.
+    if (req.apiToken) return next();
     if (!sameOrigin(req, deps.publicUrl)) return sendError(res, 'csrf', 'Writes are accepted only from Ridewright’s own pages.');
     const cookie: unknown = req.cookies?.[CSRF_COOKIE];
     const header = req.get(CSRF_HEADER);

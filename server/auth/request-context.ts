@@ -1,4 +1,5 @@
 import type { Request } from 'express';
+import type { ApiTokenScope } from '../../shared/schemas/api-token.ts';
 import type { Role } from '../../shared/schemas/workspace.ts';
 
 /** The signed-in caller, set by `requireUser`. */
@@ -9,6 +10,13 @@ export interface SessionUser {
   sessionVersion: number;
   /** The address was proved by a mailed link (or a mailed invitation). */
   emailVerified: boolean;
+}
+
+/** The personal API token a request was made with (`Authorization: Bearer rw_pat_…`), set by `loadSession`. */
+export interface ApiTokenContext {
+  id: string;
+  workspaceId: string;
+  scope: ApiTokenScope;
 }
 
 /** The caller's membership of the workspace in the path, set by `requireMember`. */
@@ -26,6 +34,8 @@ declare global {
       workspace?: WorkspaceContext;
       /** Nonce of the CSRF cookie the caller's session was issued beside. */
       sessionCsrf?: string;
+      /** Set when the caller came with a personal API token instead of a session. */
+      apiToken?: ApiTokenContext;
     }
   }
 }

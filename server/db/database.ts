@@ -4,6 +4,7 @@ import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'kysely';
 import { isPostgresUrl, openPostgres } from './postgres.ts';
 import { LRUCache } from 'lru-cache';
+import type { ApiTokenTable } from '../api-tokens/api-tokens.tables.ts';
 import type { AuditLogTable } from '../audit/audit.tables.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
 import type { RoadTable, RoadVersionTable } from '../roads/roads.tables.ts';
@@ -49,6 +50,7 @@ export interface Database {
   target_sheet_event: TargetSheetEventTable;
   dyno_check: DynoCheckTable;
   throttle_event: ThrottleEventTable;
+  api_token: ApiTokenTable;
 }
 
 export type Db = Kysely<Database>;

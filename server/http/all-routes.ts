@@ -1,4 +1,5 @@
 import type { AppDeps } from '../deps.ts';
+import { apiTokenRoutes } from '../api-tokens/api-tokens.routes.ts';
 import { auditRoutes } from '../audit/audit.routes.ts';
 import { authRoutes } from '../accounts/auth.routes.ts';
 import { configRoutes } from './config.routes.ts';
@@ -21,7 +22,7 @@ import { workspaceRoutes } from '../workspaces/workspaces.routes.ts';
  * Every route module of the API. A feature adds its module here (one line); the app mounts
  * whatever is listed, and tests/api/route-matrix.test.ts fails until the new routes have matrix entries.
  */
-export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes];
+export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes, apiTokenRoutes];
 
 export function allRoutes(deps: AppDeps): RouteDef[] {
   return routeModules.flatMap((m) => m(deps));

@@ -5,6 +5,7 @@ import { ensureCsrfCookie } from '../auth/csrf.ts';
 import { requireUser } from '../auth/require-user.ts';
 import type { AppDeps } from '../deps.ts';
 import { sendError } from '../core/errors.ts';
+import { apiTokenGate } from '../api-tokens/index.ts';
 import { heavyJobLimit, SharedRateLimitStore } from '../limits/index.ts';
 import { requireMember, requireRoleAnywhere } from '../workspaces/index.ts';
 
@@ -76,7 +77,7 @@ export function buildApiRouter(routes: RouteDef[], deps: AppDeps): Router {
     const scoped = typeof route.access === 'string' && route.access !== 'public' && route.access !== 'user';
     if (scoped && !route.path.includes(':workspaceId')) throw new Error(`route ${key} declares a role but has no :workspaceId`);
 
-    const chain: RequestHandler[] = [];
+    const chain: RequestHandler[] = [apiTokenGate(scoped)];
     const limit = route.rateLimited ? limiter(deps, key) : null;
     if (limit) chain.push(limit);
     if (route.issuesCsrf) chain.push((req, res, next) => (ensureCsrfCookie(req, res, deps.secret), next()));

@@ -5,6 +5,7 @@ import { useToast } from '../../components/ui/toast.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';
 import { AddressCheckNotice } from '../../features/auth/components/address-check-notice.tsx';
 import { ChangePasswordForm } from '../../features/auth/components/change-password-form.tsx';
+import { ApiTokensSection } from '../../features/api-tokens/components/api-tokens-section.tsx';
 import { PageBody } from '../layouts/app-shell.tsx';
 import { Link } from 'react-router';
 
@@ -35,6 +36,9 @@ export function AccountRoute() {
       </Section>
       <Section title="Password">
         <ChangePasswordForm onChanged={() => toast.show('Password changed. Other browsers have been signed out.')} />
+      </Section>
+      <Section title="API tokens">
+        <ApiTokensSection memberships={me.memberships} />
       </Section>
     </PageBody>
   );

@@ -1,4 +1,5 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
+import { apiTokensEntries } from './api-tokens-entries.ts';
 import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
@@ -17,4 +18,5 @@ export const allEntries: MatrixEntries = {
   ...setupsEntries,
   ...studiesEntries,
   ...targetSheetsEntries,
+  ...apiTokensEntries,
 };
