@@ -8,6 +8,7 @@ import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE } from './integration-options.ts'
 import { modalAnalysis } from './linear/modal.ts';
 import { computeMetrics } from './metrics/compute-metrics.ts';
 import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
+import { eventEndTime } from './roads/event-end.ts';
 import { buildRoad } from './roads/index.ts';
 import type { TraceColumns } from './trace.ts';
 
@@ -73,6 +74,7 @@ export function runCorner(input: RunRequestInput): RunOutcome {
     stroke: setup.stroke,
     velocityBands: req.velocityBands,
     histogramBins: req.histogramBins,
+    eventEnd: eventEndTime(road, speed, setup.tyreFootprint),
   });
 
   const eq: EquivalentDamping =
