@@ -42,12 +42,12 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
             </Td>
             <Td numeric>
               {run.headline.lead === 'event' ? (
-                <span data-comfort-figure="mtvv">
+                <span data-comfort-figure="mtvv" className="whitespace-nowrap">
                   <span className="text-2xs text-ink-faint">MTVV </span>
                   {run.headline.mtvv === undefined ? <span className="text-ink-faint">—</span> : <Figure value={run.headline.mtvv} unit="mps2" label="MTVV" />}
                 </span>
               ) : (
-                <span data-comfort-figure="aw">
+                <span data-comfort-figure="aw" className="whitespace-nowrap">
                   <span className="text-2xs text-ink-faint">aw </span>
                   <Figure value={run.headline.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
                 </span>
