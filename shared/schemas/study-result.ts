@@ -91,7 +91,12 @@ export type StudyCompromise = z.infer<typeof StudyCompromise>;
 export const StudyTradeOff = z.object({
   comfortFigure: StudyFigureKey,
   gripFigure: StudyFigureKey,
-  /** Indices (into `points`) of the non-dominated feasible points, ordered along the comfort axis. */
+  /**
+   * Indices (into `points`) of the non-dominated feasible points, ordered along the comfort axis.
+   * The base setup competes for the front too: a point it beats on both figures is not on it.
+   */
   front: z.array(z.number().int()),
+  /** Whether the base setup is on the front; absent when there is no base (speed swept) or on older summaries. */
+  baseOnFront: z.boolean().optional(),
 });
 export type StudyTradeOff = z.infer<typeof StudyTradeOff>;
