@@ -22,14 +22,14 @@ export const StudyRunOutcome = z.object({
 });
 export type StudyRunOutcome = z.infer<typeof StudyRunOutcome>;
 
-export const studyViolationKinds = ['maxStrokeUsed', 'maxLiftOffFraction', 'minTyreLoad', 'notCheckable', 'runFailed', 'setupInvalid'] as const;
+export const studyViolationKinds = ['maxStrokeUsed', 'maxLiftOffFraction', 'minTyreLoad', 'minStaticSag', 'maxStaticSag', 'notCheckable', 'runFailed', 'setupInvalid'] as const;
 export const StudyViolationKind = z.enum(studyViolationKinds);
 export type StudyViolationKind = z.infer<typeof StudyViolationKind>;
 
 /** Why a point is not feasible. `roadIndex`/`speed` name the run (null when it is the point's setup). */
 export const StudyViolation = z.object({
   kind: StudyViolationKind,
-  /** The limit and the run's value (shares as fractions, loads in N); null when not numeric. */
+  /** The limit and the run's value (shares as fractions, loads in N, sag in m); null when not numeric. */
   limit: z.number().nullable(),
   value: z.number().nullable(),
   roadIndex: z.number().int().nonnegative().nullable(),

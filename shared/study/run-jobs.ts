@@ -106,7 +106,7 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
       const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
       const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
       const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd });
-      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics) } };
+      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state) } };
     },
   };
 }

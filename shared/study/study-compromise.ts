@@ -9,6 +9,8 @@ const kindWords: Record<StudyViolationKind, string> = {
   maxStrokeUsed: 'use too much stroke',
   maxLiftOffFraction: 'lift the wheel off too long',
   minTyreLoad: 'let the tyre load fall too low',
+  minStaticSag: 'sit too high (too little static sag)',
+  maxStaticSag: 'sit too low (too much static sag)',
   notCheckable: 'cannot be checked against the stroke limit (no stroke in the setup)',
   runFailed: 'had a run fail',
   setupInvalid: 'do not make a valid setup',
