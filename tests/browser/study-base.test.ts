@@ -23,20 +23,23 @@ async function engineerPage() {
 }
 
 describe('a study and its base setup', () => {
-  it('the demo study: the base is on the front, its beating the best compromise on both axes is said plainly, and the edge of the grid is named', async () => {
+  it('the demo study: the base is judged on the front’s terms, its beating the best compromise on both axes is said plainly, and the edge of the grid is named', async () => {
     const { page, context, workspaceId } = await engineerPage();
     const studies = StudiesResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/studies`)).json()).studies;
     const demo = studies.find((s) => s.name === 'Pipit front: rebound against spring rate');
     expect(demo).toBeDefined();
     const saved = StudyDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/studies/${demo!.id}`)).json());
-    // The server judged the base on the same terms as the points.
-    expect(saved.results?.tradeOff.baseOnFront).toBe(true);
+    // The demo base (0.925 m/s², 18.5 %) beats the chosen point on both axes but lets the tyre load
+    // dip just under the study's 400 N floor on the town road: the server keeps it off the front.
+    expect(saved.basePoint?.feasible).toBe(false);
+    expect(saved.basePoint?.violations.map((v) => v.kind)).toEqual(['minTyreLoad']);
+    expect(saved.results?.tradeOff.baseOnFront).toBe(false);
 
     await page.goto(`/w/${workspaceId}/studies/${demo!.id}`);
     const best = page.getByRole('region', { name: 'Best compromise' });
     await best.waitFor();
     const note = best.getByTestId('base-beats-best');
-    expect(await note.textContent()).toMatch(/^The base setup beats the best compromise on both axes \(.+\)\. No point of this sweep improves on it: keep the base, or sweep a range around it\.$/);
+    expect(await note.textContent()).toMatch(/^The base setup beats the best compromise on both axes \(Wk-weighted body acceleration 0\.925\s?m\/s² against .+; tyre load variation 18\.5\s?% against .+\), but it breaks a limit: tyre load falls to \d+ N on .+ \(limit 400 N\)\.$/);
     // The base spring (20.5 N/mm) is softer than any tried (26–38 N/mm): the best point sits at the lowest.
     expect(await best.getByTestId('grid-edges').textContent()).toMatch(/Best point at the lowest spring rate tried \(26(\.0)?\s?N\/mm\) — widen the range downward\./);
     const chart = page.getByRole('region', { name: 'Comfort against grip' });
