@@ -58,6 +58,7 @@ describe('a single-event road in the browser', () => {
       await page.screenshot({ path: `test-results/run-event-kerb-${w}.png` });
     }
     await screenshot(page, 'run-event-kerb-full');
+    await comfort.screenshot({ path: 'test-results/run-event-kerb-comfort-1280.png' });
 
     // Saved, the runs list shows the MTVV for it rather than the RMS.
     const name = `Kerb event ${Date.now().toString(36)}`;

@@ -26,9 +26,9 @@ export function HeadlineStrip({ result }: { result: RunResult }) {
   if (judged.lead === 'event') {
     const settle = m.settling;
     const eventCells: Cell[] = [
-      { name: 'accelPeak', title: 'Peak body acceleration', value: m.bodyAccelPeak, unit: 'mps2', hue: 'comfort', sub: m.bodyAccelWkPeak === undefined ? 'unweighted' : `Wk-weighted peak ${formatQuantityText(m.bodyAccelWkPeak, 'mps2')}` },
-      { name: 'vdv', title: 'VDV', value: m.vdv, unit: 'mps175', hue: 'comfort', sub: 'vibration dose, Wk-weighted' },
-      { name: 'mtvv', title: 'MTVV', value: m.mtvv, unit: 'mps2', hue: 'comfort', sub: 'largest 1 s running RMS' },
+      { name: 'accelPeak', title: 'Peak body acceleration', value: m.bodyAccelPeak, unit: 'mps2', hue: 'comfort', sub: m.bodyAccelWkPeak === undefined ? 'unweighted' : `weighted ${formatQuantityText(m.bodyAccelWkPeak, 'mps2')}` },
+      { name: 'vdv', title: 'VDV', value: m.vdv, unit: 'mps175', hue: 'comfort', sub: 'dose, Wk-weighted' },
+      { name: 'mtvv', title: 'MTVV', value: m.mtvv, unit: 'mps2', hue: 'comfort', sub: 'largest 1 s RMS' },
       { name: 'settle', title: 'Settling time', value: settle?.time ?? undefined, unit: 's', sub: !settle ? 'not worked out for this run' : settle.time === null ? 'still moving when the run ended' : `to within ±${formatQuantityText(settle.band, 'mps2')}`, warn: settle?.time === null },
       { name: 'liftOff', title: 'Time off the road', value: m.liftOffFraction, unit: 'percent', hue: 'grip', sub: m.liftOffFraction > 0 ? 'the wheel lifted' : 'always in contact', warn: m.liftOffFraction > 0 },
       strokeCell,
