@@ -1,5 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
 
 const baseUrl = inject('baseUrl');
@@ -71,6 +72,34 @@ describe('a single-event road in the browser', () => {
     const row = page.getByRole('row').filter({ hasText: name });
     await row.waitFor();
     expect(await row.locator('[data-comfort-figure="mtvv"]').count()).toBe(1);
+    await context.close();
+  }, LIMIT);
+
+  it('comparing two setups over the kerb drop: event figures first, and no RMS comfort verdict for either', async () => {
+    const { page, context } = await newSession(browser, baseUrl);
+    page.setDefaultTimeout(60_000);
+    await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
+    const workspaceId = new URL(page.url()).pathname.split('/')[2];
+    const setups = SetupsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups`)).json()).setups;
+    const params = setups
+      .filter((s) => s.name.includes('Pipit'))
+      .slice(0, 2)
+      .map((s) => `s=${s.id}:${s.latestRevision}`)
+      .join('&');
+    await page.goto(`/w/${workspaceId}/compare?${params}`);
+    await page.getByLabel('Road').selectOption({ label: 'Kerb drop, 80 mm' });
+    await page.getByLabel('Duration, s').fill('6');
+    await page.getByRole('button', { name: 'Compare', exact: true }).click();
+    const table = page.getByRole('table', { name: 'Figures compared' });
+    await table.waitFor({ timeout: 90_000 });
+    const rows = await table.locator('tr[data-row]').evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-row')));
+    expect(rows.slice(0, 6)).toEqual(['verdict', 'accelPeak', 'wkPeak', 'vdv', 'mtvv', 'settle']);
+    const verdicts = await table.locator('tr[data-row="verdict"] td').allTextContents();
+    // first cell: the ranking rule; then one per run, none giving an Annex C reaction
+    expect(verdicts.slice(1)).toHaveLength(2);
+    for (const v of verdicts.slice(1)) expect(v).toMatch(/^none: (crest factor \d+\.\d > 9|single event)$/);
+    await page.waitForTimeout(300);
+    await screenshot(page, 'compare-event-1280');
     await context.close();
   }, LIMIT);
 });
