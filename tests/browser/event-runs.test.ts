@@ -66,8 +66,11 @@ describe('a single-event road in the browser', () => {
     await page.getByLabel('Save as').fill(name);
     await page.getByRole('button', { name: 'Save run' }).click();
     await page.waitForURL(new RegExp(`/w/${workspaceId}/runs/[^/?]+$`));
+    // the saved run's own page, not the runs page it came from
+    await page.getByRole('heading', { level: 1, name }).waitFor();
     await page.getByTestId('run-dashboard').waitFor();
-    expect(await page.getByTestId('rms-verdict-withheld').count()).toBe(1);
+    await page.getByTestId('rms-verdict-withheld').waitFor();
+    expect(await page.locator('[data-headline="aw"]').count()).toBe(0);
     await page.goto(`/w/${workspaceId}/runs`);
     const row = page.getByRole('row').filter({ hasText: name });
     await row.waitFor();
