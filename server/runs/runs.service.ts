@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { Metrics } from '../../shared/schemas/metrics.ts';
+import { rideJudgement } from '../../shared/sim/metrics/rms-method.ts';
 import { ModalResult } from '../../shared/schemas/modal.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import { type RunList, type RunListQuery, type RunSummary, type SavedRun, type SaveRunInput, StoredTraces } from '../../shared/schemas/run-record.ts';
@@ -26,6 +27,7 @@ function toSummary(row: RunSummaryRow): RunSummary {
   const road = readStored(Road, row.road, `road of run ${row.id}`);
   const metrics = readStored(Metrics, row.metrics, `metrics of run ${row.id}`);
   const modal = readStored(ModalResult, row.modal, `modal figures of run ${row.id}`);
+  const judged = rideJudgement(road.kind, metrics);
   return {
     id: row.id,
     name: row.name,
@@ -41,7 +43,11 @@ function toSummary(row: RunSummaryRow): RunSummary {
     seed: row.seed,
     headline: {
       bodyAccelWkRms: metrics.bodyAccelWkRms,
-      comfort: metrics.comfort.primary,
+      comfort: judged.verdict?.primary ?? null,
+      lead: judged.lead,
+      bodyAccelPeak: metrics.bodyAccelPeak,
+      vdv: metrics.vdv,
+      ...(metrics.mtvv === undefined ? {} : { mtvv: metrics.mtvv }),
       tyreLoadRatio: metrics.tyreLoadRatio,
       liftOffFraction: metrics.liftOffFraction,
       bodyHz: modal.body.naturalHz,

@@ -79,8 +79,10 @@ export async function finishStudyRun(db: Db, ws: WorkspaceRef, actor: Actor, stu
   const row = await findStudy(db, ws.workspaceId, studyId);
   if (!row) return noStudy();
   // Ranking thousands of points takes a while: a worker thread does it, outside the transaction.
-  const points = (await listStudyPoints(db, studyId)).map(toPointResult).filter((p) => p.index >= 0);
-  const done = await runHeavy('studyRunFigures', { def: definitionOf(row), points });
+  const all = (await listStudyPoints(db, studyId)).map(toPointResult);
+  const points = all.filter((p) => p.index >= 0);
+  const base = all.find((p) => p.index === -1) ?? null;
+  const done = await runHeavy('studyRunFigures', { def: definitionOf(row), points, base });
   if (!done.ok) return done;
   return db.transaction().execute((trx) => closeStudyRunInTx(trx, ws, actor, studyId, input, now, { pointCount: points.length, ...done.value }));
 }
@@ -133,7 +135,7 @@ export async function closeStudyRunInTx(
     ranBy: { id: actor.id, name: actor.name },
     ranAt: now.toISOString(),
     compromise,
-    tradeOff: ranked?.tradeOff ?? studyTradeOff(def, points),
+    tradeOff: ranked?.tradeOff ?? studyTradeOff(def, points, base ?? null),
     best: winner ? { pointIndex: winner.index, label: describePoint(def.axes, winner.values) } : null,
   };
   await updateStudyRow(trx, studyId, { status, results: JSON.stringify(summary), updated_at: now.toISOString() });

@@ -45,6 +45,22 @@ export const VelocityBands = z.object({
 export type VelocityBands = z.infer<typeof VelocityBands>;
 
 /**
+ * How long the body took to settle after an event road (bump, pothole, kerb): the time from the
+ * end of the event (the tyre, footprint included, past its last edge) until |body acceleration|
+ * stays inside ±`band` to the end of the run. The band is 5 % of the run's peak body
+ * acceleration, at least 0.05 m/s² (shared/sim/metrics/transient.ts).
+ */
+export const EventSettling = z.object({
+  /** End of the event, s from the start of the run. */
+  eventEnd: z.number().nonnegative(),
+  /** Half-width of the band, m/s². */
+  band: z.number().positive(),
+  /** s after `eventEnd`; null when the run ended before the body settled. */
+  time: z.number().nonnegative().nullable(),
+});
+export type EventSettling = z.infer<typeof EventSettling>;
+
+/**
  * Ride and grip figures of one run, over the samples after the settling time. SI units:
  * m/s², m, N, s, W, J. Travel is positive in compression.
  */
@@ -61,6 +77,17 @@ export const Metrics = z.object({
   /** Vibration dose value of the Wk-weighted acceleration, m/s^1.75. */
   vdv: z.number().nonnegative(),
   comfort: ComfortGrading,
+  /**
+   * Peak of the Wk-weighted acceleration, m/s². This and the two below are absent on runs saved
+   * before they were kept.
+   */
+  bodyAccelWkPeak: z.number().nonnegative().optional(),
+  /** Crest factor of the weighted acceleration, peak / aw (ISO 2631-1 §6.2.1; 0 when aw is 0). */
+  bodyAccelWkCrest: z.number().nonnegative().optional(),
+  /** Maximum transient vibration value: largest 1 s running RMS of the weighted acceleration (ISO 2631-1 §6.3.1), m/s². */
+  mtvv: z.number().nonnegative().optional(),
+  /** Event roads only. */
+  settling: EventSettling.optional(),
 
   /** Fz0 = (ms + mu) g, N. */
   tyreLoadStatic: z.number().positive(),

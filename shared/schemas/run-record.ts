@@ -110,7 +110,14 @@ export const RunSummary = z.object({
   seed: z.number().int().nullable(),
   headline: z.object({
     bodyAccelWkRms: z.number(),
-    comfort: ComfortLabel,
+    /** ISO 2631-1 Annex C reaction; null when the RMS method does not apply (single event, crest factor above 9). */
+    comfort: ComfortLabel.nullable(),
+    /** `event`: a bump, pothole or kerb, judged by peak, VDV, MTVV and settling rather than RMS. */
+    lead: z.enum(['event', 'rms']),
+    bodyAccelPeak: z.number(),
+    vdv: z.number(),
+    /** Absent on runs saved before it was kept. */
+    mtvv: z.number().optional(),
     tyreLoadRatio: z.number(),
     liftOffFraction: z.number(),
     bodyHz: z.number(),

@@ -22,14 +22,14 @@ export const StudyRunOutcome = z.object({
 });
 export type StudyRunOutcome = z.infer<typeof StudyRunOutcome>;
 
-export const studyViolationKinds = ['maxStrokeUsed', 'maxLiftOffFraction', 'minTyreLoad', 'notCheckable', 'runFailed', 'setupInvalid'] as const;
+export const studyViolationKinds = ['maxStrokeUsed', 'maxLiftOffFraction', 'minTyreLoad', 'minStaticSag', 'maxStaticSag', 'notCheckable', 'runFailed', 'setupInvalid'] as const;
 export const StudyViolationKind = z.enum(studyViolationKinds);
 export type StudyViolationKind = z.infer<typeof StudyViolationKind>;
 
 /** Why a point is not feasible. `roadIndex`/`speed` name the run (null when it is the point's setup). */
 export const StudyViolation = z.object({
   kind: StudyViolationKind,
-  /** The limit and the run's value (shares as fractions, loads in N); null when not numeric. */
+  /** The limit and the run's value (shares as fractions, loads in N, sag in m); null when not numeric. */
   limit: z.number().nullable(),
   value: z.number().nullable(),
   roadIndex: z.number().int().nonnegative().nullable(),
@@ -91,7 +91,12 @@ export type StudyCompromise = z.infer<typeof StudyCompromise>;
 export const StudyTradeOff = z.object({
   comfortFigure: StudyFigureKey,
   gripFigure: StudyFigureKey,
-  /** Indices (into `points`) of the non-dominated feasible points, ordered along the comfort axis. */
+  /**
+   * Indices (into `points`) of the non-dominated feasible points, ordered along the comfort axis.
+   * The base setup competes for the front too: a point it beats on both figures is not on it.
+   */
   front: z.array(z.number().int()),
+  /** Whether the base setup is on the front; absent when there is no base (speed swept) or on older summaries. */
+  baseOnFront: z.boolean().optional(),
 });
 export type StudyTradeOff = z.infer<typeof StudyTradeOff>;

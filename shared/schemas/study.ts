@@ -91,6 +91,7 @@ export const studyFigureKeys = [
   'bodyAccelCrest',
   'bodyAccelWkRms',
   'vdv',
+  'mtvv',
   'tyreLoadRms',
   'tyreLoadRatio',
   'tyreLoadMin',
@@ -106,10 +107,12 @@ export const studyFigureKeys = [
   'damperVelocityRms',
   'damperPowerMean',
   'damperEnergy',
+  'staticSag',
 ] as const;
 /**
  * Single-number figures of a run a study keeps and can judge by: the scalar `Metrics` of the run
- * plus `strokeUsed` = the larger of the compression and extension stroke used.
+ * plus `strokeUsed` = the larger of the compression and extension stroke used, and `staticSag`,
+ * how far the body sits down at rest (spring and tyre, m): the ride height a point costs.
  */
 export const StudyFigureKey = z.enum(studyFigureKeys);
 export type StudyFigureKey = z.infer<typeof StudyFigureKey>;
@@ -133,6 +136,10 @@ export const StudyConstraints = z.object({
   maxLiftOffFraction: z.number().min(0).max(1).optional(),
   /** Smallest tyre contact force allowed, N. */
   minTyreLoad: z.number().nonnegative().max(1e6).optional(),
+  /** Least static sag of the body (spring and tyre), m: a floor on how far the corner may rise. */
+  minStaticSag: z.number().nonnegative().max(2).optional(),
+  /** Most static sag of the body, m: a ceiling on how far the corner may sink. */
+  maxStaticSag: z.number().positive().max(2).optional(),
 });
 export type StudyConstraints = z.infer<typeof StudyConstraints>;
 
@@ -184,6 +191,10 @@ export const StudyDefinition = z
     const points = d.axes.reduce((n, a) => n * a.steps, 1);
     const runs = points * d.roads.length * Math.max(1, d.speeds.length);
     if (runs > STUDY_MAX_RUNS) ctx.addIssue({ code: 'custom', path: ['axes'], message: `${runs} runs asked for; at most ${STUDY_MAX_RUNS}` });
+    const c = d.constraints;
+    if (c.minStaticSag !== undefined && c.maxStaticSag !== undefined && c.minStaticSag > c.maxStaticSag) {
+      ctx.addIssue({ code: 'custom', path: ['constraints', 'maxStaticSag'], message: 'the most static sag must not be below the least' });
+    }
     if (d.settleTime !== undefined && d.settleTime >= d.duration) ctx.addIssue({ code: 'custom', path: ['settleTime'], message: 'settleTime must be shorter than the run' });
   });
 export type StudyDefinition = z.infer<typeof StudyDefinition>;

@@ -10,6 +10,7 @@ import { computeMetrics, firstSample } from './metrics/compute-metrics.ts';
 import { roadDampingFigures } from './metrics/road-damping.ts';
 import { strokeAndTableFigures } from './metrics/stroke-limits.ts';
 import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
+import { eventEndTime } from './roads/event-end.ts';
 import { buildRoad } from './roads/index.ts';
 import type { TraceColumns } from './trace.ts';
 
@@ -76,6 +77,7 @@ export function runCorner(input: RunRequestInput): RunOutcome {
       stroke: setup.stroke,
       velocityBands: req.velocityBands,
       histogramBins: req.histogramBins,
+      eventEnd: eventEndTime(road, speed, setup.tyreFootprint),
     }),
     ...strokeAndTableFigures(trace, firstSample(trace, settleTime), setup),
     ...roadDampingFigures(trace, firstSample(trace, settleTime)),

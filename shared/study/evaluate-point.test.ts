@@ -67,3 +67,26 @@ describe('evaluatePoint', () => {
     expect(p).toMatchObject({ feasible: false, violations: [{ kind: 'setupInvalid', message: 'damper.gas: too much' }], objectives: [null, null] });
   });
 });
+
+describe('static sag limits', () => {
+  const sagDef = { ...def, constraints: { minStaticSag: 0.15, maxStaticSag: 0.18 } };
+  const sagRun = (speed: number, staticSag: number | undefined): StudyRunOutcome => ({ roadIndex: 0, speed, figures: { bodyAccelWkRms: 1, tyreLoadMin: 800, ...(staticSag === undefined ? {} : { staticSag }) } });
+
+  it('rejects a point that sinks past the most sag allowed, naming the limit and the value', () => {
+    // A spring softened so far that the body sits 211 mm down against a 180 mm ceiling.
+    const p = evaluatePoint(sagDef, { index: 3, values: { springRate: 15000 } }, [sagRun(20, 0.211)]);
+    expect(p.feasible).toBe(false);
+    expect(p.violations).toEqual([expect.objectContaining({ kind: 'maxStaticSag', limit: 0.18, value: 0.211, message: 'static sag 211 mm (most allowed 180 mm)' })]);
+  });
+
+  it('rejects one that rises past the least sag, and keeps one in between', () => {
+    expect(evaluatePoint(sagDef, { index: 0, values: {} }, [sagRun(20, 0.12)]).violations.map((v) => v.kind)).toEqual(['minStaticSag']);
+    expect(evaluatePoint(sagDef, { index: 1, values: {} }, [sagRun(20, 0.164)]).feasible).toBe(true);
+  });
+
+  it('a run without a sag figure cannot pass a sag limit', () => {
+    const p = evaluatePoint(sagDef, { index: 2, values: {} }, [sagRun(20, undefined)]);
+    expect(p.feasible).toBe(false);
+    expect(p.violations.every((v) => v.kind === 'notCheckable')).toBe(true);
+  });
+});

@@ -29,6 +29,16 @@ export function runViolations(def: Pick<StudyDefinition, 'constraints'>, run: St
   if (c.minTyreLoad !== undefined && f.tyreLoadMin !== undefined && f.tyreLoadMin < c.minTyreLoad) {
     out.push({ kind: 'minTyreLoad', limit: c.minTyreLoad, value: f.tyreLoadMin, ...at, message: `tyre load falls to ${Math.round(f.tyreLoadMin)} N ${where(run, roadName)} (limit ${Math.round(c.minTyreLoad)} N)` });
   }
+  const sag = f.staticSag;
+  const mm = (x: number) => `${(1000 * x).toFixed(0)} mm`;
+  for (const [kind, limit, breaks, words] of [
+    ['minStaticSag', c.minStaticSag, (s: number, l: number) => s < l, 'least'],
+    ['maxStaticSag', c.maxStaticSag, (s: number, l: number) => s > l, 'most'],
+  ] as const) {
+    if (limit === undefined) continue;
+    if (sag === undefined) out.push({ kind: 'notCheckable', limit, value: null, ...at, message: 'the run kept no static sag, so the sag limit cannot be checked' });
+    else if (breaks(sag, limit)) out.push({ kind, limit, value: sag, ...at, message: `static sag ${mm(sag)} (${words} allowed ${mm(limit)})` });
+  }
   return out;
 }
 

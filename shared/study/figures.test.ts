@@ -16,8 +16,9 @@ const metrics: Metrics = {
 
 describe('figuresFromMetrics', () => {
   it('keeps every scalar figure and adds stroke used as the larger way', () => {
-    const f = figuresFromMetrics(metrics);
+    const f = figuresFromMetrics({ ...metrics, mtvv: 1.4 }, { bodySag: 0.164 });
     expect(StudyFigures.safeParse(f).success).toBe(true);
+    expect(f.staticSag).toBe(0.164);
     expect(Object.keys(f).sort()).toEqual([...studyFigureKeys].sort());
     expect(f.strokeUsed).toBe(0.47);
     expect(f.bodyAccelWkRms).toBe(0.62);

@@ -24,6 +24,7 @@ export const studyFigureInfo: Record<StudyFigureKey, FigureInfo> = {
   bodyAccelCrest: { label: 'body acceleration crest factor', unit: '', goal: 'min', family: 'comfort' },
   bodyAccelWkRms: { label: 'Wk-weighted body acceleration', unit: 'm/s²', goal: 'min', family: 'comfort' },
   vdv: { label: 'vibration dose value', unit: 'm/s^1.75', goal: 'min', family: 'comfort' },
+  mtvv: { label: 'MTVV (largest 1 s running RMS)', unit: 'm/s²', goal: 'min', family: 'comfort' },
   tyreLoadRms: { label: 'dynamic tyre load RMS', unit: 'N', goal: 'min', family: 'grip' },
   tyreLoadRatio: { label: 'tyre load variation', unit: '', goal: 'min', family: 'grip' },
   tyreLoadMin: { label: 'minimum tyre load', unit: 'N', goal: 'max', family: 'grip' },
@@ -39,10 +40,14 @@ export const studyFigureInfo: Record<StudyFigureKey, FigureInfo> = {
   damperVelocityRms: { label: 'damper speed RMS', unit: 'm/s', goal: 'min', family: 'damper' },
   damperPowerMean: { label: 'mean damper power', unit: 'W', goal: 'min', family: 'damper' },
   damperEnergy: { label: 'damper energy', unit: 'J', goal: 'min', family: 'damper' },
+  staticSag: { label: 'static sag', unit: 'm', goal: 'min', family: 'travel' },
 };
 
-/** The single-number figures of one run's metrics, plus `strokeUsed` (the larger way, when a stroke is given). */
-export function figuresFromMetrics(m: Metrics): StudyFigures {
+/**
+ * The single-number figures of one run's metrics, plus `strokeUsed` (the larger way, when a
+ * stroke is given) and, given the corner at rest, its static sag.
+ */
+export function figuresFromMetrics(m: Metrics, statics?: { bodySag: number }): StudyFigures {
   const f: StudyFigures = {
     bodyAccelRms: m.bodyAccelRms,
     bodyAccelPeak: m.bodyAccelPeak,
@@ -62,6 +67,8 @@ export function figuresFromMetrics(m: Metrics): StudyFigures {
     damperPowerMean: m.damperPowerMean,
     damperEnergy: m.damperEnergy,
   };
+  if (m.mtvv !== undefined) f.mtvv = m.mtvv;
+  if (statics) f.staticSag = statics.bodySag;
   if (m.strokeUsedCompression !== undefined) f.strokeUsedCompression = m.strokeUsedCompression;
   if (m.strokeUsedExtension !== undefined) f.strokeUsedExtension = m.strokeUsedExtension;
   if (m.strokeUsedCompression !== undefined || m.strokeUsedExtension !== undefined) {

@@ -77,4 +77,14 @@ describe('study runner (RK4 on the shared sampled road) against the reference in
     expect(out.run.figures).toBeNull();
     expect(out.run.error).toMatch(/gas/);
   });
+
+  it('keeps the static sag of each point: ms·g/(k·MR²) on the spring plus (ms+mu)·g/kt on the tyre (Hooke, by hand)', () => {
+    const springRate = 15000;
+    const out = createStudyRunner({ base: pipit, roads: [{ kind: 'iso8608', class: 'C', seed: 7 }], duration: 3 }).run({ pointIndex: 0, values: { springRate }, roadIndex: 0, speed: 20 });
+    const g = 9.81;
+    // The gas pressure is given at the ride position, so its static rod force is p·A.
+    const gas = (pipit.damper.gas?.pressure ?? 0) * (pipit.damper.gas?.rodArea ?? 0);
+    const expected = (pipit.sprungMass * g - pipit.motionRatio * gas) / (springRate * pipit.motionRatio ** 2) + ((pipit.sprungMass + pipit.unsprungMass) * g) / pipit.tyreRate;
+    expect(out.run.figures?.staticSag).toBeCloseTo(expected, 9);
+  });
 });

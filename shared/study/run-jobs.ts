@@ -2,6 +2,7 @@ import type { Road } from '../schemas/road.ts';
 import type { Setup } from '../schemas/setup.ts';
 import type { StudyPointValues, StudyRunOutcome } from '../schemas/study-result.ts';
 import { computeMetrics } from '../sim/metrics/compute-metrics.ts';
+import { eventEndTime } from '../sim/roads/event-end.ts';
 import { buildRoad } from '../sim/roads/index.ts';
 import { applyPoint } from './apply-point.ts';
 import { figuresFromMetrics } from './figures.ts';
@@ -103,8 +104,9 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
       if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
       trace = integrated.trace;
       const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
-      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke });
-      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics) } };
+      const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
+      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd });
+      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state) } };
     },
   };
 }

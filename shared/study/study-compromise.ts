@@ -9,6 +9,8 @@ const kindWords: Record<StudyViolationKind, string> = {
   maxStrokeUsed: 'use too much stroke',
   maxLiftOffFraction: 'lift the wheel off too long',
   minTyreLoad: 'let the tyre load fall too low',
+  minStaticSag: 'sit too high (too little static sag)',
+  maxStaticSag: 'sit too low (too much static sag)',
   notCheckable: 'cannot be checked against the stroke limit (no stroke in the setup)',
   runFailed: 'had a run fail',
   setupInvalid: 'do not make a valid setup',
@@ -38,15 +40,21 @@ export function studyBestCompromise(
 
 /**
  * The comfort-against-grip front for the chart: feasible points with both figures, the
- * non-dominated ones (both figures read by their sense) ordered along the comfort axis.
+ * non-dominated ones (both figures read by their sense) ordered along the comfort axis. The base
+ * setup, when given and within the limits, competes on the same terms: a point it beats on both
+ * figures leaves the front, and `baseOnFront` says whether the base itself is on it.
  */
-export function studyTradeOff(def: Pick<StudyDefinition, 'comfortFigure' | 'gripFigure'>, points: readonly StudyPointResult[]): StudyTradeOff {
+export function studyTradeOff(def: Pick<StudyDefinition, 'comfortFigure' | 'gripFigure'>, points: readonly StudyPointResult[], base: StudyPointResult | null = null): StudyTradeOff {
   const sense = (k: typeof def.comfortFigure) => (studyFigureInfo[k].goal === 'max' ? -1 : 1);
-  const usable = points.flatMap((p, i) => {
+  const candidates = base ? [...points, base] : points;
+  const usable = candidates.flatMap((p, i) => {
     const c = p.figures[def.comfortFigure];
     const g = p.figures[def.gripFigure];
     return p.feasible && c !== undefined && g !== undefined ? [{ i, xy: [sense(def.comfortFigure) * c, sense(def.gripFigure) * g] as [number, number] }] : [];
   });
-  const front = paretoFront2d(usable.map((u) => u.xy)).map((m) => usable[m].i);
-  return { comfortFigure: def.comfortFigure, gripFigure: def.gripFigure, front };
+  const all = paretoFront2d(usable.map((u) => u.xy)).map((m) => usable[m].i);
+  const front = all.filter((i) => i < points.length);
+  const result: StudyTradeOff = { comfortFigure: def.comfortFigure, gripFigure: def.gripFigure, front };
+  if (base) result.baseOnFront = all.includes(points.length);
+  return result;
 }

@@ -3,7 +3,8 @@ import type { TraceColumns } from '../trace.ts';
 import { comfortGrading, rmsAndVdv, wkFilter } from './iso2631.ts';
 import { niceHalfWidth, symmetricHistogram, velocityBands } from './histogram.ts';
 import { createWelch, defaultSegmentLength } from './spectra.ts';
-import { countAbove, dot, summary } from './stats.ts';
+import { countAbove, dot, extremes, summary } from './stats.ts';
+import { mtvv, settleBand, settlingTime } from './transient.ts';
 
 export interface MetricOptions {
   /** Start of the analysed part, s; earlier samples only warm the Wk filter. */
@@ -19,6 +20,8 @@ export interface MetricOptions {
   velocityBands?: { low: number; high: number };
   /** Bins of the damper velocity histogram; default 40. */
   histogramBins?: number;
+  /** Event roads: when the event ends, s from the start; adds the settling time. */
+  eventEnd?: number;
 }
 
 /** First analysed sample for a settling time (throws: callers validate settle < duration). */
@@ -42,8 +45,10 @@ export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metric
   const accel = summary(trace.bodyAccel, from);
   const accelRms = accel.rms;
   // The filter runs from the first sample so it has settled by `from`.
-  const weighted = rmsAndVdv(wkFilter(trace.bodyAccel, dt), dt, from);
+  const wk = wkFilter(trace.bodyAccel, dt);
+  const weighted = rmsAndVdv(wk, dt, from);
   const aw = weighted.rms;
+  const wkPeak = extremes(wk, from).peak;
 
   const load = summary(trace.tyreLoad, from, fz0);
   const loadRms = load.rms;
@@ -64,6 +69,9 @@ export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metric
     bodyAccelWkRms: aw,
     vdv: weighted.vdv,
     comfort: comfortGrading(aw),
+    bodyAccelWkPeak: wkPeak,
+    bodyAccelWkCrest: aw > 0 ? wkPeak / aw : 0,
+    mtvv: mtvv(wk, dt, from),
     tyreLoadStatic: fz0,
     tyreLoadRms: loadRms,
     tyreLoadRatio: loadRms / fz0,
@@ -80,6 +88,10 @@ export function computeMetrics(trace: TraceColumns, opts: MetricOptions): Metric
     damperPowerMean: energy / analysedTime,
     damperEnergy: energy,
   };
+  if (opts.eventEnd !== undefined) {
+    const band = settleBand(accel.peak);
+    metrics.settling = { eventEnd: opts.eventEnd, band, time: settlingTime(trace.bodyAccel, dt, opts.eventEnd, band) };
+  }
   if (opts.stroke) {
     metrics.strokeUsedCompression = travel.max / opts.stroke.compression;
     metrics.strokeUsedExtension = -travel.min / opts.stroke.extension;

@@ -2,8 +2,9 @@ import type { RunResult } from '../../../../shared/schemas/run.ts';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { formatQuantityText } from '../../../lib/format.ts';
 import { STROKE_WARNING_SHARE } from '../model/warnings.ts';
+import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
 import { ComfortScale } from './comfort-scale.tsx';
-import { FigureList, FigurePanel } from './figure-list.tsx';
+import { FigureList, FigurePanel, type FigureItem } from './figure-list.tsx';
 import { ModalTable } from './modal-table.tsx';
 import { StaticsPanel } from './statics-panel.tsx';
 import { StrokeGauge } from './stroke-gauge.tsx';
@@ -13,19 +14,46 @@ export function FigurePanels({ result, setup, roadName }: { result: RunResult; s
   const m = result.metrics;
   const bands = m.damperVelocityBands;
   const analysed = `over ${formatQuantityText(m.analysedTime, 's')} after ${formatQuantityText(result.settleTime, 's')} settling`;
+  const judged = rideJudgement(result.road.kind, m);
+  const settle = m.settling;
+  const rmsItems: FigureItem[] = [
+    { name: 'aw', label: 'Wk-weighted RMS, aw', value: m.bodyAccelWkRms, unit: 'mps2', note: judged.lead === 'event' ? 'over the whole run: falls as the run gets longer' : 'ISO 2631-1 vertical weighting' },
+    { name: 'accelRms', label: 'Body accel. RMS', value: m.bodyAccelRms, unit: 'mps2' },
+  ];
+  const eventItems: FigureItem[] = [
+    { name: 'accelPeak', label: 'Body accel. peak', value: m.bodyAccelPeak, unit: 'mps2', note: 'unweighted' },
+    { name: 'wkPeak', label: 'Weighted accel. peak', value: m.bodyAccelWkPeak, unit: 'mps2', note: 'Wk-weighted' },
+    { name: 'vdv', label: 'VDV', value: m.vdv, unit: 'mps175', note: 'vibration dose value, Wk-weighted' },
+    { name: 'mtvv', label: 'MTVV', value: m.mtvv, unit: 'mps2', note: 'largest 1 s running RMS, Wk-weighted (ISO 2631-1 §6.3.1)' },
+  ];
+  const settleItem: FigureItem[] = settle
+    ? [
+        {
+          name: 'settle',
+          label: 'Settling time',
+          value: settle.time ?? undefined,
+          unit: 's',
+          warn: settle.time === null,
+          note: settle.time === null ? 'still outside the band when the run ended' : `from the end of the event until |body accel.| stays within ±${formatQuantityText(settle.band, 'mps2')} (5 % of the peak, at least 0.05 m/s²)`,
+        },
+      ]
+    : [];
+  const crestItems: FigureItem[] = [
+    { name: 'wkCrest', label: 'Crest factor, weighted', value: m.bodyAccelWkCrest, note: 'weighted peak / aw; above 9 the RMS method is not sufficient', warn: judged.crestAboveLimit },
+    { name: 'crest', label: 'Crest factor, unweighted', value: m.bodyAccelCrest, note: 'peak / RMS' },
+  ];
+  const comfortItems = judged.lead === 'event' ? [...eventItems, ...settleItem, ...crestItems, ...rmsItems] : [rmsItems[0], eventItems[2], eventItems[3], rmsItems[1], eventItems[0], ...crestItems];
   return (
     <div className="grid gap-3 md:grid-cols-2" data-testid="figure-panels">
       <FigurePanel title="Comfort" hue="comfort">
-        <FigureList
-          items={[
-            { name: 'aw', label: 'Wk-weighted RMS, aw', value: m.bodyAccelWkRms, unit: 'mps2', note: 'ISO 2631-1 vertical weighting' },
-            { name: 'vdv', label: 'VDV', value: m.vdv, unit: 'mps175', note: 'vibration dose value, Wk-weighted' },
-            { name: 'accelRms', label: 'Body accel. RMS', value: m.bodyAccelRms, unit: 'mps2' },
-            { name: 'accelPeak', label: 'Body accel. peak', value: m.bodyAccelPeak, unit: 'mps2' },
-            { name: 'crest', label: 'Crest factor', value: m.bodyAccelCrest, note: 'peak / RMS' },
-          ]}
-        />
-        <ComfortScale aw={m.bodyAccelWkRms} grading={m.comfort} />
+        <FigureList items={comfortItems} />
+        {judged.verdict ? (
+          <ComfortScale aw={m.bodyAccelWkRms} grading={judged.verdict} />
+        ) : (
+          <p className="mt-2 rounded-sm border-l-2 border-signal bg-signal-wash/50 px-2 py-1.5 text-xs leading-snug text-ink" data-testid="rms-verdict-withheld" role="note">
+            {judged.why}
+          </p>
+        )}
       </FigurePanel>
 
       <FigurePanel title="Grip" hue="grip">

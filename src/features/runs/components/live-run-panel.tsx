@@ -13,6 +13,7 @@ import { Spinner } from '../../../components/ui/spinner.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
 import { simulate } from '../../../lib/simulate-client.ts';
 import { LiveScheduler } from '../model/live-scheduler.ts';
+import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
 import { runWarnings } from '../model/warnings.ts';
 
 export interface LiveRunPanelProps {
@@ -112,6 +113,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
   const data = useMemo((): uPlot.AlignedData => (shown ? [shown.time, shown.travel] : [[], []]), [shown]);
 
   const m = shown?.result.metrics;
+  const judged = shown ? rideJudgement(shown.result.road.kind, shown.result.metrics) : null;
   const warnings = m ? runWarnings(m) : [];
   const strokeUsed = m ? Math.max(m.strokeUsedCompression ?? 0, m.strokeUsedExtension ?? 0) : 0;
   const stale = Boolean(failure) || pending;
@@ -137,9 +139,15 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
       {m && shown && (
         <div className={stale ? 'opacity-60 transition-opacity' : 'transition-opacity'}>
           <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm">
-            <LiveFigure name="aw" label="aw (Wk RMS)" hue="comfort">
-              <Figure value={m.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
-            </LiveFigure>
+            {judged?.lead === 'event' ? (
+              <LiveFigure name="mtvv" label="MTVV (1 s)" hue="comfort">
+                {m.mtvv === undefined ? <span className="text-ink-faint">—</span> : <Figure value={m.mtvv} unit="mps2" label="MTVV" />}
+              </LiveFigure>
+            ) : (
+              <LiveFigure name="aw" label="aw (Wk RMS)" hue="comfort">
+                <Figure value={m.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
+              </LiveFigure>
+            )}
             <LiveFigure name="vdv" label="VDV" hue="comfort">
               <Figure value={m.vdv} unit="mps175" label="VDV" />
             </LiveFigure>
@@ -162,7 +170,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
               <Figure value={shown.result.modal.wheel.naturalHz} unit="Hz" label="wheel-hop frequency" /> <span className="text-xs text-ink-faint">ζ</span> <Figure value={shown.result.modal.wheel.dampingRatio} label="wheel-hop damping ratio" />
             </LiveFigure>
           </dl>
-          <p className="mt-1 text-xs text-comfort">{m.comfort.bands.join(' / ')}</p>
+          <p className={`mt-1 text-xs ${judged?.verdict ? 'text-comfort' : 'text-ink-soft'}`}>{judged?.verdict ? judged.verdict.bands.join(' / ') : judged?.why}</p>
           {warnings.length > 0 && (
             <ul className="mt-1 text-xs text-signal-ink">
               {warnings.map((w) => (

@@ -14,7 +14,7 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
         <tr>
           <Th>Run</Th>
           <Th numeric>Speed</Th>
-          <Th numeric title="Wk-weighted RMS body acceleration">aw</Th>
+          <Th numeric title="Wk-weighted RMS body acceleration; for a single event, the MTVV (largest 1 s running RMS)">Comfort</Th>
           <Th numeric title="Tyre load RMS over static load">Load var.</Th>
           <Th numeric>Lift-off</Th>
           <Th numeric>Body mode</Th>
@@ -41,7 +41,17 @@ export function SavedRunsTable({ workspaceId, runs, canDelete, onDelete, deletin
               <Figure value={run.speed} unit="kmph" label="speed" />
             </Td>
             <Td numeric>
-              <Figure value={run.headline.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
+              {run.headline.lead === 'event' ? (
+                <span data-comfort-figure="mtvv" className="whitespace-nowrap">
+                  <span className="text-2xs text-ink-faint">MTVV </span>
+                  {run.headline.mtvv === undefined ? <span className="text-ink-faint">—</span> : <Figure value={run.headline.mtvv} unit="mps2" label="MTVV" />}
+                </span>
+              ) : (
+                <span data-comfort-figure="aw" className="whitespace-nowrap">
+                  <span className="text-2xs text-ink-faint">aw </span>
+                  <Figure value={run.headline.bodyAccelWkRms} unit="mps2" label="Wk-weighted RMS" />
+                </span>
+              )}
             </Td>
             <Td numeric>
               <Figure value={run.headline.tyreLoadRatio} unit="percent" label="tyre load variation" />

@@ -1,4 +1,5 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
+import { isEventRoad } from '../../../../shared/sim/metrics/rms-method.ts';
 import type { UnitName } from '../../../lib/format.ts';
 
 /**
@@ -40,9 +41,13 @@ const m = (r: RunResult) => r.metrics;
 export const figureRows: FigureRow[] = [
   { key: 'aw', group: 'comfort', label: 'Wk-weighted RMS (aw)', unit: 'mps2', value: (r) => m(r).bodyAccelWkRms, better: 'lower' },
   { key: 'vdv', group: 'comfort', label: 'VDV', unit: 'mps175', value: (r) => m(r).vdv, better: 'lower' },
+  { key: 'mtvv', group: 'comfort', label: 'MTVV (1 s running RMS, weighted)', unit: 'mps2', value: (r) => m(r).mtvv, better: 'lower' },
   { key: 'accelRms', group: 'comfort', label: 'Body acceleration RMS', unit: 'mps2', value: (r) => m(r).bodyAccelRms, better: 'lower' },
   { key: 'accelPeak', group: 'comfort', label: 'Body acceleration peak', unit: 'mps2', value: (r) => m(r).bodyAccelPeak, better: 'lower' },
-  { key: 'crest', group: 'comfort', label: 'Crest factor', value: (r) => m(r).bodyAccelCrest, better: 'lower' },
+  { key: 'wkPeak', group: 'comfort', label: 'Weighted acceleration peak', unit: 'mps2', value: (r) => m(r).bodyAccelWkPeak, better: 'lower' },
+  { key: 'settle', group: 'comfort', label: 'Settling time after the event', unit: 's', value: (r) => m(r).settling?.time ?? undefined, better: 'lower' },
+  { key: 'wkCrest', group: 'comfort', label: 'Crest factor, weighted', value: (r) => m(r).bodyAccelWkCrest, better: 'lower' },
+  { key: 'crest', group: 'comfort', label: 'Crest factor, unweighted', value: (r) => m(r).bodyAccelCrest, better: 'lower' },
 
   { key: 'loadRatio', group: 'grip', label: 'Tyre load variation (RMS / static)', unit: 'percent', value: (r) => m(r).tyreLoadRatio, better: 'lower' },
   { key: 'loadRms', group: 'grip', label: 'Dynamic tyre load RMS', unit: 'N', value: (r) => m(r).tyreLoadRms, better: 'lower' },
@@ -71,6 +76,20 @@ export const figureRows: FigureRow[] = [
   { key: 'wheelHz', group: 'modal', label: 'Wheel-hop natural frequency', unit: 'Hz', value: (r) => r.modal.wheel.naturalHz, better: 'unranked' },
   { key: 'wheelZeta', group: 'modal', label: 'Wheel-hop damping ratio', value: (r) => r.modal.wheel.dampingRatio, better: 'unranked' },
 ];
+
+/** Comfort rows an event road leads with: peak, VDV, MTVV, settling time; the RMS figures follow. */
+const eventLead = ['accelPeak', 'wkPeak', 'vdv', 'mtvv', 'settle'];
+
+/**
+ * The rows in the order a set of runs is read: when every run is over a single event (bump,
+ * pothole, kerb), the event figures come first in the comfort group.
+ */
+export function rowsFor(results: readonly RunResult[]): FigureRow[] {
+  if (results.length === 0 || !results.every((r) => isEventRoad(r.road.kind))) return figureRows;
+  const rank = (row: FigureRow) => (row.group !== 'comfort' ? 2 : eventLead.includes(row.key) ? 0 : 1);
+  const first = figureRows.filter((row) => rank(row) === 0).sort((a, b) => eventLead.indexOf(a.key) - eventLead.indexOf(b.key));
+  return [...first, ...figureRows.filter((row) => rank(row) === 1), ...figureRows.filter((row) => rank(row) === 2)];
+}
 
 export const rowByKey = (key: string): FigureRow => {
   const row = figureRows.find((r) => r.key === key);

@@ -1,6 +1,9 @@
 import type { ReactNode } from 'react';
+import { baseVerdict } from '../../../../shared/study/base-verdict.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
-import { figureText, figureLabel } from '../model/display.ts';
+import { gridEdges } from '../../../../shared/study/grid-edge.ts';
+import { units } from '../../../lib/format.ts';
+import { figureText, figureLabel, figureUnit, parameterText, parameterUnit } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 /**
@@ -26,9 +29,20 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
   const neighbourSentences = new Set(c.neighbours.map((n) => n.sentence));
   const why = c.explanation.filter((s) => !neighbourSentences.has(s));
   const def = view.definition;
+  const withUnit = (key: Parameters<typeof figureText>[0], si: number) => {
+    const symbol = units[figureUnit[key]].symbol;
+    return `${figureText(key, si)}${symbol ? `\u2009${symbol}` : ''}`;
+  };
+  const base = baseVerdict(def, view.points, view.base, c, withUnit);
+  const edges = gridEdges(def.axes, winner.values, Object.fromEntries(def.axes.map((a) => [a.parameter, (x: number) => (a.parameter.endsWith('Scale') ? `×${parameterText(a.parameter, x)}` : `${parameterText(a.parameter, x)}\u2009${units[parameterUnit[a.parameter]].symbol}`.trim())])));
   return (
     <section aria-label="Best compromise" className="rounded border-2 border-comfort/50 bg-paper-raised px-4 py-3 shadow-lift">
-      <p className="text-xs font-medium tracking-wide text-comfort uppercase">Best compromise</p>
+      {base?.beatsBestOnBoth && (
+        <p className="mb-2 rounded-sm border-l-2 border-signal bg-signal-wash/60 px-2 py-1.5 text-sm font-medium text-ink" data-testid="base-beats-best" role="note">
+          {base.sentences[0]}
+        </p>
+      )}
+      <p className="text-xs font-medium tracking-wide text-comfort uppercase">{base?.beatsBestOnBoth ? 'Best compromise among the swept points' : 'Best compromise'}</p>
       <h2 className="text-lg font-semibold" data-testid="best-compromise-point">
         {describePoint(def.axes, winner.values)}
       </h2>
@@ -48,7 +62,15 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
         {why.map((s) => (
           <p key={s}>{s}</p>
         ))}
+        {base && !base.beatsBestOnBoth && base.sentences.map((s) => <p key={s}>{s}</p>)}
       </div>
+      {edges.length > 0 && (
+        <ul className="mt-2 space-y-0.5 text-sm font-medium text-signal-ink" data-testid="grid-edges">
+          {edges.map((e) => (
+            <li key={e.parameter}>{e.sentence}</li>
+          ))}
+        </ul>
+      )}
       {c.neighbours.length > 0 && (
         <div className="mt-2">
           <h3 className="text-sm font-semibold text-ink-soft">What it gives up against its neighbours on the front</h3>

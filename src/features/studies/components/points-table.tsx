@@ -10,7 +10,7 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
-import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
+import type { StudyPointResult, StudyViolationKind } from '../../../../shared/schemas/study-result.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Input } from '../../../components/ui/field.tsx';
@@ -74,7 +74,7 @@ export function PointsTable({ view, selected, onSelect }: { view: StudyView; sel
             <span className="text-ok">met</span>
           ) : (
             <span title={c.row.original.point.violations.map((v) => v.message).join('\n')}>
-              <Tag tone="signal">broken</Tag>
+              <Tag tone="signal">{brokenWords(c.row.original.point)}</Tag>
             </span>
           ),
       },
@@ -188,4 +188,20 @@ export function PointsTable({ view, selected, onSelect }: { view: StudyView; sel
       )}
     </div>
   );
+}
+
+/** Short names of the limits a point breaks, for the table (the full reasons are in the tooltip). */
+const limitWords: Record<StudyViolationKind, string> = {
+  maxStrokeUsed: 'stroke',
+  maxLiftOffFraction: 'lift-off',
+  minTyreLoad: 'tyre load',
+  minStaticSag: 'sag',
+  maxStaticSag: 'sag',
+  notCheckable: 'not checkable',
+  runFailed: 'run failed',
+  setupInvalid: 'invalid setup',
+};
+
+function brokenWords(point: StudyPointResult): string {
+  return `broken: ${[...new Set(point.violations.map((v) => limitWords[v.kind]))].join(', ')}`;
 }

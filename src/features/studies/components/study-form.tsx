@@ -9,10 +9,11 @@ import { plannedCounts } from '../../../../shared/study/expand.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { FormError } from '../../../components/ui/field.tsx';
 import { Loading } from '../../../components/ui/spinner.tsx';
-import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
+import { latestRevisionsQueryOptions, revisionQueryOptions } from '../../../lib/queries/revisions.ts';
+import { staticEquilibrium } from '../../../../shared/sim/quarter-car.ts';
 import { roadsQueryOptions } from '../../../lib/queries/roads.ts';
 import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
-import { defaultFormValues, fieldOfIssue, formToDefinition, type StudyFormValues } from '../model/study-form.ts';
+import { defaultFormValues, fieldOfIssue, formToDefinition, startingRange, type StudyFormValues } from '../model/study-form.ts';
 import { AxisFieldset } from './study-form/axis-fieldset.tsx';
 import { BaseFields } from './study-form/base-fields.tsx';
 import { LimitsFieldset } from './study-form/limits-fieldset.tsx';
@@ -78,7 +79,7 @@ function StudyFormBody({
     defaultValues: { ...defaultFormValues(firstRoad), setupId: live[0].id, revision: String(live[0].latestRevision) },
     resolver,
   });
-  const { register, control, handleSubmit, setValue, setError } = form;
+  const { register, control, handleSubmit, setValue, setError, getValues, getFieldState } = form;
   const axes = useFieldArray({ control, name: 'axes' });
   const watched = useWatch({ control });
 
@@ -86,6 +87,27 @@ function StudyFormBody({
   const chosen = live.find((s) => s.id === setupId);
   const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, chosen?.id));
   revisionIds.current = (n) => revisions.data?.revisions.find((r) => r.number === n)?.id;
+  const baseRevision = useQuery(revisionQueryOptions(workspaceId, chosen?.id, Number(watched.revision) || undefined));
+  const baseSetup = baseRevision.data?.document;
+  const baseSag = useMemo(() => {
+    if (!baseSetup) return undefined;
+    const s = staticEquilibrium(baseSetup);
+    return s.ok ? s.state.bodySag : undefined;
+  }, [baseSetup]);
+
+  // Once the base is known, ranges nobody has typed into start centred on its values.
+  useEffect(() => {
+    if (!baseSetup) return;
+    for (const i of [0, 1] as const) {
+      const touched = (['from', 'to', 'steps'] as const).some((k) => getFieldState(`axes.${i}.${k}`).isDirty);
+      const parameter = getValues(`axes.${i}.parameter`);
+      if (touched || !parameter) continue;
+      const r = startingRange(parameter, baseSetup);
+      setValue(`axes.${i}.from`, r.from);
+      setValue(`axes.${i}.to`, r.to);
+      setValue(`axes.${i}.steps`, r.steps);
+    }
+  }, [baseSetup, getFieldState, getValues, setValue]);
 
   useEffect(() => {
     if (chosen && !watched.revision) setValue('revision', String(chosen.latestRevision));
@@ -108,7 +130,7 @@ function StudyFormBody({
 
         <div className="grid gap-3 lg:grid-cols-2">
           {axes.fields.slice(0, twoAxes ? 2 : 1).map((field, i) => (
-            <AxisFieldset key={field.id} index={i === 0 ? 0 : 1} />
+            <AxisFieldset key={field.id} index={i === 0 ? 0 : 1} base={baseSetup} />
           ))}
         </div>
         <label className="flex items-center gap-2 text-sm">
@@ -120,7 +142,7 @@ function StudyFormBody({
 
         <div className="grid gap-3 lg:grid-cols-2">
           <ObjectivesFieldset taken={watched.objectives?.map((o) => o?.figure)} />
-          <LimitsFieldset />
+          <LimitsFieldset baseSag={baseSag} />
         </div>
 
         <FormError message={error} />

@@ -49,6 +49,8 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
   const [along, setAlong] = useState<0 | 1>(0);
   const [holdAt, setHoldAt] = useState(0);
   const other = def.axes[along === 0 ? 1 : 0];
+  const c = view.compromise;
+  const noFront = c && !c.ok && c.reason === 'no-feasible-point' ? c.explanation.slice(0, 2).join(' ') : null;
   const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
 
   return (
@@ -62,6 +64,11 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
             </h2>
             <span className="text-xs text-ink-faint">{view.points.length} points</span>
           </div>
+          {noFront && (
+            <p className="mb-2 rounded-sm border-l-2 border-signal bg-signal-wash/60 px-2 py-1.5 text-sm text-ink" data-testid="no-front" role="note">
+              No trade-off front: {noFront}
+            </p>
+          )}
           <TradeOffChart view={view} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} describe={describe} />
         </section>
         <div className="space-y-3">

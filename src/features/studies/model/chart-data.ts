@@ -11,7 +11,8 @@ import type { StudyView } from './study-view.ts';
 /**
  * Comfort against grip as aligned columns: one x entry per point (sorted by comfort), each
  * series holding y only where its points are. Series: within limits, breaking a limit, the
- * Pareto front (joined across the gaps), the base setup, the best compromise, the baseline.
+ * Pareto front (joined across the gaps, through the base setup when it is on it), the base
+ * setup, the best compromise, the baseline.
  * `pointAt[i]` is the sweep index at x entry i (−1 for the base).
  */
 export interface TradeOffColumns {
@@ -39,12 +40,15 @@ export function tradeOffColumns(view: StudyView, baselineIndex: number | null): 
   const bg = view.base?.figures[gf];
   if (bc !== undefined && bg !== undefined) entries.push({ x: figureToDisplay(cf, bc), y: figureToDisplay(gf, bg), p: null, index: -1 });
   entries.sort((a, b) => a.x - b.x || a.y - b.y);
+  const anyFeasible = view.points.some((p) => p.feasible);
   const pick = (keep: (e: (typeof entries)[number]) => boolean) => entries.map((e) => (keep(e) ? e.y : null));
   return {
     x: entries.map((e) => e.x),
     feasible: pick((e) => e.p !== null && e.p.feasible),
     infeasible: pick((e) => e.p !== null && !e.p.feasible),
-    front: pick((e) => e.p !== null && frontIdx.has(e.index)),
+    // The base competes for the front like any point within the limits.
+    // No front at all when no swept point meets the limits: a base alone is no trade-off.
+    front: anyFeasible ? pick((e) => (e.p !== null && frontIdx.has(e.index)) || (e.index === -1 && view.tradeOff?.baseOnFront === true)) : entries.map(() => null),
     base: pick((e) => e.index === -1),
     best: pick((e) => e.p !== null && e.index === bestIdx),
     baseline: pick((e) => e.p !== null && e.index === baselineIndex),

@@ -14,6 +14,7 @@ export const figureUnit: Record<StudyFigureKey, UnitName> = {
   bodyAccelCrest: 'ratio',
   bodyAccelWkRms: 'mps2',
   vdv: 'mps175',
+  mtvv: 'mps2',
   tyreLoadRms: 'N',
   tyreLoadRatio: 'percent',
   tyreLoadMin: 'N',
@@ -29,6 +30,7 @@ export const figureUnit: Record<StudyFigureKey, UnitName> = {
   damperVelocityRms: 'mps',
   damperPowerMean: 'W',
   damperEnergy: 'J',
+  staticSag: 'mm',
 };
 
 /** Parameters are entered and shown in these units (spring and tyre rates per mm, as the trade quotes them). */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { StudyDefinition } from '../../../../shared/schemas/study.ts';
-import { defaultFormValues, fieldOfIssue, formToDefinition } from './study-form.ts';
+import { Setup, type SetupInput } from '../../../../shared/schemas/setup.ts';
+import { defaultFormValues, fieldOfIssue, formToDefinition, startingRange } from './study-form.ts';
 
 const ids = (n: number) => (n === 3 ? 'rev-3' : undefined);
 
@@ -13,7 +14,7 @@ describe('study form', () => {
     const d = parsed.data;
     expect(d.base).toEqual({ setupId: 'setup-1', revisionId: 'rev-3' });
     // spring rate is entered in N/mm
-    expect(d.axes[1]).toEqual({ parameter: 'springRate', from: 22000, to: 42000, steps: 6, spacing: 'linear' });
+    expect(d.axes[1]).toEqual({ parameter: 'springRate', from: 14000, to: 42000, steps: 8, spacing: 'linear' });
     expect(d.roads[0]).toEqual({ source: 'inline', road: { kind: 'iso8608', name: 'ISO 8608 class C', class: 'C', seed: 7 } });
     // limits are entered in per cent
     expect(d.constraints.maxStrokeUsed).toBeCloseTo(0.9, 12);
@@ -45,5 +46,27 @@ describe('study form', () => {
     expect(fieldOfIssue(['base', 'revisionId'])).toBe('revision');
     expect(fieldOfIssue(['constraints', 'minTyreLoad'])).toBe('minTyreLoad');
     expect(fieldOfIssue(['objectives'])).toBe('objectives');
+  });
+
+  it('starts the spring range on the base: a 20.5 N/mm spring is the middle of 5 values, shown in N/mm', async () => {
+    const { readFileSync } = await import('node:fs');
+    const doc = JSON.parse(readFileSync(new URL('../../../../examples/pipit-front.setup.json', import.meta.url), 'utf8')) as SetupInput;
+    const base = Setup.parse({ ...doc, springRate: 20500 });
+    expect(startingRange('springRate', base)).toEqual({ from: 14.5, to: 26.5, steps: 5 });
+    expect(startingRange('reboundScale', base)).toEqual({ from: 0.5, to: 1.5, steps: 5 });
+    // before the base has loaded, a wide fixed range that still holds 20.5
+    const fallback = startingRange('springRate', undefined);
+    expect(fallback.from).toBeLessThan(20.5);
+    expect(fallback.to).toBeGreaterThan(20.5);
+  });
+
+  it('sag limits are entered in mm and land on their fields', () => {
+    const v = { ...defaultFormValues('iso:C'), setupId: 's', revision: '3', minSag: '150', maxSag: '180' };
+    const d = StudyDefinition.parse(formToDefinition(v, ids));
+    expect(d.constraints.minStaticSag).toBeCloseTo(0.15, 12);
+    expect(d.constraints.maxStaticSag).toBeCloseTo(0.18, 12);
+    const bad = StudyDefinition.safeParse(formToDefinition({ ...v, minSag: '200' }, ids));
+    expect(bad.success).toBe(false);
+    if (!bad.success) expect(fieldOfIssue(bad.error.issues[0].path)).toBe('maxSag');
   });
 });

@@ -1,6 +1,8 @@
 import type { IsoClass } from '../../../../shared/schemas/road.ts';
 import type { StudyDefinitionInput, StudyFigureKey, StudyParameter } from '../../../../shared/schemas/study.ts';
-import { parameterToSI } from './display.ts';
+import type { Setup } from '../../../../shared/schemas/setup.ts';
+import { centredRange } from '../../../../shared/study/centred-range.ts';
+import { parameterToDisplay, parameterToSI } from './display.ts';
 
 /**
  * The study form's values, in the units the form shows (N/mm for rates, % for shares), and
@@ -37,15 +39,21 @@ export interface StudyFormValues {
   maxLiftOff: string;
   /** N, blank for no limit. */
   minTyreLoad: string;
+  /** mm of static body sag, blank for no limit. */
+  minSag: string;
+  maxSag: string;
 }
 
-/** A sensible range to start from when a parameter is picked (display units). */
+/**
+ * A range to start from when a parameter is picked before the base setup has loaded (display
+ * units); once it has, ranges are centred on the base's own value (shared/study/centred-range.ts).
+ */
 export const parameterDefaults: Record<StudyParameter, { from: number; to: number; steps: number }> = {
   damperScale: { from: 0.6, to: 1.6, steps: 6 },
   compressionScale: { from: 0.6, to: 1.6, steps: 6 },
   reboundScale: { from: 0.6, to: 1.6, steps: 6 },
   targetBodyDampingRatio: { from: 0.15, to: 0.45, steps: 7 },
-  springRate: { from: 22, to: 42, steps: 6 },
+  springRate: { from: 14, to: 42, steps: 8 },
   tyreRate: { from: 160, to: 280, steps: 5 },
   unsprungMass: { from: 28, to: 48, steps: 5 },
   gasForce: { from: 0, to: 400, steps: 5 },
@@ -53,6 +61,15 @@ export const parameterDefaults: Record<StudyParameter, { from: number; to: numbe
 };
 
 export const axisDefaults = (parameter: StudyParameter): AxisValues => ({ parameter, ...parameterDefaults[parameter], spacing: 'linear' });
+
+/** The starting range of a parameter in display units: centred on the base setup when it is known. */
+export function startingRange(parameter: StudyParameter, base: Setup | undefined): { from: number; to: number; steps: number } {
+  const centred = base ? centredRange(parameter, base) : undefined;
+  if (!centred) return parameterDefaults[parameter];
+  // Display values to six figures, so no float noise reaches the fields.
+  const shown = (si: number) => Number(parameterToDisplay(parameter, si).toPrecision(6));
+  return { from: shown(centred.from), to: shown(centred.to), steps: centred.steps };
+}
 
 export function defaultFormValues(firstRoad: string): StudyFormValues {
   return {
@@ -74,6 +91,8 @@ export function defaultFormValues(firstRoad: string): StudyFormValues {
     maxStrokeUsed: '90',
     maxLiftOff: '1',
     minTyreLoad: '',
+    minSag: '',
+    maxSag: '',
   };
 }
 
@@ -114,6 +133,10 @@ export function formToDefinition(v: StudyFormValues, revisionId: (n: number) => 
   if (stroke !== undefined) constraints.maxStrokeUsed = stroke;
   if (lift !== undefined) constraints.maxLiftOffFraction = lift;
   if (load !== undefined) constraints.minTyreLoad = load;
+  const minSag = optionalNumber(v.minSag, 0.001);
+  const maxSag = optionalNumber(v.maxSag, 0.001);
+  if (minSag !== undefined) constraints.minStaticSag = minSag;
+  if (maxSag !== undefined) constraints.maxStaticSag = maxSag;
   return {
     name: v.name,
     base: { setupId: v.setupId, revisionId: revisionId(Number(v.revision)) ?? '' },
@@ -134,7 +157,10 @@ export function fieldOfIssue(path: readonly PropertyKey[]): string {
   const [head, ...rest] = path.map(String);
   if (head === 'base') return rest[0] === 'setupId' ? 'setupId' : 'revision';
   if (head === 'roads') return rest.length ? `roads.${rest[0]}.${rest[1] === 'seed' ? 'seed' : 'choice'}` : 'roads';
-  if (head === 'constraints') return rest[0] === 'maxStrokeUsed' ? 'maxStrokeUsed' : rest[0] === 'maxLiftOffFraction' ? 'maxLiftOff' : 'minTyreLoad';
+  if (head === 'constraints') {
+    const byLimit: Record<string, string> = { maxStrokeUsed: 'maxStrokeUsed', maxLiftOffFraction: 'maxLiftOff', minTyreLoad: 'minTyreLoad', minStaticSag: 'minSag', maxStaticSag: 'maxSag' };
+    return byLimit[rest[0]] ?? 'minTyreLoad';
+  }
   if (head === 'speeds' || head === 'settleTime') return head === 'speeds' ? 'speeds' : 'duration';
   if (head === 'axes') return rest.length >= 2 ? `axes.${rest[0]}.${rest[1]}` : rest.length === 1 ? `axes.${rest[0]}.steps` : 'axes.0.steps';
   if (head === 'objectives') return rest.length >= 2 ? `objectives.${rest[0]}.${rest[1]}` : 'objectives';

@@ -26,7 +26,7 @@ export function studyView(definition: ViewedDefinition, points: readonly StudyPo
     points: sorted,
     base,
     compromise: final && sorted.length > 0 ? studyBestCompromise(definition, sorted) : null,
-    tradeOff: final ? studyTradeOff(definition, sorted) : null,
+    tradeOff: final ? studyTradeOff(definition, sorted, base) : null,
   };
 }
 

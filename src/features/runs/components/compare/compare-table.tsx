@@ -1,5 +1,6 @@
 import { Figure } from '../../../../components/ui/figure.tsx';
-import { BEST_MARGIN, betterRules, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
+import { rideJudgement } from '../../../../../shared/sim/metrics/rms-method.ts';
+import { BEST_MARGIN, betterRules, groupTitles, bestIndex, rowsFor, type FigureGroup } from '../../model/figure-rows.ts';
 import { type ComparedRun, differenceText } from '../../model/compare.ts';
 import { Swatch } from './swatch.tsx';
 
@@ -10,6 +11,8 @@ const groups: FigureGroup[] = ['comfort', 'grip', 'package', 'damper', 'modal'];
  * against it. The better value of a ranked row is marked; the rule each row uses is stated.
  */
 export function CompareTable({ runs }: { runs: ComparedRun[] }) {
+  const rows = rowsFor(runs.map((r) => r.view.result));
+  const judged = runs.map((r) => rideJudgement(r.view.result.road.kind, r.view.result.metrics));
   return (
     <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
       <p className="px-3 pt-2 text-xs text-ink-soft">
@@ -42,7 +45,26 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                 {groupTitles[group]}
               </th>
             </tr>
-            {figureRows
+            {group === 'comfort' && (
+              <tr data-row="verdict">
+                <th scope="row" className="h-8 px-3 text-left font-normal text-ink">
+                  ISO 2631-1 comfort reaction (RMS method)
+                </th>
+                <td className="px-2 text-xs whitespace-nowrap text-ink-faint">{betterRules.unranked}</td>
+                {judged.map((j, i) => (
+                  <td key={runs[i].key} className="px-3 py-1 text-right align-top text-xs">
+                    {j.verdict ? (
+                      <span className="text-comfort">{j.verdict.bands.join(' / ')}</span>
+                    ) : (
+                      <span className="text-ink-soft" title={j.why ?? undefined}>
+                        none: {j.crestAboveLimit ? `crest factor ${j.crest.toFixed(1)} > 9` : 'single event'}
+                      </span>
+                    )}
+                  </td>
+                ))}
+              </tr>
+            )}
+            {rows
               .filter((row) => row.group === group)
               .map((row) => {
                 const values = runs.map((r) => row.value(r.view.result));

@@ -1,11 +1,12 @@
 import { studyParameters, type StudyParameter } from '../../../../../shared/schemas/study.ts';
 import { Field, Input, Select } from '../../../../components/ui/field.tsx';
 import { parameterLabel } from '../../model/display.ts';
-import { axisDefaults } from '../../model/study-form.ts';
+import type { Setup } from '../../../../../shared/schemas/setup.ts';
+import { startingRange } from '../../model/study-form.ts';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
 
-/** One swept parameter and its range; picking a parameter fills in a sensible range for it. */
-export function AxisFieldset({ index: i }: { index: 0 | 1 }) {
+/** One swept parameter and its range; picking a parameter fills in a range centred on the base setup's value. */
+export function AxisFieldset({ index: i, base }: { index: 0 | 1; base: Setup | undefined }) {
   const { register, setValue } = useStudyFormContext();
   const e = useFieldError();
   return (
@@ -15,7 +16,7 @@ export function AxisFieldset({ index: i }: { index: 0 | 1 }) {
         <Select
           {...register(`axes.${i}.parameter`, {
             onChange: (ev: React.ChangeEvent<HTMLSelectElement>) => {
-              const d = axisDefaults(ev.target.value as StudyParameter);
+              const d = startingRange(ev.target.value as StudyParameter, base);
               setValue(`axes.${i}.from`, d.from);
               setValue(`axes.${i}.to`, d.to);
               setValue(`axes.${i}.steps`, d.steps);
