@@ -56,7 +56,7 @@ describe('npm run study', { timeout: 180_000 }, () => {
     const here = runStudyHere(input.definition, input.baseSetup, input.roads);
     // Through JSON as the CLI's answer went, so both sides are compared as printed.
     const expected = JSON.parse(
-      JSON.stringify({ points: here.points, base: here.base, front: studyTradeOff(input.definition, here.points), bestCompromise: studyBestCompromise(input.definition, here.points) }),
+      JSON.stringify({ points: here.points, base: here.base, front: studyTradeOff(input.definition, here.points, here.base), bestCompromise: studyBestCompromise(input.definition, here.points, undefined, here.base) }),
     );
     expect(out.points).toHaveLength(9);
     expect(out.runs).toBe(10); // 9 points and the base setup, one road, one speed

@@ -65,6 +65,7 @@ async function main(argv: string[]): Promise<number> {
   const collector = createPointCollector(definition, expanded, studyRoadNames(definition, roads));
   for (const out of outcomes.flat()) collector.add(out.pointIndex, out.run, out.setupError);
   const points = collector.points();
+  const base = collector.base();
   const report = {
     study: definition.name,
     setup: baseSetup.name,
@@ -72,9 +73,9 @@ async function main(argv: string[]): Promise<number> {
     threads: Math.min(threads, chunks.length),
     elapsedMs: Math.round(performance.now() - started),
     points,
-    base: collector.base(),
-    front: points.length > 0 ? studyTradeOff(definition, points) : null,
-    bestCompromise: points.length > 0 ? studyBestCompromise(definition, points) : null,
+    base,
+    front: points.length > 0 ? studyTradeOff(definition, points, base) : null,
+    bestCompromise: points.length > 0 ? studyBestCompromise(definition, points, undefined, base) : null,
   };
   const text = JSON.stringify(report, null, 2) + '\n';
   if (values.out) writeFileSync(values.out, text);

@@ -63,5 +63,5 @@ export function sheetCheckFiles(input: { files: UploadedText[]; fields: DynoChec
 
 /** The best compromise and the trade-off front over a study's saved points. */
 export function studyRunFigures(input: { def: StudyDefinition; points: StudyPointResult[]; base?: StudyPointResult | null }) {
-  return { compromise: studyBestCompromise(input.def, input.points), tradeOff: studyTradeOff(input.def, input.points, input.base ?? null) };
+  return { compromise: studyBestCompromise(input.def, input.points, undefined, input.base ?? null), tradeOff: studyTradeOff(input.def, input.points, input.base ?? null) };
 }

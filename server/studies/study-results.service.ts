@@ -122,7 +122,7 @@ export async function closeStudyRunInTx(
   }
   if (points.length === 0) return fail('conflict', 'No point of this study has been saved yet; save points before finishing a run.');
   const status = complete ? 'complete' : 'partial';
-  const compromise = ranked?.compromise ?? studyBestCompromise(def, points);
+  const compromise = ranked?.compromise ?? studyBestCompromise(def, points, undefined, base ?? null);
   const winner = compromise.ok ? points[compromise.winner] : undefined;
   const summary: StudyResultsSummary = {
     plannedPoints: row.planned_points,

@@ -147,3 +147,45 @@ describe('bestCompromise', () => {
     expect(r.explanation).toContain('1 point was left out for a missing figure.');
   });
 });
+
+describe('best compromise scaled by the base setup', () => {
+  // Two figures, both lower-is-better, equal weights. Scaled by the grid's range, adding a point
+  // that is worse than both candidates moves the range and flips the winner between them; scaled
+  // by the base's figures, each point's score is its own and the winner stays (issue: the
+  // choice must not depend on how wide the grid was swept).
+  const objectives = [
+    { label: 'comfort', unit: 'm/s²', weight: 1, goal: 'min' as const },
+    { label: 'grip', unit: '%', weight: 1, goal: 'min' as const },
+  ];
+  const p1 = { label: 'P1', values: [1.0, 10], feasible: true };
+  const p2 = { label: 'P2', values: [1.2, 8], feasible: true };
+  const worseInGrip = { label: 'wide-grip', values: [1.0, 30], feasible: true };
+  const worseInComfort = { label: 'wide-comfort', values: [3.0, 8], feasible: true };
+  const base = [1.1, 9];
+  const winnerOf = (points: (typeof p1)[], reference?: number[]) => {
+    const r = bestCompromise(points, objectives, reference);
+    if (!r.ok) throw new Error(r.explanation.join(' '));
+    return points[r.winner].label;
+  };
+
+  it('by the grid range, a wider sweep changes which of two points wins', () => {
+    expect(winnerOf([p1, p2, worseInGrip])).toBe('P1');
+    expect(winnerOf([p1, p2, worseInComfort])).toBe('P2');
+  });
+
+  it('by the base, the winner and its score stay whatever else was swept', () => {
+    // P1: (1.0 − 1.1)/1.1 and (10 − 9)/9 average to +0.0101; P2: −0.0101 (hand-worked)
+    expect(winnerOf([p1, p2, worseInGrip], base)).toBe('P2');
+    expect(winnerOf([p1, p2, worseInComfort], base)).toBe('P2');
+    const r = bestCompromise([p1, p2], objectives, base);
+    if (!r.ok) throw new Error('no winner');
+    expect(r.score).toBeCloseTo((0.1 / 1.1 - 1 / 9) / 2, 12);
+    expect(r.explanation[0]).toMatch(/change from the base setup/);
+  });
+
+  it('falls back to the grid range, and says the choice depends on it, when the base lacks a figure', () => {
+    const r = bestCompromise([p1, p2, worseInGrip], objectives, [1.1, null]);
+    if (!r.ok) throw new Error('no winner');
+    expect(r.explanation[0]).toMatch(/depends on the range swept/);
+  });
+});

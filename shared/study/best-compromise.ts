@@ -38,9 +38,14 @@ function deltaWords(o: CompromiseObjective, winner: number, other: number): stri
 }
 
 /**
- * The best compromise: each weighed objective is scaled to [0, 1] over the feasible points with
- * every value present (0 = best seen, 1 = worst seen; a figure equal everywhere scores 0), the
- * score is the weighted mean of the scaled figures, and the lowest score wins. Ties go to a
+ * The best compromise. Each weighed objective is scaled, the score is the weighted mean of the
+ * scaled figures, and the lowest score wins. With a `reference` (the base setup's values, every
+ * weighed one present and not 0) a figure is scaled as its change from the base's, relative to
+ * it (−0.05 = 5 % better than the base): a point's score then does not depend on which other
+ * points the sweep happened to include, so widening the grid cannot change the winner among
+ * the points already there. Without one, each figure is scaled to [0, 1] over the feasible
+ * points with every value present (0 = best seen, 1 = worst seen; equal everywhere scores 0),
+ * which does depend on the grid, and the explanation says so. Ties go to a
  * point no other tied point dominates, then to the lowest index (sweep order).
  *
  * The explanation says why the winner wins and, against its neighbours on the Pareto front of
@@ -48,7 +53,7 @@ function deltaWords(o: CompromiseObjective, winner: number, other: number): stri
  * otherwise), what it gives up for what it gains, e.g. "Compared with rebound ×1.40: 3.1 % more
  * Wk-weighted body acceleration for 8.0 % less tyre load variation."
  */
-export function bestCompromise(points: readonly CompromisePoint[], objectives: readonly CompromiseObjective[]): CompromiseResult {
+export function bestCompromise(points: readonly CompromisePoint[], objectives: readonly CompromiseObjective[], reference?: readonly (number | null)[]): CompromiseResult {
   const weighed = objectives.flatMap((o, k) => (o.weight > 0 ? [k] : []));
   if (weighed.length === 0) return { ok: false, reason: 'no-weight', explanation: ['Give at least one figure a weight above 0.'] };
   if (points.length === 0) return { ok: false, reason: 'no-points', explanation: ['The study has no finished points yet.'] };
@@ -65,7 +70,12 @@ export function bestCompromise(points: readonly CompromisePoint[], objectives: r
     const cs = scored.map((i) => cost(i, k));
     return { objective: k, min: Math.min(...cs), max: Math.max(...cs) };
   });
-  const scaled = (i: number) => ranges.map((r) => (r.max > r.min ? (cost(i, r.objective) - r.min) / (r.max - r.min) : 0));
+  const refCost = (k: number) => (objectives[k].goal === 'max' ? -1 : 1) * (reference![k] as number);
+  const byBase = !!reference && weighed.every((k) => typeof reference[k] === 'number' && Number.isFinite(reference[k]) && reference[k] !== 0);
+  const scaled = (i: number) =>
+    byBase
+      ? weighed.map((k) => (cost(i, k) - refCost(k)) / Math.abs(reference![k] as number))
+      : ranges.map((r) => (r.max > r.min ? (cost(i, r.objective) - r.min) / (r.max - r.min) : 0));
   const wSum = weighed.reduce((s, k) => s + objectives[k].weight, 0);
   const scores: (number | null)[] = points.map(() => null);
   for (const i of scored) scores[i] = scaled(i).reduce((s, x, m) => s + objectives[weighed[m]].weight * x, 0) / wSum;
@@ -102,7 +112,11 @@ export function bestCompromise(points: readonly CompromisePoint[], objectives: r
 
   const weights = weighed.map((k) => `${objectives[k].label} ${fmt(objectives[k].weight)}`).join(', ');
   const explanation = [
-    `${points[winner].label} has the lowest weighted score, ${best.toFixed(3)}, of the ${scored.length} point${scored.length === 1 ? '' : 's'} that meet the limits (weights: ${weights}; each figure scaled from 0 at the best to 1 at the worst of those points).`,
+    `${points[winner].label} has the lowest weighted score, ${best.toFixed(3)}, of the ${scored.length} point${scored.length === 1 ? '' : 's'} that meet the limits (weights: ${weights}; ${
+      byBase
+        ? 'each figure as its change from the base setup, relative to the base: 0 is as good as the base, −0.05 is 5 % better'
+        : 'each figure scaled from 0 at the best to 1 at the worst of those points, so the choice depends on the range swept; a base setup to compare with would remove that'
+    }).`,
   ];
   if (infeasible) explanation.push(`${infeasible} point${infeasible === 1 ? ' was' : 's were'} left out for breaking a limit.`);
   if (incomplete) explanation.push(`${incomplete} point${incomplete === 1 ? ' was' : 's were'} left out for a missing figure.`);

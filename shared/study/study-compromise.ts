@@ -25,11 +25,14 @@ export function studyBestCompromise(
   def: { axes: readonly { parameter: StudyParameter }[]; objectives: readonly StudyObjective[] },
   points: readonly StudyPointResult[],
   format?: Parameters<typeof describePoint>[2],
+  /** The base setup's results: figures are then scaled by the base's, not by the grid's range. */
+  base?: StudyPointResult | null,
 ): StudyCompromise {
   const objectives = def.objectives.map((o) => ({ ...studyFigureInfo[o.figure], weight: o.weight }));
   const result = bestCompromise(
     points.map((p) => ({ label: describePoint(def.axes, p.values, format), values: p.objectives, feasible: p.feasible })),
     objectives,
+    base?.feasible !== false ? base?.objectives : undefined,
   );
   if (result.ok || result.reason !== 'no-feasible-point') return result;
   const counts = new Map<StudyViolationKind, number>();

@@ -25,7 +25,7 @@ export function studyView(definition: ViewedDefinition, points: readonly StudyPo
     definition,
     points: sorted,
     base,
-    compromise: final && sorted.length > 0 ? studyBestCompromise(definition, sorted) : null,
+    compromise: final && sorted.length > 0 ? studyBestCompromise(definition, sorted, undefined, base) : null,
     tradeOff: final ? studyTradeOff(definition, sorted, base) : null,
   };
 }
