@@ -18,10 +18,12 @@ import { useScenario } from '../../features/runs/model/use-scenario.ts';
 import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { downloadText } from '../../lib/download.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+import { useUnits } from '../../lib/units/use-units.tsx';
 
 /** `/w/:workspaceId/compare`: two to four setups (run here on one scenario) or saved runs, side by side. */
 export function CompareRoute() {
   const workspace = useWorkspace();
+  const chosen = useUnits();
   const [params, setParams] = useSearchParams();
   const [entries, setEntries] = useState<CompareEntry[]>(() => entriesFromParams(params));
   const setups = useQuery(setupsQueryOptions(workspace.id));
@@ -85,7 +87,7 @@ export function CompareRoute() {
               <Section
                 title="Figures"
                 actions={
-                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result }))), 'comparison-figures.csv')}>
+                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result })), chosen), 'comparison-figures.csv')}>
                     Figures CSV
                   </Button>
                 }

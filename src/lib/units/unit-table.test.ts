@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { convertShown, unitTable, type QuantityKind } from './unit-table.ts';
+import { convertShown, siFromShown, unitTable, type QuantityKind } from './unit-table.ts';
 
 describe('display unit table', () => {
   it('gives the exact defining factors (NIST SP 811, appendix B.8): 1 in = 0.0254 m, 1 mph = 0.44704 m/s, 1 lbf/in = 175.126835 N/m', () => {
@@ -39,5 +39,16 @@ describe('display unit table', () => {
     for (const kind of Object.keys(unitTable) as QuantityKind[]) {
       for (const [name, unit] of Object.entries(unitTable[kind])) expect(unit.symbol).toBe(name);
     }
+  });
+});
+
+describe('siFromShown', () => {
+  it('reads back a shown imperial figure as the round SI value it came from, and keeps typed metric digits', () => {
+    const inPerS = unitTable.damperVelocity['in/s'];
+    const shown = Number(inPerS.fromSI(0.05).toPrecision(6));
+    expect(shown).toBe(1.9685);
+    expect(siFromShown(inPerS, shown)).toBe(0.05);
+    expect(siFromShown(unitTable.damperVelocity['mm/s'], 123.4567)).toBeCloseTo(0.1234567, 12);
+    expect(siFromShown(unitTable.damperVelocity['mm/s'], 50)).toBe(0.05);
   });
 });

@@ -74,3 +74,18 @@ export function convertShown<K extends QuantityKind>(kind: K, value: number, fro
   const table = unitTable[kind] as Record<string, DisplayUnit>;
   return table[to as string].fromSI(table[from as string].toSI(value));
 }
+
+/**
+ * A typed number in `unit` back to SI without float noise: an imperial cell shows 6 significant
+ * figures (0.05 m/s → "1.9685" in/s), so the shortest SI value that shows the same text is taken
+ * (0.05, not 0.0499999). A number typed with more figures than a cell shows converts exactly.
+ */
+export function siFromShown(unit: DisplayUnit, shown: number): number {
+  const si = unit.toSI(shown);
+  if (!Number.isFinite(si) || shown !== Number(shown.toPrecision(6))) return si;
+  for (let digits = 1; digits <= 15; digits++) {
+    const short = Number(si.toPrecision(digits));
+    if (Number(unit.fromSI(short).toPrecision(6)) === shown) return short;
+  }
+  return si;
+}

@@ -1,13 +1,13 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
-import type { UnitName } from '../../../lib/format.ts';
+import type { UnitRef } from '../../../lib/format.ts';
 import { STROKE_WARNING_SHARE } from '../model/warnings.ts';
 
 interface Cell {
   name: string;
   title: string;
   value: number | undefined;
-  unit?: UnitName;
+  unit?: UnitRef;
   hue?: 'comfort' | 'grip';
   sub?: string;
   warn?: boolean;

@@ -6,6 +6,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input } from '../../../components/ui/field.tsx';
 import { useToast } from '../../../components/ui/toast.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { useSaveRun } from '../api/save-run.ts';
 import { downloadText } from '../../../lib/download.ts';
 import { fileStem, figuresCsv, tracesCsv } from '../model/export-csv.ts';
@@ -23,9 +24,10 @@ export function runTitle(view: RunView, revisionNumber?: number): string {
 }
 
 export function ExportButtons({ view, name }: { view: RunView; name: string }) {
+  const chosen = useUnits();
   return (
     <>
-      <Button size="sm" onClick={() => downloadText(figuresCsv([{ name, result: view.result }]), `${fileStem(name)}-figures.csv`)}>
+      <Button size="sm" onClick={() => downloadText(figuresCsv([{ name, result: view.result }], chosen), `${fileStem(name)}-figures.csv`)}>
         Figures CSV
       </Button>
       <Button size="sm" onClick={() => downloadText(tracesCsv(view), `${fileStem(name)}-traces.csv`)}>

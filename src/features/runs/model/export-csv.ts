@@ -1,7 +1,7 @@
 import { writeCsv } from '../../../../shared/csv/write-csv.ts';
 import type { RunResult } from '../../../../shared/schemas/run.ts';
-import { units } from '../../../lib/format.ts';
-import { betterRules, figureRows } from './figure-rows.ts';
+import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
+import { betterRules, displayUnitOf, figureRows } from './figure-rows.ts';
 import type { RunView } from './run-view.ts';
 
 /**
@@ -15,10 +15,10 @@ export interface NamedResult {
 }
 
 /** One row per figure, one value column per run. */
-export function figuresCsv(runs: NamedResult[]): string {
+export function figuresCsv(runs: NamedResult[], chosen?: ChosenUnits): string {
   const header = ['group', 'figure', 'unit', ...runs.map((r) => r.name), 'ranking'];
   const rows = figureRows.map((row) => {
-    const unit = row.unit ? units[row.unit] : undefined;
+    const unit = displayUnitOf(row, chosen);
     return [
       row.group,
       row.label,

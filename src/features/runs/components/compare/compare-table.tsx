@@ -1,5 +1,6 @@
 import { Figure } from '../../../../components/ui/figure.tsx';
-import { BEST_MARGIN, betterRules, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
+import { BEST_MARGIN, betterRules, displayUnitOf, figureRows, groupTitles, bestIndex, type FigureGroup } from '../../model/figure-rows.ts';
 import { type ComparedRun, differenceText } from '../../model/compare.ts';
 import { Swatch } from './swatch.tsx';
 
@@ -10,6 +11,7 @@ const groups: FigureGroup[] = ['comfort', 'grip', 'package', 'damper', 'modal'];
  * against it. The better value of a ranked row is marked; the rule each row uses is stated.
  */
 export function CompareTable({ runs }: { runs: ComparedRun[] }) {
+  const chosen = useUnits();
   return (
     <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
       <p className="px-3 pt-2 text-xs text-ink-soft">
@@ -55,7 +57,7 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                     <td className="px-2 text-xs whitespace-nowrap text-ink-faint">{betterRules[row.better]}</td>
                     {runs.map((r, i) => {
                       const v = values[i];
-                      const diff = i === 0 ? null : differenceText(row, values[0], v);
+                      const diff = i === 0 ? null : differenceText(row, values[0], v, chosen);
                       return (
                         <td key={r.key} className={`px-3 py-1 text-right align-top ${best === i ? 'bg-ok-wash/70' : ''}`} data-best={best === i || undefined}>
                           {v === undefined ? (
@@ -67,7 +69,7 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                                   best
                                 </span>
                               )}
-                              <Figure value={v} unit={row.unit} label={`${row.label}, ${r.label}`} className={best === i ? 'font-semibold' : ''} />
+                              <Figure value={v} unit={displayUnitOf(row, chosen)} label={`${row.label}, ${r.label}`} className={best === i ? 'font-semibold' : ''} />
                             </span>
                           )}
                           {diff && (
