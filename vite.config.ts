@@ -30,6 +30,31 @@ export default defineConfig({
       },
       {
         extends: true,
+        // The same API tests on PostgreSQL: a throwaway cluster from Debian's package (README, "Running for a team").
+        test: {
+          name: 'api-pg',
+          environment: 'node',
+          include: ['tests/api/**/*.test.ts'],
+          env: { RIDEWRIGHT_TEST_DATABASE: 'postgres' },
+          globalSetup: ['tests/api/helpers/postgres-global-setup.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        extends: true,
+        // Several server processes on one PostgreSQL database, copying SQLite into it, crashes on it.
+        test: {
+          name: 'team',
+          environment: 'node',
+          include: ['tests/team/**/*.test.ts'],
+          globalSetup: ['tests/api/helpers/postgres-global-setup.ts'],
+          testTimeout: 240_000,
+          hookTimeout: 240_000,
+        },
+      },
+      {
+        extends: true,
         // Fuzzed inputs and SIGKILL crash safety (server/THREAT-MODEL.md); bounded to a few minutes.
         test: { name: 'hardening', environment: 'node', include: ['tests/fuzz/**/*.test.ts', 'tests/crash/**/*.test.ts'], testTimeout: 240_000, hookTimeout: 60_000 },
       },

@@ -1,4 +1,4 @@
-import { type Kysely, sql } from 'kysely';
+import { type Kysely, PostgresAdapter, sql } from 'kysely';
 
 // Corner setups and their revisions, vehicles that group a front and a rear corner, and
 // read-only share links. A revision's `document` is the JSON of the setup schema exactly as
@@ -48,7 +48,13 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('source', 'text')
     .addUniqueConstraint('setup_revision_number_uq', ['setup_id', 'number'])
     .execute();
-  await sql`create trigger setup_revision_immutable before update on setup_revision begin select raise(abort, 'setup revisions are immutable: save a new revision instead'); end`.execute(db);
+  if (db.getExecutor().adapter instanceof PostgresAdapter) {
+    await sql`create function setup_revision_immutable() returns trigger language plpgsql as $$
+      begin raise exception 'setup revisions are immutable: save a new revision instead'; end $$`.execute(db);
+    await sql`create trigger setup_revision_immutable before update on setup_revision for each row execute function setup_revision_immutable()`.execute(db);
+  } else {
+    await sql`create trigger setup_revision_immutable before update on setup_revision begin select raise(abort, 'setup revisions are immutable: save a new revision instead'); end`.execute(db);
+  }
 
   await db.schema
     .createTable('share_link')
@@ -67,7 +73,12 @@ export async function up(db: Kysely<any>): Promise<void> {
 }
 
 export async function down(db: Kysely<any>): Promise<void> {
-  await sql`drop trigger if exists setup_revision_immutable`.execute(db);
+  if (db.getExecutor().adapter instanceof PostgresAdapter) {
+    await sql`drop trigger if exists setup_revision_immutable on setup_revision`.execute(db);
+    await sql`drop function if exists setup_revision_immutable()`.execute(db);
+  } else {
+    await sql`drop trigger if exists setup_revision_immutable`.execute(db);
+  }
   for (const table of ['share_link', 'setup_revision', 'setup', 'vehicle']) {
     await db.schema.dropTable(table).execute();
   }

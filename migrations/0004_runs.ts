@@ -1,4 +1,4 @@
-import { type Kysely, sql } from 'kysely';
+import { type Kysely, PostgresAdapter, sql } from 'kysely';
 
 // Saved runs: what was driven (setup revision, road JSON with its seed, speed, duration, the full
 // request), the figures as the browser computed them (JSON), and thinned traces as raw Float32
@@ -7,6 +7,8 @@ import { type Kysely, sql } from 'kysely';
 // Frozen once committed.
 
 export async function up(db: Kysely<any>): Promise<void> {
+  // 'double precision' is SQLite's REAL; binary columns are BLOB there and bytea on PostgreSQL.
+  const binary = db.getExecutor().adapter instanceof PostgresAdapter ? 'bytea' : 'blob';
   await db.schema
     .createTable('run')
     .addColumn('id', 'text', (c) => c.primaryKey())
@@ -16,8 +18,8 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('road_id', 'text', (c) => c.references('road.id').onDelete('set null'))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('road', 'text', (c) => c.notNull())
-    .addColumn('speed', 'real', (c) => c.notNull().check(sql`speed > 0`))
-    .addColumn('duration', 'real', (c) => c.notNull().check(sql`duration > 0`))
+    .addColumn('speed', 'double precision', (c) => c.notNull().check(sql`speed > 0`))
+    .addColumn('duration', 'double precision', (c) => c.notNull().check(sql`duration > 0`))
     .addColumn('seed', 'integer')
     .addColumn('request', 'text', (c) => c.notNull())
     .addColumn('metrics', 'text', (c) => c.notNull())
@@ -26,9 +28,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('result', 'text', (c) => c.notNull())
     // {"method","fullLength","length"} of the traces blob.
     .addColumn('trace_info', 'text', (c) => c.notNull())
-    .addColumn('traces', 'blob', (c) => c.notNull())
+    .addColumn('traces', binary, (c) => c.notNull())
     .addColumn('spectra_length', 'integer')
-    .addColumn('spectra', 'blob')
+    .addColumn('spectra', binary)
     .addColumn('created_by', 'text', (c) => c.notNull().references('user.id'))
     .addColumn('created_at', 'text', (c) => c.notNull())
     .execute();

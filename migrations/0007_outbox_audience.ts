@@ -18,7 +18,7 @@ export async function up(db: Kysely<any>): Promise<void> {
   // Earlier messages were sent to one plain address each; anything else stays visible to nobody.
   await sql`insert into outbox_recipient (message_id, address)
     select id, lower(trim(to_address)) from outbox_message
-    where to_address <> '' and instr(to_address, ',') = 0 and instr(to_address, '<') = 0`.execute(db);
+    where to_address <> '' and to_address not like '%,%' and to_address not like '%<%'`.execute(db);
 }
 
 export async function down(db: Kysely<any>): Promise<void> {

@@ -34,7 +34,7 @@ function trustProxyValue(v: string | undefined): boolean | number | string {
  * listens. Used by main.ts; test harnesses can call it directly.
  */
 export async function startServer(config: ServerConfig, logger: Logger, client: ClientServing = { kind: 'static', distDir: DIST_DIR }): Promise<RunningServer> {
-  const db = openDatabase(config.dbPath);
+  const db = openDatabase(config.database);
   const { error, results } = await migrateToLatest(db);
   for (const r of results ?? []) if (r.status !== 'NotExecuted') logger.info(`migration ${r.migrationName}: ${r.status}`);
   if (error) {

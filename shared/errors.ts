@@ -21,12 +21,17 @@ export type ErrorCode = z.infer<typeof ErrorCode>;
 export const FieldIssue = z.object({ path: z.string(), message: z.string() });
 export type FieldIssue = z.infer<typeof FieldIssue>;
 
+/** A stored thing a refusal points at, so the client can link to it (e.g. the revision a save would duplicate). */
+export const ErrorSee = z.object({ kind: z.literal('setup_revision'), setupId: z.string(), number: z.number().int().positive() });
+export type ErrorSee = z.infer<typeof ErrorSee>;
+
 /** Body of every non-2xx JSON response under /api. */
 export const ErrorBody = z.object({
   error: z.object({
     code: ErrorCode,
     message: z.string(),
     fields: z.array(FieldIssue).optional(),
+    see: ErrorSee.optional(),
   }),
 });
 export type ErrorBody = z.infer<typeof ErrorBody>;

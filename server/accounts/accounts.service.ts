@@ -15,7 +15,7 @@ import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../wor
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { releaseSlot, takeSlot, type ThrottleRule } from '../limits/index.ts';
-import { isUniqueViolation } from '../core/sqlite-errors.ts';
+import { isUniqueViolation } from '../db/dialect.ts';
 
 export type SessionStart = Pick<UserRow, 'id' | 'session_version'>;
 

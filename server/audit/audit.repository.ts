@@ -1,4 +1,4 @@
-import { sql } from 'kysely';
+import { insertionOrder } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewAuditLogRow } from './audit.tables.ts';
 
@@ -23,5 +23,5 @@ export function listAuditEntries(db: Queryable, workspaceId: string, limit: numb
     ])
     .where('audit_log.workspace_id', '=', workspaceId);
   if (before) q = q.where('audit_log.at', '<', before);
-  return q.orderBy('audit_log.at', 'desc').orderBy(sql`audit_log.rowid`, 'desc').limit(limit).execute();
+  return q.orderBy('audit_log.at', 'desc').orderBy(insertionOrder(db, 'audit_log'), 'desc').limit(limit).execute();
 }

@@ -5,10 +5,14 @@ import autocannon from 'autocannon';
 import { Me } from '../../shared/schemas/account.ts';
 import { SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../core/demo-people.ts';
+import { adminQuery, startLocalPostgres } from '../db/local-postgres.ts';
 import { prepareDatabase, startServerProcess } from './server-process.ts';
 import { callJson, sessionHeaders, signInAs } from './session-client.ts';
 
 // `npm run bench:api [-- --duration 5 --runs 3 --connections 10] [-- --soak 300] [-- --abuse …]`
+//   `[-- --db postgres [--processes 2]]`: the same on a throwaway PostgreSQL cluster (Debian's
+//   package, default durability), with one or more server processes sharing it; the load is split
+//   evenly over the processes, as a load balancer would.
 // (`--abuse`: light-read latency under heavy requests, server/bench/abuse-load.ts)
 // Starts the real server (child process, temp SQLite seeded with the demo workspace, loopback,
 // rate limit off, request logging off), signs in as the demo engineer and drives representative
@@ -32,6 +36,8 @@ const duration = arg('duration', 5);
 const runs = arg('runs', 3);
 const connections = arg('connections', 10);
 const soak = arg('soak', 0);
+const processes = arg('processes', 1);
+const onPostgres = process.argv.includes('postgres');
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 const mb = (b: number) => `${(b / 1024 / 1024).toFixed(0)} MB`;
@@ -42,12 +48,27 @@ interface Scenario {
   method: 'GET' | 'POST' | 'PATCH';
   path: string;
   body?: unknown;
+  vary?: boolean;
 }
+
+let saves = 0;
+/** A revision body with a sprung mass of its own (grams apart), so no two saves are identical. */
+const variedSave = (body: unknown) => {
+  const b = body as { setup: { sprungMass: number }; message: string };
+  saves++;
+  return JSON.stringify({ ...b, setup: { ...b.setup, sprungMass: b.setup.sprungMass + (saves % 100_000) / 1000 } });
+};
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-bench-api-'));
 const dbPath = join(dir, 'bench.sqlite');
-await prepareDatabase(dbPath);
-const server = await startServerProcess({ dbPath, env: { LOG_LEVEL: 'warn' } });
+const cluster = onPostgres ? await startLocalPostgres() : null;
+if (cluster) await adminQuery(cluster.url(), 'create database bench');
+const target = cluster ? cluster.url('bench') : dbPath;
+await prepareDatabase(target);
+const env = { LOG_LEVEL: 'warn', ...(cluster ? { DATABASE_URL: target } : {}) };
+const servers = await Promise.all(Array.from({ length: cluster ? processes : 1 }, () => startServerProcess({ dbPath, env })));
+const server = servers[0];
+console.log(`database: ${cluster ? `PostgreSQL (${cluster.binDir}), ${servers.length} server process(es)` : 'SQLite file, 1 server process'}`);
 try {
   const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!;
   const session = await signInAs(server.url, engineer.email, DEMO_PASSWORD);
@@ -68,11 +89,29 @@ try {
     { name: 'GET revisions', kind: 'read', method: 'GET', path: `${base}/setups/${setupId}/revisions` },
     { name: 'GET roads', kind: 'read', method: 'GET', path: `${base}/roads` },
     { name: 'GET runs', kind: 'read', method: 'GET', path: `${base}/runs` },
-    { name: 'POST revision (save)', kind: 'write', method: 'POST', path: `${base}/setups/${setupId}/revisions`, body: { setup: doc, message: 'bench save' } },
+    // each save differs from the one before (the same content twice is refused as a duplicate)
+    { name: 'POST revision (save)', kind: 'write', method: 'POST', path: `${base}/setups/${setupId}/revisions`, body: { setup: doc, message: 'bench save' }, vary: true },
     { name: 'POST vehicle (create)', kind: 'write', method: 'POST', path: `${base}/vehicles`, body: { name: 'Bench vehicle' } },
   ];
 
-  const fire = (opts: autocannon.Options) => autocannon({ connections, ...opts });
+  const requestFor = (s: Scenario) => ({
+    method: s.method,
+    path: s.path,
+    body: s.body === undefined ? undefined : JSON.stringify(s.body),
+    ...(s.vary ? { setupRequest: (req: { body?: unknown }) => ({ ...req, body: variedSave(s.body) }) } : {}),
+  });
+  /** One autocannon per server process, connections split evenly; figures combined. */
+  const fire = async (opts: Omit<autocannon.Options, 'url'>) => {
+    const each = await Promise.all(servers.map((sv) => autocannon({ ...opts, url: sv.url, connections: Math.max(1, Math.round(connections / servers.length)) })));
+    return {
+      requests: { average: each.reduce((n, r) => n + r.requests.average, 0), total: each.reduce((n, r) => n + r.requests.total, 0) },
+      latency: { p50: median(each.map((r) => r.latency.p50)), p99: Math.max(...each.map((r) => r.latency.p99)) },
+      errors: each.reduce((n, r) => n + r.errors, 0),
+      timeouts: each.reduce((n, r) => n + r.timeouts, 0),
+      non2xx: each.reduce((n, r) => n + r.non2xx, 0),
+    };
+  };
+  const cpuMs = () => servers.reduce((n, sv) => n + sv.cpuMs(), 0);
   const rssStart = server.rssBytes();
   console.log(`server ${server.url}, pid ${server.pid}; ${connections} connections, ${runs} × ${duration} s per route; RSS at start ${mb(rssStart)}\n`);
   console.log('route                         kind    req/s   p50 ms  p99 ms  errors  non-2xx  server CPU ms/req');
@@ -81,9 +120,9 @@ try {
     const results = [];
     const cpu: number[] = [];
     for (let i = 0; i < runs; i++) {
-      const cpuBefore = server.cpuMs();
-      results.push(await fire({ url: `${server.url}${s.path}`, method: s.method, headers, body: s.body === undefined ? undefined : JSON.stringify(s.body), duration }));
-      cpu.push((server.cpuMs() - cpuBefore) / Math.max(1, results[results.length - 1].requests.total));
+      const cpuBefore = cpuMs();
+      results.push(await fire({ headers, duration, requests: [requestFor(s)] }));
+      cpu.push((cpuMs() - cpuBefore) / Math.max(1, results[results.length - 1].requests.total));
     }
     const row = {
       route: s.name,
@@ -111,12 +150,7 @@ try {
     const mix = scenarios.filter((s) => s.name !== 'POST vehicle (create)');
     const rssBefore = server.rssBytes();
     console.log(`\nsoak: ${soak} s, ${connections} connections, mixed reads and saves...`);
-    const r = await fire({
-      url: server.url,
-      duration: soak,
-      headers,
-      requests: mix.map((s) => ({ method: s.method, path: s.path, body: s.body === undefined ? undefined : JSON.stringify(s.body) })),
-    });
+    const r = await fire({ duration: soak, headers, requests: mix.map(requestFor) });
     soakSummary = {
       seconds: soak,
       requests: r.requests.total,
@@ -133,6 +167,7 @@ try {
   }
   console.log(`\n${JSON.stringify({ connections, runs, duration, rssStart: mb(rssStart), rssAfter: mb(rssAfter), table, soak: soakSummary })}`);
 } finally {
-  await server.kill('SIGTERM');
+  await Promise.all(servers.map((sv) => sv.kill('SIGTERM')));
+  await cluster?.stop();
   rmSync(dir, { recursive: true, force: true });
 }

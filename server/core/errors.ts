@@ -1,7 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';
-import { type ErrorBody, type ErrorCode, type FieldIssue, statusOf } from '../../shared/errors.ts';
+import { type ErrorBody, type ErrorCode, type ErrorSee, type FieldIssue, statusOf } from '../../shared/errors.ts';
 import { redactUrl } from '../http/redact-url.ts';
 import type { Failure, Outcome } from './outcome.ts';
 
@@ -13,6 +13,7 @@ export class HttpError extends Error {
     message: string,
     readonly fields?: FieldIssue[],
     readonly retryAfterSeconds?: number,
+    readonly see?: ErrorSee,
   ) {
     super(message);
     this.status = statusOf[code];
@@ -26,15 +27,15 @@ export function unwrap<T>(outcome: Outcome<T>): T {
 }
 
 export function httpErrorOf(failure: Failure): HttpError {
-  return new HttpError(failure.code, failure.message, failure.fields, failure.retryAfterSeconds);
+  return new HttpError(failure.code, failure.message, failure.fields, failure.retryAfterSeconds, failure.see);
 }
 
 export function fieldsOf(error: ZodError): FieldIssue[] {
   return error.issues.map((i) => ({ path: i.path.map(String).join('.') || '(body)', message: i.message }));
 }
 
-export function sendError(res: Parameters<RequestHandler>[1], code: ErrorCode, message: string, fields?: FieldIssue[]): void {
-  const body: ErrorBody = { error: { code, message, ...(fields ? { fields } : {}) } };
+export function sendError(res: Parameters<RequestHandler>[1], code: ErrorCode, message: string, fields?: FieldIssue[], see?: ErrorSee): void {
+  const body: ErrorBody = { error: { code, message, ...(fields ? { fields } : {}), ...(see ? { see } : {}) } };
   res.status(statusOf[code]).json(body);
 }
 
@@ -65,7 +66,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (err instanceof HttpError) {
       if (err.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(err.retryAfterSeconds));
-      return sendError(res, err.code, err.message, err.fields);
+      return sendError(res, err.code, err.message, err.fields, err.see);
     }
     if (err instanceof ZodError) return sendError(res, 'bad_request', 'Some fields need attention.', fieldsOf(err));
     const bpCode = bodyParserCode(err);

@@ -1,4 +1,4 @@
-import type { ErrorCode, FieldIssue } from '../../shared/errors.ts';
+import type { ErrorCode, ErrorSee, FieldIssue } from '../../shared/errors.ts';
 
 /**
  * Expected failures (wrong password, last admin, used token) come back from services as values;
@@ -11,6 +11,8 @@ export interface Failure {
   fields?: FieldIssue[];
   /** For `rate_limited`: seconds until the caller may try again (sent as `Retry-After`). */
   retryAfterSeconds?: number;
+  /** What the refusal points at (sent as `error.see`). */
+  see?: ErrorSee;
 }
 export type Outcome<T> = { ok: true; value: T } | Failure;
 

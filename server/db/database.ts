@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import SQLite from 'better-sqlite3';
 import { Kysely, SqliteDialect, type SqliteDatabase, type Transaction } from 'kysely';
+import { isPostgresUrl, openPostgres } from './postgres.ts';
 import { LRUCache } from 'lru-cache';
 import type { AuditLogTable } from '../audit/audit.tables.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
@@ -55,11 +56,14 @@ export type Db = Kysely<Database>;
 export type Queryable = Kysely<Database> | Transaction<Database>;
 
 /**
- * Opens (creating if needed) the SQLite file at `path`, or an in-memory database for `:memory:`.
- * WAL lets readers run beside the writer; the busy timeout makes a second process wait instead
- * of failing at once.
+ * Opens the database named by `target`: a `postgres://` URL (DATABASE_URL) connects to
+ * PostgreSQL; anything else is a SQLite file, created if needed, or `:memory:`.
+ * On SQLite, WAL lets readers run beside the writer; the busy timeout makes a second process
+ * wait instead of failing at once.
  */
-export function openDatabase(path: string): Db {
+export function openDatabase(target: string): Db {
+  if (isPostgresUrl(target)) return openPostgres(target);
+  const path = target;
   if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
   const sqlite = new SQLite(path);
   sqlite.pragma('journal_mode = WAL');

@@ -12,7 +12,9 @@ import * as m0010 from '../../migrations/0010_address_verification.ts';
 import * as m0011 from '../../migrations/0011_dyno_file_loop.ts';
 import * as m0012 from '../../migrations/0012_road_versions.ts';
 import * as m0013 from '../../migrations/0013_stored_sizes.ts';
+import * as m0014 from '../../migrations/0014_one_released_sheet.ts';
 import * as m0015 from '../../migrations/0015_unit_preferences.ts';
+import * as m0017 from '../../migrations/0017_insertion_order.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -33,7 +35,9 @@ export const migrations: Record<string, Migration> = {
   '0011_dyno_file_loop': m0011,
   '0012_road_versions': m0012,
   '0013_stored_sizes': m0013,
+  '0014_one_released_sheet': m0014,
   '0015_unit_preferences': m0015,
+  '0017_insertion_order': m0017,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

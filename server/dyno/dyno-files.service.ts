@@ -1,5 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { DynoReadOutcome } from '../../shared/dyno-upload/summarise-dyno.ts';
+import { readGasDeclaration } from '../../shared/dyno/gas-declaration.ts';
+import { staticGasForce } from '../../shared/sim/damper-gas.ts';
 import { type DynoDirection, DynoLoop, DynoParseOptions } from '../../shared/schemas/dyno.ts';
 import {
   type ApplyDynoFitInput,
@@ -77,6 +79,13 @@ export async function uploadDynoFile(
   const setup = await findSetup(db, ws.workspaceId, setupId);
   if (!setup) return noSetup();
   const given = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined)) as Partial<DynoParseOptions>;
+  // A file whose preamble says its readings include the gas force, uploaded without a gas force,
+  // has the setup's static gas force taken out: keeping it would put a constant offset into every
+  // fitted force. A gas force sent with the upload (0 included) is the engineer's choice and wins.
+  if (given.gasForce === undefined && readGasDeclaration(file.text)?.says === 'included') {
+    const latest = await findRevision(db, setupId, await latestRevisionNumber(db, setupId));
+    if (latest) given.gasForce = staticGasForce(parseStoredSetup(latest.document, `of revision ${latest.id}`).damper.gas);
+  }
   // A 2 MB record takes a good part of a second to read: a worker thread does it.
   const done = await runHeavy('dynoRead', { text: file.text, options: given });
   if (!done.ok) return done;

@@ -5,7 +5,7 @@ import { ensureCsrfCookie } from '../auth/csrf.ts';
 import { requireUser } from '../auth/require-user.ts';
 import type { AppDeps } from '../deps.ts';
 import { sendError } from '../core/errors.ts';
-import { heavyJobLimit } from '../limits/index.ts';
+import { heavyJobLimit, SharedRateLimitStore } from '../limits/index.ts';
 import { requireMember, requireRoleAnywhere } from '../workspaces/index.ts';
 
 /**
@@ -50,9 +50,11 @@ function accessCheck(access: Access, deps: AppDeps): RequestHandler[] {
   return [requireUser, requireMember(deps.db, access)];
 }
 
-function limiter(deps: AppDeps): RequestHandler | null {
+function limiter(deps: AppDeps, key: string): RequestHandler | null {
   if (deps.rateLimit <= 0) return null;
   return rateLimit({
+    // counted in the database, so every server process on it sees the same attempts
+    store: new SharedRateLimitStore(deps.db, deps.clock, `address:${key}:`),
     windowMs: 15 * 60_000,
     limit: deps.rateLimit,
     standardHeaders: 'draft-7',
@@ -75,7 +77,7 @@ export function buildApiRouter(routes: RouteDef[], deps: AppDeps): Router {
     if (scoped && !route.path.includes(':workspaceId')) throw new Error(`route ${key} declares a role but has no :workspaceId`);
 
     const chain: RequestHandler[] = [];
-    const limit = route.rateLimited ? limiter(deps) : null;
+    const limit = route.rateLimited ? limiter(deps, key) : null;
     if (limit) chain.push(limit);
     if (route.issuesCsrf) chain.push((req, res, next) => (ensureCsrfCookie(req, res, deps.secret), next()));
     chain.push(...accessCheck(route.access, deps), ...(route.heavy ? [heavyLimit] : []), ...(route.before ?? []), route.handler);

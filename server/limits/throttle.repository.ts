@@ -26,3 +26,13 @@ export async function deleteEventsBefore(db: Queryable, keys: string[], before: 
 export async function deleteOneEvent(db: Queryable, key: string, at: string): Promise<void> {
   await db.deleteFrom('throttle_event').where('key', '=', key).where('at', '=', at).execute();
 }
+
+/** Forgets the newest action counted under `key` (a request that should not have counted). */
+export async function deleteNewestEvent(db: Queryable, key: string): Promise<void> {
+  const newest = await db.selectFrom('throttle_event').select((eb) => eb.fn.max('at').as('at')).where('key', '=', key).executeTakeFirst();
+  if (newest?.at) await deleteOneEvent(db, key, newest.at as string);
+}
+
+export async function deleteKey(db: Queryable, key: string): Promise<void> {
+  await db.deleteFrom('throttle_event').where('key', '=', key).execute();
+}

@@ -1,4 +1,5 @@
 import { sql } from 'kysely';
+import { insertionOrder } from '../db/dialect.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { NewOutboxMessageRow, OutboxMessageRow } from './outbox.tables.ts';
 
@@ -49,7 +50,7 @@ export function listOutboxMessagesFor(db: Queryable, reader: OutboxReader, limit
       ]),
     )
     .orderBy('received_at', 'desc')
-    .orderBy(sql`outbox_message.rowid`, 'desc')
+    .orderBy(insertionOrder(db, 'outbox_message'), 'desc')
     .limit(limit)
     .execute();
 }

@@ -1,5 +1,5 @@
+import { jsonTextField } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
-import { sql } from 'kysely';
 import type { NewRoadRow, RoadTable, RoadVersionTable } from './roads.tables.ts';
 
 /** SQL for the road library. */
@@ -27,7 +27,7 @@ function roadQuery(db: Queryable, workspaceId: string) {
       'cu.name as created_by_name',
       'uu.name as updated_by_name',
       // the kind is read from the document so lists need not load measured points
-      (eb) => eb.fn<string>('json_extract', ['r.definition', eb.val('$.kind')]).as('kind'),
+      jsonTextField(db, 'r.definition', 'kind').as('kind'),
     ])
     .where('r.workspace_id', '=', workspaceId);
 }
@@ -63,12 +63,14 @@ export async function deleteRoadRow(db: Queryable, workspaceId: string, roadId: 
 
 /** Whether any study of the workspace refers to this version of the road (`study.road_refs`). */
 export async function isRoadVersionReferenced(db: Queryable, workspaceId: string, roadId: string, version: number): Promise<boolean> {
-  const { rows } = await sql<{ hit: number }>`
-    select 1 as hit from study, json_each(study.road_refs) as ref
-    where study.workspace_id = ${workspaceId} and study.road_refs is not null
-      and json_extract(ref.value, '$.roadId') = ${roadId} and json_extract(ref.value, '$.version') = ${version}
-    limit 1`.execute(db);
-  return rows.length > 0;
+  // The text match narrows to studies naming the road at all; the refs are then read exactly.
+  const rows = await db
+    .selectFrom('study')
+    .select('road_refs')
+    .where('workspace_id', '=', workspaceId)
+    .where('road_refs', 'like', `%${roadId}%`)
+    .execute();
+  return rows.some((r) => (JSON.parse(r.road_refs!) as ({ roadId: string; version: number } | null)[]).some((ref) => ref?.roadId === roadId && ref.version === version));
 }
 
 /** Keeps a definition that is about to be replaced or removed (a study still refers to it). */

@@ -1,4 +1,5 @@
 import { sql } from 'kysely';
+import { insertionOrder } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewRunRow } from './runs.tables.ts';
 
@@ -56,7 +57,7 @@ export type RunSummaryRow = Awaited<ReturnType<typeof listRunRows>>[number];
 export function listRunRows(db: Queryable, workspaceId: string, opts: { setupId?: string; limit: number }) {
   let q = summaryQuery(db, workspaceId);
   if (opts.setupId) q = q.where('run.setup_id', '=', opts.setupId);
-  return q.orderBy('run.created_at', 'desc').orderBy(sql`run.rowid`, 'desc').limit(opts.limit).execute();
+  return q.orderBy('run.created_at', 'desc').orderBy(insertionOrder(db, 'run'), 'desc').limit(opts.limit).execute();
 }
 
 export function findRunRow(db: Queryable, workspaceId: string, runId: string) {

@@ -96,6 +96,11 @@ export function listRevisions(db: Queryable, setupId: string, page: { limit: num
 export function findRevision(db: Queryable, setupId: string, number: number) {
   return revisionQuery(db).select('r.document').where('r.setup_id', '=', setupId).where('r.number', '=', number).executeTakeFirst();
 }
+/** Every revision's number and stored document, newest first (for the duplicate check on save). */
+export function listRevisionDocuments(db: Queryable, setupId: string) {
+  return db.selectFrom('setup_revision').select(['number', 'document']).where('setup_id', '=', setupId).orderBy('number', 'desc').execute();
+}
+
 export type RevisionRow = NonNullable<Awaited<ReturnType<typeof findRevision>>>;
 
 /** A revision by its id, with its setup's name and workspace (for share links). */

@@ -29,6 +29,7 @@ import {
   insertRevision,
   insertSetup,
   latestRevisionNumber,
+  listRevisionDocuments,
   listRevisions,
   listSetupSummaries,
   type RevisionRow,
@@ -41,6 +42,7 @@ import { recordAudit } from '../audit/index.ts';
 import { figuresOfRevision, parseStoredSetup } from './corner-figures.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
+import { sameSetupContent } from './same-content.ts';
 
 /** Who acts, in the shape every service here needs. */
 
@@ -281,8 +283,28 @@ export async function addRevisionInTx(trx: Queryable, ws: WorkspaceRef, actor: A
   return ok({ id, number });
 }
 
+/** The newest revision whose document holds exactly `document` (the name aside), if any. */
+async function revisionHolding(db: Queryable, setupId: string, document: Setup): Promise<number | undefined> {
+  for (const row of await listRevisionDocuments(db, setupId)) {
+    if (sameSetupContent(parseStoredSetup(row.document, `of revision ${row.number} of setup ${setupId}`), document)) return row.number;
+  }
+  return undefined;
+}
+
+/**
+ * An engineer's save. Content identical to a stored revision is refused with a pointer to it: a
+ * second revision of the same content would only push an unreviewed copy to "latest".
+ * (Restoring an old revision is a separate, deliberate act and is not refused.)
+ */
 export function saveRevision(db: Db, ws: WorkspaceRef, actor: Actor, setupId: string, input: SaveRevisionInput, now: Date): Promise<Outcome<SetupDetail>> {
   return db.transaction().execute(async (trx) => {
+    const setup = await findSetup(trx, ws.workspaceId, setupId);
+    if (!setup) return noSetup();
+    // An archived setup refuses every save (addRevisionInTx says why) before content is compared.
+    const existing = setup.archived_at ? undefined : await revisionHolding(trx, setupId, input.setup);
+    if (existing !== undefined) {
+      return { ...fail('conflict', `Nothing to save: revision ${existing} already holds exactly these values.`), see: { kind: 'setup_revision', setupId, number: existing } };
+    }
     const added = await addRevisionInTx(trx, ws, actor, setupId, { document: input.setup, message: input.message, source: null, basedOn: input.basedOn }, now);
     if (!added.ok) return added;
     return ok(await mustDetail(trx, ws.workspaceId, setupId));

@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { CreateStudyInput, FinishStudyRunInput, OpenPointAsSetupInput, SaveStudyPointsInput, SetStudyBaselineInput } from '../../shared/schemas/study-record.ts';
+import { CreateStudyInput, FinishStudyRunInput, SaveStudyPointsInput, SetStudyBaselineInput } from '../../shared/schemas/study-record.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { HttpError, unwrap } from '../core/errors.ts';
 import { finishStudyRun, saveStudyPoints, setStudyBaseline } from './study-results.service.ts';
-import { createStudy, deleteStudy, getStudyJson, listStudies, openPointAsSetup } from './studies.service.ts';
+import { createStudy, deleteStudy, getStudyJson, listStudies, studyPointDraft } from './studies.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 
 const base = '/api/workspaces/:workspaceId/studies';
@@ -79,14 +79,13 @@ export const studyRoutes: RouteModule = (deps) => [
     },
   },
   {
-    method: 'post',
-    path: `${base}/:studyId/points/:index/open-as-setup`,
+    method: 'get',
+    path: `${base}/:studyId/points/:index/draft`,
     access: 'engineer',
     handler: async (req, res) => {
       const index = PointIndex.safeParse(pathParam(req, 'index'));
       if (!index.success) throw new HttpError('not_found', 'No such point: the index is a whole number from 0.');
-      const input = OpenPointAsSetupInput.parse(req.body ?? {});
-      res.status(201).json(unwrap(await openPointAsSetup(deps.db, workspaceOf(req), userOf(req), pathParam(req, 'studyId'), index.data, input, deps.clock())));
+      res.json(unwrap(await studyPointDraft(deps.db, workspaceOf(req), pathParam(req, 'studyId'), index.data)));
     },
   },
 ];

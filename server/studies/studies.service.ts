@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { FieldIssue } from '../../shared/errors.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import { type CreateStudyInput, type OpenedStudyPoint, type OpenPointAsSetupInput, type StudiesResponse, type StudyDetail, StudyResultsSummary, type StudySummary } from '../../shared/schemas/study-record.ts';
+import { type CreateStudyInput, type StudiesResponse, type StudyDetail, StudyResultsSummary, type StudyPointDraft, type StudySummary } from '../../shared/schemas/study-record.ts';
 import { StudyDefinition } from '../../shared/schemas/study.ts';
 import { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { applyPoint } from '../../shared/study/apply-point.ts';
@@ -64,7 +64,7 @@ export async function studyRoadsOf(db: Queryable, row: Pick<StudyViewRow, 'id' |
     return parsed.get(text) as Road;
   });
 }
-import { addRevisionInTx, findRevisionInWorkspace } from '../setups/index.ts';
+import { findRevisionInWorkspace } from '../setups/index.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 
 
@@ -249,29 +249,23 @@ export function deleteStudy(db: Db, ws: WorkspaceRef, actor: Actor, studyId: str
  * A study point as the next revision of the base setup: the base revision's document with the
  * point's values applied (the same code the runs used), saved with source `study:<id>`.
  */
-export function openPointAsSetup(db: Db, ws: WorkspaceRef, actor: Actor, studyId: string, index: number, input: OpenPointAsSetupInput, now: Date): Promise<Outcome<OpenedStudyPoint>> {
-  return db.transaction().execute(async (trx) => {
-    const row = await findStudy(trx, ws.workspaceId, studyId);
-    if (!row) return noStudy();
-    const def = definitionOf(row);
-    const values = pointValuesAt(def.axes, index);
-    if (!values) return fail('not_found', `This study has no point ${index}.`);
-    if (!row.base_setup_id || row.base_setup_name === null) return fail('conflict', 'The setup this study started from no longer exists, so there is nothing to add a revision to.');
-    const applied = applyPoint(readStored(Setup, row.base_document, 'study base setup'), values);
-    if (!applied.ok) return fail('conflict', `This point does not make a valid setup: ${applied.message}`);
-    const label = describePoint(def.axes, values);
-    const message = input.message?.trim() || `From study "${row.name}": ${label} (on revision ${row.base_revision_number})`;
-    const added = await addRevisionInTx(trx, ws, actor, row.base_setup_id, { document: applied.setup, message, source: `study:${studyId}` }, now);
-    if (!added.ok) return added;
-    await recordAudit(trx, {
-      workspaceId: ws.workspaceId,
-      actorId: actor.id,
-      action: 'study.point_opened',
-      entityType: 'study',
-      entityId: studyId,
-      summary: `${actor.name} saved ${label} of study "${row.name}" as revision ${added.value.number} of ${row.base_setup_name}.`,
-      at: now,
-    });
-    return ok({ setupId: row.base_setup_id, setupName: row.base_setup_name, revisionNumber: added.value.number });
+/** A point applied to the study's base revision, stored nowhere: the bench shows it as an unsaved draft. */
+export async function studyPointDraft(db: Db, ws: WorkspaceRef, studyId: string, index: number): Promise<Outcome<StudyPointDraft>> {
+  const row = await findStudy(db, ws.workspaceId, studyId);
+  if (!row) return noStudy();
+  const def = definitionOf(row);
+  const values = pointValuesAt(def.axes, index);
+  if (!values) return fail('not_found', `This study has no point ${index}.`);
+  if (!row.base_setup_id || row.base_setup_name === null) return fail('conflict', 'The setup this study started from no longer exists, so there is nothing to open the point in.');
+  const applied = applyPoint(readStored(Setup, row.base_document, 'study base setup'), values);
+  if (!applied.ok) return fail('conflict', `This point does not make a valid setup: ${applied.message}`);
+  const pointLabel = describePoint(def.axes, values);
+  return ok({
+    setupId: row.base_setup_id,
+    setupName: row.base_setup_name,
+    baseRevisionNumber: row.base_revision_number,
+    pointLabel,
+    setup: applied.setup,
+    message: `From study "${row.name}", point ${index + 1}: ${pointLabel} (on revision ${row.base_revision_number})`,
   });
 }

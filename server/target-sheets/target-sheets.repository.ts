@@ -1,4 +1,4 @@
-import { sql } from 'kysely';
+import { insertionOrder } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewDynoCheckRow, NewTargetSheetRow, TargetSheetEventTable, TargetSheetPatch } from './target-sheets.tables.ts';
 
@@ -40,6 +40,11 @@ export function listSheets(db: Queryable, workspaceId: string) {
   return sheetQuery(db, workspaceId).orderBy('s.updated_at', 'desc').orderBy('s.number', 'desc').execute();
 }
 
+/** The released sheet of a setup that no sheet has superseded (at most one; see migrations/0014), other than `exceptId`. */
+export function findSheetInForce(db: Queryable, workspaceId: string, setupId: string, exceptId: string) {
+  return sheetQuery(db, workspaceId).where('s.setup_id', '=', setupId).where('s.status', '=', 'released').where('s.superseded_by_id', 'is', null).where('s.id', '!=', exceptId).executeTakeFirst();
+}
+
 /** Every number issued in a workspace (the next one is computed from them). */
 export async function listSheetNumbers(db: Queryable, workspaceId: string): Promise<string[]> {
   const rows = await db.selectFrom('target_sheet').select('number').where('workspace_id', '=', workspaceId).execute();
@@ -58,7 +63,7 @@ export function listSheetEvents(db: Queryable, sheetId: string) {
     .where('e.sheet_id', '=', sheetId)
     .orderBy('e.at')
     // several steps can share a timestamp (a seed, a fixed clock): insertion order breaks ties
-    .orderBy(sql`e.rowid`)
+    .orderBy(insertionOrder(db, 'e'))
     .execute();
 }
 

@@ -4,6 +4,7 @@ import {
   CreateTargetSheetInput,
   DYNO_CHECK_MAX_FILES,
   DynoCheckFields,
+  ReleaseTargetSheetInput,
   ReturnTargetSheetInput,
   SupersedeTargetSheetInput,
   TargetSheetContent,
@@ -37,7 +38,8 @@ function step(deps: AppDeps, name: 'submit' | 'release' | 'return' | 'reopen', t
     access,
     handler: async (req, res) => {
       const reason = name === 'return' ? ReturnTargetSheetInput.parse(req.body).reason : undefined;
-      const body: TargetSheetTransitionResult = unwrap(await moveTargetSheet(deps, workspaceOf(req), userOf(req), pathParam(req, 'sheetId'), to, reason));
+      const comment = name === 'release' ? ReleaseTargetSheetInput.parse(req.body ?? {}).comment : undefined;
+      const body: TargetSheetTransitionResult = unwrap(await moveTargetSheet(deps, workspaceOf(req), userOf(req), pathParam(req, 'sheetId'), to, reason, comment));
       res.json(body);
     },
   };

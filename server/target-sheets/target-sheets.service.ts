@@ -21,6 +21,7 @@ import { fieldsOf } from '../core/errors.ts';
 import {
   deleteSheet,
   findSheet,
+  findSheetInForce,
   insertSheet,
   insertSheetEvent,
   listSheetEvents,
@@ -29,7 +30,7 @@ import {
   type SheetViewRow,
   updateSheet,
 } from './target-sheets.repository.ts';
-import { findRevision, findSetup, parseStoredSetup } from '../setups/index.ts';
+import { findRevision, findSetup, latestRevisionNumber, parseStoredSetup } from '../setups/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { mailSheetDecision, type SheetMailFacts } from './sheet-mail.service.ts';
@@ -71,6 +72,7 @@ export function toSheet(r: SheetViewRow): TargetSheet {
     decidedAt: r.decided_at,
     supersedes: r.supersedes_id && r.supersedes_number !== null ? { id: r.supersedes_id, number: r.supersedes_number } : null,
     supersededBy: r.superseded_by_id && r.superseded_by_number !== null ? { id: r.superseded_by_id, number: r.superseded_by_number } : null,
+    releaseComment: r.release_comment,
   };
 }
 
@@ -78,8 +80,10 @@ async function detailOf(db: Queryable, workspaceId: string, sheetId: string): Pr
   const row = await findSheet(db, workspaceId, sheetId);
   if (!row) return undefined;
   const events = await listSheetEvents(db, sheetId);
+  const inForce = row.status === 'released' ? undefined : await findSheetInForce(db, workspaceId, row.setup_id, row.id);
   return {
     sheet: toSheet(row),
+    replaces: inForce ? toSheet(inForce) : null,
     history: events.map((e) => ({ from: e.from_status, to: e.to_status, by: { id: e.actor_id, name: e.actor_name }, at: e.at, reason: e.reason })),
   };
 }
@@ -137,6 +141,7 @@ async function insertDraft(
     decided_by: null,
     decided_at: null,
     released_at: null,
+    release_comment: null,
     supersedes_id: init.supersedesId,
     superseded_by_id: null,
     created_at: at,
@@ -220,9 +225,10 @@ export async function moveTargetSheet(
   sheetId: string,
   to: TargetSheetStatus,
   reason?: string,
+  comment?: string,
 ): Promise<Outcome<TargetSheetTransitionResult>> {
   const now = deps.clock();
-  const moved = await deps.db.transaction().execute((trx) => moveTargetSheetInTx(trx, ws, actor, sheetId, to, reason, now));
+  const moved = await deps.db.transaction().execute((trx) => moveTargetSheetInTx(trx, ws, actor, sheetId, to, reason, now, comment));
   if (!moved.ok) return moved;
   const { action, facts, detail } = moved.value;
   const notified = await mailSheetDecision(deps, ws, actor, action, facts);
@@ -253,6 +259,7 @@ export async function moveTargetSheetInTx(
   to: TargetSheetStatus,
   reason: string | undefined,
   now: Date,
+  comment?: string,
 ): Promise<Outcome<SheetMove>> {
   const at = now.toISOString();
   const row = await findSheet(trx, ws.workspaceId, sheetId);
@@ -263,12 +270,16 @@ export async function moveTargetSheetInTx(
   if (action === 'release' && (await wantsSecondPerson(trx, ws.workspaceId, row.author_id, sheetId, actor.id))) {
     return fail('forbidden', `${row.number}: this workspace asks for a second person — a lead who did not write or submit the sheet releases it.`);
   }
-  const why = action === 'return' ? reason!.trim() : null;
+  const why = action === 'return' ? reason!.trim() : action === 'release' ? comment?.trim() || null : null;
+  // Releasing supersedes the sheet in force for the same setup, in this same step: there is never
+  // a moment with two released sheets in force (the partial unique index of migration 0014 holds it).
+  const replaced = action === 'release' ? await findSheetInForce(trx, ws.workspaceId, row.setup_id, sheetId) : undefined;
+  if (replaced) await updateSheet(trx, replaced.id, { superseded_by_id: sheetId });
   await updateSheet(trx, sheetId, {
     status: to,
     updated_at: at,
     ...(action === 'submit' ? { submitted_at: at } : {}),
-    ...(action === 'release' ? { decided_by: actor.id, decided_at: at, released_at: at } : {}),
+    ...(action === 'release' ? { decided_by: actor.id, decided_at: at, released_at: at, release_comment: why, supersedes_id: replaced?.id ?? null } : {}),
     ...(action === 'return' ? { decided_by: actor.id, decided_at: at, return_reason: why } : {}),
   });
   await event(trx, sheetId, row.status, to, actor, now, why);
@@ -278,16 +289,27 @@ export async function moveTargetSheetInTx(
     action: `target_sheet.${action === 'return' ? 'returned' : action === 'reopen' ? 'reopened' : action === 'submit' ? 'submitted' : 'released'}`,
     entityType: 'target_sheet',
     entityId: sheetId,
-    summary: `${actor.name} ${pastTense[action]} target sheet ${row.number}${why ? `: "${why}"` : ''}.`,
+    summary: `${actor.name} ${pastTense[action]} target sheet ${row.number}${replaced ? `, superseding ${replaced.number}` : ''}${why ? `: "${why}"` : ''}.`,
     at: now,
   });
+  if (replaced) {
+    await recordAudit(trx, {
+      workspaceId: ws.workspaceId,
+      actorId: actor.id,
+      action: 'target_sheet.superseded',
+      entityType: 'target_sheet',
+      entityId: replaced.id,
+      summary: `Target sheet ${replaced.number} was superseded by ${row.number}, released by ${actor.name}.`,
+      at: now,
+    });
+  }
   const facts: SheetMailFacts = { sheetId, number: row.number, setupName: row.setup_name, revision: row.revision_number, authorId: row.author_id, reason: why };
   return ok({ action, facts, detail: await mustDetail(trx, ws.workspaceId, sheetId) });
 }
 
 /**
- * A new draft that replaces a released sheet. The old sheet stays released and says which sheet
- * superseded it; a sheet is superseded once (409 after that).
+ * A new draft meant to replace a released sheet, from any revision of its setup (the latest by
+ * default). The released sheet stays in force, unchanged, until a replacement is released.
  */
 export async function supersedeTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, sheetId: string, input: SupersedeTargetSheetInput): Promise<Outcome<TargetSheetDetail>> {
   const now = deps.clock();
@@ -302,23 +324,22 @@ export async function supersedeTargetSheet(deps: SheetDeps, ws: SheetWorkspace, 
       );
     }
     let content: TargetSheetContent = { compression: old.compression, rebound: old.rebound, gasForce: old.gasForce, notes: old.notes };
-    const revision = input.revision ?? old.setupRevision;
-    if (input.revision !== undefined) {
-      const read = await revisionDocument(trx, ws.workspaceId, old.setupId, input.revision);
+    const revision = input.revision ?? (await latestRevisionNumber(trx, old.setupId));
+    if (revision !== old.setupRevision) {
+      const read = await revisionDocument(trx, ws.workspaceId, old.setupId, revision);
       if (!read.ok) return read;
       const reread = (pts: TargetSheet['compression'], curve: 'compression' | 'rebound') =>
         pts.map((p) => ({ ...p, force: targetPointsFromCurve(read.value.document.damper[curve], [p.velocity])[0].force }));
       content = { ...content, compression: reread(old.compression, 'compression'), rebound: reread(old.rebound, 'rebound'), gasForce: targetSheetContentFromSetup(read.value.document).gasForce };
     }
     const { id, number } = await insertDraft(trx, ws, actor, { setupId: old.setupId, revision, content, supersedesId: sheetId }, now);
-    await updateSheet(trx, sheetId, { superseded_by_id: id });
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
       actorId: actor.id,
-      action: 'target_sheet.superseded',
+      action: 'target_sheet.replacement_drafted',
       entityType: 'target_sheet',
       entityId: id,
-      summary: `${actor.name} drafted target sheet ${number} to supersede ${old.number} (revision ${revision}).`,
+      summary: `${actor.name} drafted target sheet ${number} from revision ${revision} to replace ${old.number} (which stays in force until ${number} is released).`,
       at: now,
     });
     return ok(await mustDetail(trx, ws.workspaceId, id));
@@ -326,8 +347,8 @@ export async function supersedeTargetSheet(deps: SheetDeps, ws: SheetWorkspace, 
 }
 
 /**
- * Deletes a sheet that was never released (draft or returned). A superseding draft that is
- * deleted frees its released predecessor to be superseded again.
+ * Deletes a sheet that was never released (draft or returned). A replacement draft never touched
+ * the sheet it was meant to replace, so nothing else changes.
  */
 export async function deleteTargetSheet(deps: SheetDeps, ws: SheetWorkspace, actor: Actor, sheetId: string): Promise<Outcome<void>> {
   const now = deps.clock();
@@ -337,7 +358,6 @@ export async function deleteTargetSheet(deps: SheetDeps, ws: SheetWorkspace, act
     if (row.status !== 'draft' && row.status !== 'returned') {
       return fail('conflict', `${row.number} is ${row.status === 'released' ? 'released and is kept for the record' : 'in review'}; only drafts can be deleted.`);
     }
-    if (row.supersedes_id) await updateSheet(trx, row.supersedes_id, { superseded_by_id: null });
     await deleteSheet(trx, sheetId);
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,

@@ -20,6 +20,8 @@ export interface TargetSheetTable {
   decided_by: string | null;
   decided_at: string | null;
   released_at: string | null;
+  /** The releasing lead's comment (migrations/0014_one_released_sheet.ts). */
+  release_comment: string | null;
   supersedes_id: string | null;
   superseded_by_id: string | null;
   created_at: string;

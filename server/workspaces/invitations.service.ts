@@ -13,7 +13,7 @@ import { recordAudit } from '../audit/index.ts';
 import { hashOneTimeToken, minutesAfter, newOneTimeToken } from '../core/one-time-tokens.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { overLimit, recordActions, type ThrottleRule } from '../limits/index.ts';
-import { isUniqueViolation } from '../core/sqlite-errors.ts';
+import { isUniqueViolation } from '../db/dialect.ts';
 
 export const INVITATION_DAYS = 7;
 /** Pending invitations one workspace may hold at once. */
@@ -174,7 +174,7 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
     });
   } catch (err) {
     // Someone created the account or joined between our checks and the transaction.
-    if (isUniqueViolation(err) || (err as { code?: string }).code === 'SQLITE_CONSTRAINT_PRIMARYKEY') return gone();
+    if (isUniqueViolation(err)) return gone();
     throw err;
   }
 }

@@ -1,3 +1,4 @@
+import { readGasDeclaration } from '../dyno/gas-declaration.ts';
 import { parseDynoCsv } from '../dyno/parse-dyno-csv.ts';
 import { seriesToPeaks } from '../dyno/series-to-peaks.ts';
 import { type DynoIssue, type DynoLoop, DynoParseOptions } from '../schemas/dyno.ts';
@@ -17,12 +18,13 @@ export function summariseDyno(text: string, given: Partial<DynoParseOptions> = {
   const parsed = parseDynoCsv(text, given);
   if (!parsed.ok) return parsed;
   const options = DynoParseOptions.parse(given);
+  const gasDeclaration = readGasDeclaration(text);
   if (parsed.kind === 'peaks') {
     return {
       ok: true,
       options,
       loop: null,
-      summary: { kind: 'peaks', layout: parsed.layout, units: parsed.units, rows: parsed.rows, warnings: parsed.warnings, peaks: parsed.data, series: null },
+      summary: { kind: 'peaks', layout: parsed.layout, units: parsed.units, rows: parsed.rows, warnings: parsed.warnings, peaks: parsed.data, series: null, gasDeclaration },
     };
   }
   const analysis = seriesToPeaks(parsed.data);
@@ -52,6 +54,7 @@ export function summariseDyno(text: string, given: Partial<DynoParseOptions> = {
         peakSpeed,
         warnings: analysis.warnings,
       },
+      gasDeclaration,
     },
   };
 }

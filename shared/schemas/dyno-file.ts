@@ -46,6 +46,10 @@ export const DynoSeriesFigures = z.object({
 });
 export type DynoSeriesFigures = z.infer<typeof DynoSeriesFigures>;
 
+/** What the file's own preamble says about the gas force in its readings (shared/dyno/gas-declaration.ts). */
+export const DynoGasDeclaration = z.object({ says: z.enum(['included', 'removed']), line: z.number().int().positive(), text: z.string() });
+export type DynoGasDeclaration = z.infer<typeof DynoGasDeclaration>;
+
 /** What the server found in a file when it was uploaded (SI, compression positive). */
 export const DynoFileSummary = z.object({
   kind: z.enum(['peaks', 'series']),
@@ -56,6 +60,8 @@ export const DynoFileSummary = z.object({
   /** Peak points per direction: read from the file, or derived from a raw record. */
   peaks: DynoPeakPoints,
   series: DynoSeriesFigures.nullable(),
+  /** null when the preamble says nothing (and for files stored before this was read). */
+  gasDeclaration: DynoGasDeclaration.nullable().default(null),
 });
 export type DynoFileSummary = z.infer<typeof DynoFileSummary>;
 

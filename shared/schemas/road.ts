@@ -36,6 +36,12 @@ export const Iso8608Road = z
     waviness: z.number().min(1).max(4).optional(),
     /** Period of the generated profile, m; default 1024. */
     length: meters.min(10).max(100000).optional(),
+    /**
+     * Harmonic amplitudes: `fixed` (default) gives each harmonic exactly its share of the PSD, so
+     * every seed has the same RMS; `random` draws them from a Rayleigh distribution with the same
+     * mean square, which makes the road a Gaussian process and seeds scatter as real roads do.
+     */
+    amplitudes: z.enum(['fixed', 'random']).optional(),
   })
   .refine((r) => (r.nMin ?? 0.011) < (r.nMax ?? 2.83), { path: ['nMax'], message: 'nMax must be above nMin' })
   // Two samples per shortest wavelength over one period: bounded so one road stays a cheap object.

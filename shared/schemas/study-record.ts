@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { Id, IsoDateTime } from './fields.ts';
 import { Road } from './road.ts';
-import { PersonRef, RevisionMessage } from './setup-record.ts';
+import { PersonRef } from './setup-record.ts';
 import { Setup } from './setup.ts';
 import { PublicStudyDefinition, StudyDefinition, SweepAxis } from './study.ts';
 import { StudyCompromise, StudyPointResult, StudyRunOutcome, StudyTradeOff } from './study-result.ts';
@@ -87,13 +87,21 @@ export type StudyBaseline = z.infer<typeof StudyBaseline>;
 export const SetStudyBaselineInput = z.object({ pointIndex: z.number().int().nonnegative().nullable() });
 export type SetStudyBaselineInput = z.infer<typeof SetStudyBaselineInput>;
 
-/** POST /studies/:studyId/points/:index/open-as-setup */
-export const OpenPointAsSetupInput = z.object({ message: RevisionMessage.optional() });
-export type OpenPointAsSetupInput = z.infer<typeof OpenPointAsSetupInput>;
-
-/** The revision a study point became. */
-export const OpenedStudyPoint = z.object({ setupId: Id, setupName: z.string(), revisionNumber: z.number().int().positive() });
-export type OpenedStudyPoint = z.infer<typeof OpenedStudyPoint>;
+/**
+ * GET /studies/:studyId/points/:index/draft — a point applied to the study's base revision, for
+ * the corner bench to show as an unsaved draft. Nothing is stored; saving is the engineer's act.
+ */
+export const StudyPointDraft = z.object({
+  setupId: Id,
+  setupName: z.string(),
+  /** The revision the study started from; the draft is that document with the point applied. */
+  baseRevisionNumber: z.number().int().positive(),
+  pointLabel: z.string(),
+  setup: Setup,
+  /** A revision message naming the study and point, for the engineer to keep or change. */
+  message: z.string(),
+});
+export type StudyPointDraft = z.infer<typeof StudyPointDraft>;
 
 /** The setup revision a study starts from (the setup may since have been renamed or archived). */
 export const StudyBaseRef = z.object({

@@ -83,8 +83,10 @@ export const TargetSheet = TargetSheetContent.extend({
   decidedAt: IsoDateTime.nullable(),
   /** The released sheet this one replaces. */
   supersedes: SheetRef.nullable(),
-  /** The sheet that replaced this one (set on a released sheet; nothing else changes). */
+  /** The sheet that replaced this one (set on a released sheet when its replacement is released; nothing else changes). */
   supersededBy: SheetRef.nullable(),
+  /** What the releasing lead wrote at release (null before release, or when left blank). */
+  releaseComment: z.string().nullable(),
 });
 export type TargetSheet = z.infer<typeof TargetSheet>;
 
@@ -168,8 +170,11 @@ export type ConformityRecord = z.infer<typeof ConformityRecord>;
 export const TargetSheetsResponse = z.object({ sheets: z.array(TargetSheet) });
 export type TargetSheetsResponse = z.infer<typeof TargetSheetsResponse>;
 
-/** A sheet with its history of status changes (oldest first). */
-export const TargetSheetDetail = z.object({ sheet: TargetSheet, history: z.array(TargetSheetEvent) });
+/**
+ * A sheet with its history of status changes (oldest first) and, while it is not released, the
+ * released sheet of the same setup that releasing it would supersede (null when there is none).
+ */
+export const TargetSheetDetail = z.object({ sheet: TargetSheet, history: z.array(TargetSheetEvent), replaces: TargetSheet.nullable() });
 export type TargetSheetDetail = z.infer<typeof TargetSheetDetail>;
 
 /**
@@ -201,6 +206,12 @@ export const CreateTargetSheetInput = z.object({
 });
 export type CreateTargetSheetInput = z.infer<typeof CreateTargetSheetInput>;
 
+/** POST …/:sheetId/release — the lead's comment is stored on the sheet, in its history and in the audit log. */
+export const ReleaseTargetSheetInput = z.object({
+  comment: z.string().trim().max(2000, 'At most 2000 characters').regex(plainText, plainTextMessage).optional(),
+});
+export type ReleaseTargetSheetInput = z.infer<typeof ReleaseTargetSheetInput>;
+
 /** POST …/:sheetId/return */
 export const ReturnTargetSheetInput = z.object({
   reason: z.string().trim().min(1, 'Say why the sheet is sent back').max(2000, 'At most 2000 characters').regex(plainText, plainTextMessage),
@@ -208,9 +219,10 @@ export const ReturnTargetSheetInput = z.object({
 export type ReturnTargetSheetInput = z.infer<typeof ReturnTargetSheetInput>;
 
 /**
- * POST …/:sheetId/supersede — a new draft that replaces a released sheet. With `revision` the
- * targets are read again from that revision of the same setup at the sheet's speeds and bands;
- * without it the released targets are copied as they stand.
+ * POST …/:sheetId/supersede — a new draft meant to replace a released sheet; the released sheet
+ * stays in force until the draft is released. The targets are read from `revision` of the same
+ * setup (its latest revision when left out) at the sheet's speeds and bands; naming the released
+ * sheet's own revision copies its targets as they stand.
  */
 export const SupersedeTargetSheetInput = z.object({ revision: z.number().int().positive().optional() });
 export type SupersedeTargetSheetInput = z.infer<typeof SupersedeTargetSheetInput>;

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { ErrorBody, type ErrorCode, type FieldIssue } from '../../shared/errors.ts';
+import { ErrorBody, type ErrorCode, type ErrorSee, type FieldIssue } from '../../shared/errors.ts';
 
 /**
  * The one way the client talks to /api. Every call names the zod schema of the body it
@@ -12,13 +12,16 @@ export class ApiError extends Error {
   readonly code: ErrorCode;
   readonly status: number;
   readonly fields: FieldIssue[];
+  /** What the refusal points at, when the server named it. */
+  readonly see: ErrorSee | undefined;
 
-  constructor(code: ErrorCode, status: number, message: string, fields: FieldIssue[] = []) {
+  constructor(code: ErrorCode, status: number, message: string, fields: FieldIssue[] = [], see?: ErrorSee) {
     super(message);
     this.name = 'ApiError';
     this.code = code;
     this.status = status;
     this.fields = fields;
+    this.see = see;
   }
 
   /** The message for one field path, if the server named it. */
@@ -80,8 +83,8 @@ async function errorFrom(response: Response): Promise<ApiError> {
   try {
     const parsed = ErrorBody.safeParse(JSON.parse(text));
     if (parsed.success) {
-      const { code, message, fields } = parsed.data.error;
-      return new ApiError(code, response.status, message, fields ?? []);
+      const { code, message, fields, see } = parsed.data.error;
+      return new ApiError(code, response.status, message, fields ?? [], see);
     }
   } catch {
     // not JSON: a proxy page or a crashed server; fall through to a generic error

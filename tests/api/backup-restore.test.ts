@@ -74,11 +74,12 @@ describe('backup and restore', () => {
 
     let stop = false;
     let serial = 0;
-    const doc = cornerDocument('Backup bench', { sprungMass: 290 });
+    // each save differs (identical content is refused as a duplicate revision)
+    const docFor = (n: number) => cornerDocument('Backup bench', { sprungMass: 290 + n / 1000 });
     const writer = async () => {
       while (!stop) {
         const message = `load ${++serial}`;
-        const res = await callJson(server.url, session, 'POST', `/api/workspaces/${workspaceId}/setups/${setupId}/revisions`, { setup: doc, message });
+        const res = await callJson(server.url, session, 'POST', `/api/workspaces/${workspaceId}/setups/${setupId}/revisions`, { setup: docFor(serial), message });
         expect(res.status).toBe(201);
         acked.push({ message, number: SetupDetail.parse(res.body).revision.number, at: Date.now() });
       }

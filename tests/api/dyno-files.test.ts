@@ -68,6 +68,25 @@ describe('dyno files', () => {
     expect(detail.loop?.velocity.length).toBe(detail.loop?.force.length);
   });
 
+  it('takes the setup\'s gas force out by default when the file\'s header says the readings include it; an explicit choice wins', async () => {
+    const setup = await freshSetup(t.db, workspaceId, engineer);
+    // The fixture corner's damper states a 240 N static gas force; the example record's second line says "gas force included".
+    const byDefault = DynoFileItem.parse((await upload(setup.id, seriesCsv).expect(201)).body);
+    expect(byDefault.summary.gasDeclaration).toMatchObject({ says: 'included', line: 2 });
+    expect(byDefault.options.gasForce).toBe(240);
+    // The same subtraction asked for explicitly reads the same peaks: the default is that subtraction, not something else.
+    const explicit = DynoFileItem.parse((await upload(setup.id, seriesCsv, { gasForce: '240' }).expect(201)).body);
+    expect(byDefault.summary.peaks).toEqual(explicit.summary.peaks);
+    // Kept on purpose (0 sent): nothing is taken out, and every compression peak reads higher (the gas pushes the rod out).
+    const kept = DynoFileItem.parse((await upload(setup.id, seriesCsv, { gasForce: '0' }).expect(201)).body);
+    expect(kept.options.gasForce).toBe(0);
+    expect(kept.summary.peaks.compression[0].force).toBeGreaterThan(byDefault.summary.peaks.compression[0].force);
+    // A peak table whose header says the gas force was removed: nothing is taken out.
+    const removed = DynoFileItem.parse((await upload(setup.id, peaksCsv).expect(201)).body);
+    expect(removed.summary.gasDeclaration).toMatchObject({ says: 'removed' });
+    expect(removed.options.gasForce).toBe(0);
+  });
+
   it.each([
     ['wrong columns', 'speed of light,colour\n1,red\n2,blue\n', 1, /columns not recognised/],
     ['text in a number column', 'velocity [m/s],compression force [N],rebound force [N]\n0.05,120,300\n0.1,lots,520\n0.2,330,800\n', 3, /'lots' in column 'compression force \[N\]' is not a number/],

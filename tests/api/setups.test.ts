@@ -1,4 +1,4 @@
-import { sql } from 'kysely';
+import { insertionOrder } from '../../server/db/dialect.ts';
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { RevisionsResponse, SetupDetail, SetupRevision, SetupsResponse } from '../../shared/schemas/setup-record.ts';
@@ -31,7 +31,7 @@ async function create(name: string, extra: object = {}): Promise<SetupDetail> {
 const revisionRows = (setupId: string) => t.db.selectFrom('setup_revision').selectAll().where('setup_id', '=', setupId).orderBy('number').execute();
 const count = async (table: 'setup' | 'setup_revision' | 'audit_log') => Number((await t.db.selectFrom(table).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n);
 const auditActions = async (entityId: string) =>
-  (await t.db.selectFrom('audit_log').select('action').where('entity_id', '=', entityId).orderBy(sql`rowid`).execute()).map((r) => r.action);
+  (await t.db.selectFrom('audit_log').select('action').where('entity_id', '=', entityId).orderBy(insertionOrder(t.db, 'audit_log')).execute()).map((r) => r.action);
 
 describe('setups and their revisions', () => {
   it('creates a setup as revision 1 and lists it with its revision, author and figures', async () => {
@@ -224,7 +224,7 @@ describe('setups and their revisions', () => {
     const renamed = SetupDetail.parse((await eng.patch(`${setups}/${created.id}`, { name: 'Corrie front, touring' }).expect(200)).body);
     expect(renamed).toMatchObject({ name: 'Corrie front, touring', latestRevision: 1 });
     expect(renamed.revision.document.name).toBe('Old name');
-    const saved = SetupDetail.parse((await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Old name'), message: 'Same corner' }).expect(201)).body);
+    const saved = SetupDetail.parse((await eng.post(`${setups}/${created.id}/revisions`, { setup: { ...cornerDocument('Old name'), sprungMass: cornerDocument('Old name').sprungMass + 5 }, message: 'Five kilograms more' }).expect(201)).body);
     expect(saved.revision.document.name).toBe('Corrie front, touring');
     expect(await auditActions(created.id)).toEqual(['setup.created', 'setup.renamed', 'setup.revised']);
   });
@@ -240,7 +240,7 @@ describe('setups and their revisions', () => {
     const res = await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Put away'), message: 'x' }).expect(409);
     expect(ErrorBody.parse(res.body).error.message).toMatch(/archived/);
     await eng.patch(`${setups}/${created.id}`, { archived: false }).expect(200);
-    await eng.post(`${setups}/${created.id}/revisions`, { setup: cornerDocument('Put away'), message: 'Back in use' }).expect(201);
+    await eng.post(`${setups}/${created.id}/revisions`, { setup: { ...cornerDocument('Put away'), sprungMass: cornerDocument('Put away').sprungMass + 5 }, message: 'Back in use' }).expect(201);
     expect(await auditActions(created.id)).toEqual(['setup.created', 'setup.archived', 'setup.unarchived', 'setup.revised']);
   });
 

@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { CreatedShareLink, SharedObject } from '../../shared/schemas/share-link.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
-import { OpenedStudyPoint, StudiesResponse, StudyDetail } from '../../shared/schemas/study-record.ts';
+import { StudiesResponse, StudyPointDraft, StudyDetail } from '../../shared/schemas/study-record.ts';
 import { applyPoint } from '../../shared/study/apply-point.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
 import { type BrowserLike, signedIn } from './helpers/agents.ts';
@@ -83,7 +83,7 @@ describe('studies: define and read', () => {
     await view.post(`${studies}/${detail.id}/points`, { points: uploadsFor(detail) }).expect(403);
     await put(view, `${studies}/${detail.id}/results`, { status: 'partial', elapsedMs: 5 }).expect(403);
     await put(view, `${studies}/${detail.id}/baseline`, { pointIndex: 0 }).expect(403);
-    await view.post(`${studies}/${detail.id}/points/0/open-as-setup`, {}).expect(403);
+    await view.get(`${studies}/${detail.id}/points/0/draft`).expect(403);
     await view.del(`${studies}/${detail.id}`).expect(403);
     expect(await countRows('study')).toBe(before);
     const read = StudyDetail.parse((await view.get(`${studies}/${detail.id}`).expect(200)).body);
@@ -179,19 +179,32 @@ describe('studies: baseline, revision, sharing', () => {
     expect(audit.map((a) => a.action)).toEqual(['study.created', 'study.baseline_set', 'study.baseline_cleared']);
   });
 
-  it('opens a point as the next revision of the base setup, built by the same code the runs used', async () => {
+  it('opens a point as an unsaved draft (nothing stored); saving it is the engineer\'s act and the same content twice is refused with the revision it matches', async () => {
     const detail = await newStudy();
-    const opened = OpenedStudyPoint.parse((await eng.post(`${studies}/${detail.id}/points/3/open-as-setup`, {}).expect(201)).body);
-    expect(opened).toEqual({ setupId: fixture.setupId, setupName: 'Brume Pipit front, baseline', revisionNumber: expect.any(Number) });
-    const setup = SetupDetail.parse((await view.get(`/api/workspaces/${workspaceId}/setups/${fixture.setupId}`).expect(200)).body);
-    expect(setup.latestRevision).toBe(opened.revisionNumber);
-    expect(setup.revision.source).toBe(`study:${detail.id}`);
-    expect(setup.revision.message).toMatch(/^From study "Rebound against spring": rebound ×1.40, spring rate 38 000 N\/m/);
+    const revisionsBefore = SetupDetail.parse((await view.get(`/api/workspaces/${workspaceId}/setups/${fixture.setupId}`).expect(200)).body).latestRevision;
+    const draft = StudyPointDraft.parse((await eng.get(`${studies}/${detail.id}/points/3/draft`).expect(200)).body);
+    expect(draft).toMatchObject({ setupId: fixture.setupId, setupName: 'Brume Pipit front, baseline', baseRevisionNumber: 1 });
+    expect(draft.message).toMatch(/^From study "Rebound against spring", point 4: rebound ×1.40, spring rate 38 000 N\/m \(on revision 1\)$/);
     const expected = applyPoint(detail.baseSetup, { reboundScale: 1.4, springRate: 38000 });
     if (!expected.ok) throw new Error(expected.message);
-    expect(setup.revision.document.damper.rebound).toEqual(expected.setup.damper.rebound);
-    expect(setup.revision.document.springRate).toBe(38000);
-    await eng.post(`${studies}/${detail.id}/points/4/open-as-setup`, {}).expect(404);
+    expect(draft.setup.damper.rebound).toEqual(expected.setup.damper.rebound);
+    expect(draft.setup.springRate).toBe(38000);
+    // Opening it twice stores nothing.
+    await eng.get(`${studies}/${detail.id}/points/3/draft`).expect(200);
+    const untouched = SetupDetail.parse((await view.get(`/api/workspaces/${workspaceId}/setups/${fixture.setupId}`).expect(200)).body);
+    expect(untouched.latestRevision).toBe(revisionsBefore);
+
+    const revisions = `/api/workspaces/${workspaceId}/setups/${fixture.setupId}/revisions`;
+    const saved = SetupDetail.parse((await eng.post(revisions, { setup: draft.setup, message: draft.message, basedOn: revisionsBefore }).expect(201)).body);
+    expect(saved.latestRevision).toBe(revisionsBefore + 1);
+    expect(saved.revision.message).toBe(draft.message);
+    const again = ErrorBody.parse((await eng.post(revisions, { setup: draft.setup, message: 'second click', basedOn: saved.latestRevision }).expect(409)).body);
+    expect(again.error.see).toEqual({ kind: 'setup_revision', setupId: fixture.setupId, number: saved.latestRevision });
+    expect(again.error.message).toMatch(new RegExp(`revision ${saved.latestRevision} already holds`));
+    // The base revision's own content is refused too, whatever the name says.
+    const back = ErrorBody.parse((await eng.post(revisions, { setup: { ...detail.baseSetup, name: 'renamed' }, message: 'back', basedOn: saved.latestRevision }).expect(409)).body);
+    expect(back.error.see?.number).toBe(1);
+    await eng.get(`${studies}/${detail.id}/points/4/draft`).expect(404);
   });
 
   it('shares a study read-only by link (signed out), and a signed-in engineer copies it with its setup', async () => {

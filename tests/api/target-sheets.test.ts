@@ -195,23 +195,56 @@ describe('editing', () => {
 });
 
 describe('supersession', () => {
-  it('makes a new draft from a released sheet; the old one stays released and names its successor', async () => {
+  const release = async (sheetId: string, comment?: string) => {
+    expect((await call('post', path(`/${sheetId}/submit`), people.engineer)).status).toBe(200);
+    const res = await call('post', path(`/${sheetId}/release`), people.lead, comment === undefined ? {} : { comment });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    return TargetSheetTransitionResult.parse(res.body);
+  };
+  const read = async (sheetId: string) => TargetSheetDetail.parse((await call('get', path(`/${sheetId}`), people.viewer)).body);
+  const inForce = async (setupId: string) => (await t.db.selectFrom('target_sheet').select('id').where('setup_id', '=', setupId).where('status', '=', 'released').where('superseded_by_id', 'is', null).execute()).map((r) => r.id);
+
+  it('a replacement draft leaves the released sheet in force; releasing the replacement supersedes it at that moment, with the comment stored, audited and shown', async () => {
     const { sheet: old } = await freshSheet(t, cast, 'released');
     const res = await call('post', path(`/${old.id}/supersede`), people.engineer, {});
     expect(res.status).toBe(201);
-    const next = TargetSheetDetail.parse(res.body).sheet;
+    const drafted = TargetSheetDetail.parse(res.body);
+    const next = drafted.sheet;
     expect(next).toMatchObject({ status: 'draft', supersedes: { id: old.id, number: old.number }, compression: old.compression, rebound: old.rebound, setupRevision: 1 });
-    expect(next.number).not.toBe(old.number);
-    const reread = TargetSheetDetail.parse((await call('get', path(`/${old.id}`), people.viewer)).body).sheet;
-    expect(reread).toMatchObject({ status: 'released', supersededBy: { id: next.id, number: next.number } });
-    expect({ ...reread, supersededBy: null, updatedAt: old.updatedAt }).toEqual({ ...old, supersededBy: null });
+    expect(drafted.replaces?.id).toBe(old.id);
+    // Drafting changes nothing on the released sheet.
+    expect((await read(old.id)).sheet).toEqual(old);
+    expect(await inForce(old.setupId)).toEqual([old.id]);
+
+    t.clock.advance(60_000);
+    const released = await release(next.id, 'Supplier agreed the softer rebound at the March review.');
+    expect(released.sheet).toMatchObject({ status: 'released', releaseComment: 'Supplier agreed the softer rebound at the March review.', supersedes: { id: old.id, number: old.number } });
+    expect(released.history.at(-1)).toMatchObject({ to: 'released', reason: 'Supplier agreed the softer rebound at the March review.' });
+    expect((await read(old.id)).sheet).toMatchObject({ status: 'released', supersededBy: { id: next.id, number: next.number } });
+    expect(await inForce(old.setupId)).toEqual([next.id]);
+    const audit = await t.db.selectFrom('audit_log').select(['action', 'summary', 'entity_id']).where('entity_id', 'in', [old.id, next.id]).where('action', 'in', ['target_sheet.released', 'target_sheet.superseded']).execute();
+    expect(audit.find((a) => a.entity_id === next.id && a.action === 'target_sheet.released')?.summary).toMatch(new RegExp(`superseding ${old.number}: "Supplier agreed the softer rebound at the March review\\."`));
+    expect(audit.find((a) => a.entity_id === old.id && a.action === 'target_sheet.superseded')?.summary).toBe(`Target sheet ${old.number} was superseded by ${next.number}, released by ${people.lead.name}.`);
 
     const again = await call('post', path(`/${old.id}/supersede`), people.engineer, {});
     expect(again.status).toBe(409);
     expect(again.body.error.message).toContain(next.number);
   });
 
-  it('reads the targets again from a newer revision at the same speeds and bands', async () => {
+  it('a sheet drafted from scratch for the same setup supersedes the released one when it is released: never two in force', async () => {
+    const { sheet: old } = await freshSheet(t, cast, 'released');
+    const created = await call('post', path(), people.engineer, { setupId: old.setupId, revision: 1 });
+    expect(created.status).toBe(201);
+    const fresh = TargetSheetDetail.parse(created.body);
+    // The lead's review can show what it replaces: the sheet in force, targets and bands.
+    expect(fresh.replaces).toMatchObject({ id: old.id, compression: old.compression, rebound: old.rebound });
+    await release(fresh.sheet.id);
+    expect(await inForce(old.setupId)).toEqual([fresh.sheet.id]);
+    expect((await read(old.id)).sheet.supersededBy?.id).toBe(fresh.sheet.id);
+    expect((await read(fresh.sheet.id)).sheet).toMatchObject({ supersedes: { id: old.id }, releaseComment: null });
+  });
+
+  it('a replacement starts from the latest revision by default, or from any revision named, re-read at the same speeds and bands', async () => {
     const { sheet: old } = await freshSheet(t, cast, 'released');
     const softer = { ...cornerDocument(), damper: { ...cornerDocument().damper, rebound: cornerDocument().damper.rebound.map(([v, f]) => [v, f * 0.5]) as [number, number][] } };
     const rev = await request(t.url)
@@ -219,20 +252,23 @@ describe('supersession', () => {
       .set(await sessionHeaders(t, people.engineer.id))
       .send({ setup: parsed(softer), message: 'Half the rebound' });
     expect(rev.status, JSON.stringify(rev.body)).toBe(201);
-    const next = TargetSheetDetail.parse((await call('post', path(`/${old.id}/supersede`), people.engineer, { revision: 2 })).body).sheet;
+    const next = TargetSheetDetail.parse((await call('post', path(`/${old.id}/supersede`), people.engineer, {})).body).sheet;
     expect(next.setupRevision).toBe(2);
     expect(next.rebound.map((p) => p.velocity)).toEqual(old.rebound.map((p) => p.velocity));
+    expect(next.rebound.map((p) => [p.tolPct, p.floorN])).toEqual(old.rebound.map((p) => [p.tolPct, p.floorN]));
     next.rebound.forEach((p, i) => expect(Math.abs(p.force - old.rebound[i].force / 2)).toBeLessThanOrEqual(1));
     expect(next.compression).toEqual(old.compression);
+    const fromFirst = TargetSheetDetail.parse((await call('post', path(`/${old.id}/supersede`), people.engineer, { revision: 1 })).body).sheet;
+    expect(fromFirst).toMatchObject({ setupRevision: 1, rebound: old.rebound, compression: old.compression });
   });
 
-  it('refuses to supersede a sheet that is not released, and frees the old sheet when the new draft is deleted', async () => {
+  it('refuses to supersede a sheet that is not released; deleting a replacement draft leaves the released sheet as it was', async () => {
     const { sheet: draft } = await freshSheet(t, cast, 'draft');
     expect((await call('post', path(`/${draft.id}/supersede`), people.engineer, {})).status).toBe(409);
     const { sheet: old } = await freshSheet(t, cast, 'released');
     const next = TargetSheetDetail.parse((await call('post', path(`/${old.id}/supersede`), people.engineer, {})).body).sheet;
     await call('delete', path(`/${next.id}`), people.engineer);
-    expect(TargetSheetDetail.parse((await call('get', path(`/${old.id}`), people.viewer)).body).sheet.supersededBy).toBeNull();
+    expect((await read(old.id)).sheet).toEqual(old);
   });
 });
 

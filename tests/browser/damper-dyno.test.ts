@@ -117,12 +117,24 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
     await dyno.getByRole('button', { name: 'Upload a dyno file' }).click();
     await upload.getByLabel('Dyno file (CSV)').setInputFiles(RECORD_CSV);
     await upload.getByText('Read as a raw record (time, displacement, force)').waitFor();
-    await upload.getByText('Units, signs and gas force').click();
-    await upload.getByLabel('Gas force in the readings [N]').fill('150');
+    // Its header says "gas force included": the setup's static gas force (pressure × rod area) is taken out by default, and the page says why.
+    const damper = (await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${setupId}/revisions/${fitted.number}`)).json()).document.damper;
+    const gas = damper.gas.force ?? damper.gas.pressure * damper.gas.rodArea;
+    const gasText = String(Math.round(gas * 10) / 10);
+    expect(await upload.getByLabel('Gas force in the readings [N]').inputValue()).toBe(gasText);
+    const choice = upload.getByTestId('upload-gas-choice');
+    expect(await choice.innerText()).toMatch(/header says the readings include it \(line 2: .*gas force included.*\), so the setup’s static gas force is taken out/);
+    await screenshot(page, 'bench-dyno-record-gas-default-1280');
     await upload.getByRole('button', { name: 'Upload and keep' }).click();
     await dyno.getByRole('list', { name: 'Dyno files' }).getByText('pipit-front-sine-record.csv').waitFor();
     await dyno.getByRole('table', { name: 'Rebound residuals' }).waitFor();
+    const kept = (await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${setupId}/dyno-files`)).json()).files[0];
+    expect(kept.options.gasForce).toBeCloseTo(gas, 1);
+    // Beside the fit: what was taken out and what the file declares.
+    expect(await dyno.getByTestId('gas-in-readings').innerText()).toMatch(/^Gas force taken out of the readings: \d+ N — the file’s header says the readings include it/);
     await dyno.screenshot({ path: join(RESULTS_DIR, 'dyno-panel-record-1280.png') });
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await dyno.screenshot({ path: join(RESULTS_DIR, 'dyno-panel-record-1440.png') });
     await context.close();
   });
 

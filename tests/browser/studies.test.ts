@@ -17,7 +17,7 @@ afterAll(async () => {
 });
 
 describe('studies in the browser', () => {
-  it('an engineer defines a 2-D study, runs it, sees the front and the best compromise, opens it as a revision and finds the study after a reload', async () => {
+  it('an engineer defines a 2-D study, runs it, sees the front and the best compromise, opens a point on the bench as an unsaved draft, saves it once (a second identical save is refused) and finds the study after a reload', async () => {
     const { page, context } = await newSession(browser, baseUrl);
     await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
     const workspaceId = new URL(page.url()).pathname.split('/')[2];
@@ -67,13 +67,50 @@ describe('studies in the browser', () => {
     expect(await page.getByRole('table', { name: 'Study points' }).getByRole('row').count()).toBe(1 + 16);
     await screenshot(page, 'study-engineer-1280');
 
-    // The best point as the next revision of the base setup.
-    const before = SetupDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${saved.base.setupId}`)).json());
-    await best.getByRole('button', { name: 'Open as setup revision' }).click();
-    await page.getByText('Saved as a setup revision').waitFor();
-    const after = SetupDetail.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups/${saved.base.setupId}`)).json());
+    // The best point opens on the corner bench as an unsaved draft: nothing is stored until the engineer saves.
+    const setupUrl = `/api/workspaces/${workspaceId}/setups/${saved.base.setupId}`;
+    const before = SetupDetail.parse(await (await page.request.get(setupUrl)).json());
+    const studyPage = page.url();
+    const openDraft = async () => {
+      await page.goto(studyPage);
+      await page.getByRole('region', { name: 'Best compromise' }).getByRole('link', { name: 'Open as setup draft' }).click();
+      await page.waitForURL(new RegExp(`/w/${workspaceId}/corners/${saved.base.setupId}\\?study=${studyId}&point=\\d+`));
+      await page.getByText('A study point, not saved yet').waitFor();
+    };
+    await openDraft();
+    const bar = page.getByRole('form', { name: 'Save as a new revision' });
+    await bar.getByText(`Unsaved changes to revision ${before.latestRevision}`).waitFor();
+    const message = await bar.getByLabel('What changed').inputValue();
+    expect(message).toMatch(new RegExp(`^From study "${name}", point \\d+: ${saved.results?.best?.label.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`));
+    expect(SetupDetail.parse(await (await page.request.get(setupUrl)).json()).latestRevision).toBe(before.latestRevision);
+    await screenshot(page, 'bench-study-draft-1280');
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await screenshot(page, 'bench-study-draft-1440');
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await bar.getByRole('button', { name: `Save as revision ${before.latestRevision + 1}` }).click();
+    await page.getByText(`Saved as revision ${before.latestRevision + 1}.`).waitFor();
+    const after = SetupDetail.parse(await (await page.request.get(setupUrl)).json());
     expect(after.latestRevision).toBe(before.latestRevision + 1);
-    expect(after.revision.source).toBe(`study:${studyId}`);
+    expect(after.revision.message).toBe(message);
+    expect(new URL(page.url()).search).toBe('');
+
+    // The same point again while it is the latest revision: nothing to save, and the page says so.
+    await openDraft();
+    await page.getByText(`Revision ${after.latestRevision}, the latest, already holds exactly this point`).waitFor();
+    expect(await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 1}` }).isDisabled()).toBe(true);
+
+    // Someone saves another change; the same point opened once more is refused on save, with a link to the revision that holds it.
+    const tweak = { setup: { ...after.revision.document, springRate: after.revision.document.springRate + 1000 }, message: 'Spring +1 N/mm', basedOn: after.latestRevision };
+    expect((await apiWrite({ page, context }, 'POST', `${setupUrl}/revisions`, tweak)).status()).toBe(201);
+    await openDraft();
+    await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 2}` }).click();
+    const refusal = bar.getByRole('alert').filter({ hasText: `revision ${after.latestRevision} already holds exactly these values` });
+    await refusal.waitFor();
+    await screenshot(page, 'bench-study-duplicate-1280');
+    await refusal.getByRole('link', { name: `See revision ${after.latestRevision}` }).click();
+    expect(new URL(page.url()).hash).toBe(`#revision-${after.latestRevision}`);
+    expect(SetupDetail.parse(await (await page.request.get(setupUrl)).json()).latestRevision).toBe(after.latestRevision + 1);
+    await page.goto(studyPage);
 
     await page.reload();
     await page.getByRole('region', { name: 'Best compromise' }).waitFor();
@@ -95,7 +132,7 @@ describe('studies in the browser', () => {
     await page.getByRole('heading', { name: made.name }).waitFor();
     await page.getByRole('region', { name: 'Best compromise' }).waitFor();
     expect(await page.getByRole('button', { name: /Run and save|Run again and save/ }).count()).toBe(0);
-    expect(await page.getByRole('button', { name: 'Open as setup revision' }).count()).toBe(0);
+    expect(await page.getByRole('link', { name: 'Open as setup draft' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Mark as baseline' }).count()).toBe(0);
 
     const preview = page.getByRole('button', { name: 'Preview a run (not saved)' });

@@ -2,7 +2,8 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { TargetSheetDetail, type TargetPoint } from '../../shared/schemas/target-sheet.ts';
+import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
+import { TargetSheetDetail, TargetSheetsResponse, type TargetPoint } from '../../shared/schemas/target-sheet.ts';
 import { apiSession, demoUser, launchBrowser, linkIn, newSession, RESULTS_DIR, screenshot, signIn, waitForMail } from './helpers/browser.ts';
 
 const baseUrl = inject('baseUrl');
@@ -85,7 +86,7 @@ describe('damper target sheet, from draft to dyno check and print', () => {
 
     // Back with the engineer: the sheet is released and read-only; two dampers go on the dyno.
     await eng.page.reload();
-    await eng.page.getByText('Released: final.').waitFor();
+    await eng.page.getByText(/^Released: final, and the sheet in force/).waitFor();
     expect(await eng.page.getByRole('form', { name: 'Edit targets' }).count()).toBe(0);
     const released = TargetSheetDetail.parse(await (await eng.page.request.get(`/api/workspaces/${workspaceId}/target-sheets/${sheetId}`)).json()).sheet;
     expect(released.approver?.name).toBe(lead.name);
@@ -132,5 +133,72 @@ describe('damper target sheet, from draft to dyno check and print', () => {
     // The whole sheet fits one A4 page.
     expect(pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g)?.length).toBe(1);
     await eng.context.close();
+  });
+
+  it('a replacement drafted from an older revision leaves the released sheet in force; the lead reviews the difference, releases with a comment, and only then is the old sheet superseded', async () => {
+    const engineer = await demoUser(baseUrl, 'engineer');
+    const lead = await demoUser(baseUrl, 'lead');
+    const eng = await newSession(browser, baseUrl, { width: 1280, height: 800 });
+    await signIn(eng.page, engineer.email);
+    const workspaceId = new URL(eng.page.url()).pathname.split('/')[2];
+    const api = `/api/workspaces/${workspaceId}`;
+    const sheetsOf = async (page: Page) => TargetSheetsResponse.parse(await (await page.request.get(`${api}/target-sheets`)).json()).sheets;
+    const inForce = async (page: Page, setupId: string) => (await sheetsOf(page)).filter((s) => s.setupId === setupId && s.status === 'released' && !s.supersededBy);
+
+    const old = (await sheetsOf(eng.page)).find((s) => s.setupName === 'Brume Pipit front, baseline' && s.status === 'released' && !s.supersededBy);
+    if (!old) throw new Error('the demo data has a released sheet for the Pipit front corner');
+    const setup = SetupsResponse.parse(await (await eng.page.request.get(`${api}/setups`)).json()).setups.find((s) => s.id === old.setupId)!;
+
+    await eng.page.goto(`/w/${workspaceId}/sheets/${old.id}`);
+    await eng.page.getByRole('button', { name: 'Draft a replacement…' }).click();
+    const replace = eng.page.getByRole('form', { name: 'Draft a replacement' });
+    const from = replace.getByLabel(`Targets from revision of ${old.setupName}`);
+    await from.locator('option', { hasText: '(latest)' }).waitFor({ state: 'attached' });
+    expect(Number(await from.inputValue())).toBe(setup.latestRevision);
+    await screenshot(eng.page, 'sheet-replace-panel-1280');
+    await from.selectOption('1');
+    await replace.getByRole('button', { name: 'Draft the replacement' }).click();
+    await eng.page.waitForURL((url) => url.pathname.startsWith(`/w/${workspaceId}/sheets/`) && !url.pathname.endsWith(old.id));
+    const nextId = new URL(eng.page.url()).pathname.split('/').pop()!;
+    await eng.page.getByRole('form', { name: 'Edit targets' }).waitFor();
+    // Drafting the replacement leaves the released sheet as it was, in force.
+    expect((await inForce(eng.page, old.setupId)).map((s) => s.id)).toEqual([old.id]);
+    const drafted = TargetSheetDetail.parse(await (await eng.page.request.get(`${api}/target-sheets/${nextId}`)).json());
+    expect(drafted.sheet.setupRevision).toBe(1);
+    expect(drafted.replaces?.id).toBe(old.id);
+    await eng.page.getByRole('button', { name: 'Submit for review' }).click();
+    await eng.page.getByText(/Submitted for review/).waitFor();
+    await eng.context.close();
+
+    // The lead's review: the sheet in force and this one side by side, then a release with a comment.
+    const ld = await newSession(browser, baseUrl, { width: 1440, height: 900 });
+    await signIn(ld.page, lead.email);
+    await ld.page.goto(`/w/${workspaceId}/sheets/${nextId}`);
+    const against = ld.page.getByRole('region', { name: 'Against the sheet in force' });
+    await against.waitFor();
+    expect(await against.getByRole('link', { name: old.number }).count()).toBe(1);
+    const rebound = against.getByRole('table', { name: `Rebound: ${old.number} against ${drafted.sheet.number}` });
+    expect(await rebound.getByRole('row').count()).toBe(1 + new Set([...old.rebound, ...drafted.sheet.rebound].map((p) => p.velocity)).size);
+    // Revision 1 has the softer rebound (revision 2 raised it), so some rebound targets differ.
+    expect(await rebound.getByText(/^-\d+\.\d %$/).count()).toBeGreaterThan(0);
+    await ld.page.getByRole('button', { name: 'Release…' }).click();
+    const releasePanel = ld.page.getByRole('group', { name: 'Release this sheet' });
+    await releasePanel.getByText(`Releasing supersedes ${old.number}`, { exact: false }).waitFor();
+    const comment = 'Back to the first rebound curve: the +15 % knee made the rear hop on the test loop.';
+    await releasePanel.getByLabel(/Release comment/).fill(comment);
+    await screenshot(ld.page, 'sheet-review-against-in-force-1440');
+    await ld.page.setViewportSize({ width: 1280, height: 800 });
+    await screenshot(ld.page, 'sheet-review-against-in-force-1280');
+    await releasePanel.getByRole('button', { name: `Release ${drafted.sheet.number}` }).click();
+    await ld.page.getByText(/Released; /).waitFor();
+    await ld.page.locator('dl[aria-label="Sheet identity"]').getByText(comment).waitFor();
+    expect(await ld.page.getByRole('list', { name: 'History' }).getByText(comment, { exact: false }).count()).toBe(1);
+    await screenshot(ld.page, 'sheet-released-with-comment-1280');
+
+    // Now, and only now, the old sheet is superseded: one sheet in force.
+    expect((await inForce(ld.page, old.setupId)).map((s) => s.id)).toEqual([nextId]);
+    const oldNow = TargetSheetDetail.parse(await (await ld.page.request.get(`${api}/target-sheets/${old.id}`)).json()).sheet;
+    expect(oldNow.supersededBy?.id).toBe(nextId);
+    await ld.context.close();
   });
 });

@@ -90,7 +90,8 @@ async function lane(index: number, kills: number): Promise<LaneResult> {
     expect(res.status).toBe(201);
     setupIds.push(SetupDetail.parse(res.body).id);
   }
-  const doc = cornerDocument('Crash corner', { sprungMass: 305 });
+  // each save differs: identical content is refused as a duplicate revision
+  const docFor = (n: number) => cornerDocument('Crash corner', { sprungMass: 305 + n / 1000 });
   const acks: Ack[] = [];
   const cutOff: string[] = [];
   const otherStatuses: number[] = [];
@@ -102,9 +103,10 @@ async function lane(index: number, kills: number): Promise<LaneResult> {
     let down = false;
     const writer = async (setupId: string) => {
       while (!down) {
-        const message = `crash L${index} #${++serial}`;
+        const n = ++serial;
+        const message = `crash L${index} #${n}`;
         try {
-          const res = await callJson(url, session, 'POST', `/api/workspaces/${ws}/setups/${setupId}/revisions`, { setup: doc, message });
+          const res = await callJson(url, session, 'POST', `/api/workspaces/${ws}/setups/${setupId}/revisions`, { setup: docFor(n), message });
           if (res.status === 201) acks.push({ setupId, number: SetupDetail.parse(res.body).revision.number, message });
           else otherStatuses.push(res.status);
         } catch {

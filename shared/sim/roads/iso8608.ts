@@ -9,9 +9,14 @@ import { gridSpline, type GridSpline } from './spline.ts';
  * ISO 8608 random road (ISO 8608:2016; class values from memory, docs/model.md §3): displacement PSD
  * Gd(n) = Gd(n0)·(n/n0)^−w, n0 = 0.1 cycle/m, one-sided, m³.
  *
- * Generation: harmonic superposition with deterministic amplitudes and seeded random phases,
+ * Generation: harmonic superposition with seeded random phases,
  * z(x) = Σk Ak·cos(2π·nk·x + φk), nk = k/L, Ak = √(2·Gd(nk)·Δn), Δn = 1/L, summed by one
- * inverse FFT on a power-of-two grid. The profile is periodic with period L (default 1024 m),
+ * inverse FFT on a power-of-two grid. With `amplitudes: 'random'` each Ak is also multiplied
+ * by a Rayleigh variate Rk = √(−ln Uk) (E[Rk²] = 1, so the PSD's expectation is unchanged):
+ * random phase with Rayleigh amplitude makes each Fourier coefficient a complex Gaussian, i.e.
+ * the road a Gaussian process whose mean square differs from seed to seed (a standard result
+ * of random-vibration texts, from memory). The amplitude draws come from their own seeded
+ * stream, so the phases of a seed are the same whichever amplitudes are chosen. The profile is periodic with period L (default 1024 m),
  * so it does not depend on speed or run length: the same (class, seed, band, waviness, L)
  * is the same road at any speed and on every machine. Phases are drawn for k = 1, 2, … in
  * order from seedrandom's ARC4 generator keyed by the seed, so widening the band keeps the
@@ -92,13 +97,16 @@ export function generateIso8608Profile(road: Iso8608Road, options: { footprint?:
   const kMax = Math.min(Math.floor(nHi * length + 1e-9), Math.floor(size / MIN_POINTS_PER_WAVELENGTH));
   const gd0 = isoClassRoughness[road.class];
   const rng = seedrandom(`iso8608:${road.seed}`);
+  const amplitudeRng = road.amplitudes === 'random' ? seedrandom(`iso8608-amplitude:${road.seed}`) : null;
   const fft = fftOfSize(size);
   const spectrum = new Float64Array(2 * size);
   for (let k = 1; k <= kMax; k++) {
     const phase = 2 * Math.PI * rng();
+    // 1 − U lies in (0, 1]: never the log of zero
+    const rayleigh = amplitudeRng ? Math.sqrt(-Math.log(1 - amplitudeRng())) : 1;
     if (k < kMin) continue;
     const n = k * dn;
-    const amp = Math.sqrt(2 * gd0 * (n / ISO_N0) ** -w * dn) * footprintGain(n, options.footprint);
+    const amp = rayleigh * Math.sqrt(2 * gd0 * (n / ISO_N0) ** -w * dn) * footprintGain(n, options.footprint);
     // Only positive frequencies, scaled by N: the real part of the inverse transform
     // (which divides by N) is then Σ Ak·cos(2π k j/N + φk).
     spectrum[2 * k] = size * amp * Math.cos(phase);
@@ -135,7 +143,7 @@ export function clearIsoRoadCache(): void {
 }
 
 function cachedSpline(road: Iso8608Road, footprint: number | undefined) {
-  const key = JSON.stringify([road.class, road.seed, road.nMin, road.nMax, road.waviness, road.length, footprint]);
+  const key = JSON.stringify([road.class, road.seed, road.nMin, road.nMax, road.waviness, road.length, road.amplitudes, footprint]);
   let hit = splineCache.get(key);
   if (!hit) {
     const profile = generateIso8608Profile(road, { footprint });

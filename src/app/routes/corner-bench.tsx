@@ -1,11 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
-import { useMemo, useRef, useState } from 'react';
-import { useParams } from 'react-router';
+import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useParams, useSearchParams } from 'react-router';
+import type { StudyPointDraft } from '../../../shared/schemas/study-record.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
 import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
+import { Loading } from '../../components/ui/spinner.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
@@ -17,7 +19,8 @@ import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
 import { BenchScenarioPicker, defaultScenario, roadOf } from '../../features/setups/components/bench-scenario.tsx';
 import { CornerFiguresStrip } from '../../features/setups/components/corner-figures-strip.tsx';
 import { SetupForm } from '../../features/setups/components/form/setup-form.tsx';
-import { RevisionHistory } from '../../features/setups/components/revision-history.tsx';
+import { RevisionHistory, revisionAnchor } from '../../features/setups/components/revision-history.tsx';
+import { usePointDraft } from '../../features/studies/api/get-point-draft.ts';
 import { SaveBar } from '../../features/setups/components/save-bar.tsx';
 import { ArchiveButton, GroupingControl, SetupNameHeading } from '../../features/setups/components/setup-facts.tsx';
 import { LoadSetupFileButton } from '../../features/setups/components/setup-file-buttons.tsx';
@@ -37,21 +40,44 @@ export function CornerBenchRoute() {
   const { setupId = '' } = useParams();
   const workspace = useWorkspace();
   const setup = useQuery(setupQueryOptions(workspace.id, setupId));
+  const [params] = useSearchParams();
+  const studyId = params.get('study');
+  const point = Number(params.get('point'));
+  const fromStudy = studyId !== null && Number.isInteger(point) && point >= 0 && workspace.can('engineer');
+  const pointDraft = usePointDraft(workspace.id, studyId ?? '', point, fromStudy);
+  if (fromStudy && pointDraft.isPending) return <Loading what="the study point" />;
   return (
-    <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
-      {(detail) => <Bench key={detail.id} detail={detail} />}
-    </QueryGuard>
+    <>
+      {fromStudy && pointDraft.isError && (
+        <Notice tone="danger" className="mb-4" title="The study point did not open">
+          {pointDraft.error.message}
+        </Notice>
+      )}
+      <QueryGuard query={setup} what="the setup" errorTitle={(e) => (e.code === 'not_found' ? 'No such setup here' : 'The setup did not load')}>
+        {(detail) => {
+          const studyDraft = fromStudy && pointDraft.data?.setupId === detail.id ? pointDraft.data : undefined;
+          return <Bench key={`${detail.id}:${studyId ?? ''}:${studyDraft ? point : ''}`} detail={detail} studyDraft={studyDraft} studyId={studyId ?? undefined} />;
+        }}
+      </QueryGuard>
+    </>
   );
 }
 
-function Bench({ detail }: { detail: SetupDetail }) {
+function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraft?: StudyPointDraft; studyId?: string }) {
   const workspace = useWorkspace();
   const canWrite = workspace.can('engineer') && !detail.archivedAt;
   const vehicles = useVehicles(workspace.id).data?.vehicles.map((v) => ({ id: v.id, name: v.name })) ?? [];
   const draft = useSetupDraft(detail.revision);
   const save = useSaveRevision(workspace.id, detail.id);
   const toast = useToast();
-  const [saveError, setSaveError] = useState('');
+  const [saveError, setSaveError] = useState<ReactNode>(null);
+  const [, setParams] = useSearchParams();
+
+  // A study point arrives as unsaved changes on top of the latest revision; nothing is stored until the engineer saves.
+  const { load } = draft;
+  useEffect(() => {
+    if (studyDraft && canWrite) load(studyDraft.setup);
+  }, [studyDraft, canWrite, load]);
   const [scenario, setScenario] = useState(defaultScenario);
 
   // The panels on the right follow the draft; while a field is wrong they keep the last valid state.
@@ -65,17 +91,31 @@ function Bench({ detail }: { detail: SetupDetail }) {
   }, [canWrite, draft.values.damper, shown.damper]);
 
   const onSave = (setup: Setup, message: string) => {
-    setSaveError('');
+    setSaveError(null);
     save.mutate(
       { setup, message, basedOn: draft.baseRevision },
       {
         onSuccess: (d) => {
           draft.resetTo(d.revision);
+          // A reload must not bring the saved study point back as a fresh draft.
+          if (studyDraft) setParams({}, { replace: true });
           toast.show(`Saved as revision ${d.latestRevision}.`);
         },
         onError: (error) => {
           for (const f of error.fields) if (f.path.startsWith('setup.')) draft.form.setError(f.path.slice(6) as never, { type: 'server', message: f.message });
-          setSaveError(error.message);
+          const see = error.see;
+          setSaveError(
+            see?.kind === 'setup_revision' && see.setupId === detail.id ? (
+              <>
+                {error.message}{' '}
+                <a className="font-semibold underline" href={`#${revisionAnchor(see.number)}`}>
+                  See revision {see.number}
+                </a>
+              </>
+            ) : (
+              error.message
+            ),
+          );
         },
       },
     );
@@ -118,12 +158,43 @@ function Bench({ detail }: { detail: SetupDetail }) {
         </Notice>
       )}
 
+      {studyDraft && canWrite && (
+        <Notice className="mb-4" title="A study point, not saved yet">
+          The form holds point {studyDraft.pointLabel} from{' '}
+          <Link to={`/w/${workspace.id}/studies/${studyId}`} className="text-accent underline">
+            the study
+          </Link>
+          , built on revision <span className="figures">{studyDraft.baseRevisionNumber}</span>
+          {studyDraft.baseRevisionNumber !== detail.latestRevision && (
+            <>
+              {' '}
+              (the latest is revision <span className="figures">{detail.latestRevision}</span>: every value comes from revision{' '}
+              <span className="figures">{studyDraft.baseRevisionNumber}</span>, so check what changed since)
+            </>
+          )}
+          .{' '}
+          {draft.isDirty ? (
+            'Review it, run it, and save it as a revision when you are sure; or discard the changes.'
+          ) : (
+            <strong>
+              Revision {detail.latestRevision}, the latest, already holds exactly this point: there is nothing to save.
+            </strong>
+          )}
+        </Notice>
+      )}
       <div className="grid items-start gap-6 lg:grid-cols-[21rem_minmax(0,1fr)]">
         <div className="min-w-0">
           {canWrite ? (
             <>
               <div className="sticky top-0 z-10 -mx-1 mb-3 bg-paper px-1 pt-1 pb-2">
-                <SaveBar draft={draft} nextNumber={detail.latestRevision + 1} saving={save.isPending} error={saveError} onSave={onSave} />
+                <SaveBar
+                  draft={draft}
+                  nextNumber={detail.latestRevision + 1}
+                  saving={save.isPending}
+                  error={saveError}
+                  initialMessage={studyDraft?.message}
+                  onSave={onSave}
+                />
               </div>
               <SetupForm form={draft.form} />
             </>

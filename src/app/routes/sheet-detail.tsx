@@ -14,6 +14,7 @@ import { BandPlot } from '../../features/target-sheets/components/band-plot.tsx'
 import { CheckResults } from '../../features/target-sheets/components/check-results.tsx';
 import { CheckUpload } from '../../features/target-sheets/components/check-upload.tsx';
 import { SheetHistory } from '../../features/target-sheets/components/sheet-history.tsx';
+import { ReplacementDifference } from '../../features/target-sheets/components/replacement-difference.tsx';
 import { SheetIdentity } from '../../features/target-sheets/components/sheet-identity.tsx';
 import { StatusBar } from '../../features/target-sheets/components/status-bar.tsx';
 import { TargetTableEditor } from '../../features/target-sheets/components/target-table-editor.tsx';
@@ -39,7 +40,7 @@ export function SheetDetailRoute() {
 
   return (
     <QueryGuard query={detail} what="target sheet" notFound={<NotFoundRoute inShell />} errorTitle="This sheet did not load">
-      {({ sheet, history }) => {
+      {({ sheet, history, replaces }) => {
         const editable = (sheet.status === 'draft' || sheet.status === 'returned') && workspace.can('engineer');
         const list = checks.data?.checks ?? [];
         const shown = list.find((c) => c.id === plotted) ?? list[0];
@@ -61,10 +62,16 @@ export function SheetDetailRoute() {
                 </>
               }
             />
-            <StatusBar sheet={sheet} workspaceId={workspace.id} role={workspace.role} secondPerson={workspace.settings.releaseNeedsSecondPerson ? { userId: me.data?.user.id ?? '' } : null} />
+            <StatusBar sheet={sheet} replaces={replaces} workspaceId={workspace.id} role={workspace.role} secondPerson={workspace.settings.releaseNeedsSecondPerson ? { userId: me.data?.user.id ?? '' } : null} />
             <Section title="Identity">
-              <SheetIdentity sheet={sheet} workspaceId={workspace.id} />
+              <SheetIdentity sheet={sheet} workspaceId={workspace.id} replaces={replaces} />
             </Section>
+
+            {replaces && sheet.status !== 'released' && (
+              <Section title="Against the sheet in force">
+                <ReplacementDifference sheet={sheet} inForce={replaces} workspaceId={workspace.id} />
+              </Section>
+            )}
 
             <Section title="Targets">
               {editable ? (

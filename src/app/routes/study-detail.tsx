@@ -1,6 +1,5 @@
-import { useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
-import { Button } from '../../components/ui/button.tsx';
+import { Button, buttonClass } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
@@ -16,8 +15,8 @@ import { NotFoundRoute } from './not-found.tsx';
 
 /**
  * `/w/:workspaceId/studies/:studyId`: the study's results (saved, or the run going on now), run
- * it (engineers save; viewers may preview, nothing saved), pick a point, open it as a setup
- * revision, mark the lead's baseline, share it read-only, export.
+ * it (engineers save; viewers may preview, nothing saved), pick a point, open it on the corner
+ * bench as an unsaved draft (saving is done there), mark the lead's baseline, share it read-only, export.
  */
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
@@ -26,8 +25,7 @@ export function StudyDetailRoute() {
   const navigate = useNavigate();
   const canSave = workspace.can('engineer');
   const isLead = workspace.can('lead');
-  const { study, state, cancel, run, running, view, roadNames, baseline, openAsSetup, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
-  const [opened, setOpened] = useState<{ setupId: string; setupName: string; revisionNumber: number } | null>(null);
+  const { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
   useRunWhenAsked(params.get('run') === '1', canStart, run, () => setParams({}, { replace: true }));
 
   return (
@@ -38,16 +36,14 @@ export function StudyDetailRoute() {
 
         const pointActions = (index: number) => (
           <>
-            {canSave && (
-              <Button
-                size="sm"
-                variant="primary"
-                busy={openAsSetup.isPending && openAsSetup.variables === index}
-                disabled={!s.base.setupId || running}
-                onClick={() => openAsSetup.mutate(index, { onSuccess: (r) => setOpened(r) })}
+            {canSave && s.base.setupId && !running && (
+              <Link
+                className={buttonClass('primary', 'sm')}
+                to={`/w/${workspace.id}/corners/${s.base.setupId}?study=${encodeURIComponent(s.id)}&point=${index}`}
+                title="Opens the corner bench with this point as unsaved changes; nothing is saved until you save it there."
               >
-                Open as setup revision
-              </Button>
+                Open as setup draft
+              </Link>
             )}
             {isLead && hasSaved && s.points.some((p) => p.index === index) && (
               <Button size="sm" busy={baseline.isPending} disabled={running} onClick={() => baseline.mutate(s.baseline?.pointIndex === index ? null : index)}>
@@ -132,16 +128,6 @@ export function StudyDetailRoute() {
                 </Notice>
               )}
               {share.error && <Notice tone="danger">{share.error.message}</Notice>}
-              {opened && (
-                <Notice tone="ok" title="Saved as a setup revision">
-                  Revision <span className="figures">{opened.revisionNumber}</span> of{' '}
-                  <Link to={`/w/${workspace.id}/corners/${opened.setupId}`} className="text-accent underline">
-                    {opened.setupName}
-                  </Link>{' '}
-                  now holds this point.
-                </Notice>
-              )}
-              {openAsSetup.error && <Notice tone="danger">{openAsSetup.error.message}</Notice>}
               {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
               <RunPanel state={state} onCancel={cancel} />
               {s.status === 'partial' && state.phase === 'idle' && (

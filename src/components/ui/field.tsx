@@ -1,4 +1,4 @@
-import { createContext, useContext, useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes } from 'react';
+import { createContext, useContext, useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldIds {
   controlId: string;
@@ -85,6 +85,11 @@ export function Select({ className = '', id, ref, children, ...rest }: SelectHTM
       {children}
     </select>
   );
+}
+
+export function Textarea({ className = '', id, ref, ...rest }: TextareaHTMLAttributes<HTMLTextAreaElement> & { ref?: Ref<HTMLTextAreaElement> }) {
+  const { border, ...aria } = useFieldProps(id);
+  return <textarea ref={ref} className={`${controlClass} ${border} py-1.5 text-sm ${className}`} {...aria} {...rest} />;
 }
 
 /** An error that belongs to the whole form, not one field. */

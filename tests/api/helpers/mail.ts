@@ -1,4 +1,5 @@
 import type { Db } from '../../../server/db/database.ts';
+import { insertionOrder } from '../../../server/db/dialect.ts';
 import type { OutboxMessageRow } from '../../../server/mail/outbox.tables.ts';
 
 /**
@@ -10,7 +11,7 @@ export async function waitForMail(db: Db, to: string, subject?: string, waitMs =
   for (;;) {
     let q = db.selectFrom('outbox_message').selectAll().where('to_address', 'like', `%${to}%`);
     if (subject) q = q.where('subject', 'like', `%${subject}%`);
-    const row = await q.orderBy('received_at', 'desc').executeTakeFirst();
+    const row = await q.orderBy('received_at', 'desc').orderBy(insertionOrder(db, 'outbox_message'), 'desc').executeTakeFirst();
     if (row) return row;
     if (Date.now() > until) throw new Error(`no mail to ${to}${subject ? ` about "${subject}"` : ''} within ${waitMs} ms`);
     await new Promise((r) => setTimeout(r, 25));

@@ -2,12 +2,12 @@ import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import pino from 'pino';
 import { createApp } from '../../../server/app.ts';
-import { type Db, openDatabase } from '../../../server/db/database.ts';
-import { migrateToLatest } from '../../../server/db/migrator.ts';
+import type { Db } from '../../../server/db/database.ts';
 import type { AppDeps, AppOptions } from '../../../server/deps.ts';
 import { createMailer } from '../../../server/mail/mailer.ts';
 import { type MailSink, startMailSink } from '../../../server/mail/sink.ts';
 import type { RouteDef } from '../../../server/http/registry.ts';
+import { openTestDatabase } from './test-database.ts';
 
 export const TEST_PUBLIC_URL = 'http://ridewright.test';
 
@@ -34,13 +34,13 @@ export interface TestApp {
 }
 
 /**
- * A fresh in-memory database, migrated; a real mail sink on 127.0.0.1 (port 0) storing into it;
+ * A fresh database, migrated (in-memory SQLite, or a PostgreSQL copy of the migrated template in
+ * the `api-pg` project: see test-database.ts); a real mail sink on 127.0.0.1 (port 0) storing into it;
  * the app listening on 127.0.0.1 (port 0). Rate limits are off unless `overrides.rateLimit` is set.
  */
 export async function createTestApp(overrides: Partial<AppOptions> = {}): Promise<TestApp> {
-  const db = openDatabase(':memory:');
-  const { error } = await migrateToLatest(db);
-  if (error) throw error;
+  const database = await openTestDatabase();
+  const { db } = database;
   const clock = testClock();
   const logger = pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' });
   const sink = await startMailSink({ db, clock: clock.now });
@@ -75,7 +75,7 @@ export async function createTestApp(overrides: Partial<AppOptions> = {}): Promis
       await new Promise<void>((resolve) => server.close(() => resolve()));
       mailer.close();
       await sink.close();
-      await db.destroy();
+      await database.drop();
     },
   };
 }

@@ -49,9 +49,9 @@ export const studiesEntries: MatrixEntries = {
     ok: 200,
     build: async (w) => ({ path: ws(w, `/studies/${(await fresh(w, 'first-point')).studyId}/baseline`), body: { pointIndex: 0 } }),
   },
-  'POST /api/workspaces/:workspaceId/studies/:studyId/points/:index/open-as-setup': {
+  'GET /api/workspaces/:workspaceId/studies/:studyId/points/:index/draft': {
     access: 'engineer',
-    ok: 201,
-    build: async (w) => ({ path: ws(w, `/studies/${(await fresh(w)).studyId}/points/1/open-as-setup`), body: {} }),
+    ok: 200,
+    build: async (w) => ({ path: ws(w, `/studies/${(await fresh(w)).studyId}/points/1/draft`) }),
   },
 };

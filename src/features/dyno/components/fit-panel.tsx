@@ -11,6 +11,7 @@ import { useApplyDynoFit } from '../api/apply-dyno-fit.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 import { knotsText, readKnots, suggestKnots } from '../model/knots.ts';
 import { DynoChart } from './dyno-chart.tsx';
+import { GasInReadings } from './gas-in-readings.tsx';
 import { ResidualsTable } from './residuals-table.tsx';
 
 /**
@@ -73,6 +74,7 @@ export function FitPanel({
 
   return (
     <div className="grid gap-3">
+      <GasInReadings file={file} />
       <p className="text-2xs text-ink-faint">
         Dots: measured {file.loop ? 'peak force of each stroke' : 'points'}; lines: the fitted tables
         {file.loop ? '; thin dark line: the record itself, force against velocity sample by sample (the loop)' : ''}.

@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from 'react';
+import { readGasDeclaration } from '../../../../shared/dyno/gas-declaration.ts';
 import { summariseDyno } from '../../../../shared/dyno-upload/summarise-dyno.ts';
 import type { DynoParseOptions, ForceUnit, SignConvention, VelocityUnit, DisplacementUnit, TimeUnit } from '../../../../shared/schemas/dyno.ts';
 import { DYNO_MAX_BYTES, type DynoFileItem, type DynoUploadFields } from '../../../../shared/schemas/dyno-file.ts';
@@ -8,6 +9,7 @@ import { Notice } from '../../../components/ui/notice.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
 import { formatSig } from '../../../lib/format.ts';
 import { useUploadDynoFile } from '../api/upload-dyno-file.ts';
+import { headerWords } from './gas-in-readings.tsx';
 
 const layoutWords: Record<string, string> = {
   'direction-column': 'peak points with a direction column',
@@ -24,13 +26,15 @@ interface Choices {
   timeUnit: '' | TimeUnit;
   motionSign: SignConvention;
   forceSign: SignConvention;
-  gasForce: string;
+  /** null until the engineer types one: then the file's header and the setup decide (see `autoGas`). */
+  gasForce: string | null;
 }
 
-const initialChoices: Choices = { velocityUnit: '', forceUnit: '', displacementUnit: '', timeUnit: '', motionSign: 'compression-positive', forceSign: 'compression-positive', gasForce: '' };
+const initialChoices: Choices = { velocityUnit: '', forceUnit: '', displacementUnit: '', timeUnit: '', motionSign: 'compression-positive', forceSign: 'compression-positive', gasForce: null };
 
-function optionsOf(c: Choices): Partial<DynoParseOptions> {
-  const gas = Number(c.gasForce);
+function optionsOf(c: Choices, autoGas: number): Partial<DynoParseOptions> {
+  // A field emptied by hand means "nothing to take out"; untouched, the header's default applies.
+  const gas = c.gasForce === null ? autoGas : c.gasForce.trim() === '' ? 0 : Number(c.gasForce);
   return {
     ...(c.velocityUnit ? { velocityUnit: c.velocityUnit } : {}),
     ...(c.forceUnit ? { forceUnit: c.forceUnit } : {}),
@@ -38,7 +42,7 @@ function optionsOf(c: Choices): Partial<DynoParseOptions> {
     ...(c.timeUnit ? { timeUnit: c.timeUnit } : {}),
     motionSign: c.motionSign,
     forceSign: c.forceSign,
-    ...(c.gasForce.trim() && Number.isFinite(gas) && gas >= 0 ? { gasForce: gas } : {}),
+    ...((c.gasForce !== null || autoGas > 0) && Number.isFinite(gas) && gas >= 0 ? { gasForce: gas } : {}),
   };
 }
 
@@ -53,7 +57,12 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
   const [file, setFile] = useState<File | null>(null);
   const [text, setText] = useState<string | null>(null);
   const [c, setC] = useState<Choices>(initialChoices);
-  const read = text === null ? null : summariseDyno(text, optionsOf(c));
+  // The file's own header decides the default: readings that include the gas force get the
+  // setup's static gas force taken out, so the fit does not carry it as an offset.
+  const declaration = text === null ? null : readGasDeclaration(text);
+  const autoGas = declaration?.says === 'included' && gasForceHint !== undefined ? Math.round(gasForceHint * 10) / 10 : 0;
+  const read = text === null ? null : summariseDyno(text, optionsOf(c, autoGas));
+  const gasTaken = optionsOf(c, autoGas).gasForce ?? 0;
   const tooBig = file !== null && file.size > DYNO_MAX_BYTES;
   const set = <K extends keyof Choices>(key: K, value: Choices[K]) => setC((prev) => ({ ...prev, [key]: value }));
 
@@ -66,7 +75,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
   const submit = (e: FormEvent) => {
     e.preventDefault();
     if (!file) return;
-    const o = optionsOf(c);
+    const o = optionsOf(c, autoGas);
     const fields: DynoUploadFields = { ...o };
     upload.mutate({ file, fields }, { onSuccess: (item) => (onUploaded(item), setFile(null), setText(null)) });
   };
@@ -108,6 +117,16 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
           </span>
         </Notice>
       )}
+      {read?.ok && (
+        <p data-testid="upload-gas-choice" className={`rounded border px-3 py-1.5 text-sm ${declaration?.says === 'included' && gasTaken === 0 ? 'border-signal/60 bg-signal-wash' : 'border-rule bg-paper-raised'}`}>
+          <strong className="font-semibold">
+            Gas force to take out: <span className="figures">{formatSig(gasTaken, 3)}</span> N
+          </strong>{' '}
+          — {headerWords(declaration)}
+          {c.gasForce === null && declaration?.says === 'included' && gasForceHint !== undefined ? ', so the setup’s static gas force is taken out' : ''}
+          {c.gasForce !== null ? ' (your choice below)' : ''}. Change it under “Units, signs and gas force”.
+        </p>
+      )}
       {unstated.length > 0 && (
         <Notice tone="signal">The file does not state the unit of {unstated.join(', ')}; the reading above assumes SI. Choose the unit below if that is wrong.</Notice>
       )}
@@ -129,7 +148,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
         </ul>
       )}
 
-      <details open={unstated.length > 0 || signWarnings.length > 0} className="rounded border border-rule px-3 py-2">
+      <details open={unstated.length > 0 || signWarnings.length > 0 || declaration !== null} className="rounded border border-rule px-3 py-2">
         <summary className="cursor-pointer text-sm text-ink-soft">Units, signs and gas force</summary>
         <div className="mt-2 grid gap-3 sm:grid-cols-3">
           <Field label="Velocity unit">
@@ -147,7 +166,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
             </Select>
           </Field>
           <Field label="Gas force in the readings [N]" hint={gasForceHint !== undefined ? `the setup's static gas force is ${formatSig(gasForceHint, 3)} N` : 'leave empty when already removed'}>
-            <Input inputMode="decimal" className="figures text-right" value={c.gasForce} onChange={(e) => set('gasForce', e.target.value)} />
+            <Input inputMode="decimal" className="figures text-right" value={c.gasForce ?? (autoGas ? String(autoGas) : '')} onChange={(e) => set('gasForce', e.target.value)} />
           </Field>
           <Field label="Displacement unit">
             <Select value={c.displacementUnit} onChange={(e) => set('displacementUnit', e.target.value as Choices['displacementUnit'])}>

@@ -26,6 +26,7 @@ export const roadFields: Record<Exclude<RoadKind, 'measured'>, FieldSpec[]> & { 
     { key: 'nMin', label: 'Lowest spatial frequency', unit: 'cycle/m', toSI: 1, optional: true, hint: 'default 0.011' },
     { key: 'nMax', label: 'Highest spatial frequency', unit: 'cycle/m', toSI: 1, optional: true, hint: 'default 2.83' },
     { key: 'length', label: 'Period', ...m, optional: true, hint: 'default 1024 m' },
+    { key: 'amplitudes', label: 'Harmonic amplitudes', options: ['fixed', 'random'], hint: 'random (Rayleigh): seeds differ in roughness as real roads do' },
   ],
   sine: [
     { key: 'amplitude', label: 'Amplitude (peak)', ...mm },
@@ -61,7 +62,7 @@ export const roadFields: Record<Exclude<RoadKind, 'measured'>, FieldSpec[]> & { 
 };
 
 export const defaultRoads: Record<Exclude<RoadKind, 'measured'>, Record<string, string>> = {
-  iso8608: { class: 'C', seed: '1', waviness: '', nMin: '', nMax: '', length: '' },
+  iso8608: { class: 'C', seed: '1', waviness: '', nMin: '', nMax: '', length: '', amplitudes: 'fixed' },
   sine: { amplitude: '10', wavelength: '8' },
   sweep: { amplitude: '5', velocityAmplitude: '', startFrequency: '0.5', endFrequency: '20', duration: '30', law: 'log' },
   bump: { height: '50', length: '0.6', at: '10' },

@@ -22,6 +22,9 @@ export interface RevisionHistoryProps {
   onRestored: (detail: SetupDetail) => void;
 }
 
+/** The fragment id of a revision's row, so a refusal can link straight to it. */
+export const revisionAnchor = (number: number) => `revision-${number}`;
+
 function sourceWords(source: string | null): string | null {
   if (!source) return null;
   if (source === 'import') return 'imported';
@@ -99,7 +102,7 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
           </thead>
           <tbody>
             {list.map((r) => (
-              <tr key={r.id} className="border-b border-rule/60 align-top last:border-0" aria-label={`Revision ${r.number}`}>
+              <tr key={r.id} id={revisionAnchor(r.number)} className="scroll-mt-16 border-b border-rule/60 align-top last:border-0 target:bg-accent-wash" aria-label={`Revision ${r.number}`}>
                 <td className="px-2 py-1.5 text-center">
                   <input type="radio" name="compare-a" aria-label={`Compare from revision ${r.number}`} checked={pair.a === r.number} onChange={() => setPair((p) => ({ ...p, a: r.number }))} className="accent-accent" />
                 </td>

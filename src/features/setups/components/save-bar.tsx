@@ -1,4 +1,4 @@
-import { useId, useMemo, useState } from 'react';
+import { type ReactNode, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Setup } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { describePath } from '../model/setup-diff.ts';
@@ -10,8 +10,10 @@ export interface SaveBarProps {
   /** Number the next revision will get. */
   nextNumber: number;
   saving: boolean;
-  /** A refusal from the server, in words. */
-  error?: string;
+  /** A refusal from the server, in words (may carry a link to what it refers to). */
+  error?: ReactNode;
+  /** The message the field starts with (a study point names its study and point); the engineer may change it. */
+  initialMessage?: string;
   onSave: (setup: Setup, message: string) => void;
 }
 
@@ -31,16 +33,22 @@ function useProblems(values: unknown) {
  * Saving is always a new revision with a message saying what changed. The bar states whether
  * there is anything to save, and why it cannot be saved yet.
  */
-export function SaveBar({ draft, nextNumber, saving, error, onSave }: SaveBarProps) {
+export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '', onSave }: SaveBarProps) {
   const id = useId();
-  const [message, setMessage] = useState('');
+  const [message, setMessage] = useState(initialMessage);
   const problems = useProblems(draft.values);
   const canSave = draft.isDirty && problems.length === 0 && message.trim().length > 0 && !saving;
 
-  const submit = draft.form.handleSubmit((setup) => {
-    onSave(setup, message.trim());
-    setMessage('');
-  });
+  // The message is cleared once a save has made a new revision; a refused save keeps it for another try.
+  const savedFrom = useRef(draft.baseRevision);
+  useEffect(() => {
+    if (draft.baseRevision !== savedFrom.current) {
+      savedFrom.current = draft.baseRevision;
+      setMessage('');
+    }
+  }, [draft.baseRevision]);
+
+  const submit = draft.form.handleSubmit((setup) => onSave(setup, message.trim()));
 
   return (
     <form
@@ -70,6 +78,7 @@ export function SaveBar({ draft, nextNumber, saving, error, onSave }: SaveBarPro
           value={message}
           maxLength={500}
           onChange={(e) => setMessage(e.target.value)}
+          title={message || undefined}
           placeholder="What changed, in a few words"
           disabled={!draft.isDirty}
           className="h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
@@ -93,9 +102,9 @@ export function SaveBar({ draft, nextNumber, saving, error, onSave }: SaveBarPro
         </div>
       )}
       {error && (
-        <p role="alert" className="mt-2 text-xs text-danger">
+        <div role="alert" className="mt-2 text-xs text-danger">
           {error}
-        </p>
+        </div>
       )}
     </form>
   );

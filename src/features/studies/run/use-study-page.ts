@@ -3,7 +3,6 @@ import { useEffect, useMemo, useRef } from 'react';
 import { studyRoadNames } from '../../../../shared/study/collect.ts';
 import { useDeleteStudy } from '../api/delete-study.ts';
 import { useStudy } from '../api/get-study.ts';
-import { useOpenPointAsSetup } from '../api/open-point-as-setup.ts';
 import { rememberStudy } from '../api/query-keys.ts';
 import { useSetStudyBaseline } from '../api/set-study-baseline.ts';
 import { useShareStudy } from '../api/share-study.ts';
@@ -26,7 +25,6 @@ export function useStudyPage(opts: { workspaceId: string; studyId: string; canSa
     onSaved: (detail) => rememberStudy(queryClient, workspaceId, detail),
   });
   const baseline = useSetStudyBaseline(workspaceId, studyId);
-  const openAsSetup = useOpenPointAsSetup(workspaceId, studyId);
   const share = useShareStudy(workspaceId, studyId);
   const remove = useDeleteStudy(workspaceId);
 
@@ -43,7 +41,7 @@ export function useStudyPage(opts: { workspaceId: string; studyId: string; canSa
   }, [detail, state.phase, state.points, state.base]);
   const roadNames = useMemo(() => (detail ? studyRoadNames(detail.definition, detail.roads) : []), [detail]);
 
-  return { study, state, cancel, run, running, view, roadNames, baseline, openAsSetup, share, remove, canStart: Boolean(detail) && canSave && state.phase === 'idle' };
+  return { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart: Boolean(detail) && canSave && state.phase === 'idle' };
 }
 
 /**

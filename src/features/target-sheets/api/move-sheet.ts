@@ -9,15 +9,16 @@ import { invalidateSheets, sheetKey, sheetPath } from './query-keys.ts';
  */
 export type SheetStep = 'submit' | 'release' | 'return' | 'reopen';
 
-export const moveSheet = (workspaceId: string, sheetId: string, step: SheetStep, reason?: string) =>
-  api.post(`${sheetPath(workspaceId, sheetId)}/${step}`, step === 'return' ? { reason } : {}, TargetSheetTransitionResult);
+/** `text` is the reason of a return or the comment of a release. */
+export const moveSheet = (workspaceId: string, sheetId: string, step: SheetStep, text?: string) =>
+  api.post(`${sheetPath(workspaceId, sheetId)}/${step}`, step === 'return' ? { reason: text } : step === 'release' && text ? { comment: text } : {}, TargetSheetTransitionResult);
 
 export function useMoveSheet(workspaceId: string, sheetId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ step, reason }: { step: SheetStep; reason?: string }) => moveSheet(workspaceId, sheetId, step, reason),
-    onSuccess: ({ sheet, history }) => {
-      queryClient.setQueryData(sheetKey(workspaceId, sheetId), { sheet, history });
+    onSuccess: ({ sheet, history, replaces }) => {
+      queryClient.setQueryData(sheetKey(workspaceId, sheetId), { sheet, history, replaces });
       return invalidateSheets(queryClient, workspaceId);
     },
   });

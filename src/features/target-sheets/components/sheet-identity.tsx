@@ -17,7 +17,7 @@ function Item({ term, children }: { term: string; children: ReactNode }) {
  * Who and what a sheet is: number, setup and revision, status, author, approver, dates and the
  * sheets it replaces or that replaced it. `links` off renders plain text (print).
  */
-export function SheetIdentity({ sheet, workspaceId, links = true }: { sheet: TargetSheet; workspaceId: string; links?: boolean }) {
+export function SheetIdentity({ sheet, workspaceId, links = true, replaces = null }: { sheet: TargetSheet; workspaceId: string; links?: boolean; replaces?: TargetSheet | null }) {
   const to = (id: string, text: string) => (links ? <Link className="text-accent underline-offset-2 hover:underline" to={`/w/${workspaceId}/sheets/${id}`}>{text}</Link> : text);
   // The last decision: a release, or a return (kept after the sheet was reopened).
   const decidedWord = sheet.status === 'released' ? 'Approved by' : sheet.status === 'returned' ? 'Sent back by' : sheet.approver ? 'Last sent back by' : 'Approved by';
@@ -44,7 +44,14 @@ export function SheetIdentity({ sheet, workspaceId, links = true }: { sheet: Tar
       <Item term="Submitted">{sheet.submittedAt ? formatDateTime(sheet.submittedAt) : '—'}</Item>
       <Item term={decidedWord}>{sheet.approver ? sheet.approver.name : '—'}</Item>
       <Item term={sheet.status === 'released' ? 'Released' : 'Decided'}>{sheet.decidedAt ? formatDateTime(sheet.decidedAt) : '—'}</Item>
-      {sheet.supersedes && <Item term="Replaces">{to(sheet.supersedes.id, sheet.supersedes.number)}</Item>}
+      {sheet.status === 'released' && sheet.supersedes && <Item term="Replaced">{to(sheet.supersedes.id, sheet.supersedes.number)}</Item>}
+      {sheet.status !== 'released' && replaces && <Item term="Supersedes when released">{to(replaces.id, replaces.number)}</Item>}
+      {sheet.status === 'released' && sheet.releaseComment && (
+        <div className="col-span-2 min-w-0 sm:col-span-4">
+          <dt className="text-xs text-ink-faint">Release comment</dt>
+          <dd className="text-sm whitespace-pre-wrap text-ink">{sheet.releaseComment}</dd>
+        </div>
+      )}
       {sheet.supersededBy && <Item term="Superseded by">{to(sheet.supersededBy.id, sheet.supersededBy.number)}</Item>}
     </dl>
   );

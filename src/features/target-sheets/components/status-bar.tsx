@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import type { TargetSheet } from '../../../../shared/schemas/target-sheet.ts';
@@ -5,19 +6,20 @@ import { hasRole, type Role } from '../../../../shared/schemas/workspace.ts';
 import { sheetCautions } from '../../../../shared/target-sheet/cautions.ts';
 import { allowedTransitions, canSupersede } from '../../../../shared/target-sheet/lifecycle.ts';
 import { Button } from '../../../components/ui/button.tsx';
-import { Field, FormError } from '../../../components/ui/field.tsx';
+import { Field, FormError, Select, Textarea } from '../../../components/ui/field.tsx';
 import { Caution, Notice } from '../../../components/ui/notice.tsx';
+import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
 import { useDeleteSheet } from '../api/delete-sheet.ts';
 import { type SheetStep, useMoveSheet } from '../api/move-sheet.ts';
 import { useSupersedeSheet } from '../api/supersede-sheet.ts';
 import { StatusTag } from './status-tag.tsx';
 
-type Panel = 'release' | 'return' | 'delete' | null;
+type Panel = 'release' | 'return' | 'delete' | 'replace' | null;
 
 const waiting: Partial<Record<TargetSheet['status'], string>> = {
   draft: 'Being drafted. Submit it when the targets are ready for a lead to review.',
   in_review: 'Waiting for a lead to release it or send it back.',
-  released: 'Released: final. A change needs a new sheet that supersedes this one.',
+  released: 'Released: final, and the sheet in force for this setup. A change needs a replacement, which supersedes this one when it is released.',
   returned: 'Sent back. Edit the targets (saving reopens it as a draft) or reopen it as it is.',
 };
 
@@ -28,11 +30,14 @@ const waiting: Partial<Record<TargetSheet['status'], string>> = {
  */
 export function StatusBar({
   sheet,
+  replaces,
   workspaceId,
   role,
   secondPerson,
 }: {
   sheet: TargetSheet;
+  /** The released sheet that releasing this one supersedes, if any. */
+  replaces: TargetSheet | null;
   workspaceId: string;
   role: Role;
   /** Set when the workspace asks for a second person at release: who is looking. */
@@ -45,6 +50,9 @@ export function StatusBar({
   const [panel, setPanel] = useState<Panel>(null);
   const [reason, setReason] = useState('');
   const [reasonError, setReasonError] = useState<string>();
+  const [comment, setComment] = useState('');
+  const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, panel === 'replace' ? sheet.setupId : undefined));
+  const [fromRevision, setFromRevision] = useState<number | null>(null);
   const [outcome, setOutcome] = useState<{ notice: string | null; notified: number; step: SheetStep } | null>(null);
 
   const steps = allowedTransitions(sheet.status, role).map((t) => t.action);
@@ -55,6 +63,7 @@ export function StatusBar({
         onSuccess: (r) => {
           setPanel(null);
           setReason('');
+          setComment('');
           setOutcome({ notice: r.notice, notified: r.notified, step });
         },
       },
@@ -88,12 +97,8 @@ export function StatusBar({
             </Button>
           )}
           {canSupersede(sheet) && hasRole(role, 'engineer') && (
-            <Button
-              size="sm"
-              busy={supersede.isPending}
-              onClick={() => supersede.mutate({}, { onSuccess: (d) => navigate(`/w/${workspaceId}/sheets/${d.sheet.id}`) })}
-            >
-              Draft a replacement
+            <Button size="sm" onClick={() => setPanel(panel === 'replace' ? null : 'replace')} aria-expanded={panel === 'replace'}>
+              Draft a replacement…
             </Button>
           )}
           {(sheet.status === 'draft' || sheet.status === 'returned') && hasRole(role, 'engineer') && (
@@ -110,9 +115,57 @@ export function StatusBar({
         </Notice>
       )}
 
+      {panel === 'replace' && (
+        <form
+          className="mt-3 space-y-2 border-t border-rule pt-3"
+          aria-label="Draft a replacement"
+          onSubmit={(e) => {
+            e.preventDefault();
+            const latest = revisions.data?.revisions[0]?.number;
+            const revision = fromRevision ?? latest;
+            supersede.mutate(revision === undefined ? {} : { revision }, { onSuccess: (d) => navigate(`/w/${workspaceId}/sheets/${d.sheet.id}`) });
+          }}
+        >
+          <p className="text-sm text-ink-soft">
+            The replacement is a new draft with this sheet's speeds and bands, its targets read from the revision you pick. {sheet.number} stays released and in force until the
+            replacement is released.
+          </p>
+          <Field label={`Targets from revision of ${sheet.setupName}`}>
+            <Select
+              className="max-w-xl text-sm"
+              value={fromRevision ?? revisions.data?.revisions[0]?.number ?? ''}
+              disabled={!revisions.data}
+              onChange={(e) => setFromRevision(Number(e.target.value))}
+            >
+              {revisions.data?.revisions.map((r, i) => (
+                <option key={r.id} value={r.number}>
+                  r{r.number}
+                  {i === 0 ? ' (latest)' : ''}
+                  {r.number === sheet.setupRevision ? ' (this sheet’s; targets copied as they stand)' : ''} — {r.message}
+                </option>
+              ))}
+            </Select>
+          </Field>
+          <div className="flex gap-2">
+            <Button type="submit" variant="primary" size="sm" busy={supersede.isPending} disabled={!revisions.data}>
+              Draft the replacement
+            </Button>
+            <Button variant="quiet" size="sm" onClick={() => setPanel(null)}>
+              Not now
+            </Button>
+          </div>
+        </form>
+      )}
+
       {panel === 'release' && (
         <div className="mt-3 border-t border-rule pt-3" role="group" aria-label="Release this sheet">
           <Caution className="mb-2 text-sm">{sheetCautions.release}</Caution>
+          {replaces && (
+            <p className="mb-2 text-sm font-semibold text-ink">
+              Releasing supersedes {replaces.number}, the sheet in force for this setup: suppliers build to {sheet.number} from then on. The difference is shown under
+              “Against the sheet in force” below.
+            </p>
+          )}
           {secondPerson && (
             <p className="mb-2 text-sm text-ink-soft">
               This workspace asks for a second person: a lead who did not write or submit the sheet releases it
@@ -120,8 +173,11 @@ export function StatusBar({
             </p>
           )}
           <p className="mb-2 text-sm text-ink-soft">The author is e-mailed. A released sheet cannot be edited; changes need a new sheet that supersedes it.</p>
-          <div className="flex gap-2">
-            <Button variant="primary" size="sm" busy={move.isPending} disabled={secondPerson?.userId === sheet.author.id} onClick={() => run('release')}>
+          <Field label="Release comment (kept with the sheet, its history and the activity log)">
+            <Textarea rows={2} maxLength={2000} value={comment} onChange={(e) => setComment(e.target.value)} />
+          </Field>
+          <div className="mt-2 flex gap-2">
+            <Button variant="primary" size="sm" busy={move.isPending} disabled={secondPerson?.userId === sheet.author.id} onClick={() => run('release', comment.trim() || undefined)}>
               Release {sheet.number}
             </Button>
             <Button variant="quiet" size="sm" onClick={() => setPanel(null)}>
@@ -144,7 +200,7 @@ export function StatusBar({
           }}
         >
           <Field label="Reason (the author reads it in the e-mail)" error={reasonError}>
-            <textarea rows={3} value={reason} onChange={(e) => setReason(e.target.value)} className="w-full rounded border border-rule-strong bg-paper-raised px-2.5 py-1.5 text-sm" />
+            <Textarea rows={3} value={reason} onChange={(e) => setReason(e.target.value)} />
           </Field>
           <div className="flex gap-2">
             <Button type="submit" size="sm" busy={move.isPending}>

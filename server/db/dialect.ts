@@ -1,0 +1,34 @@
+import { PostgresAdapter, type RawBuilder, sql } from 'kysely';
+import type { Queryable } from './database.ts';
+
+/**
+ * The few places where SQLite and PostgreSQL differ and a query has to say which it runs on.
+ * Everything else (migrations, repositories) is written once in the SQL both accept.
+ */
+export type DatabaseKind = 'sqlite' | 'postgres';
+
+export function databaseKind(db: Pick<Queryable, 'getExecutor'>): DatabaseKind {
+  return db.getExecutor().adapter instanceof PostgresAdapter ? 'postgres' : 'sqlite';
+}
+
+/**
+ * The order rows were inserted in, for a stable tie-break between rows stamped in the same
+ * millisecond: SQLite's implicit `rowid`; on PostgreSQL the `seq` column that migration 0017
+ * adds to the tables that need it (`alias` is the table name or its alias in the query).
+ */
+export function insertionOrder(db: Pick<Queryable, 'getExecutor'>, alias: string): RawBuilder<unknown> {
+  return sql.ref(`${alias}.${databaseKind(db) === 'postgres' ? 'seq' : 'rowid'}`);
+}
+
+/** A unique or primary-key constraint refused the write (better-sqlite3 or pg error codes). */
+export function isUniqueViolation(err: unknown): boolean {
+  if (typeof err !== 'object' || err === null || !('code' in err)) return false;
+  const code = (err as { code: unknown }).code;
+  return code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY' || code === '23505';
+}
+
+/** A top-level text field of a JSON document kept in a text column (`json_extract` / `->>`). */
+export function jsonTextField(db: Pick<Queryable, 'getExecutor'>, column: string, key: string): RawBuilder<string> {
+  if (!/^\w+$/.test(key)) throw new Error(`not a plain JSON key: ${key}`);
+  return databaseKind(db) === 'postgres' ? sql<string>`(${sql.ref(column)}::json ->> ${sql.lit(key)})` : sql<string>`json_extract(${sql.ref(column)}, ${sql.lit(`$.${key}`)})`;
+}
