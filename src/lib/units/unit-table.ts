@@ -89,3 +89,8 @@ export function siFromShown(unit: DisplayUnit, shown: number): number {
   }
   return si;
 }
+
+/** A list of SI values in `unit`, to 4 significant figures, with the symbol once: "50, 80 km/h". */
+export function listText(values: readonly number[], unit: DisplayUnit): string {
+  return `${values.map((v) => String(Number(unit.fromSI(v).toPrecision(4)))).join(', ')} ${unit.symbol}`;
+}
