@@ -1,6 +1,7 @@
 import type { APIRequestContext, Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { apiSession, demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { join } from 'node:path';
+import { apiSession, demoUser, launchBrowser, newSession, RESULTS_DIR, screenshot, signIn } from './helpers/browser.ts';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -84,6 +85,7 @@ describe('display units', () => {
     expect(mmTable.header).toBe('Velocity [mm/s]');
     expect(mmTable.values).toHaveLength(siTable.values.length);
     mmTable.values.forEach((v, i) => expect(v).toBeCloseTo(siTable.values[i]! * 1000, 6));
+    await page.getByTestId('damper-curve-editor').screenshot({ path: join(RESULTS_DIR, 'units-damper-editor-mm-1440.png') });
     await screenshot(page, 'units-setup-editor-mm-1440');
     await page.setViewportSize({ width: 1280, height: 800 });
     await screenshot(page, 'units-setup-editor-mm-1280');
@@ -133,6 +135,7 @@ describe('display units', () => {
     const speed = page.getByLabel('at', { exact: true });
     await speed.fill('47');
     await expect.poll(async () => live.textContent()).toMatch(/at 47\.0\u2009mph/);
+    await live.locator('xpath=..').screenshot({ path: join(RESULTS_DIR, 'units-bench-live-mph-1440.png') });
     await putUnits(defaults);
     await context.close();
   });
