@@ -22,6 +22,9 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['tests/lint/**/*.test.ts', 'tests/reference/**/*.test.ts', 'shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'cli/**/*.test.ts', 'workers/**/*.test.ts'],
+          // A few unit tests run ESLint on probes or seed a whole demo database: seconds each on
+          // a busy 2-core machine, beyond vitest's 5 s default.
+          testTimeout: 30_000,
         },
       },
       {

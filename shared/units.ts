@@ -46,6 +46,10 @@ export const rodDiameterMmToAreaM2 = (dMm: number) => (Math.PI / 4) * (dMm / 100
 /** Volume: cm³ → m³. */
 export const cm3ToM3 = (cm3: number) => cm3 * 1e-6;
 export const m3ToCm3 = (m3: number) => m3 * 1e6;
+/** The international inch, exactly 0.0254 m (NIST SP 811, appendix B). */
+export const METERS_PER_INCH = 0.0254;
+/** The pound-force, exactly 4.4482216152605 N (NIST SP 811, appendix B: standard gravity × the avoirdupois pound). */
+export const NEWTONS_PER_POUND_FORCE = 4.4482216152605;
 /** Speed: km/h → m/s. */
 export const kmhToMPerS = (kmh: number) => kmh / 3.6;
 export const mPerSToKmh = (mPerS: number) => mPerS * 3.6;

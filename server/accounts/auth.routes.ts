@@ -1,4 +1,4 @@
-import { ConfirmAddressInput, PasswordChangeInput, ResetConfirmInput, ResetRequestInput, SignInInput, SignUpInput, type Me, type SignUpAnswer } from '../../shared/schemas/account.ts';
+import { ConfirmAddressInput, PasswordChangeInput, ResetConfirmInput, ResetRequestInput, SignInInput, SignUpInput, type MeAnswer, type SignUpAnswer } from '../../shared/schemas/account.ts';
 import { userOf } from '../auth/request-context.ts';
 import { clearSessionCookie, setSessionCookie } from '../auth/session.ts';
 import { HttpError, unwrap } from '../core/errors.ts';
@@ -65,12 +65,13 @@ export const authRoutes: RouteModule = (deps) => [
     },
   },
   {
+    // Public: a signed-out caller gets its signed-out state (and its CSRF cookie), not a 401.
     method: 'get',
     path: '/api/auth/me',
-    access: 'user',
+    access: 'public',
     issuesCsrf: true,
     handler: async (req, res) => {
-      const me: Me = await loadMe(deps.db, userOf(req).id);
+      const me: MeAnswer = req.user ? await loadMe(deps.db, req.user.id) : { user: null, memberships: [] };
       res.json(me);
     },
   },

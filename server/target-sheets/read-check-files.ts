@@ -23,18 +23,25 @@ export function labelFromFileName(name: string): string {
 /** The files of an upload read as measured dampers, or the reasons they cannot be. */
 export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): Outcome<{ measured: MeasuredDamper[]; options: Partial<DynoParseOptions> }> {
   if (files.length === 0) return fail('bad_request', 'Choose at least one dyno file.', [{ path: 'file', message: 'Required' }]);
-  const { label: labels, ...given } = fields;
+  const { label: labels, fileVelocityUnit = [], fileForceUnit = [], fileSign = [], ...given } = fields;
   const options = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)) as Partial<DynoParseOptions>;
+  // a file's own settings win over the batch-wide ones
+  const optionsOf = (i: number): Partial<DynoParseOptions> => ({
+    ...options,
+    ...(fileVelocityUnit[i] ? { velocityUnit: fileVelocityUnit[i] } : {}),
+    ...(fileForceUnit[i] ? { forceUnit: fileForceUnit[i] } : {}),
+    ...(fileSign[i] ? { forceSign: fileSign[i], motionSign: fileSign[i] } : {}),
+  });
   const problems: { file: string; line?: number; message: string }[] = [];
   const measured: MeasuredDamper[] = [];
   files.forEach((file, i) => {
-    const read = summariseDyno(file.text, options);
+    const read = summariseDyno(file.text, optionsOf(i));
     if (!read.ok) {
       for (const e of read.errors) problems.push({ file: file.filename, line: e.line, message: e.message });
       return;
     }
-    const warnings = [...read.summary.warnings.map((w) => w.message), ...(read.summary.series?.warnings ?? [])];
-    measured.push({ label: labels[i]?.trim() || labelFromFileName(file.filename), fileName: file.filename, peaks: read.summary.peaks, warnings });
+    const warnings = [...read.summary.warnings.map((w) => (w.line !== undefined ? `line ${w.line}: ${w.message}` : w.message)), ...(read.summary.series?.warnings ?? [])];
+    measured.push({ label: labels[i]?.trim() || labelFromFileName(file.filename), fileName: file.filename, peaks: read.summary.peaks, warnings, units: read.summary.units });
   });
   if (problems.length) {
     const where = (p: (typeof problems)[number]) => `${p.file}${p.line !== undefined ? `, line ${p.line}` : ''}`;

@@ -23,6 +23,9 @@ describe('unitForRole', () => {
     expect(unitForRole('force', 'KN')).toBe('kN');
     expect(unitForRole('velocity', 'm s-1')).toBe('m/s');
     expect(unitForRole('time', undefined)).toBeUndefined();
-    expect(unitForRole('displacement', 'm/s')).toEqual({ error: "unit 'm/s' is not accepted here; use m or mm" });
+    expect(unitForRole('displacement', 'm/s')).toEqual({ error: "unit 'm/s' is not accepted here; use m or mm or in" });
+    expect(unitForRole('force', 'LBF')).toBe('lbf');
+    expect(unitForRole('velocity', 'in/s')).toBe('in/s');
+    expect(unitForRole('displacement', 'inch')).toBe('in');
   });
 });

@@ -34,17 +34,19 @@ export interface HeaderCell {
 const unitTokens: Record<string, string> = {
   's': 's', 'sec': 's', 'ms': 'ms',
   'm': 'm', 'mm': 'mm',
+  'in': 'in', 'inch': 'in',
   'm/s': 'm/s', 'mm/s': 'mm/s', 'm s-1': 'm/s', 'mm s-1': 'mm/s',
-  'n': 'N', 'kn': 'kN',
+  'in/s': 'in/s', 'in s-1': 'in/s', 'inch/s': 'in/s',
+  'n': 'N', 'kn': 'kN', 'lbf': 'lbf',
 };
 
 const allowed: { [R in keyof UnitOf]: readonly UnitOf[R][] } = {
   time: ['s', 'ms'],
-  displacement: ['m', 'mm'],
-  velocity: ['m/s', 'mm/s'],
-  force: ['N', 'kN'],
-  compressionForce: ['N', 'kN'],
-  reboundForce: ['N', 'kN'],
+  displacement: ['m', 'mm', 'in'],
+  velocity: ['m/s', 'mm/s', 'in/s'],
+  force: ['N', 'kN', 'lbf'],
+  compressionForce: ['N', 'kN', 'lbf'],
+  reboundForce: ['N', 'kN', 'lbf'],
 };
 
 const compressionWords = ['compression', 'comp', 'bump'];
@@ -82,7 +84,7 @@ export function readHeaderCell(raw: string): HeaderCell {
   if (unitText === undefined) {
     // Without brackets, only a trailing token that is certainly a unit (so "x" stays a name);
     // `velocity_mm_s` is read as mm/s, the underscore standing for the slash.
-    const perSecond = /^(.*\S) (mm|m) s$/.exec(name);
+    const perSecond = /^(.*\S) (mm|m|in) s$/.exec(name);
     const last = /^(.*\S)\s+(\S+)$/.exec(name);
     if (perSecond && roleOf(perSecond[1]) === 'velocity') {
       name = perSecond[1];

@@ -7,6 +7,7 @@ import type {
   DynoTimeSeries,
   DynoUnitsUsed,
 } from '../schemas/dyno.ts';
+import { METERS_PER_INCH, NEWTONS_PER_POUND_FORCE } from '../units.ts';
 import type { ColumnRole } from './csv-header.ts';
 import { directionSanityWarning } from './peak-points.ts';
 
@@ -17,7 +18,8 @@ export interface Columns {
   directions: ('compression' | 'rebound')[];
 }
 
-const toSi = { 'm/s': 1, 'mm/s': 1e-3, N: 1, kN: 1e3, m: 1, mm: 1e-3, s: 1, ms: 1e-3 } as const;
+/** Factor from each unit a file may use to SI. */
+const toSi = { 'm/s': 1, 'mm/s': 1e-3, 'in/s': METERS_PER_INCH, N: 1, kN: 1e3, lbf: NEWTONS_PER_POUND_FORCE, m: 1, mm: 1e-3, in: METERS_PER_INCH, s: 1, ms: 1e-3 } as const;
 const signOf = (c: DynoParseOptions['motionSign']) => (c === 'extension-positive' ? -1 : 1);
 
 /** Converts the columns of a raw record to SI, compression positive, gas force removed; checks time. */
@@ -43,10 +45,27 @@ export function buildSeries(cols: Columns, units: DynoUnitsUsed, opts: DynoParse
   return velocity ? { time, displacement, force, velocity } : { time, displacement, force };
 }
 
+/** The sign most non-zero readings of a column carry (+1 on a tie): the file's own convention for it. */
+function usualSign(values: readonly number[]): 1 | -1 {
+  let positive = 0;
+  let negative = 0;
+  for (const x of values) {
+    if (x > 0) positive++;
+    else if (x < 0) negative++;
+  }
+  return negative > positive ? -1 : 1;
+}
+
+/** Wrong-sign readings listed one by one before the rest are counted. */
+const MAX_SIGN_WARNINGS = 5;
+
 /**
- * Splits peak rows into directions as magnitudes. Signed rows use the sign conventions; rows with
- * an explicit direction or per-direction force columns take magnitudes. Gas force: the reading is
- * damping + gas in compression and damping − gas in rebound, so it is taken off and added back.
+ * Splits peak rows into directions. Signed rows use the sign conventions. Rows with an explicit
+ * direction or per-direction force columns are read in the sign most of that direction's
+ * readings carry (some files write rebound negative); a reading against that sign is kept as
+ * measured (a force helping the motion) and reported with its line, never turned round quietly.
+ * Gas force: the reading is damping + gas in compression and damping − gas in rebound, so it is
+ * taken off and added back.
  */
 export function buildPeaks(cols: Columns, layout: DynoLayout, units: DynoUnitsUsed, opts: DynoParseOptions, warnings: DynoIssue[]): DynoPeakPoints {
   const vs = toSi[units.velocity!.unit];
@@ -54,41 +73,67 @@ export function buildPeaks(cols: Columns, layout: DynoLayout, units: DynoUnitsUs
   const gas = opts.gasForce;
   const out: DynoPeakPoints = { compression: [], rebound: [] };
   const lineOf = new Map<DynoPoint, number>();
+  const wrongSign = new Map<DynoPoint, { raw: number; speed: number }>();
   const add = (dir: 'compression' | 'rebound', p: DynoPoint, line: number) => {
     out[dir].push(p);
     lineOf.set(p, line);
+    return p;
   };
   const vel = cols.values.get('velocity')!;
+  const force = cols.values.get('force');
+  const fc = cols.values.get('compressionForce');
+  const fr = cols.values.get('reboundForce');
+  const signOfColumn = (values: number[] | undefined, keep: (i: number) => boolean = () => true) =>
+    usualSign((values ?? []).filter((x, i) => keep(i) && !Number.isNaN(x)));
+  const usual = {
+    compression: layout === 'direction-column' ? signOfColumn(force, (i) => cols.directions[i] === 'compression') : signOfColumn(fc),
+    rebound: layout === 'direction-column' ? signOfColumn(force, (i) => cols.directions[i] === 'rebound') : signOfColumn(fr),
+  };
+  /** A reading of a direction's own column, in that direction's sense; flagged when its sign is not the column's. */
+  const addReading = (dir: 'compression' | 'rebound', raw: number, i: number) => {
+    const v = Math.abs(vel[i]) * vs;
+    const f = raw * usual[dir] * fs;
+    const p = add(dir, { velocity: v, force: dir === 'compression' ? f - gas : f + gas }, cols.lines[i]);
+    if (f < 0) wrongSign.set(p, { raw, speed: vel[i] });
+  };
   let zeroRows = 0;
   cols.lines.forEach((line, i) => {
-    const v = Math.abs(vel[i]) * vs;
-    if (layout === 'direction-column') {
-      const f = Math.abs(cols.values.get('force')![i]) * fs;
-      const dir = cols.directions[i];
-      add(dir, { velocity: v, force: dir === 'compression' ? f - gas : f + gas }, line);
-    } else if (layout === 'force-per-direction') {
-      const fc = cols.values.get('compressionForce')?.[i];
-      const fr = cols.values.get('reboundForce')?.[i];
-      if (fc !== undefined && !Number.isNaN(fc)) add('compression', { velocity: v, force: Math.abs(fc) * fs - gas }, line);
-      if (fr !== undefined && !Number.isNaN(fr)) add('rebound', { velocity: v, force: Math.abs(fr) * fs + gas }, line);
+    if (layout === 'direction-column') addReading(cols.directions[i], force![i], i);
+    else if (layout === 'force-per-direction') {
+      if (fc !== undefined && !Number.isNaN(fc[i])) addReading('compression', fc[i], i);
+      if (fr !== undefined && !Number.isNaN(fr[i])) addReading('rebound', fr[i], i);
     } else {
       const sv = vel[i] * vs * signOf(opts.motionSign);
-      const sf = cols.values.get('force')![i] * fs * signOf(opts.forceSign) - gas;
-      if (sv > 0) add('compression', { velocity: sv, force: sf }, line);
-      else if (sv < 0) add('rebound', { velocity: -sv, force: -sf }, line);
-      else zeroRows++;
+      const raw = force![i];
+      const sf = raw * fs * signOf(opts.forceSign);
+      if (sv > 0) {
+        const p = add('compression', { velocity: sv, force: sf - gas }, line);
+        if (sf < 0) wrongSign.set(p, { raw, speed: vel[i] });
+      } else if (sv < 0) {
+        const p = add('rebound', { velocity: -sv, force: -sf + gas }, line);
+        if (sf > 0) wrongSign.set(p, { raw, speed: vel[i] });
+      } else zeroRows++;
     }
   });
   if (zeroRows) warnings.push({ message: `${zeroRows} row${zeroRows === 1 ? '' : 's'} at zero velocity skipped (no direction)` });
+  const fu = units.force.unit;
+  const vu = units.velocity!.unit;
   for (const dir of ['compression', 'rebound'] as const) {
     out[dir].sort((a, b) => a.velocity - b.velocity);
-    const against = out[dir].filter((p) => p.force < 0);
-    if (layout === 'signed' && against.length > out[dir].length / 2) {
+    const wrong = out[dir].filter((p) => wrongSign.has(p));
+    if (layout === 'signed' && wrong.length > out[dir].length / 2) {
       warnings.push({ message: `most ${dir} points have the force helping the motion; force and velocity seem to use opposite sign conventions` });
-    } else {
-      for (const p of against.slice(0, 5)) {
-        warnings.push({ line: lineOf.get(p), message: `${dir} force ${fmt(p.force)} N at ${fmt(p.velocity)} m/s is below zero${gas ? ' after removing the gas force' : ''}` });
-      }
+      continue;
+    }
+    const others = layout === 'signed' ? '' : ` (the other ${dir} readings are ${usual[dir] > 0 ? 'positive' : 'negative'})`;
+    for (const p of wrong.slice(0, MAX_SIGN_WARNINGS)) {
+      const { raw, speed } = wrongSign.get(p)!;
+      warnings.push({ line: lineOf.get(p), message: `${dir} force ${fmt(raw)} ${fu} at ${fmt(speed)} ${vu} has the wrong sign for its direction${others}; check this reading` });
+    }
+    if (wrong.length > MAX_SIGN_WARNINGS) warnings.push({ message: `… and ${wrong.length - MAX_SIGN_WARNINGS} more ${dir} readings with the wrong sign` });
+    // a reading of the right sign that the gas force takes below zero
+    for (const p of out[dir].filter((q) => q.force < 0 && !wrongSign.has(q)).slice(0, MAX_SIGN_WARNINGS)) {
+      warnings.push({ line: lineOf.get(p), message: `${dir} force ${fmt(p.force)} N at ${fmt(p.velocity)} m/s is below zero after removing the gas force` });
     }
   }
   if (layout === 'signed') {

@@ -107,7 +107,7 @@ describe('parseDynoCsv: rejections name the line and the problem', () => {
     ['too many values', 'velocity [m/s],force [N]\n0.1,300,5\n0.2,400\n', 2, /3 values where the header has 2/],
     ['a missing value', 'velocity [m/s],force [N]\n0.1,\n0.2,400\n', 2, /no value in column 'force \[N\]'/],
     ['an unknown direction', 'direction,velocity [m/s],force [N]\nup,0.1,300\nrebound,0.1,600\n', 2, /direction 'up' not understood/],
-    ['a unit that does not fit', 'velocity [in/s],force [N]\n1,2\n3,4\n', 1, /unit 'in\/s' is not accepted here; use m\/s or mm\/s/],
+    ['a unit that does not fit', 'velocity [ft/s],force [N]\n1,2\n3,4\n', 1, /unit 'ft\/s' is not accepted here; use m\/s or mm\/s or in\/s/],
     ['two columns for one role', 'velocity,speed,force\n1,1,2\n3,3,4\n', 1, /both read as velocity/],
     ['too few rows', 'velocity [m/s],force [N]\n0.1,300\n', 2, /only 1 data row; a peak-point file needs at least 2/],
     ['an unclosed quote', 'velocity [m/s],force [N]\n0.1,300\n"0.2,400\n', 3, /quoted value is not closed/],

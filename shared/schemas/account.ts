@@ -47,3 +47,10 @@ export const Me = z.object({
   units: UnitPreferences.default({ ...DEFAULT_UNIT_PREFERENCES }),
 });
 export type Me = z.infer<typeof Me>;
+
+/**
+ * GET /api/auth/me as a whole: the signed-in person, or — with 200, not 401, since being signed
+ * out is an ordinary state of a page and not an error — `{ user: null, memberships: [] }`.
+ */
+export const MeAnswer = z.union([Me, z.object({ user: z.null(), memberships: z.array(Membership).max(0) })]);
+export type MeAnswer = z.infer<typeof MeAnswer>;

@@ -51,11 +51,12 @@ export const DynoTimeSeries = z
   );
 export type DynoTimeSeries = z.infer<typeof DynoTimeSeries>;
 
-export const VelocityUnit = z.enum(['m/s', 'mm/s']);
+/** Units a dyno file may be written in: SI, and the inch-pound units some dyno benches still print. */
+export const VelocityUnit = z.enum(['m/s', 'mm/s', 'in/s']);
 export type VelocityUnit = z.infer<typeof VelocityUnit>;
-export const ForceUnit = z.enum(['N', 'kN']);
+export const ForceUnit = z.enum(['N', 'kN', 'lbf']);
 export type ForceUnit = z.infer<typeof ForceUnit>;
-export const DisplacementUnit = z.enum(['m', 'mm']);
+export const DisplacementUnit = z.enum(['m', 'mm', 'in']);
 export type DisplacementUnit = z.infer<typeof DisplacementUnit>;
 export const TimeUnit = z.enum(['s', 'ms']);
 export type TimeUnit = z.infer<typeof TimeUnit>;

@@ -83,6 +83,21 @@ export const Metrics = z.object({
   strokeUsedCompression: z.number().optional(),
   /** travelMaxExtension / available extension stroke; absent when no stroke is given. */
   strokeUsedExtension: z.number().optional(),
+  /**
+   * How far travel went beyond the compression / extension end of the stroke into its hard
+   * limit, m (0 when it stayed inside); absent when no stroke is given.
+   */
+  endOfStrokeDepthCompression: z.number().nonnegative().optional(),
+  endOfStrokeDepthExtension: z.number().nonnegative().optional(),
+  /** Largest force of the end-of-stroke limit, N, and the energy it held then, J (½·k·δ²). */
+  endOfStrokeForcePeak: z.number().nonnegative().optional(),
+  endOfStrokeEnergyPeak: z.number().nonnegative().optional(),
+  /** Highest damper speed reached in compression and in rebound, m/s (both ≥ 0). */
+  damperSpeedPeakCompression: z.number().nonnegative().optional(),
+  damperSpeedPeakRebound: z.number().nonnegative().optional(),
+  /** Last speed of each damper table, m/s: above it forces are extrapolated from the last segment. */
+  damperTableEndCompression: z.number().nonnegative().optional(),
+  damperTableEndRebound: z.number().nonnegative().optional(),
   /** Time with the bump stop pushing, s. */
   bumpStopTime: z.number().nonnegative(),
   /** Time with the rebound stop pulling, s. */

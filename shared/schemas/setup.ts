@@ -147,6 +147,12 @@ export const Stroke = z.strictObject({
   compression: meters.positive().max(1),
   /** Away from the body (rebound), m. */
   extension: meters.positive().max(1),
+  /**
+   * Stiffness of the hard limit at either end of the stroke, at the wheel, N/m: the damper
+   * bottoming or topping out on its own body once the stops are used up. Default: 20 × the
+   * tyre rate (a limit much stiffer than anything else in the corner).
+   */
+  limitRate: newtonsPerMeter.positive().max(1e9).optional(),
 });
 export type Stroke = z.infer<typeof Stroke>;
 

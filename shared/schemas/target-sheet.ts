@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Id, IsoDateTime, plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
-import { DynoPeakPoints } from './dyno.ts';
+import { DynoPeakPoints, DynoUnitsUsed, ForceUnit, SignConvention, VelocityUnit } from './dyno.ts';
 import { DynoUploadFields } from './dyno-file.ts';
 import { PersonRef } from './setup-record.ts';
 
@@ -233,6 +233,8 @@ export const MeasuredDamper = z.object({
   fileName: z.string(),
   peaks: DynoPeakPoints,
   warnings: z.array(z.string()),
+  /** The units the file was read in (checks kept before these were recorded have none). */
+  units: DynoUnitsUsed.optional(),
 });
 export type MeasuredDamper = z.infer<typeof MeasuredDamper>;
 
@@ -253,15 +255,22 @@ export const DYNO_CHECK_MAX_FILES = 12;
 
 const blankToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
 
+const listOf = (v: unknown) => (v === undefined ? [] : Array.isArray(v) ? v : [v]);
+/** A field repeated once per file, in file order; a blank entry means "not given for this file". */
+const perFile = <T extends z.ZodType>(t: T) => z.preprocess(listOf, z.array(z.preprocess(blankToUndefined, t.optional()))).optional();
+
 /**
  * Form fields beside the `file` parts of POST …/:sheetId/checks (multipart text). The reading
  * options apply to every file; `label` is repeated once per file in the same order (a blank or
- * missing label takes the file name without its extension).
+ * missing label takes the file name without its extension). Dampers measured on different
+ * benches come in different units and signs: `fileVelocityUnit`, `fileForceUnit` and `fileSign`
+ * (the sign convention of motion and force) are repeated per file the same way and win over the
+ * batch-wide option for their file (a unit in a column header still wins over both).
  */
 export const DynoCheckFields = DynoUploadFields.extend({
-  label: z.preprocess(
-    (v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]),
-    z.array(z.preprocess(blankToUndefined, z.string().trim().max(120, 'A damper label has at most 120 characters').regex(plainLine, plainLineMessage).optional())),
-  ),
+  label: z.preprocess(listOf, z.array(z.preprocess(blankToUndefined, z.string().trim().max(120, 'A damper label has at most 120 characters').regex(plainLine, plainLineMessage).optional()))),
+  fileVelocityUnit: perFile(VelocityUnit),
+  fileForceUnit: perFile(ForceUnit),
+  fileSign: perFile(SignConvention),
 });
 export type DynoCheckFields = z.infer<typeof DynoCheckFields>;

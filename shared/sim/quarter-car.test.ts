@@ -3,7 +3,7 @@ import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { Setup, type SetupInput } from '../schemas/setup.ts';
 import { integrateCorner } from './integrate.ts';
-import { cornerModel, GRAVITY, linearCorner, newCornerForces, staticEquilibrium, wheelRate } from './quarter-car.ts';
+import { cornerModel, endOfStrokeRate, GRAVITY, linearCorner, newCornerForces, staticEquilibrium, wheelRate } from './quarter-car.ts';
 import type { RoadExcitation } from './roads/excitation.ts';
 import { stopLawEnergy } from './stops.ts';
 
@@ -55,8 +55,9 @@ describe('static equilibrium', () => {
   });
 
   it('released with spring and tyre unloaded, the corner falls at g and settles at its sag', () => {
-    // No gas and no stops: at the unloaded position the rebound stop would be engaged.
-    const { bumpStop: _b, reboundStop: _r, ...plain } = example('pipit-front.setup.json');
+    // No gas, no stops and no stroke: at the unloaded position the rebound stop and the
+    // extension end of the stroke would be engaged.
+    const { bumpStop: _b, reboundStop: _r, stroke: _s, ...plain } = example('pipit-front.setup.json');
     const s = Setup.parse({ ...plain, damper: { ...pipit.damper, gas: undefined } });
     const st = statics(s);
     const model = cornerModel(s, st);
@@ -94,7 +95,9 @@ describe('free decay on a level road', () => {
         0.5 * kt * Math.max(0, st.tyreDeflection - zu[i]) ** 2 +
         GRAVITY * (s.sprungMass * zs[i] + s.unsprungMass * zu[i]) +
         stopLawEnergy(s.bumpStop!.law, x - s.bumpStop!.clearance) +
-        stopLawEnergy(s.reboundStop!.law, -x - s.reboundStop!.clearance)
+        stopLawEnergy(s.reboundStop!.law, -x - s.reboundStop!.clearance) +
+        // the hard limits at the ends of the stroke store ½·k·δ² beyond each end
+        0.5 * endOfStrokeRate(s) * (Math.max(0, x - s.stroke!.compression) ** 2 + Math.max(0, -x - s.stroke!.extension) ** 2)
       );
     };
     const atRest = 0.5 * kw * st.springDeflection ** 2 + 0.5 * kt * st.tyreDeflection ** 2;

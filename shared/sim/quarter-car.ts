@@ -97,8 +97,17 @@ export const newCornerForces = (): CornerForces => ({
   tyreLoad: 0,
 });
 
-/** Number of regime switches watched by the integrator: tyre contact, bump stop, rebound stop. */
-export const SWITCH_COUNT = 3;
+/**
+ * Number of regime switches watched by the integrator: tyre contact, bump stop, rebound stop,
+ * and the hard limits at the two ends of the stroke.
+ */
+export const SWITCH_COUNT = 5;
+
+/** Default stiffness of the end-of-stroke limits, as a multiple of the tyre rate. */
+export const END_OF_STROKE_RATE_PER_TYRE_RATE = 20;
+
+/** Stiffness of the hard limits at the ends of the stroke, N/m at the wheel. */
+export const endOfStrokeRate = (setup: Setup): number => setup.stroke?.limitRate ?? END_OF_STROKE_RATE_PER_TYRE_RATE * setup.tyreRate;
 
 export interface CornerModel {
   setup: Setup;
@@ -108,7 +117,8 @@ export interface CornerModel {
   /**
    * Writes one value per regime switch whose sign tells the regime: [tyre force before
    * clipping (N; > 0 in contact), bump-stop engagement (m; > 0 touching), rebound-stop
-   * engagement (m)]. An absent stop reads −1 everywhere, so it never switches.
+   * engagement (m), travel beyond the compression end of the stroke (m), beyond the extension
+   * end (m)]. An absent stop or stroke reads −1 everywhere, so it never switches.
    */
   switches(zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, out: Float64Array): void;
 }
@@ -126,6 +136,12 @@ export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
   const gasChange = compileGasChange(setup.damper.gas);
   const bump = compileStop(setup.bumpStop, 'bump');
   const rebound = compileStop(setup.reboundStop, 'rebound');
+  // The ends of the stroke: a hard linear limit beyond the travel the corner has. Absent
+  // without a stroke (the travel is then unbounded, as before strokes were given).
+  const stroke = setup.stroke;
+  const limitRate = endOfStrokeRate(setup);
+  const compressionEnd = stroke ? stroke.compression : Infinity;
+  const extensionEnd = stroke ? -stroke.extension : -Infinity;
 
   return {
     setup,
@@ -136,10 +152,11 @@ export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
       const fd = damper(vd);
       const fb = bump === null ? 0 : bump(x);
       const fr = rebound === null ? 0 : rebound(x);
+      const limit = x > compressionEnd ? limitRate * (x - compressionEnd) : x < extensionEnd ? limitRate * (x - extensionEnd) : 0;
       // Gas preload is already in the static balance; only its change with stroke acts here.
       const fg = gasChange === null ? 0 : gasChange(mr * x);
       // Suspension force on the body beyond its static share (up positive).
-      const fs = ks * x + mr * (fd + fg) + fb - fr;
+      const fs = ks * x + mr * (fd + fg) + fb - fr + limit;
       // Tyre force change from static, clipped where the total would go negative. Written
       // relative to Fz0 (kt × static deflection = Fz0) so that near rest no rounding noise of Fz0
       // enters the wheel acceleration: that noise once starved odex dense-output error
@@ -160,6 +177,8 @@ export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
       out[0] = fz0 + kt * (zRoad - zu) + ct * (vRoad - vu);
       out[1] = setup.bumpStop ? x - setup.bumpStop.clearance : -1;
       out[2] = setup.reboundStop ? -x - setup.reboundStop.clearance : -1;
+      out[3] = stroke ? x - compressionEnd : -1;
+      out[4] = stroke ? extensionEnd - x : -1;
     },
   };
 }

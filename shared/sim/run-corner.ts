@@ -6,7 +6,8 @@ import { equivalentDampingLeastSquares, equivalentDampingSecant, type Equivalent
 import { integrateCorner } from './integrate.ts';
 import { DEFAULT_INTEGRATOR, DEFAULT_TOLERANCE } from './integration-options.ts';
 import { modalAnalysis } from './linear/modal.ts';
-import { computeMetrics } from './metrics/compute-metrics.ts';
+import { computeMetrics, firstSample } from './metrics/compute-metrics.ts';
+import { strokeAndTableFigures } from './metrics/stroke-limits.ts';
 import { cornerModel, linearCorner, staticEquilibrium } from './quarter-car.ts';
 import { buildRoad } from './roads/index.ts';
 import type { TraceColumns } from './trace.ts';
@@ -67,13 +68,16 @@ export function runCorner(input: RunRequestInput): RunOutcome {
   if (!integrated.ok) return { ok: false, stage: 'integration', reason: integrated.reason };
   const { trace, stats } = integrated;
 
-  const metrics = computeMetrics(trace, {
-    settleTime,
-    staticTyreLoad: statics.state.tyreLoad,
-    stroke: setup.stroke,
-    velocityBands: req.velocityBands,
-    histogramBins: req.histogramBins,
-  });
+  const metrics = {
+    ...computeMetrics(trace, {
+      settleTime,
+      staticTyreLoad: statics.state.tyreLoad,
+      stroke: setup.stroke,
+      velocityBands: req.velocityBands,
+      histogramBins: req.histogramBins,
+    }),
+    ...strokeAndTableFigures(trace, firstSample(trace, settleTime), setup),
+  };
 
   const eq: EquivalentDamping =
     req.equivalentDamping?.method === 'secant'

@@ -12,15 +12,31 @@ export interface QueryClientHooks {
   onUnauthenticated?: () => void;
 }
 
-/** Errors a retry cannot fix: the request or the caller is wrong, not the network. */
-function worthRetrying(failureCount: number, error: unknown): boolean {
-  if (error instanceof ApiError && error.status >= 400 && error.status < 500) return false;
-  return failureCount < 2;
+/** Tries after the first failure: a dropped connection or a busy server may answer next time. */
+const MAX_RETRIES = 2;
+
+/**
+ * Whether a failed read may succeed if asked again: only when the server could not be reached
+ * (status 0) or failed itself (5xx). A 4xx answer says the request or the caller is wrong, and a
+ * body of the wrong shape will not change: asking again only repeats the error.
+ */
+export function worthRetrying(failureCount: number, error: unknown): boolean {
+  if (!(error instanceof ApiError)) return false;
+  const transient = error.status === 0 || error.status >= 500;
+  return transient && failureCount < MAX_RETRIES;
+}
+
+/** A polling interval that stops once the query has failed with a 4xx (a viewer on an admin page). */
+export function pollUnlessRefused(ms: number) {
+  return (query: { state: { error: ApiError | null } }): number | false => {
+    const error = query.state.error;
+    return error && error.status >= 400 && error.status < 500 ? false : ms;
+  };
 }
 
 /**
  * The app's QueryClient. Reads stay fresh for 30 s (team data changes slowly and every write
- * invalidates what it touched); 4xx answers are not retried.
+ * invalidates what it touched); only network failures and 5xx answers are retried, twice at most.
  */
 export function createQueryClient(hooks: QueryClientHooks = {}): QueryClient {
   const onError = (error: unknown) => {

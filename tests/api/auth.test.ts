@@ -1,11 +1,11 @@
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
-import { Me, SignUpAnswer } from '../../shared/schemas/account.ts';
+import { Me, MeAnswer, SignUpAnswer } from '../../shared/schemas/account.ts';
 import { AppConfig } from '../../shared/schemas/config.ts';
 import { SESSION_COOKIE } from '../../server/auth/session.ts';
 import { loadConfig } from '../../server/config.ts';
-import { browserLike, cookieValue, signedIn } from './helpers/agents.ts';
+import { browserLike, cookieValue, signedIn, signedOut } from './helpers/agents.ts';
 import { linkIn, waitForMail } from './helpers/mail.ts';
 import { uniqueEmail } from './helpers/people.ts';
 import { createTestApp } from './helpers/test-app.ts';
@@ -129,7 +129,7 @@ describe('sign-in and sign-out', () => {
     expect(wrong.body).toEqual(unknown.body);
     expect(ErrorBody.parse(wrong.body).error.code).toBe('unauthenticated');
     expect(cookieValue(wrong.headers['set-cookie'], SESSION_COOKIE)).toBeUndefined();
-    await b.get('/api/auth/me').expect(401);
+    expect((await b.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
   });
 
   it('ends the session on sign-out, and a copy of the old cookie no longer works', async () => {
@@ -141,15 +141,15 @@ describe('sign-in and sign-out', () => {
     await request(t.url).get('/api/auth/me').set('Cookie', stolen).expect(200);
     const res = await a.post('/api/auth/signout').expect(204);
     expect(String(res.headers['set-cookie'])).toMatch(new RegExp(`${SESSION_COOKIE}=;`));
-    await a.get('/api/auth/me').expect(401);
+    expect((await a.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
     // Sign-out bumps the session version: the other device is signed out too.
-    await other.get('/api/auth/me').expect(401);
-    await request(t.url).get('/api/auth/me').set('Cookie', stolen).expect(401);
+    expect((await other.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
+    expect((await request(t.url).get('/api/auth/me').set('Cookie', stolen).expect(200)).body).toEqual(signedOut);
   });
 
-  it('answers GET /api/auth/me with 401 and a CSRF cookie when signed out', async () => {
-    const res = await request(t.url).get('/api/auth/me').expect(401);
-    expect(ErrorBody.parse(res.body).error.code).toBe('unauthenticated');
+  it('answers GET /api/auth/me signed out with 200, the signed-out state (no error to log) and a CSRF cookie', async () => {
+    const res = await request(t.url).get('/api/auth/me').expect(200);
+    expect(MeAnswer.parse(res.body)).toEqual({ user: null, memberships: [] });
     expect(cookieValue(res.headers['set-cookie'], 'rw_csrf')).toMatch(/^[A-Za-z0-9_-]{20,}\.[A-Za-z0-9_-]{32}$/);
   });
 
@@ -159,7 +159,7 @@ describe('sign-in and sign-out', () => {
     const a = await signedIn(t.url, email, password);
     const me = Me.parse((await a.get('/api/auth/me')).body);
     const forged = await issueSessionToken(new TextEncoder().encode('another-key-another-key-another-key'), { userId: me.user.id, sessionVersion: 0 }, new Date());
-    await request(t.url).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`).expect(401);
+    expect((await request(t.url).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`).expect(200)).body).toEqual(signedOut);
   });
 });
 
@@ -178,7 +178,7 @@ describe('password change', () => {
 
     await here.post('/api/auth/password', { currentPassword: password, newPassword: 'a newer password' }).expect(204);
     await here.get('/api/auth/me').expect(200);
-    await elsewhere.get('/api/auth/me').expect(401);
+    expect((await elsewhere.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
     await (await browserLike(t.url)).post('/api/auth/signin', { email, password }).expect(401);
     await signedIn(t.url, email, 'a newer password');
     const entry = await t.db.selectFrom('audit_log').selectAll().where('action', '=', 'account.password_changed').where('entity_id', '=', Me.parse((await here.get('/api/auth/me')).body).user.id).executeTakeFirst();

@@ -3,7 +3,7 @@ import { ErrorBody } from '../../shared/errors.ts';
 import { Me } from '../../shared/schemas/account.ts';
 import { Invitation, InvitationInfo, MembersResponse } from '../../shared/schemas/workspace.ts';
 import { INVITATION_DAYS } from '../../server/workspaces/invitations.service.ts';
-import { browserLike, signedIn } from './helpers/agents.ts';
+import { browserLike, signedIn, signedOut } from './helpers/agents.ts';
 import { linkIn, waitForMail } from './helpers/mail.ts';
 import { addMember, createUser, createWorkspace, uniqueEmail } from './helpers/people.ts';
 import { createTestApp, TEST_PUBLIC_URL } from './helpers/test-app.ts';
@@ -44,7 +44,7 @@ describe('invitations', () => {
     await (await browserLike(t.url)).post('/api/auth/reset/request', { email: target }).expect(202);
     const reset = linkIn((await waitForMail(t.db, target, 'password')).text_body, `${TEST_PUBLIC_URL}/reset/`).token;
     await (await browserLike(t.url)).post('/api/auth/reset/confirm', { token: reset, password: 'the real holder pw' }).expect(204);
-    await squatter.get('/api/auth/me').expect(401);
+    expect((await squatter.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
     const holder = await signedIn(t.url, target, 'the real holder pw');
     expect(Me.parse((await holder.get('/api/auth/me').expect(200)).body).user.emailVerified).toBe(true);
     const joined = Me.parse((await holder.post(`/api/invitations/${token}/accept`, {}).expect(200)).body);
@@ -113,7 +113,7 @@ describe('invitations', () => {
     const { token } = await invite(uniqueEmail('late'));
     t.clock.advance(INVITATION_DAYS * 86_400_000 + 1000);
     // Sessions last as long as invitations (7 days): the admin has to sign in again.
-    await adminSession.get('/api/auth/me').expect(401);
+    expect((await adminSession.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
     adminSession = await signedIn(t.url, admin.email, admin.password);
     const b = await browserLike(t.url);
     await b.get(`/api/invitations/${token}`).expect(410);

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { RESET_MINUTES } from '../../server/accounts/password-reset.service.ts';
-import { browserLike, signedIn } from './helpers/agents.ts';
+import { browserLike, signedIn, signedOut } from './helpers/agents.ts';
 import { linkIn, mailCount, waitForMail } from './helpers/mail.ts';
 import { createUser, uniqueEmail } from './helpers/people.ts';
 import { createTestApp, TEST_PUBLIC_URL } from './helpers/test-app.ts';
@@ -28,7 +28,7 @@ describe('password reset', () => {
 
     const b = await browserLike(t.url);
     await b.post('/api/auth/reset/confirm', { token, password: 'brand new secret' }).expect(204);
-    await session.get('/api/auth/me').expect(401);
+    expect((await session.get('/api/auth/me').expect(200)).body).toEqual(signedOut);
     await b.post('/api/auth/signin', { email: user.email, password: user.password }).expect(401);
     await signedIn(t.url, user.email, 'brand new secret');
 

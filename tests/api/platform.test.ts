@@ -6,7 +6,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.ts';
 import { AppConfig } from '../../shared/schemas/config.ts';
 import { OutboxResponse } from '../../shared/schemas/outbox.ts';
-import { browserLike, signedIn } from './helpers/agents.ts';
+import { browserLike, signedIn, signedOut } from './helpers/agents.ts';
 import { waitForMail } from './helpers/mail.ts';
 import { addMember, createUser, createWorkspace, uniqueEmail } from './helpers/people.ts';
 import { createTestApp } from './helpers/test-app.ts';
@@ -103,7 +103,7 @@ describe('errors and limits', () => {
       for (let i = 0; i < 3; i++) expect((await attempt()).status).toBe(401);
       const res = await attempt().expect(429);
       expect(ErrorBody.parse(res.body).error.code).toBe('rate_limited');
-      await b.get('/api/auth/me').expect(401); // other routes are not limited
+      expect((await b.get('/api/auth/me').expect(200)).body).toEqual(signedOut); // other routes are not limited
     } finally {
       await limited.close();
     }

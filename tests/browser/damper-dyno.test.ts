@@ -78,7 +78,7 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
 
     const bar = page.getByRole('form', { name: 'Save as a new revision' });
     await bar.getByLabel('What changed').fill('Compression point 3 raised on the chart');
-    await bar.getByRole('button', { name: `Save as revision ${latest.number + 1}` }).click();
+    await bar.getByRole('button', { name: `Save my edits as revision ${latest.number + 1}` }).click();
     await page.getByText(`Corner setup · revision ${latest.number + 1}`).waitFor();
     const saved = await latestRevision(page, workspaceId, setupId);
     expect(saved.number).toBe(latest.number + 1);
@@ -86,6 +86,7 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
 
     // a bad dyno file: the problem by line, before and after asking the server; nothing kept
     const files = await dynoFileCount(page, workspaceId, setupId);
+    await page.getByRole('tab', { name: 'Dyno fit' }).click();
     const dyno = page.getByTestId('dyno-panel');
     await dyno.getByRole('button', { name: 'Upload a dyno file' }).click();
     const upload = page.getByRole('form', { name: 'Upload a dyno file' });
@@ -104,7 +105,7 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
     await dyno.getByRole('list', { name: 'Dyno files' }).getByText('pipit-front-peaks.csv').first().waitFor();
     await dyno.getByRole('table', { name: 'Compression residuals' }).waitFor();
     expect(await dynoFileCount(page, workspaceId, setupId)).toBe(files + 1);
-    await dyno.getByRole('button', { name: `Save as revision ${saved.number + 1}` }).click();
+    await dyno.getByRole('button', { name: `Save the fitted dyno curve as revision ${saved.number + 1}` }).click();
     await dyno.getByText(`Saved as revision ${saved.number + 1}`).waitFor();
     await page.getByText(`Corner setup · revision ${saved.number + 1}`).waitFor();
     const fitted = await latestRevision(page, workspaceId, setupId);
@@ -144,9 +145,10 @@ describe('damper curve editor and dyno fit on the setup bench', () => {
     const editor = page.getByTestId('damper-curve-editor');
     expect(await editor.getByLabel('compression force, point 1', { exact: true }).isDisabled()).toBe(true);
     expect(await editor.getByText('Build from parameters, scale, re-balance').count()).toBe(0);
+    await page.getByRole('tab', { name: 'Dyno fit' }).click();
     await page.getByTestId('dyno-panel').waitFor();
     expect(await page.getByRole('button', { name: 'Upload a dyno file' }).count()).toBe(0);
-    expect(await page.getByRole('button', { name: /^Save as revision/ }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: /as revision \d+$/ }).count()).toBe(0);
     await screenshot(page, 'bench-viewer-1280');
     await context.close();
   });

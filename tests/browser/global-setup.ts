@@ -14,6 +14,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     /** Where the app under test answers, e.g. http://127.0.0.1:41234 (no trailing slash). */
     baseUrl: string;
+    /** The built client the app serves, with Vite's manifest in `.vite/manifest.json` (bundle-size.test.ts reads it). */
+    clientDir: string;
   }
 }
 
@@ -70,7 +72,8 @@ export default async function setup(project: TestProject) {
   process.once('exit', killChild);
 
   try {
-    await build({ root, configFile: join(root, 'vite.config.ts'), logLevel: 'warn', build: { outDir: distDir, emptyOutDir: true, sourcemap: false } });
+    await build({ root, configFile: join(root, 'vite.config.ts'), logLevel: 'warn', build: { outDir: distDir, emptyOutDir: true, sourcemap: false, manifest: true } });
+    project.provide('clientDir', distDir);
 
     const db = openDatabase(dbPath);
     try {

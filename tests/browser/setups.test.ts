@@ -43,7 +43,7 @@ async function picture(page: Page, name: string) {
 async function saveRevision(page: Page, number: number, message: string) {
   const bar = page.getByRole('form', { name: 'Save as a new revision' });
   await bar.getByLabel('What changed').fill(message);
-  await bar.getByRole('button', { name: `Save as revision ${number}` }).click();
+  await bar.getByRole('button', { name: `Save my edits as revision ${number}` }).click();
   await page.getByText(`Corner setup · revision ${number}`).waitFor();
 }
 
@@ -67,8 +67,8 @@ describe('corner setups', () => {
 
     // a bad value is refused beside its field and blocks the save
     await setQuantity(page, 'Sprung mass', '-5');
-    await page.getByRole('group', { name: 'Setup values' }).getByText('Must be above 0').waitFor();
-    expect(await page.getByRole('button', { name: 'Save as revision 2' }).isDisabled()).toBe(true);
+    await page.getByRole('group', { name: 'Setup values' }).getByText('Sprung mass must be above 0 kg').waitFor();
+    expect(await page.getByRole('button', { name: 'Save my edits as revision 2' }).isDisabled()).toBe(true);
 
     await setQuantity(page, 'Sprung mass', '320');
     await saveRevision(page, 2, 'Heavier body');
@@ -78,6 +78,7 @@ describe('corner setups', () => {
     expect(await page.getByRole('group', { name: 'Setup values' }).getByLabel('Spring rate', { exact: true }).inputValue()).toBe('22');
 
     // compare r2 with r3: the diff names the changed field with both values
+    await page.getByRole('tab', { name: /^Revisions/ }).click();
     const diff = page.getByRole('table', { name: 'Differences from revision 2 to revision 3' });
     await diff.waitFor();
     const springRow = diff.getByRole('row', { name: /Spring rate/ });
@@ -96,6 +97,7 @@ describe('corner setups', () => {
     await r1.getByRole('button', { name: 'Restore as r4' }).click();
     await page.getByText('Corner setup · revision 4').waitFor();
     await page.getByRole('row', { name: 'Revision 4', exact: true }).getByText('restored r1').waitFor();
+    await page.getByRole('tab', { name: /^Bench/ }).click();
     expect(await page.getByRole('group', { name: 'Setup values' }).getByLabel('Sprung mass', { exact: true }).inputValue()).toBe('300');
 
     // export the latest revision as the setup file
@@ -113,13 +115,14 @@ describe('corner setups', () => {
 
     // leaving with unsaved changes asks first
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Corners' }).click();
-    const ask = page.getByRole('alertdialog', { name: 'Unsaved changes' });
+    const ask = page.getByRole('alertdialog', { name: 'Leave without saving?' });
     await ask.waitFor();
     await ask.getByRole('button', { name: 'Stay and keep editing' }).click();
     expect(new URL(page.url()).pathname).toBe(setupUrl);
     await saveRevision(page, 5, 'Loaded from an edited file');
 
     // a read-only link that opens signed out
+    await page.getByRole('tab', { name: 'Read-only links' }).click();
     await page.getByRole('button', { name: 'Make read-only link' }).click();
     const url = await page.getByLabel('Share link').inputValue();
     expect(url).toMatch(/\/shared\/[A-Za-z0-9_-]{43}$/);
@@ -146,6 +149,7 @@ describe('corner setups', () => {
     await page.getByLabel('Import setup file').setInputFiles(edited);
     await page.waitForURL((u) => /\/corners\/[0-9a-f-]{36}$/.test(u.pathname) && u.pathname !== setupUrl);
     await page.getByText('Corner setup · revision 1').waitFor();
+    await page.getByRole('tab', { name: /^Revisions/ }).click();
     await page.getByRole('row', { name: 'Revision 1', exact: true }).getByText('imported', { exact: true }).waitFor();
     await context.close();
   });
@@ -157,6 +161,7 @@ describe('corner setups', () => {
     expect(await page.getByLabel('Import setup file').count()).toBe(0);
     await page.getByRole('link', { name: 'Brume Pipit front, baseline', exact: true }).click();
     await page.getByRole('group', { name: 'Setup values (read-only)' }).waitFor();
+    await page.getByRole('tab', { name: /^Revisions/ }).click();
     await page.getByRole('table', { name: 'Revisions' }).waitFor();
     expect(await page.getByRole('note', { name: 'Read-only' }).count()).toBe(1);
     expect(await page.getByRole('form', { name: 'Save as a new revision' }).count()).toBe(0);
@@ -164,7 +169,10 @@ describe('corner setups', () => {
     for (const part of ['Damper', 'Corner figures']) expect(await page.getByRole('region', { name: part, exact: true }).getByRole('textbox', { disabled: false }).count()).toBe(0);
     expect(await page.getByRole('group', { name: 'Setup values (read-only)' }).getByRole('textbox').count()).toBe(0);
     expect(await page.getByRole('button', { name: /Restore/ }).count()).toBe(0);
+    await page.getByRole('tab', { name: 'Read-only links' }).click();
+    await page.getByRole('tabpanel').waitFor();
     expect(await page.getByRole('button', { name: 'Make read-only link' }).count()).toBe(0);
+    await page.getByRole('tab', { name: /^Revisions/ }).click();
     expect(await page.getByRole('button', { name: 'Rename' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Archive' }).count()).toBe(0);
     expect(await page.getByLabel('Load file…').count()).toBe(0);

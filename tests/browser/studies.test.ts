@@ -87,7 +87,7 @@ describe('studies in the browser', () => {
     await page.setViewportSize({ width: 1440, height: 900 });
     await screenshot(page, 'bench-study-draft-1440');
     await page.setViewportSize({ width: 1280, height: 800 });
-    await bar.getByRole('button', { name: `Save as revision ${before.latestRevision + 1}` }).click();
+    await bar.getByRole('button', { name: `Save my edits as revision ${before.latestRevision + 1}` }).click();
     await page.getByText(`Saved as revision ${before.latestRevision + 1}.`).waitFor();
     const after = SetupDetail.parse(await (await page.request.get(setupUrl)).json());
     expect(after.latestRevision).toBe(before.latestRevision + 1);
@@ -97,13 +97,13 @@ describe('studies in the browser', () => {
     // The same point again while it is the latest revision: nothing to save, and the page says so.
     await openDraft();
     await page.getByText(`Revision ${after.latestRevision}, the latest, already holds exactly this point`).waitFor();
-    expect(await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 1}` }).isDisabled()).toBe(true);
+    expect(await bar.getByRole('button', { name: `Save my edits as revision ${after.latestRevision + 1}` }).isDisabled()).toBe(true);
 
     // Someone saves another change; the same point opened once more is refused on save, with a link to the revision that holds it.
     const tweak = { setup: { ...after.revision.document, springRate: after.revision.document.springRate + 1000 }, message: 'Spring +1 N/mm', basedOn: after.latestRevision };
     expect((await apiWrite({ page, context }, 'POST', `${setupUrl}/revisions`, tweak)).status()).toBe(201);
     await openDraft();
-    await bar.getByRole('button', { name: `Save as revision ${after.latestRevision + 2}` }).click();
+    await bar.getByRole('button', { name: `Save my edits as revision ${after.latestRevision + 2}` }).click();
     const refusal = bar.getByRole('alert').filter({ hasText: `revision ${after.latestRevision} already holds exactly these values` });
     await refusal.waitFor();
     await screenshot(page, 'bench-study-duplicate-1280');

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import type { Road } from '../../../shared/schemas/road.ts';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { Button } from '../../components/ui/button.tsx';
@@ -17,6 +18,10 @@ import { useComparison } from '../../features/runs/model/use-comparison.ts';
 import { useScenario } from '../../features/runs/model/use-scenario.ts';
 import { setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { downloadText } from '../../lib/download.ts';
+import { exportFileName, exportStem } from '../../lib/export-name.ts';
+import { formatQuantityText } from '../../lib/format.ts';
+import { roadLabel } from '../../../shared/runs/road-label.ts';
+import { ChartExportProvider, type ChartExportInfo } from '../../components/charts/export-context.tsx';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 import { useUnits } from '../../lib/units/use-units.tsx';
 
@@ -83,11 +88,11 @@ export function CompareRoute() {
             </Notice>
           )}
           {state.runs.length >= 1 && (
-            <>
+            <ChartExportProvider value={compareExportInfo(state.runs)}>
               <Section
                 title="Figures"
                 actions={
-                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result })), chosen), 'comparison-figures.csv')}>
+                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result })), chosen), exportFileName(compareExportInfo(state.runs).stem, 'figures', 'csv'))}>
                     Figures CSV
                   </Button>
                 }
@@ -98,10 +103,20 @@ export function CompareRoute() {
                 <CompareCharts runs={state.runs} />
               </Section>
               <ResultsCaution />
-            </>
+            </ChartExportProvider>
           )}
         </div>
       )}
     </>
   );
+}
+
+/** File stem and image caption of a comparison: the runs compared, and the first one's road and speed (the like-for-like note says when they differ). */
+function compareExportInfo(runs: { label: string; view: { road: Road; seed?: number; result: { speed: number } } }[]): ChartExportInfo {
+  const first = runs[0].view;
+  const names = runs.map((r) => r.label).join(' vs ');
+  return {
+    stem: exportStem({ setupName: `compare ${names}`, road: first.road, speed: first.result.speed }),
+    context: `${names} · ${roadLabel(first.road, first.seed)} · ${formatQuantityText(first.result.speed, 'kmph')}`,
+  };
 }

@@ -1,6 +1,8 @@
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
 import { useQuery } from '@tanstack/react-query';
-import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
-import { Link, useParams, useSearchParams } from 'react-router';
+import { lazy, type ReactNode, Suspense, useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import type { StudyPointDraft } from '../../../shared/schemas/study-record.ts';
 import type { SetupDetail } from '../../../shared/schemas/setup-record.ts';
 import { Damper, type Setup } from '../../../shared/schemas/setup.ts';
@@ -8,11 +10,11 @@ import { staticGasForce } from '../../../shared/sim/damper-gas.ts';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { Loading } from '../../components/ui/spinner.tsx';
-import { PageHeader, Section } from '../../components/ui/page-header.tsx';
+import { PageHeader } from '../../components/ui/page-header.tsx';
+import { Tabs } from '../../components/ui/tabs.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { useToast } from '../../components/ui/toast.tsx';
 import { DamperCurveEditor } from '../../features/damper-editor/components/damper-curve-editor.tsx';
-import { DynoPanel } from '../../features/dyno/components/dyno-panel.tsx';
 import { LiveRunPanel } from '../../features/runs/components/live-run-panel.tsx';
 import { exportRevisionUrl } from '../../features/setups/api/export-revision.ts';
 import { useSaveRevision } from '../../features/setups/api/save-revision.ts';
@@ -34,6 +36,9 @@ import { buttonClass } from '../../components/ui/button.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { setupQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+
+// below the fold, with the CSV parser: loads after the bench itself so the first view stays light
+const DynoPanel = lazy(async () => ({ default: (await import('../../features/dyno/components/dyno-panel.tsx')).DynoPanel }));
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
@@ -63,6 +68,10 @@ export function CornerBenchRoute() {
   );
 }
 
+/** The tabs of the page, kept in the address (`?part=dyno`) so a reload or a link opens the same one. */
+const parts = ['bench', 'dyno', 'revisions', 'links'] as const;
+type Part = (typeof parts)[number];
+
 function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraft?: StudyPointDraft; studyId?: string }) {
   const workspace = useWorkspace();
   const canWrite = workspace.can('engineer') && !detail.archivedAt;
@@ -71,7 +80,27 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
   const save = useSaveRevision(workspace.id, detail.id);
   const toast = useToast();
   const [saveError, setSaveError] = useState<ReactNode>(null);
-  const [, setParams] = useSearchParams();
+  const [params, setParams] = useSearchParams();
+  const part = parts.find((p) => p === params.get('part')) ?? 'bench';
+  // only `part` changes: a study point's own parameters stay until it is saved
+  const setPart = (next: Part) =>
+    setParams(
+      (prev) => {
+        const out = new URLSearchParams(prev);
+        if (next === 'bench') out.delete('part');
+        else out.set('part', next);
+        return out;
+      },
+      { replace: true },
+    );
+  const navigate = useNavigate();
+  /** Opens the revisions tab at one revision, with its anchor in the address (the panel stays mounted, so the row is there to scroll to). */
+  const showRevision = (n: number) => {
+    const next = new URLSearchParams(params);
+    next.set('part', 'revisions');
+    navigate({ search: `?${next}`, hash: revisionAnchor(n) }, { replace: true });
+    requestAnimationFrame(() => document.getElementById(revisionAnchor(n))?.scrollIntoView({ block: 'center' }));
+  };
 
   // A study point arrives as unsaved changes on top of the latest revision; nothing is stored until the engineer saves.
   const { load } = draft;
@@ -108,7 +137,14 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
             see?.kind === 'setup_revision' && see.setupId === detail.id ? (
               <>
                 {error.message}{' '}
-                <a className="font-semibold underline" href={`#${revisionAnchor(see.number)}`}>
+                <a
+                  className="font-semibold underline"
+                  href={`#${revisionAnchor(see.number)}`}
+                  onClick={(e) => {
+                    e.preventDefault();
+                    showRevision(see.number);
+                  }}
+                >
                   See revision {see.number}
                 </a>
               </>
@@ -123,7 +159,7 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
 
   const r = detail.revision;
   return (
-    <>
+    <ChartExportProvider value={{ stem: exportStem({ setupName: detail.name, revision: detail.latestRevision }), context: `${detail.name} r${detail.latestRevision}${draft.isDirty ? ', with unsaved edits' : ''}` }}>
       <PageHeader
         eyebrow={`Corner setup · revision ${detail.latestRevision}`}
         title={<SetupNameHeading workspaceId={workspace.id} detail={detail} canWrite={canWrite} />}
@@ -182,71 +218,102 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
           )}
         </Notice>
       )}
-      <div className="grid items-start gap-6 lg:grid-cols-[21rem_minmax(0,1fr)]">
-        <div className="min-w-0">
-          {canWrite ? (
-            <>
-              <div className="sticky top-0 z-10 -mx-1 mb-3 bg-paper px-1 pt-1 pb-2">
-                <SaveBar
-                  draft={draft}
-                  nextNumber={detail.latestRevision + 1}
-                  saving={save.isPending}
-                  error={saveError}
-                  initialMessage={studyDraft?.message}
-                  onSave={onSave}
-                />
+      {/* The bench and the dyno fit each save a revision of their own: they get separate tabs, each
+          with its button beside what it saves. Tabs also keep each view a screen or two long. */}
+      <Tabs
+        label="Parts of this setup"
+        value={part}
+        onChange={setPart}
+        items={[
+          {
+            key: 'bench',
+            label: 'Bench',
+            count: canWrite && draft.hasChanges ? 'unsaved edits' : undefined,
+            keepMounted: true,
+            panel: (
+              <div className="grid items-start gap-6 lg:grid-cols-[21rem_minmax(0,1fr)]">
+                <div className="min-w-0">
+                  {canWrite ? (
+                    <>
+                      <div className="sticky top-0 z-10 -mx-1 mb-3 bg-paper px-1 pt-1 pb-2">
+                        <SaveBar
+                          draft={draft}
+                          nextNumber={detail.latestRevision + 1}
+                          saving={save.isPending}
+                          error={saveError}
+                          initialMessage={studyDraft?.message}
+                          onSave={onSave}
+                        />
+                      </div>
+                      <SetupForm form={draft.form} />
+                    </>
+                  ) : (
+                    <SetupSheet setup={detail.revision.document} />
+                  )}
+                </div>
+
+                <div className="flex min-w-0 flex-col gap-5">
+                  <CornerFiguresStrip modal={figures.modal} wheelRate={figures.analysisWheelRate} sprungMass={shown.sprungMass} stale={canWrite && !draft.valid} />
+                  <section aria-label="Damper">
+                    <h2 className="mb-2 text-sm font-semibold text-ink">Damper</h2>
+                    <DamperCurveEditor
+                      key={draft.generation}
+                      value={damper}
+                      onChange={draft.setDamper}
+                      onProblemsChange={draft.setTableProblems}
+                      readOnly={!canWrite}
+                      motionRatio={shown.motionRatio}
+                      sprungMass={shown.sprungMass}
+                      wheelRate={figures.analysisWheelRate}
+                      unsprungMass={shown.unsprungMass}
+                      tyreRate={shown.tyreRate}
+                      tyreDamping={shown.tyreDamping}
+                    />
+                  </section>
+                  <section aria-label="Live run">
+                    <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2">
+                      <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.hasChanges ? ' of the unsaved draft' : ''}</h2>
+                      <BenchScenarioPicker value={scenario} onChange={setScenario} />
+                    </div>
+                    <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} hideTitle />
+                  </section>
+                </div>
               </div>
-              <SetupForm form={draft.form} />
-            </>
-          ) : (
-            <SetupSheet setup={detail.revision.document} />
-          )}
-        </div>
-
-        <div className="flex min-w-0 flex-col gap-5">
-          <CornerFiguresStrip modal={figures.modal} wheelRate={figures.analysisWheelRate} sprungMass={shown.sprungMass} stale={canWrite && !draft.valid} />
-          <section aria-label="Damper">
-            <h2 className="mb-2 text-sm font-semibold text-ink">Damper</h2>
-            <DamperCurveEditor
-              value={damper}
-              onChange={draft.setDamper}
-              readOnly={!canWrite}
-              motionRatio={shown.motionRatio}
-              sprungMass={shown.sprungMass}
-              wheelRate={figures.analysisWheelRate}
-              unsprungMass={shown.unsprungMass}
-              tyreRate={shown.tyreRate}
-              tyreDamping={shown.tyreDamping}
-            />
-          </section>
-          <section aria-label="Live run">
-            <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2">
-              <h2 className="text-sm font-semibold text-ink">Live run{canWrite && draft.isDirty ? ' of the unsaved draft' : ''}</h2>
-              <BenchScenarioPicker value={scenario} onChange={setScenario} />
-            </div>
-            <LiveRunPanel setup={canWrite ? draft.values : detail.revision.document} road={roadOf(scenario)} speed={scenario.speed} hideTitle />
-          </section>
-        </div>
-      </div>
-
-      <Section title="Dyno files" className="mt-8">
-        <DynoPanel
-          workspaceId={workspace.id}
-          setupId={detail.id}
-          latestRevision={detail.latestRevision}
-          readOnly={!canWrite}
-          gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
-          onApplied={(n) => toast.show(`Saved the dyno fit as revision ${n}.`)}
-        />
-      </Section>
-      <Section title="Revisions" className="mt-8">
-        <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.isDirty} onRestored={(d) => draft.resetTo(d.revision)} />
-      </Section>
-      <Section title="Read-only links">
-        <SharePanel workspaceId={workspace.id} setupId={detail.id} revision={{ id: r.id, number: r.number }} canWrite={workspace.can('engineer')} />
-      </Section>
+            ),
+          },
+          {
+            key: 'dyno',
+            label: 'Dyno fit',
+            panel: (
+              <Suspense fallback={<Loading what="dyno files" />}>
+              <DynoPanel
+                workspaceId={workspace.id}
+                setupId={detail.id}
+                latestRevision={detail.latestRevision}
+                readOnly={!canWrite}
+                draftHasChanges={canWrite && draft.hasChanges}
+                gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
+                onApplied={(n) => toast.show(`Saved the fitted dyno curve as revision ${n}.`)}
+              />
+              </Suspense>
+            ),
+          },
+          {
+            key: 'revisions',
+            label: 'Revisions',
+            count: detail.latestRevision,
+            keepMounted: true,
+            panel: <RevisionHistory workspaceId={workspace.id} setupId={detail.id} latest={detail.latestRevision} canWrite={canWrite} draftDirty={draft.hasChanges} onRestored={(d) => draft.resetTo(d.revision)} />,
+          },
+          {
+            key: 'links',
+            label: 'Read-only links',
+            panel: <SharePanel workspaceId={workspace.id} setupId={detail.id} revision={{ id: r.id, number: r.number }} canWrite={workspace.can('engineer')} />,
+          },
+        ]}
+      />
       <ResultsCaution />
-      <UnsavedGuard when={canWrite && draft.isDirty && !save.isPending} />
-    </>
+      <UnsavedGuard when={canWrite && draft.hasChanges && !save.isPending} invalid={draft.tableProblems.length > 0 || (draft.isDirty && !draft.valid)} />
+    </ChartExportProvider>
   );
 }

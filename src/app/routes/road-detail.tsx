@@ -1,3 +1,5 @@
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { safeWords } from '../../lib/export-name.ts';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
@@ -46,7 +48,7 @@ export function RoadDetailRoute() {
       {(r) => {
         const shown = draft ?? r.definition;
         return (
-          <>
+          <ChartExportProvider value={{ stem: `road_${safeWords(r.name, 48) || 'road'}`, context: `Road ${r.name}${draft ? ', unsaved draft' : ''}` }}>
             <PageHeader
               eyebrow={
                 <Link className="hover:underline" to={`/w/${workspace.id}/roads`}>
@@ -119,7 +121,7 @@ export function RoadDetailRoute() {
                 )}
               </div>
             </div>
-          </>
+          </ChartExportProvider>
         );
       }}
     </QueryGuard>

@@ -6,7 +6,9 @@ import { QueryGuard } from '../../components/ui/query-guard.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { useDeleteRun } from '../../features/runs/api/delete-run.ts';
 import { useSavedRun } from '../../features/runs/api/get-run.ts';
-import { ExportButtons, runTitle } from '../../features/runs/components/run-actions.tsx';
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
+import { ExportButtons, runSubject, runTitle } from '../../features/runs/components/run-actions.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
 import { viewOfSaved } from '../../features/runs/model/run-view.ts';
 import { formatDateTime } from '../../lib/format.ts';
@@ -43,7 +45,7 @@ export function RunDetailRoute() {
               }
               actions={
                 <>
-                  {view?.ok && <ExportButtons view={view.view} name={run.name} />}
+                  {view?.ok && <ExportButtons view={view.view} request={run.request} revision={run.revisionNumber} />}
                   <ButtonLink to={runAgain} size="sm">
                     Run again
                   </ButtonLink>
@@ -72,10 +74,12 @@ export function RunDetailRoute() {
               <>
                 {view.view.thinned === 'bucket-extremes' && (
                   <p className="mb-3 text-xs text-ink-faint">
-                    Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run.
+                    Traces are stored thinned to {run.traces.length} points per column (each time bucket keeps its lowest and highest value), from {run.traces.fullLength} samples. Figures are those of the full run; Traces CSV runs the stored inputs again in this browser to give every sample, evenly spaced.
                   </p>
                 )}
-                <RunDashboard view={view.view} />
+                <ChartExportProvider value={{ stem: exportStem(runSubject(view.view, run.revisionNumber)), context: `${runTitle(view.view, run.revisionNumber)} · run saved ${formatDateTime(run.createdAt)}` }}>
+                  <RunDashboard view={view.view} />
+                </ChartExportProvider>
               </>
             )}
           </>

@@ -5,7 +5,9 @@ import { ButtonLink } from '../../components/ui/button.tsx';
 import { Select } from '../../components/ui/field.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { PageHeader, Section } from '../../components/ui/page-header.tsx';
-import { ExportButtons, runTitle, SaveRunForm, type SaveTarget } from '../../features/runs/components/run-actions.tsx';
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem } from '../../lib/export-name.ts';
+import { ExportButtons, runSubject, runTitle, SaveRunForm, type SaveTarget } from '../../features/runs/components/run-actions.tsx';
 import { LiveTryout } from '../../features/runs/components/live-tryout.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
 import { type RunChoice, RunForm } from '../../features/runs/components/run-form.tsx';
@@ -62,7 +64,7 @@ export function RunsRoute() {
               </p>
             </div>
             <div className="flex flex-wrap gap-2">
-              <ExportButtons view={state.view} name={runTitle(state.view, target.revisionNumber)} />
+              <ExportButtons view={state.view} request={state.request} revision={target.revisionNumber} />
             </div>
           </div>
           {target.revisionNumber < target.latestRevision && (
@@ -83,7 +85,9 @@ export function RunsRoute() {
               </div>
             )}
           </details>
-          <RunDashboard view={state.view} />
+          <ChartExportProvider value={{ stem: exportStem(runSubject(state.view, target.revisionNumber)), context: runTitle(state.view, target.revisionNumber) }}>
+            <RunDashboard view={state.view} />
+          </ChartExportProvider>
         </section>
       )}
 

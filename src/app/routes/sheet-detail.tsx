@@ -1,3 +1,5 @@
+import { ChartExportProvider } from '../../components/charts/export-context.tsx';
+import { exportStem, safeWords } from '../../lib/export-name.ts';
 import { useState } from 'react';
 import { useParams } from 'react-router';
 import { ButtonLink, buttonClass } from '../../components/ui/button.tsx';
@@ -46,7 +48,7 @@ export function SheetDetailRoute() {
         const shown = list.find((c) => c.id === plotted) ?? list[0];
 
         return (
-          <>
+          <ChartExportProvider value={{ stem: `${safeWords(sheet.number, 30)}_${exportStem({ setupName: sheet.setupName, revision: sheet.setupRevision })}`, context: `Target sheet ${sheet.number} · ${sheet.setupName} r${sheet.setupRevision}` }}>
             <PageHeader
               eyebrow="Target sheet"
               title={<span className="figures">{sheet.number}</span>}
@@ -102,7 +104,7 @@ export function SheetDetailRoute() {
                 compression={sheet.compression}
                 rebound={sheet.rebound}
                 measured={shown?.measured ?? []}
-                exportName={`${sheet.number}-band`}
+                exportName="band"
               />
               <p className="mt-1 text-xs text-ink-faint">
                 Shaded: the tolerance band. Piston speed and force are signed, compression positive, so rebound is drawn below the axis on the left.
@@ -133,7 +135,7 @@ export function SheetDetailRoute() {
               <SheetHistory history={history} />
             </Section>
             <ResultsCaution />
-          </>
+          </ChartExportProvider>
         );
       }}
     </QueryGuard>

@@ -1,6 +1,8 @@
+import { useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { listText } from '../../lib/units/unit-table.ts';
 import { useUnits } from '../../lib/units/use-units.tsx';
+import { FreshShareLink, MakeShareLink } from '../../components/ui/share-link.tsx';
 import { Button, buttonClass } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { QueryGuard } from '../../components/ui/query-guard.tsx';
@@ -29,6 +31,7 @@ export function StudyDetailRoute() {
   const canSave = workspace.can('engineer');
   const isLead = workspace.can('lead');
   const { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
+  const [sharing, setSharing] = useState(false);
   useRunWhenAsked(params.get('run') === '1', canStart, run, () => setParams({}, { replace: true }));
 
   return (
@@ -103,7 +106,7 @@ export function StudyDetailRoute() {
                     </Button>
                   )}
                   {canSave && (
-                    <Button busy={share.isPending} onClick={() => share.mutate()}>
+                    <Button aria-expanded={sharing} onClick={() => setSharing((v) => !v)}>
                       Share read-only link
                     </Button>
                   )}
@@ -124,13 +127,24 @@ export function StudyDetailRoute() {
 
             <div className="space-y-4">
               {!canSave && <p className="text-sm text-ink-soft">A preview run happens in this browser and is not saved; saving results and making revisions is for engineers.</p>}
-              {share.data && (
-                <Notice tone="ok" title="Read-only link made">
-                  Anyone with this link can read the study until it is withdrawn (shown once):{' '}
-                  <code className="figures break-all select-all">{`${window.location.origin}${share.data.path}`}</code>
-                </Notice>
+              {share.data ? (
+                <FreshShareLink
+                  label={`the study ${s.name}`}
+                  path={share.data.path}
+                  expiresAt={share.data.link.expiresAt}
+                  onDone={() => {
+                    share.reset();
+                    setSharing(false);
+                  }}
+                />
+              ) : (
+                sharing &&
+                canSave && (
+                  <div className="rounded border border-rule bg-paper-raised px-3 py-2">
+                    <MakeShareLink what="this study" busy={share.isPending} error={share.error ? (share.error.fieldMessage('expiresAt') ?? share.error.message) : undefined} onMake={(expiresAt) => share.mutate(expiresAt)} />
+                  </div>
+                )
               )}
-              {share.error && <Notice tone="danger">{share.error.message}</Notice>}
               {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
               <RunPanel state={state} onCancel={cancel} />
               {s.status === 'partial' && state.phase === 'idle' && (
@@ -142,6 +156,7 @@ export function StudyDetailRoute() {
                   roadNames={roadNames}
                   baselineIndex={s.baseline?.pointIndex ?? null}
                   running={state.phase === 'running'}
+                  base={s.base.setupName ? { setupName: s.base.setupName, revisionNumber: s.base.revisionNumber } : undefined}
                   pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
                 />
               ) : (

@@ -17,7 +17,8 @@
  *   `setData` on the existing one.
  * - Width follows the container (ResizeObserver); height comes from `options.height` (260 px default).
  * - Clicking a legend entry toggles its series (uPlot's own legend).
- * - `exportName` adds a small "Save PNG" button; `exportPng(chart)` does the same from code.
+ * - `exportName` adds a small "Save PNG" button; the image carries the chart's label as its title,
+ *   the context line of the surrounding `ChartExportProvider` (setup, road, speed) and the date.
  * - Log axes: give the scale a finite range (`logDecadeRange(values)` in axes.ts) and null out
  *   values below it; uPlot's log ticks can loop forever on ranges reaching below about 1e−16.
  */
@@ -26,7 +27,9 @@ import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import './uplot-chart.css';
 import { readChartTheme, type ChartTheme } from './chart-theme.ts';
+import { useChartExport } from './export-context.tsx';
 import { exportPng } from './export-png.ts';
+import { exportFileName } from '../../lib/export-name.ts';
 import { withDotMarkers } from './legend-markers.ts';
 import { withLevelYTitles } from './y-titles.ts';
 
@@ -40,7 +43,7 @@ export interface UChartProps {
   onReady?: (chart: uPlot) => void;
   /** Rescale axes to the new data on every update (default). Off keeps the user's zoom. */
   resetScales?: boolean;
-  /** Shows a "Save PNG" button that downloads `<exportName>.png`. */
+  /** Shows a "Save PNG" button; the file is `<stem>_<exportName>.png`, the stem from the surrounding `ChartExportProvider`. */
   exportName?: string;
   /** Accessible name of the chart region. */
   label?: string;
@@ -60,6 +63,7 @@ export function UChart({ options, data, className = '', onReady, resetScales = t
   const onReadyRef = useRef(onReady);
   dataRef.current = data;
   onReadyRef.current = onReady;
+  const about = useChartExport();
 
   useEffect(() => {
     const host = hostRef.current;
@@ -101,7 +105,7 @@ export function UChart({ options, data, className = '', onReady, resetScales = t
         <button
           type="button"
           className="absolute right-0 top-0 z-10 rounded border border-rule bg-paper-raised px-1.5 py-0.5 text-xs text-ink-soft hover:text-ink"
-          onClick={() => chartRef.current && exportPng(chartRef.current, exportName, label)}
+          onClick={() => chartRef.current && exportPng(chartRef.current, exportFileName(about?.stem ?? '', exportName, 'png'), label, about?.context)}
         >
           Save PNG
         </button>

@@ -87,6 +87,7 @@ export function Select({ className = '', id, ref, children, ...rest }: SelectHTM
   );
 }
 
+/** A multi-line text box, labelled by its `Field` like `Input` and `Select`. */
 export function Textarea({ className = '', id, ref, ...rest }: TextareaHTMLAttributes<HTMLTextAreaElement> & { ref?: Ref<HTMLTextAreaElement> }) {
   const { border, ...aria } = useFieldProps(id);
   return <textarea ref={ref} className={`${controlClass} ${border} py-1.5 text-sm ${className}`} {...aria} {...rest} />;

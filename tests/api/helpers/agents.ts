@@ -1,3 +1,4 @@
+import type { MeAnswer } from '../../../shared/schemas/account.ts';
 import request from 'supertest';
 import { CSRF_COOKIE, CSRF_HEADER } from '../../../server/auth/csrf.ts';
 
@@ -46,3 +47,6 @@ export async function signedIn(url: string, email: string, password: string): Pr
 }
 
 export { cookieValue };
+
+/** What GET /api/auth/me answers (200) to a caller who is not signed in. */
+export const signedOut: MeAnswer = { user: null, memberships: [] };

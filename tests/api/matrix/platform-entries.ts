@@ -82,7 +82,7 @@ export const platformEntries: MatrixEntries = {
   },
   'POST /api/auth/signin': { access: 'public', ok: 200, build: (w) => ({ path: '/api/auth/signin', body: { email: w.spare.email, password: w.spare.password } }) },
   'POST /api/auth/signout': { access: 'public', ok: 204, build: () => ({ path: '/api/auth/signout' }) },
-  'GET /api/auth/me': { access: 'user', ok: 200, build: () => ({ path: '/api/auth/me' }) },
+  'GET /api/auth/me': { access: 'public', ok: 200, build: () => ({ path: '/api/auth/me' }) },
   'POST /api/auth/password': {
     access: 'user',
     ok: 204,

@@ -5,6 +5,7 @@ import type { Damper, DamperCurve } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';
 import { type DisplayUnit, units } from '../../../lib/format.ts';
+import { plainIssue } from '../../../lib/plain-issue.ts';
 import { siFromShown } from '../../../lib/units/unit-table.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { Direction } from '../model/draft.ts';
@@ -14,6 +15,14 @@ type Texts = { lowSpeedSlope: string; kneeVelocity: string; highSpeedSlope: stri
 const KNEE_GUESS = 0.1;
 
 const kneeText = (si: number, unit: DisplayUnit) => String(Number(unit.fromSI(si).toPrecision(6)));
+
+/** The builder's fields as their labels say them, for messages. */
+const subjects: Record<string, { label: string; unit?: DisplayUnit }> = {
+  lowSpeedSlope: { label: 'Low-speed slope', unit: units.Nspm },
+  kneeVelocity: { label: 'Knee velocity', unit: units.mps },
+  highSpeedSlope: { label: 'High-speed slope', unit: units.Nspm },
+  shape: { label: 'Shape' },
+};
 
 /** Starting values read off the current curve: slopes below and above a 0.1 m/s knee (shown in `unit`). */
 function guess(curve: DamperCurve, unit: DisplayUnit = units.mps): Texts {
@@ -51,7 +60,10 @@ export function BuilderPanel({ direction, damper, onFill }: { direction: Directi
     highSpeedSlope: Number(texts.highSpeedSlope),
     shape: texts.shape,
   });
-  const errorOf = (key: keyof Texts) => (parsed.success ? undefined : parsed.error.issues.find((i) => i.path[0] === key)?.message);
+  const errorOf = (key: keyof Texts) => {
+    const issue = parsed.success ? undefined : parsed.error.issues.find((i) => i.path[0] === key);
+    return issue && plainIssue(issue, key === 'kneeVelocity' ? { ...subjects[key], unit: kneeUnit } : subjects[key]);
+  };
   const set = (key: keyof Texts) => (e: { target: { value: string } }) => setTexts((t) => ({ ...t, [key]: e.target.value }));
   const title = direction === 'compression' ? 'Compression' : 'Rebound';
   return (

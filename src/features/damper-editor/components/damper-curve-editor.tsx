@@ -1,8 +1,9 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { Damper, type DamperCurve } from '../../../../shared/schemas/setup.ts';
 import { Notice } from '../../../components/ui/notice.tsx';
+import type { Problem } from '../../../lib/plain-issue.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
-import { type DraftCurves, type DraftRow, type Direction, directions, draftFromCurve, draftFromDamper, draftMatches, readDraft, cellText } from '../model/draft.ts';
+import { type DraftCurves, type DraftRow, type Direction, directions, draftFromCurve, draftFromDamper, draftMatches, draftProblems, readDraft, cellText } from '../model/draft.ts';
 import { type CornerContext, dampingFigures } from '../model/figures.ts';
 import { BuilderPanel } from './builder-panel.tsx';
 import { chartSpanLabel, chartSpans, CurveChart, type PointMove } from './curve-chart.tsx';
@@ -18,6 +19,11 @@ export interface DamperCurveEditorProps extends CornerContext {
   onChange: (damper: Damper) => void;
   /** Shows the curve, tables and figures without edit controls. */
   readOnly?: boolean;
+  /**
+   * Told what in the tables does not read yet (empty once everything does): such text never
+   * reaches `onChange`, but it is an edit all the same, and the page must not lose it quietly.
+   */
+  onProblemsChange?: (problems: Problem[]) => void;
 }
 
 /**
@@ -26,7 +32,7 @@ export interface DamperCurveEditorProps extends CornerContext {
  * scale and compression/rebound balance; the gas charge; and the equivalent damping and body
  * damping ratio, all following the edits live. Controlled: `value` in, `onChange` out.
  */
-export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner }: DamperCurveEditorProps) {
+export function DamperCurveEditor({ value, onChange, readOnly = false, onProblemsChange, ...corner }: DamperCurveEditorProps) {
   const velocityUnit = useUnits().damperVelocity;
   const [draft, setDraft] = useState<DraftCurves>(() => draftFromDamper(value, velocityUnit));
   const [seededFrom, setSeededFrom] = useState(value);
@@ -49,6 +55,11 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner
     }
   }
   const read = useMemo(() => readDraft(shown, value, velocityUnit), [shown, value, velocityUnit]);
+  const [gasProblems, setGasProblems] = useState<Problem[]>([]);
+  const problems = useMemo(() => [...draftProblems(read), ...gasProblems], [read, gasProblems]);
+  useEffect(() => {
+    if (!readOnly) onProblemsChange?.(problems);
+  }, [problems, readOnly, onProblemsChange]);
   const figures = useMemo(() => dampingFigures(value, corner), [value, corner.motionRatio, corner.sprungMass, corner.wheelRate, corner.unsprungMass, corner.tyreRate, corner.tyreDamping]);
 
   const editRows = (direction: Direction, rows: DraftRow[]) => {
@@ -94,14 +105,14 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner
         <CurveChart damper={value} readOnly={readOnly} span={span} onMove={moveTo} />
       </div>
 
-      <div className="grid items-start gap-x-6 gap-y-4 @2xl:grid-cols-[auto_auto_minmax(0,1fr)] @lg:grid-cols-2">
+      {/* The tables grow with the problems beside their cells, so the figures get a row of their own
+          rather than whatever width the tables leave. */}
+      <div className="grid items-start gap-x-6 gap-y-4 @lg:grid-cols-2">
         {directions.map((d) => (
           <PointsTable key={d} direction={d} velocityUnit={velocityUnit.symbol} rows={shown[d]} errors={read.errors[d]} readOnly={readOnly} onChange={(rows) => editRows(d, rows)} />
         ))}
-        <div className="@lg:col-span-2 @2xl:col-span-1">
-          <DampingFiguresPanel figures={figures} motionRatio={corner.motionRatio} />
-        </div>
       </div>
+      <DampingFiguresPanel figures={figures} motionRatio={corner.motionRatio} />
       {!read.ok && (read.general.length > 0 || directions.some((d) => read.errors[d].some((e) => e.velocity || e.force))) && (
         <Notice tone="signal">
           The tables have problems marked beside the cells; the chart and figures show the last valid curve until they are fixed.
@@ -123,7 +134,7 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, ...corner
         </details>
       )}
 
-      <GasEntry gas={value.gas} readOnly={readOnly} onChange={(gas) => onChange(Damper.parse({ compression: value.compression, rebound: value.rebound, ...(gas ? { gas } : {}) }))} />
+      <GasEntry gas={value.gas} readOnly={readOnly} onProblemsChange={setGasProblems} onChange={(gas) => onChange(Damper.parse({ compression: value.compression, rebound: value.rebound, ...(gas ? { gas } : {}) }))} />
     </div>
   );
 }

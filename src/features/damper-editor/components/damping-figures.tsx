@@ -3,12 +3,12 @@ import type { DampingFigures } from '../model/figures.ts';
 
 function Row({ label, children, note }: { label: string; children: React.ReactNode; note?: string }) {
   return (
-    <div className="flex items-baseline justify-between gap-3 border-b border-rule/60 py-1 last:border-0">
-      <dt className="text-sm text-ink-soft">
+    <div className="flex min-w-0 items-baseline justify-between gap-3 border-b border-rule/60 py-1">
+      <dt className="min-w-0 text-sm text-ink-soft">
         {label}
         {note && <span className="block text-2xs text-ink-faint">{note}</span>}
       </dt>
-      <dd className="text-right">{children}</dd>
+      <dd className="shrink-0 text-right whitespace-nowrap">{children}</dd>
     </div>
   );
 }
@@ -16,10 +16,10 @@ function Row({ label, children, note }: { label: string; children: React.ReactNo
 /** The figures that follow the curve as it is edited. */
 export function DampingFiguresPanel({ figures, motionRatio }: { figures: DampingFigures; motionRatio: number }) {
   return (
-    <section aria-label="Damping figures" className="rounded border border-rule bg-paper-raised px-3 py-2">
+    <section aria-label="Damping figures" className="@container min-w-0 rounded border border-rule bg-paper-raised px-3 py-2">
       <h3 className="text-sm font-semibold text-ink">Equivalent damping</h3>
       <p className="mb-1 text-2xs text-ink-faint">Linear coefficient: {figures.definition}.</p>
-      <dl>
+      <dl className="grid gap-x-8 @3xl:grid-cols-2">
         <Row label="At the damper">
           <Figure value={figures.atDamper} unit="Nspm" label="equivalent coefficient at the damper" />
         </Row>

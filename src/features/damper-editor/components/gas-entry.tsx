@@ -1,10 +1,12 @@
-import { useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { GasCharge } from '../../../../shared/schemas/setup.ts';
 import { barToPa, cm3ToM3, m3ToCm3, paToBar } from '../../../../shared/units.ts';
 import { staticGasForce } from '../../../../shared/sim/damper-gas.ts';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';
 import { Caution } from '../../../components/ui/notice.tsx';
 import { Figure } from '../../../components/ui/figure.tsx';
+import { type DisplayUnit, units } from '../../../lib/format.ts';
+import { plainIssue, type Problem } from '../../../lib/plain-issue.ts';
 import { cellText } from '../model/draft.ts';
 
 type Mode = 'none' | 'force' | 'pressure';
@@ -44,16 +46,54 @@ function candidate(t: Texts): unknown {
   return { pressure: bar === undefined ? Number.NaN : barToPa(bar), ...(rodArea !== undefined ? { rodArea } : {}), ...(polytropic ? { polytropic } : {}) };
 }
 
+const rodAreaMm2: DisplayUnit = { symbol: 'mm²', fromSI: (si) => si * 1e6, toSI: (shown) => shown * 1e-6 };
+
+/** Field names and units as the gas fields show them. */
+const subjects: Record<string, { label: string; unit?: DisplayUnit }> = {
+  force: { label: 'Gas rod force', unit: units.N },
+  pressure: { label: 'Gas pressure', unit: units.bar },
+  rodArea: { label: 'Rod area', unit: rodAreaMm2 },
+  'polytropic.volume': { label: 'Gas volume', unit: units.cm3 },
+  'polytropic.exponent': { label: 'Gas exponent n' },
+};
+
 /**
  * Gas charge of the damper: none, a rod force in N, or a pressure in bar on the rod area, with
  * optional stiffening as the rod enters. Changes are passed up only when they make a valid
  * charge; problems show beside the fields.
  */
-export function GasEntry({ gas, readOnly, onChange }: { gas: GasCharge | undefined; readOnly?: boolean; onChange: (g: GasCharge | undefined) => void }) {
+export function GasEntry({
+  gas,
+  readOnly,
+  onChange,
+  onProblemsChange,
+}: {
+  gas: GasCharge | undefined;
+  readOnly?: boolean;
+  onChange: (g: GasCharge | undefined) => void;
+  /** What in the gas fields does not make a valid charge yet (it is not passed up until it does). */
+  onProblemsChange?: (problems: Problem[]) => void;
+}) {
   const [texts, setTexts] = useState<Texts>(() => textsOf(gas));
-  const cand = candidate(texts);
-  const parsed = cand === undefined ? ({ success: true, data: undefined } as const) : GasCharge.safeParse(cand);
-  const issue = (key: string) => (parsed.success ? undefined : parsed.error.issues.find((i) => i.path.join('.').startsWith(key))?.message?.replace(/^Invalid input: expected number, received NaN$/, 'enter a number'));
+  const parsed = useMemo(() => {
+    const cand = candidate(texts);
+    return cand === undefined ? ({ success: true, data: undefined } as const) : GasCharge.safeParse(cand);
+  }, [texts]);
+  const problems = useMemo<Problem[]>(
+    () =>
+      parsed.success
+        ? []
+        : parsed.error.issues.map((i) => {
+            const path = i.path.join('.');
+            const subject = subjects[path] ?? { label: 'Gas charge' };
+            return { path: `damper.gas.${path}`, label: subject.label, message: plainIssue(i, subject) };
+          }),
+    [parsed],
+  );
+  useEffect(() => {
+    if (!readOnly) onProblemsChange?.(problems);
+  }, [problems, readOnly, onProblemsChange]);
+  const issue = (key: string) => problems.find((p) => p.path.startsWith(`damper.gas.${key}`))?.message;
 
   const update = (patch: Partial<Texts>) => {
     const next = { ...texts, ...patch };

@@ -41,7 +41,7 @@ describe('draft', () => {
     draft.rebound[2].force = '100';
     const out = readDraft(draft, damper);
     expect(out.ok).toBe(false);
-    expect(out.errors.compression[1].force).toBe('not a number');
+    expect(out.errors.compression[1].force).toBe('Compression force at 0.2 m/s must be a number in N');
     // with the text fixed, the schema's rule lands on the falling force
     draft.compression[1].force = '200';
     const again = readDraft(draft, damper);

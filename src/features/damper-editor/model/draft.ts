@@ -1,5 +1,6 @@
 import { Damper, type DamperCurve } from '../../../../shared/schemas/setup.ts';
 import { type DisplayUnit, units } from '../../../lib/format.ts';
+import { plainIssue, type Problem } from '../../../lib/plain-issue.ts';
 import { siFromShown } from '../../../lib/units/unit-table.ts';
 
 /**
@@ -55,6 +56,28 @@ const readCell = (text: string): number | undefined => {
 
 export type DraftOutcome = { ok: true; damper: Damper; errors: CellErrors } | { ok: false; errors: CellErrors; general: string[] };
 
+const title = { compression: 'Compression', rebound: 'Rebound' } as const;
+
+/** How a cell is named in messages: by the speed on its row when that reads ("Rebound force at 0.52 m/s"). */
+function cellLabel(d: Direction, row: number, column: 'velocity' | 'force', speed: number | undefined): string {
+  if (column === 'force' && speed !== undefined) return `${title[d]} force at ${Number(speed.toPrecision(4))} m/s`;
+  return `${title[d]} ${column === 'force' ? 'force' : 'speed'}, point ${row + 1}`;
+}
+
+/** Every problem of the tables, one line each, for the save bar (the cells show the same words). */
+export function draftProblems(outcome: DraftOutcome): Problem[] {
+  if (outcome.ok) return [];
+  const cells = directions.flatMap((d) =>
+    outcome.errors[d].flatMap((e, row) =>
+      (['velocity', 'force'] as const).flatMap((column) => {
+        const message = e[column];
+        return message ? [{ path: `damper.${d}.${row}.${column === 'velocity' ? 0 : 1}`, label: `${title[d]} point ${row + 1}`, message }] : [];
+      }),
+    ),
+  );
+  return [...cells, ...outcome.general.map((message, i) => ({ path: `damper.general.${i}`, label: 'Damper tables', message }))];
+}
+
 /**
  * Reads the tables into a damper (gas charge from `base`), with every problem placed on its
  * cell: text that is not a number, then the setup schema's own rules (speeds rising, force not
@@ -66,12 +89,14 @@ export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>, unit: D
   const curves = {} as Record<Direction, [number, number][]>;
   let unreadable = false;
   for (const d of directions) {
-    if (draft[d].length === 0) general.push(`${d}: add at least one point`);
+    if (draft[d].length === 0) general.push(`${title[d]} table needs at least one point`);
     curves[d] = draft[d].map((row, i) => {
       const v = readCell(row.velocity);
       const f = readCell(row.force);
-      if (v === undefined) errors[d][i].velocity = row.velocity.trim() === '' ? 'enter a speed' : 'not a number';
-      if (f === undefined) errors[d][i].force = row.force.trim() === '' ? 'enter a force' : 'not a number';
+      const speedLabel = cellLabel(d, i, 'velocity', undefined);
+      const forceLabel = cellLabel(d, i, 'force', v);
+      if (v === undefined) errors[d][i].velocity = row.velocity.trim() === '' ? `${speedLabel} is empty: enter a speed in m/s` : `${speedLabel} must be a number in m/s`;
+      if (f === undefined) errors[d][i].force = row.force.trim() === '' ? `${forceLabel} is empty: enter a force in N` : `${forceLabel} must be a number in N`;
       if (v === undefined || f === undefined) unreadable = true;
       return [v === undefined ? 0 : siFromShown(unit, v), f ?? 0];
     });
@@ -83,8 +108,12 @@ export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>, unit: D
     const [d, row, col] = issue.path;
     if ((d === 'compression' || d === 'rebound') && typeof row === 'number' && errors[d][row]) {
       const key = col === 0 ? 'velocity' : 'force';
-      errors[d][row][key] ??= issue.message;
-    } else general.push(`${issue.path.join('.') || 'damper'}: ${issue.message}`);
+      const label = cellLabel(d, row, key, curves[d][row][0]);
+      errors[d][row][key] ??= plainIssue(issue, { label, unit: key === 'velocity' ? unit : units.N });
+    } else {
+      const label = d === 'compression' || d === 'rebound' ? `${title[d]} table` : 'Damper';
+      general.push(plainIssue(issue, { label }));
+    }
   }
   return { ok: false, errors, general };
 }

@@ -17,6 +17,8 @@ export interface DynoPanelProps {
   readOnly?: boolean;
   /** The setup's static gas force, N, offered as the offset to take out of the readings. */
   gasForceHint?: number;
+  /** The bench has edits not saved yet: the fit's revision will not include them, and says so. */
+  draftHasChanges?: boolean;
   /** Called after a fit was saved as a new revision. */
   onApplied?: (revisionNumber: number) => void;
 }
@@ -25,7 +27,7 @@ export interface DynoPanelProps {
  * Dyno files of one setup: upload (engineers), the files kept with who uploaded them and the
  * revision each produced, and the fit of the chosen file.
  */
-export function DynoPanel({ workspaceId, setupId, latestRevision, readOnly, gasForceHint, onApplied }: DynoPanelProps) {
+export function DynoPanel({ workspaceId, setupId, latestRevision, readOnly, draftHasChanges, gasForceHint, onApplied }: DynoPanelProps) {
   const files = useDynoFiles(workspaceId, setupId);
   const [selected, setSelected] = useState<string | null>(null);
   const [uploading, setUploading] = useState(false);
@@ -85,7 +87,7 @@ export function DynoPanel({ workspaceId, setupId, latestRevision, readOnly, gasF
           </Button>
         </div>
       )}
-      {current && (detail.isPending ? <Loading what="the dyno file" /> : detail.isError ? <Notice tone="danger">{detail.error.message}</Notice> : <FitPanel key={detail.data.id} workspaceId={workspaceId} setupId={setupId} file={detail.data} latestRevision={latestRevision} readOnly={readOnly} onApplied={onApplied} />)}
+      {current && (detail.isPending ? <Loading what="the dyno file" /> : detail.isError ? <Notice tone="danger">{detail.error.message}</Notice> : <FitPanel key={detail.data.id} workspaceId={workspaceId} setupId={setupId} file={detail.data} latestRevision={latestRevision} readOnly={readOnly} draftHasChanges={draftHasChanges} onApplied={onApplied} />)}
     </div>
   );
 }

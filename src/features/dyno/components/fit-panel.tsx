@@ -25,6 +25,7 @@ export function FitPanel({
   file,
   latestRevision,
   readOnly,
+  draftHasChanges,
   onApplied,
 }: {
   workspaceId: string;
@@ -32,6 +33,7 @@ export function FitPanel({
   file: DynoFileDetail;
   latestRevision: number;
   readOnly?: boolean;
+  draftHasChanges?: boolean;
   onApplied?: (revisionNumber: number) => void;
 }) {
   const apply = useApplyDynoFit(workspaceId, setupId);
@@ -109,13 +111,19 @@ export function FitPanel({
         </div>
       )}
       {!readOnly && (
-        <div className="flex flex-wrap items-end gap-3">
-          <Field label="What changed (revision message)" className="min-w-72 flex-1">
-            <Input value={message} onChange={(e) => setMessage(e.target.value)} maxLength={500} />
-          </Field>
-          <Button variant="primary" disabled={!canApply} busy={apply.isPending} onClick={save}>
-            Save as revision {latestRevision + 1}
-          </Button>
+        <div className="grid gap-2 rounded border border-rule bg-paper-raised px-3 py-2" role="group" aria-label="Save the fitted curve">
+          <p className="text-xs text-ink-soft">
+            Saves revision {latestRevision} with its {directions.length ? directions.join(' and ') : 'chosen'} curve{directions.length > 1 ? 's' : ''} replaced by this fit, as revision {latestRevision + 1}.
+            {draftHasChanges && <strong className="font-semibold text-signal-ink"> Your unsaved edits on the bench are not part of it.</strong>}
+          </p>
+          <div className="flex flex-wrap items-end gap-3">
+            <Field label="What changed (revision message)" className="min-w-72 flex-1">
+              <Input value={message} onChange={(e) => setMessage(e.target.value)} maxLength={500} />
+            </Field>
+            <Button variant="primary" disabled={!canApply} busy={apply.isPending} onClick={save}>
+              Save the fitted dyno curve as revision {latestRevision + 1}
+            </Button>
+          </div>
         </div>
       )}
       {serverError && <FormError message={serverError.message} />}

@@ -136,13 +136,14 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
         </Notice>
       ))}
       {read?.ok && read.summary.warnings.filter((w) => !/names no unit/.test(w.message)).length > 0 && (
-        <ul className="text-xs text-ink-soft">
+        <ul className="text-xs text-ink-soft" aria-label="Warnings from the file">
           {read.summary.warnings
             .filter((w) => !/names no unit/.test(w.message))
             .map((w, i) => (
-              <li key={i}>
-                {w.line !== undefined && `line ${w.line}: `}
-                {w.message}
+              // a reading against its direction's sign is what a person must look at: it stands out
+              <li key={i} className={/wrong sign/.test(w.message) ? 'font-medium text-signal-ink' : undefined}>
+                {file?.name}
+                {w.line !== undefined && `, line ${w.line}`}: {w.message}
               </li>
             ))}
         </ul>
@@ -156,6 +157,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
               <option value="">as the header says (else m/s)</option>
               <option value="m/s">m/s</option>
               <option value="mm/s">mm/s</option>
+              <option value="in/s">in/s</option>
             </Select>
           </Field>
           <Field label="Force unit">
@@ -163,6 +165,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
               <option value="">as the header says (else N)</option>
               <option value="N">N</option>
               <option value="kN">kN</option>
+              <option value="lbf">lbf</option>
             </Select>
           </Field>
           <Field label="Gas force in the readings [N]" hint={gasForceHint !== undefined ? `the setup's static gas force is ${formatSig(gasForceHint, 3)} N` : 'leave empty when already removed'}>
@@ -173,6 +176,7 @@ export function UploadPanel({ workspaceId, setupId, gasForceHint, onUploaded }: 
               <option value="">as the header says (else m)</option>
               <option value="m">m</option>
               <option value="mm">mm</option>
+              <option value="in">in</option>
             </Select>
           </Field>
           <Field label="Time unit">

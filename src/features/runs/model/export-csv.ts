@@ -1,12 +1,13 @@
-import { writeCsv } from '../../../../shared/csv/write-csv.ts';
+import { csvNumber, FIGURE_DIGITS } from '../../../../shared/csv/csv-number.ts';
+import { commentText, writeCsv } from '../../../../shared/csv/write-csv.ts';
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
 import { betterRules, displayUnitOf, figureRows } from './figure-rows.ts';
-import type { RunView } from './run-view.ts';
+import type { TraceColumns } from '../../../../shared/sim/trace.ts';
 
 /**
- * CSV files of a run. Figures are written in display units with full precision (the page
- * rounds, the file does not); the unit is in its own column so a spreadsheet can read numbers.
+ * CSV files of a run. Figures are written in display units to their meaningful digits
+ * (`FIGURE_DIGITS`); the unit is in its own column so a spreadsheet can read numbers.
  */
 
 export interface NamedResult {
@@ -25,7 +26,7 @@ export function figuresCsv(runs: NamedResult[], chosen?: ChosenUnits): string {
       unit?.symbol ?? '',
       ...runs.map(({ result }) => {
         const v = row.value(result);
-        return v === undefined ? '' : unit ? unit.fromSI(v) : v;
+        return v === undefined ? '' : csvNumber(unit ? unit.fromSI(v) : v, FIGURE_DIGITS);
       }),
       betterRules[row.better],
     ];
@@ -34,33 +35,18 @@ export function figuresCsv(runs: NamedResult[], chosen?: ChosenUnits): string {
 }
 
 /**
- * Time histories in SI, one row per sample. A fresh run exports every sample; a saved run
- * exports what was stored (thinned to bucket extremes for long runs, which the header says).
+ * Time histories in SI, one row per computed sample: evenly spaced at the run's output rate,
+ * which the header states (`# sample rate 1000 Hz …`) so an outside FFT can take it as it is.
+ * `about` names the run (setup, revision, road, speed) on the first `#` line; `notes` follow as `#` lines.
  */
-export function tracesCsv(view: RunView): string {
-  const source = view.full;
+export function tracesCsv(trace: TraceColumns, about: string, notes: readonly string[] = []): string {
+  const rate = csvNumber(1 / trace.dt) ?? 0;
   const header = ['time_s', 'body_accel_m_s2', 'travel_m', 'tyre_load_N', 'damper_velocity_m_s', 'damper_force_N', 'road_m'];
-  const rows: (string | number)[][] = [];
-  if (source) {
-    for (let i = 0; i < source.bodyAccel.length; i++) {
-      rows.push([+(i * source.dt).toFixed(6), source.bodyAccel[i], source.travel[i], source.tyreLoad[i], source.damperVelocity[i], source.damperForce[i], source.road[i]]);
-    }
-  } else {
-    const t = view.traces;
-    for (let i = 0; i < t.time.length; i++) rows.push([t.time[i], t.bodyAccel[i], t.travel[i], t.tyreLoad[i], t.damperVelocity[i], t.damperForce[i], t.road[i]]);
+  const f = (x: number) => csvNumber(x, FIGURE_DIGITS);
+  const rows: (string | number | null)[][] = [];
+  for (let i = 0; i < trace.bodyAccel.length; i++) {
+    rows.push([i * trace.dt, f(trace.bodyAccel[i]), f(trace.travel[i]), f(trace.tyreLoad[i]), f(trace.damperVelocity[i]), f(trace.damperForce[i]), f(trace.road[i])]);
   }
-  const note = source || view.thinned === 'all-samples' ? [] : [['# stored trace: each time bucket keeps its minimum and maximum (extremes exact, times within half a bucket)']];
-  return writeCsv([...note, header, ...rows]);
-}
-
-/** File-name stem from a run's name ("Pipit front r3 – class C 60 km/h" → "pipit-front-r3-class-c-60-km-h"). */
-export function fileStem(name: string): string {
-  const stem = name
-    .normalize('NFKD')
-    .replace(/[^\w\s-]/g, ' ')
-    .trim()
-    .toLowerCase()
-    .replace(/[\s_-]+/g, '-')
-    .slice(0, 80);
-  return stem || 'run';
+  const head = [`# ${commentText(about)}`, `# sample rate ${rate} Hz: every computed sample, evenly spaced ${csvNumber(trace.dt)} s apart`, ...notes.map((n) => `# ${commentText(n)}`)];
+  return `${head.join('\n')}\n${writeCsv([header, ...rows])}\n`;
 }

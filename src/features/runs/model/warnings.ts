@@ -5,7 +5,7 @@ import { formatQuantityText } from '../../../lib/format.ts';
 export const STROKE_WARNING_SHARE = 0.9;
 
 export interface RunWarning {
-  key: 'lift-off' | 'bump-stop' | 'rebound-stop' | 'stroke-compression' | 'stroke-extension';
+  key: 'lift-off' | 'bump-stop' | 'rebound-stop' | 'stroke-compression' | 'stroke-extension' | 'end-of-stroke' | 'beyond-table-compression' | 'beyond-table-rebound';
   text: string;
 }
 
@@ -22,6 +22,30 @@ export function runWarnings(m: Metrics): RunWarning[] {
   }
   if ((m.strokeUsedExtension ?? 0) > STROKE_WARNING_SHARE) {
     out.push({ key: 'stroke-extension', text: `${formatQuantityText(m.strokeUsedExtension ?? 0, 'percent')} of the extension stroke was used.` });
+  }
+  const bottomed = (m.endOfStrokeDepthCompression ?? 0) > 0;
+  const toppedOut = (m.endOfStrokeDepthExtension ?? 0) > 0;
+  if (bottomed || toppedOut) {
+    const ends = [bottomed && 'compression', toppedOut && 'extension'].filter(Boolean).join(' and ');
+    out.push({
+      key: 'end-of-stroke',
+      text:
+        `The suspension reached the end of its stroke in ${ends}: the hard limit took up to ${formatQuantityText(m.endOfStrokeForcePeak ?? 0, 'kN')} ` +
+        `and ${formatQuantityText(m.endOfStrokeEnergyPeak ?? 0, 'J')}. Forces and accelerations here depend on the limit's stiffness, not on the setup.`,
+    });
+  }
+  const beyond = (peak: number | undefined, end: number | undefined) => peak !== undefined && end !== undefined && peak > end;
+  if (beyond(m.damperSpeedPeakCompression, m.damperTableEndCompression)) {
+    out.push({
+      key: 'beyond-table-compression',
+      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakCompression ?? 0, 'mps')} in compression; the table ends at ${formatQuantityText(m.damperTableEndCompression ?? 0, 'mps')}, so forces above it are extrapolated.`,
+    });
+  }
+  if (beyond(m.damperSpeedPeakRebound, m.damperTableEndRebound)) {
+    out.push({
+      key: 'beyond-table-rebound',
+      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakRebound ?? 0, 'mps')} in rebound; the table ends at ${formatQuantityText(m.damperTableEndRebound ?? 0, 'mps')}, so forces above it are extrapolated.`,
+    });
   }
   return out;
 }

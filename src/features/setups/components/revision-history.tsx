@@ -60,6 +60,8 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
   if (revisions.isPending) return <Loading what="revisions" />;
   if (revisions.isError) return <Notice tone="danger">{revisions.error.message}</Notice>;
   const list: RevisionSummary[] = revisions.data.pages.flatMap((page) => page.revisions);
+  // with one revision there is no pair to pick: no A/B columns, and the comparison says so
+  const comparable = latest > 1;
 
   const doRestore = (number: number) =>
     restore.mutate(
@@ -80,13 +82,17 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
         <table className="w-full text-sm" aria-label="Revisions">
           <thead className="border-b border-rule-strong bg-paper-sunk/70 text-left text-xs text-ink-soft">
             <tr>
-              <th scope="col" className="h-7 w-8 px-2 text-center font-semibold" title="First revision of the comparison">
-                A
-              </th>
-              <th scope="col" className="w-8 px-2 text-center font-semibold" title="Second revision of the comparison">
-                B
-              </th>
-              <th scope="col" className="px-2 font-semibold">
+              {comparable && (
+                <>
+                  <th scope="col" className="h-7 w-8 px-2 text-center font-semibold" title="First revision of the comparison">
+                    A
+                  </th>
+                  <th scope="col" className="w-8 px-2 text-center font-semibold" title="Second revision of the comparison">
+                    B
+                  </th>
+                </>
+              )}
+              <th scope="col" className="h-7 px-2 font-semibold">
                 Rev.
               </th>
               <th scope="col" className="px-2 font-semibold">
@@ -103,12 +109,16 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
           <tbody>
             {list.map((r) => (
               <tr key={r.id} id={revisionAnchor(r.number)} className="scroll-mt-16 border-b border-rule/60 align-top last:border-0 target:bg-accent-wash" aria-label={`Revision ${r.number}`}>
-                <td className="px-2 py-1.5 text-center">
-                  <input type="radio" name="compare-a" aria-label={`Compare from revision ${r.number}`} checked={pair.a === r.number} onChange={() => setPair((p) => ({ ...p, a: r.number }))} className="accent-accent" />
-                </td>
-                <td className="px-2 py-1.5 text-center">
-                  <input type="radio" name="compare-b" aria-label={`Compare to revision ${r.number}`} checked={pair.b === r.number} onChange={() => setPair((p) => ({ ...p, b: r.number }))} className="accent-accent" />
-                </td>
+                {comparable && (
+                  <>
+                    <td className="px-2 py-1.5 text-center">
+                      <input type="radio" name="compare-a" aria-label={`Compare from revision ${r.number}`} checked={pair.a === r.number} onChange={() => setPair((p) => ({ ...p, a: r.number }))} className="accent-accent" />
+                    </td>
+                    <td className="px-2 py-1.5 text-center">
+                      <input type="radio" name="compare-b" aria-label={`Compare to revision ${r.number}`} checked={pair.b === r.number} onChange={() => setPair((p) => ({ ...p, b: r.number }))} className="accent-accent" />
+                    </td>
+                  </>
+                )}
                 <td className="figures px-2 py-1.5 font-semibold whitespace-nowrap">
                   r{r.number}
                   {r.number === latest && <span className="ml-1 font-sans text-2xs font-normal text-accent">latest</span>}
@@ -164,10 +174,10 @@ export function RevisionHistory({ workspaceId, setupId, latest, canWrite, draftD
         )}
       </div>
       <div className="min-w-0">
-        <h3 className="mb-1.5 text-sm font-semibold text-ink">
-          Changes from r{pair.a} to r{pair.b}
-        </h3>
-        {pair.a === pair.b ? (
+        <h3 className="mb-1.5 text-sm font-semibold text-ink">{comparable && pair.a !== pair.b ? `Changes from r${pair.a} to r${pair.b}` : 'Changes between revisions'}</h3>
+        {!comparable ? (
+          <p className="text-sm text-ink-faint">This setup has one revision, so there is nothing to compare yet. Save a change and its differences from r1 show here.</p>
+        ) : pair.a === pair.b ? (
           <p className="text-sm text-ink-faint">Pick two different revisions in columns A and B.</p>
         ) : (
           <Comparison workspaceId={workspaceId} setupId={setupId} a={pair.a} b={pair.b} />

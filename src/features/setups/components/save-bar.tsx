@@ -1,9 +1,8 @@
 import { type ReactNode, useEffect, useId, useMemo, useRef, useState } from 'react';
-import { Setup } from '../../../../shared/schemas/setup.ts';
+import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
-import { describePath } from '../model/setup-diff.ts';
+import { setupProblems } from '../model/setup-problems.ts';
 import type { SetupDraft } from '../model/use-setup-draft.ts';
-import { friendlyError } from './form/field-errors.ts';
 
 export interface SaveBarProps {
   draft: SetupDraft;
@@ -17,16 +16,20 @@ export interface SaveBarProps {
   onSave: (setup: Setup, message: string) => void;
 }
 
-/** Problems of the draft with the field they belong to, for the ones no visible input carries (curve points). */
-function useProblems(values: unknown) {
+/** Problems of the draft in words: table cells that do not read yet first, then the schema's. */
+function useProblems(draft: SetupDraft) {
+  const { values, tableProblems } = draft;
   return useMemo(() => {
-    const parsed = Setup.safeParse(values);
-    if (parsed.success) return [];
-    return parsed.error.issues.map((i) => {
-      const path = i.path.map(String).join('.');
-      return { path, label: describePath(path).label, message: friendlyError(i.message) ?? i.message };
-    });
-  }, [values]);
+    // while a table does not read, the form still holds the last valid curve: its issues would be stale
+    const fromForm = setupProblems(values).filter((p) => !(tableProblems.length > 0 && p.path.startsWith('damper.')));
+    return [...tableProblems, ...fromForm];
+  }, [values, tableProblems]);
+}
+
+function statusText(draft: SetupDraft, problemCount: number): string {
+  if (!draft.hasChanges) return `No changes since revision ${draft.baseRevision}`;
+  if (problemCount === 0) return `Unsaved changes to revision ${draft.baseRevision}`;
+  return `Unsaved changes to revision ${draft.baseRevision}, ${problemCount === 1 ? 'one of them invalid' : `${problemCount} values invalid`}`;
 }
 
 /**
@@ -36,8 +39,8 @@ function useProblems(values: unknown) {
 export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '', onSave }: SaveBarProps) {
   const id = useId();
   const [message, setMessage] = useState(initialMessage);
-  const problems = useProblems(draft.values);
-  const canSave = draft.isDirty && problems.length === 0 && message.trim().length > 0 && !saving;
+  const problems = useProblems(draft);
+  const canSave = draft.hasChanges && problems.length === 0 && message.trim().length > 0 && !saving;
 
   // The message is cleared once a save has made a new revision; a refused save keeps it for another try.
   const savedFrom = useRef(draft.baseRevision);
@@ -57,19 +60,19 @@ export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '',
         e.preventDefault();
         if (canSave) void submit();
       }}
-      className={`rounded border px-3 py-2 ${draft.isDirty ? 'border-accent/50 bg-accent-wash/50' : 'border-rule bg-paper-raised'}`}
+      className={`rounded border px-3 py-2 ${problems.length > 0 ? 'border-danger/60 bg-danger-wash/40' : draft.hasChanges ? 'border-accent/50 bg-accent-wash/50' : 'border-rule bg-paper-raised'}`}
     >
       <div className="mb-1.5 flex items-baseline justify-between gap-2 text-xs">
-        <span className={draft.isDirty ? 'font-semibold text-accent-strong' : 'text-ink-faint'}>
-          {draft.isDirty ? `Unsaved changes to revision ${draft.baseRevision}` : `No changes since revision ${draft.baseRevision}`}
+        <span data-testid="save-status" className={problems.length > 0 ? 'font-semibold text-danger' : draft.hasChanges ? 'font-semibold text-accent-strong' : 'text-ink-faint'}>
+          {statusText(draft, problems.length)}
         </span>
-        {draft.isDirty && (
-          <button type="button" className="text-ink-soft underline-offset-2 hover:text-danger hover:underline" onClick={() => draft.form.reset()}>
+        {draft.hasChanges && (
+          <button type="button" className="shrink-0 text-ink-soft underline-offset-2 hover:text-danger hover:underline" onClick={draft.discard}>
             Discard changes
           </button>
         )}
       </div>
-      <div className="flex gap-2">
+      <div className="flex flex-wrap gap-2">
         <label htmlFor={id} className="sr-only">
           What changed
         </label>
@@ -80,24 +83,23 @@ export function SaveBar({ draft, nextNumber, saving, error, initialMessage = '',
           onChange={(e) => setMessage(e.target.value)}
           title={message || undefined}
           placeholder="What changed, in a few words"
-          disabled={!draft.isDirty}
-          className="h-8 min-w-0 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
+          disabled={!draft.hasChanges}
+          className="h-8 min-w-48 flex-1 rounded-sm border border-rule-strong bg-paper-raised px-2 text-sm disabled:bg-paper-sunk"
         />
-        <Button type="submit" variant="primary" size="sm" className="h-8" disabled={!canSave} busy={saving}>
-          Save as revision {nextNumber}
+        <Button type="submit" variant="primary" size="sm" className="ml-auto h-8" disabled={!canSave} busy={saving}>
+          Save my edits as revision {nextNumber}
         </Button>
       </div>
       {problems.length > 0 && (
         <div role="alert" className="mt-2 text-xs text-danger">
           <p className="font-semibold">
-            {problems.length === 1 ? 'One value needs attention' : `${problems.length} values need attention`} before this can be saved:
+            {problems.length === 1 ? 'One value is wrong' : `${problems.length} values are wrong`}; fix {problems.length === 1 ? 'it' : 'them'} to save:
           </p>
-          <ul className="mt-0.5 list-inside list-disc">
+          <ul className="mt-0.5 list-inside list-disc" aria-label="Values to fix">
             {problems.slice(0, 6).map((p) => (
-              <li key={`${p.path}-${p.message}`}>
-                {p.label}: {p.message}
-              </li>
+              <li key={`${p.path}-${p.message}`}>{p.message}</li>
             ))}
+            {problems.length > 6 && <li>and {problems.length - 6} more, marked beside their fields</li>}
           </ul>
         </div>
       )}

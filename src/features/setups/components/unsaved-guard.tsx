@@ -1,12 +1,14 @@
-import { useEffect } from 'react';
+import { useEffect, useId } from 'react';
 import { useBlocker } from 'react-router';
 import { Button } from '../../../components/ui/button.tsx';
 
 /**
- * Warns before unsaved changes are lost: leaving for another page of the app asks in a bar at
- * the foot of the page; closing or reloading the tab gets the browser's own question.
+ * Warns before edits are lost, valid or not: leaving for another page of the app opens our own
+ * question over the page (React Router's blocker holds the navigation until it is answered);
+ * closing or reloading the tab gets the browser's own question (`beforeunload`).
  */
-export function UnsavedGuard({ when }: { when: boolean }) {
+export function UnsavedGuard({ when, invalid = false }: { when: boolean; invalid?: boolean }) {
+  const titleId = useId();
   const blocker = useBlocker(({ currentLocation, nextLocation }) => when && currentLocation.pathname !== nextLocation.pathname);
 
   useEffect(() => {
@@ -23,17 +25,31 @@ export function UnsavedGuard({ when }: { when: boolean }) {
     if (blocker.state === 'blocked' && !when) blocker.reset();
   }, [blocker, when]);
 
+  useEffect(() => {
+    if (blocker.state !== 'blocked') return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === 'Escape') blocker.reset();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [blocker]);
+
   if (blocker.state !== 'blocked') return null;
   return (
-    <div role="alertdialog" aria-label="Unsaved changes" className="fixed inset-x-0 bottom-0 z-40 border-t-2 border-signal bg-signal-wash px-6 py-3 shadow-lift">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3">
-        <p className="text-sm text-signal-ink">This setup has changes that are not saved as a revision. Leave and lose them?</p>
-        <div className="flex gap-2">
-          <Button size="sm" onClick={() => blocker.reset()} autoFocus>
+    <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/30 px-4">
+      <div role="alertdialog" aria-modal="true" aria-labelledby={titleId} className="w-full max-w-md rounded border-t-4 border-signal bg-paper-raised p-5 shadow-lift">
+        <h2 id={titleId} className="text-base font-semibold text-ink">
+          Leave without saving?
+        </h2>
+        <p className="mt-2 text-sm text-ink-soft">
+          This setup has edits that are not saved as a revision{invalid ? ', some of them not valid yet' : ''}. Leaving this page throws them away.
+        </p>
+        <div className="mt-4 flex flex-wrap justify-end gap-2">
+          <Button size="sm" variant="primary" onClick={() => blocker.reset()} autoFocus>
             Stay and keep editing
           </Button>
           <Button size="sm" variant="danger" onClick={() => blocker.proceed()}>
-            Leave without saving
+            Leave and lose the edits
           </Button>
         </div>
       </div>

@@ -19,7 +19,11 @@ describe('checkSetupText', () => {
   it('names the place of each problem inside the file', () => {
     const out = checkSetupText(JSON.stringify({ ...good, sprungMass: -1, damper: { ...good.damper, rebound: [[0.1, 860], [0.05, 900]] } }));
     expect(out.ok).toBe(false);
-    if (!out.ok) expect(out.issues.map((i) => i.path)).toEqual(expect.arrayContaining(['sprungMass', 'damper.rebound.1.0']));
+    if (!out.ok) {
+      expect(out.issues.map((i) => i.path)).toEqual(expect.arrayContaining(['sprungMass', 'damper.rebound.1.0']));
+      // in words, with the unit, as the form says it
+      expect(out.issues.map((i) => i.message)).toContain('Sprung mass must be above 0 kg');
+    }
   });
 
   it('says when the file is not JSON at all', () => {

@@ -1,5 +1,6 @@
 import type { FieldIssue } from '../../../../shared/errors.ts';
 import { Setup } from '../../../../shared/schemas/setup.ts';
+import { setupIssueMessage } from './setup-problems.ts';
 
 export type SetupFileOutcome = { ok: true; json: unknown; setup: Setup } | { ok: false; message: string; issues: FieldIssue[] };
 
@@ -22,7 +23,7 @@ export function checkSetupText(text: string): SetupFileOutcome {
     return {
       ok: false,
       message: 'This file is not a valid setup.',
-      issues: parsed.error.issues.map((i) => ({ path: i.path.map(String).join('.') || '(file)', message: i.message })),
+      issues: parsed.error.issues.map((i) => ({ path: i.path.map(String).join('.') || '(file)', message: setupIssueMessage(i, json) })),
     };
   }
   return { ok: true, json, setup: parsed.data };

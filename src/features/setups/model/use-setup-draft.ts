@@ -1,10 +1,25 @@
-import { zodResolver } from '@hookform/resolvers/zod';
+import { toNestErrors } from '@hookform/resolvers';
 import { useCallback, useEffect, useMemo, useState } from 'react';
-import { useForm, useWatch, type UseFormReturn } from 'react-hook-form';
+import { type FieldError, type Resolver, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import type { SetupRevision } from '../../../../shared/schemas/setup-record.ts';
 import { type Damper, Setup, type SetupInput } from '../../../../shared/schemas/setup.ts';
 
+import type { Problem } from '../../../lib/plain-issue.ts';
+import { setupIssueMessage } from './setup-problems.ts';
+
 export type SetupForm = UseFormReturn<SetupInput, unknown, Setup>;
+
+/** Validates the form with the shared schema, every message in page words (one per field). */
+const setupResolver: Resolver<SetupInput, unknown, Setup> = (values, _context, options) => {
+  const parsed = Setup.safeParse(values);
+  if (parsed.success) return { values: parsed.data, errors: {} };
+  const errors: Record<string, FieldError> = {};
+  for (const issue of parsed.error.issues) {
+    const path = issue.path.map(String).join('.');
+    errors[path] ??= { type: issue.code, message: setupIssueMessage(issue, values) };
+  }
+  return { values: {}, errors: toNestErrors(errors, options) };
+};
 
 /** The bench's working copy of a setup: the form, its current values, and the parsed setup when valid. */
 export interface SetupDraft {
@@ -13,7 +28,18 @@ export interface SetupDraft {
   values: SetupInput;
   /** The draft parsed with the shared schema; null while any field is wrong. */
   valid: Setup | null;
+  /** The form differs from its revision (valid or not). */
   isDirty: boolean;
+  /** Edits that are not in the form yet because they do not read (damper table cells), in words. */
+  tableProblems: Problem[];
+  /** Anything typed since the revision: form changes or table edits that do not read yet. */
+  hasChanges: boolean;
+  /** Bumped on every reset, so editors holding their own text (the damper tables) start over. */
+  generation: number;
+  /** For the damper tables: what in them does not read yet (empty once they do). */
+  setTableProblems: (problems: Problem[]) => void;
+  /** Throws away every edit, table text included. */
+  discard: () => void;
   /** The revision the draft was started from (sent as `basedOn` when saving). */
   baseRevision: number;
   /** For the damper curve editor: replaces the damper and marks the form changed. */
@@ -42,8 +68,14 @@ function withAllKeys(document: SetupInput): SetupInput {
  * page shows numbers in engineers' units but the form holds SI, converted by each input.
  */
 export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document'>): SetupDraft {
-  const form = useForm<SetupInput, unknown, Setup>({ resolver: zodResolver(Setup), defaultValues: withAllKeys(revision.document), mode: 'onChange' });
+  const form = useForm<SetupInput, unknown, Setup>({ resolver: setupResolver, defaultValues: withAllKeys(revision.document), mode: 'onChange' });
   const [baseRevision, setBaseRevision] = useState(revision.number);
+  const [tableProblems, setTableProblemsState] = useState<Problem[]>([]);
+  const [generation, setGeneration] = useState(0);
+  // compared by content: the tables report on every render of theirs
+  const setTableProblems = useCallback((next: Problem[]) => {
+    setTableProblemsState((prev) => (JSON.stringify(prev) === JSON.stringify(next) ? prev : next));
+  }, []);
   const watched = useWatch({ control: form.control }) as SetupInput;
   const { isDirty } = form.formState;
 
@@ -51,15 +83,23 @@ export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document
     (r: Pick<SetupRevision, 'number' | 'document'>) => {
       form.reset(withAllKeys(r.document));
       setBaseRevision(r.number);
+      setTableProblemsState([]);
+      setGeneration((g) => g + 1);
     },
     [form],
   );
 
+  const discard = useCallback(() => {
+    form.reset();
+    setTableProblemsState([]);
+    setGeneration((g) => g + 1);
+  }, [form]);
+
   // A newer revision saved elsewhere replaces a clean draft; a draft with edits stays, and its
   // save is refused by the server (basedOn) rather than overwriting what was saved meanwhile.
   useEffect(() => {
-    if (revision.number !== baseRevision && !form.formState.isDirty) resetTo(revision);
-  }, [revision, baseRevision, form, resetTo]);
+    if (revision.number !== baseRevision && !form.formState.isDirty && tableProblems.length === 0) resetTo(revision);
+  }, [revision, baseRevision, form, resetTo, tableProblems.length]);
 
   const values = watched ?? revision.document;
   const valid = useMemo(() => {
@@ -84,5 +124,6 @@ export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document
     [form],
   );
 
-  return { form, values, valid, isDirty, baseRevision, setDamper, resetTo, load };
+  const hasChanges = isDirty || tableProblems.length > 0;
+  return { form, values, valid, isDirty, tableProblems, hasChanges, generation, setTableProblems, discard, baseRevision, setDamper, resetTo, load };
 }

@@ -28,5 +28,5 @@ export function FigureLinesChart({ view, figure, along, holdAt, roadNames }: { v
     };
   }, [theme, figure, parameter, labels]);
   const data = useMemo<uPlot.AlignedData>(() => [lines.x, ...lines.lines.map((l) => l.y)], [lines]);
-  return <UChart options={options} data={data} exportName={`${view.definition.name} – ${studyFigureInfo[figure].label}`} label={`${studyFigureInfo[figure].label} against ${studyParameterInfo[parameter].label}`} />;
+  return <UChart options={options} data={data} exportName={studyFigureInfo[figure].label} label={`${studyFigureInfo[figure].label} against ${studyParameterInfo[parameter].label}`} />;
 }

@@ -3,10 +3,12 @@ import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { readChartTheme } from '../../../components/charts/chart-theme.ts';
 import { formatSig } from '../../../lib/format.ts';
 import { heatGrid } from '../model/chart-data.ts';
-import { figureLabel, parameterLabel } from '../model/display.ts';
+import { figureLabel, figureSymbol, parameterLabel } from '../model/display.ts';
 import { positionOf, type StudyView } from '../model/study-view.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
-import { downloadBlob } from '../../../lib/download.ts';
+import { useChartExport } from '../../../components/charts/export-context.tsx';
+import { saveImage } from '../../../components/charts/export-png.ts';
+import { exportFileName } from '../../../lib/export-name.ts';
 
 /** Sequential ramp, light (low) to deep (high): sand, teal, ink-blue. Our own stops, read in order by lightness. */
 const RAMP: [number, number, number][] = [
@@ -47,6 +49,7 @@ export function HeatMap({ view, figure, baselineIndex, selected, onSelect }: Hea
   const height = 360;
   const bestIndex = view.compromise?.ok ? view.points[view.compromise.winner]?.index : undefined;
   const [a, b] = view.definition.axes;
+  const about = useChartExport();
 
   useEffect(() => {
     const host = hostRef.current;
@@ -149,7 +152,11 @@ export function HeatMap({ view, figure, baselineIndex, selected, onSelect }: Hea
     ctx.textAlign = 'left';
     ctx.fillText(formatSig(grid.max, 3), kx + 18, PAD.top + 6);
     ctx.fillText(formatSig(grid.min, 3), kx + 18, PAD.top + ph - 6);
-  }, [grid, width, a, b, baselineIndex, bestIndex, selected]);
+    // the key's unit, between its ends, so a saved image reads on its own
+    ctx.fillStyle = theme.ink;
+    ctx.font = `11px ${theme.sansFont}`;
+    ctx.fillText(figureSymbol(figure) || 'ratio', kx + 18, PAD.top + ph / 2);
+  }, [grid, width, a, b, baselineIndex, bestIndex, selected, figure]);
 
   if (!grid || !b) return null;
   const click = (e: React.MouseEvent<HTMLCanvasElement>) => {
@@ -159,10 +166,21 @@ export function HeatMap({ view, figure, baselineIndex, selected, onSelect }: Hea
     const j = grid.ys.length - 1 - jFromTop;
     if (i >= 0 && i < grid.xs.length && j >= 0 && j < grid.ys.length && positionOf(view, grid.index[i][j]) >= 0) onSelect(grid.index[i][j]);
   };
-  const save = () =>
-    canvasRef.current?.toBlob((blob) => {
-      if (blob) downloadBlob(blob, `${view.definition.name} – ${studyFigureInfo[figure].label}.png`);
-    }, 'image/png');
+  const save = () => {
+    const canvas = canvasRef.current;
+    if (!canvas) return;
+    const theme = readChartTheme();
+    saveImage(canvas, exportFileName(about?.stem ?? '', `map ${studyFigureInfo[figure].label}`, 'png'), {
+      title: `${view.definition.name}: ${figureLabel(figure)} over ${parameterLabel(a.parameter, false)} and ${parameterLabel(b.parameter, false)}`,
+      context: about?.context,
+      legend: [
+        { label: `Colour: ${figureLabel(figure)}, light lowest, deep highest`, color: rampColour(0.7) },
+        { label: 'Best compromise', color: theme.comfort },
+        { label: 'Baseline', color: theme.grip },
+        { label: 'Hatched: breaks a limit', color: theme.signal },
+      ],
+    });
+  };
 
   return (
     <div ref={hostRef} className="relative">

@@ -1,3 +1,6 @@
+import { ChartExportProvider } from '../../../components/charts/export-context.tsx';
+import { exportFileName } from '../../../lib/export-name.ts';
+import { studyExportInfo } from '../model/export-info.ts';
 import { type ReactNode, useMemo, useState } from 'react';
 import { studyFigureKeys, type StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
@@ -27,6 +30,8 @@ export interface StudyResultsProps {
    * the table wait for the end, so the page's own thread stays light while the workers run.
    */
   running?: boolean;
+  /** The base setup and revision, named in exported files and images (a shared study hides it). */
+  base?: { setupName: string; revisionNumber: number };
 }
 
 /**
@@ -34,8 +39,9 @@ export interface StudyResultsProps {
  * best compromise beside it, the 2-D map of any figure, a figure along one parameter, and the
  * table of all points. Picking a point anywhere highlights it everywhere.
  */
-export function StudyResults({ view, roadNames, baselineIndex, pointActions, running = false }: StudyResultsProps) {
+export function StudyResults({ view, roadNames, baselineIndex, pointActions, running = false, base }: StudyResultsProps) {
   const def = view.definition;
+  const about = studyExportInfo(def.name, roadNames, def.speeds, base);
   const [selected, setSelected] = useState<number | null>(null);
   const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
   const [mapFigure, setMapFigure] = useState<StudyFigureKey>(def.objectives[0]?.figure ?? def.comfortFigure);
@@ -46,6 +52,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
   const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
 
   return (
+    <ChartExportProvider value={about}>
     <div className="space-y-6">
       <div className="grid gap-4 xl:grid-cols-[minmax(0,2fr)_minmax(20rem,1fr)]">
         <section aria-label="Comfort against grip" className="rounded border border-rule bg-paper-raised p-3">
@@ -135,7 +142,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
           <Section
             title="All points"
             actions={
-              <Button size="sm" onClick={() => downloadText(pointsCsv(view), `${def.name.replace(/[^\w.-]+/g, '-')}-points.csv`)}>
+              <Button size="sm" onClick={() => downloadText(pointsCsv(view), exportFileName(about.stem, 'points', 'csv'))}>
                 Export CSV
               </Button>
             }
@@ -145,5 +152,6 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
         </>
       )}
     </div>
+    </ChartExportProvider>
   );
 }

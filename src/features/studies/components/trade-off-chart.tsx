@@ -105,7 +105,7 @@ export function TradeOffChart({ view, baselineIndex, selected, onSelect, describ
 
   return (
     <div>
-      <UChart options={withSelection} data={data} exportName={`${view.definition.name} – comfort against grip`} label="Comfort against grip, with the trade-off front" />
+      <UChart options={withSelection} data={data} exportName="comfort against grip" label="Comfort against grip, with the trade-off front" />
       <p className="mt-1 min-h-5 text-xs text-ink-soft" aria-live="polite">
         {hover !== null ? `${describe(hover)} — click to pick it` : 'Lower is better on both axes: the front is where more comfort costs grip. Hover a point to name it; click to pick it.'}
       </p>

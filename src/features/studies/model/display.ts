@@ -44,9 +44,12 @@ export const parameterUnit: Record<StudyParameter, UnitName> = {
   speed: 'mps',
 };
 
+/** The display unit symbol of a figure ('' for a plain ratio). */
+export const figureSymbol = (key: StudyFigureKey): string => units[figureUnit[key]].symbol;
+
 /** "Wk-weighted body acceleration" → with its unit symbol in brackets when it has one. */
 export function figureLabel(key: StudyFigureKey, withUnit = true): string {
-  const symbol = units[figureUnit[key]].symbol;
+  const symbol = figureSymbol(key);
   const label = studyFigureInfo[key].label;
   return withUnit && symbol ? `${label} [${symbol}]` : label;
 }

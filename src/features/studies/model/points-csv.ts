@@ -1,3 +1,4 @@
+import { csvNumber, FIGURE_DIGITS } from '../../../../shared/csv/csv-number.ts';
 import { writeCsv } from '../../../../shared/csv/write-csv.ts';
 import { studyFigureKeys } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
@@ -24,10 +25,10 @@ export function pointsCsv(view: StudyView): string {
     ...def.axes.map((a) => (p.values[a.parameter] === undefined ? '' : parameterToDisplay(a.parameter, p.values[a.parameter]!))),
     p.feasible ? 'yes' : 'no',
     p.violations.map((v) => v.message).join('; '),
-    pos !== null && scores?.[pos] != null ? scores[pos] : '',
+    pos !== null && scores?.[pos] != null ? csvNumber(scores[pos], FIGURE_DIGITS) : '',
     front.has(p.index) && p.index >= 0 ? 'yes' : '',
     p.index === best ? 'yes' : '',
-    ...present.map((k) => (p.figures[k] === undefined ? '' : figureToDisplay(k, p.figures[k]!))),
+    ...present.map((k) => (p.figures[k] === undefined ? '' : csvNumber(figureToDisplay(k, p.figures[k]!), FIGURE_DIGITS))),
   ];
   const rows = [...(view.base ? [row(view.base, null)] : []), ...view.points.map((p, pos) => row(p, pos))];
   return `${writeCsv([header, ...rows])}\n`;

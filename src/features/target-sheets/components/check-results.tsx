@@ -113,8 +113,8 @@ export function CheckResults({ check, workspaceId }: { check: ConformityRecordDe
         </details>
       ))}
       {check.measured.some((m) => m.warnings.length > 0) && (
-        <ul className="text-xs text-ink-faint">
-          {check.measured.flatMap((m) => m.warnings.map((w, i) => <li key={`${m.label}-${i}`}>{`${m.label}: ${w}`}</li>))}
+        <ul className="text-xs text-signal-ink" aria-label="Warnings from the files">
+          {check.measured.flatMap((m) => m.warnings.map((w, i) => <li key={`${m.label}-${i}`}>{`${m.label} (${m.fileName}), ${w}`}</li>))}
         </ul>
       )}
       <p className="text-xs text-ink-faint">{report.method}</p>

@@ -1,9 +1,9 @@
 import { useId, useRef, useState } from 'react';
 import { DYNO_CHECK_MAX_FILES } from '../../../../shared/schemas/target-sheet.ts';
 import { Button } from '../../../components/ui/button.tsx';
-import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
+import { FormError, Input, Select } from '../../../components/ui/field.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
-import { useUploadCheck } from '../api/upload-check.ts';
+import { type FileReading, useUploadCheck } from '../api/upload-check.ts';
 
 const stem = (name: string) => name.replace(/\.[A-Za-z0-9]{1,5}$/, '');
 
@@ -16,14 +16,14 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
   const upload = useUploadCheck(workspaceId, sheetId);
   const inputRef = useRef<HTMLInputElement>(null);
   const fileId = useId();
-  const [files, setFiles] = useState<{ file: File; label: string }[]>([]);
+  const [files, setFiles] = useState<({ file: File; label: string } & FileReading)[]>([]);
   const [withGas, setWithGas] = useState(false);
-  const [velocityUnit, setVelocityUnit] = useState<'' | 'm/s' | 'mm/s'>('');
   const [problem, setProblem] = useState<string>();
+  const setFile = (i: number, patch: Partial<FileReading & { label: string }>) => setFiles(files.map((x, j) => (j === i ? { ...x, ...patch } : x)));
 
   const choose = (list: FileList | null) => {
     const chosen = [...(list ?? [])].slice(0, DYNO_CHECK_MAX_FILES);
-    setFiles(chosen.map((file) => ({ file, label: stem(file.name) })));
+    setFiles(chosen.map((file) => ({ file, label: stem(file.name), velocityUnit: '', forceUnit: '', sign: '' })));
     setProblem(list && list.length > DYNO_CHECK_MAX_FILES ? `Only the first ${DYNO_CHECK_MAX_FILES} files are kept.` : undefined);
     upload.reset();
   };
@@ -31,7 +31,7 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
   const send = () => {
     if (files.length === 0) return setProblem('Choose one dyno file per damper.');
     upload.mutate(
-      { files, gasForce: withGas ? gasForce : 0, velocityUnit: velocityUnit || undefined },
+      { files, gasForce: withGas ? gasForce : 0 },
       {
         onSuccess: () => {
           setFiles([]);
@@ -60,12 +60,6 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
             onChange={(e) => choose(e.target.files)}
           />
         </div>
-        <Field label="Speed unit if a header names none" className="w-60">
-          <Select value={velocityUnit} onChange={(e) => setVelocityUnit(e.target.value as typeof velocityUnit)}>
-            <option value="">m/s (SI)</option>
-            <option value="mm/s">mm/s</option>
-          </Select>
-        </Field>
         <label className="flex items-center gap-2 pb-2 text-sm">
           <input type="checkbox" checked={withGas} onChange={(e) => setWithGas(e.target.checked)} />
           Readings include the gas force (take {gasForce} N out)
@@ -73,22 +67,42 @@ export function CheckUpload({ workspaceId, sheetId, gasForce }: { workspaceId: s
       </div>
 
       {files.length > 0 && (
-        <ul className="grid gap-2 sm:grid-cols-2" aria-label="Dampers to check">
-          {files.map((f, i) => (
-            <li key={`${f.file.name}-${i}`} className="flex items-center gap-2">
-              <span className="min-w-0 flex-1 truncate text-sm text-ink-soft" title={f.file.name}>
-                {f.file.name}
-              </span>
-              <Input
-                aria-label={`Damper label for ${f.file.name}`}
-                value={f.label}
-                maxLength={120}
-                className="h-8 w-40 text-sm"
-                onChange={(e) => setFiles(files.map((x, j) => (j === i ? { ...x, label: e.target.value } : x)))}
-              />
-            </li>
-          ))}
-        </ul>
+        <div>
+          <p className="mb-1 text-xs text-ink-faint">Each file is read in its own units and signs; a unit written in a column header wins over the choice here.</p>
+          <div aria-hidden="true" className="mb-1 hidden grid-cols-[minmax(8rem,1fr)_9rem_12rem_12rem_9rem] gap-2 text-xs text-ink-faint md:grid">
+            <span>File</span>
+            <span>Damper label</span>
+            <span>Speed unit</span>
+            <span>Force unit</span>
+            <span>Sign convention</span>
+          </div>
+          <ul className="grid gap-2" aria-label="Dampers to check">
+            {files.map((f, i) => (
+              <li key={`${f.file.name}-${i}`} className="grid grid-cols-2 items-center gap-2 md:grid-cols-[minmax(8rem,1fr)_9rem_12rem_12rem_9rem]">
+                <span className="col-span-2 min-w-0 truncate text-sm text-ink-soft md:col-span-1" title={f.file.name}>
+                  {f.file.name}
+                </span>
+                <Input aria-label={`Damper label for ${f.file.name}`} value={f.label} maxLength={120} className="h-8 text-sm" onChange={(e) => setFile(i, { label: e.target.value })} />
+                <Select aria-label={`Speed unit of ${f.file.name}`} value={f.velocityUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { velocityUnit: e.target.value as FileReading['velocityUnit'] })}>
+                  <option value="">as headed, else m/s</option>
+                  <option value="m/s">m/s</option>
+                  <option value="mm/s">mm/s</option>
+                  <option value="in/s">in/s</option>
+                </Select>
+                <Select aria-label={`Force unit of ${f.file.name}`} value={f.forceUnit} className="h-8 text-sm" onChange={(e) => setFile(i, { forceUnit: e.target.value as FileReading['forceUnit'] })}>
+                  <option value="">as headed, else N</option>
+                  <option value="N">N</option>
+                  <option value="kN">kN</option>
+                  <option value="lbf">lbf</option>
+                </Select>
+                <Select aria-label={`Sign convention of ${f.file.name}`} value={f.sign} className="h-8 text-sm" onChange={(e) => setFile(i, { sign: e.target.value as FileReading['sign'] })}>
+                  <option value="">compression +</option>
+                  <option value="extension-positive">extension +</option>
+                </Select>
+              </li>
+            ))}
+          </ul>
+        </div>
       )}
 
       <div className="flex items-center gap-3">

@@ -5,7 +5,7 @@ import { TargetSheetContent, type TargetPoint } from '../../../../shared/schemas
 import { sheetCautions } from '../../../../shared/target-sheet/cautions.ts';
 import { toleranceBand } from '../../../../shared/target-sheet/band.ts';
 import { Button } from '../../../components/ui/button.tsx';
-import { Field, FormError, Input } from '../../../components/ui/field.tsx';
+import { Field, FormError, Input, Textarea } from '../../../components/ui/field.tsx';
 import { Caution } from '../../../components/ui/notice.tsx';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
@@ -172,7 +172,7 @@ export function TargetTableEditor({ initial, saving, onSave, reopens = false }: 
           <Caution className="mt-2">{sheetCautions.gas}</Caution>
         </div>
         <Field label="Notes for the supplier" error={errors.notes?.message}>
-          <textarea rows={4} className="w-full rounded border border-rule-strong bg-paper-raised px-2.5 py-1.5 text-sm" {...register('notes')} />
+          <Textarea rows={4} {...register('notes')} />
         </Field>
       </div>
       <FormError message={formError} />

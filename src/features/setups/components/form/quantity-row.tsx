@@ -3,7 +3,6 @@ import { useController, type Control, type FieldPath } from 'react-hook-form';
 import type { Setup, SetupInput } from '../../../../../shared/schemas/setup.ts';
 import type { DisplayUnit } from '../../../../lib/format.ts';
 import { editableNumber, parseTyped } from '../../model/setup-units.ts';
-import { friendlyError } from './field-errors.ts';
 
 export interface QuantityRowProps {
   control: Control<SetupInput, unknown, Setup>;
@@ -27,7 +26,7 @@ export function QuantityRow({ control, name, label, unit, optional = false, hint
   const [typing, setTyping] = useState<string | null>(null);
   const si = field.value as unknown;
   const shown = typing ?? (typeof si === 'number' && Number.isFinite(si) ? editableNumber(unit.fromSI(si)) : '');
-  const error = friendlyError(fieldState.error?.message);
+  const error = fieldState.error?.message;
 
   return (
     <div className="grid grid-cols-[minmax(0,1fr)_8.75rem] items-center gap-x-3 border-b border-rule/50 py-[3px] last:border-0">
