@@ -10,6 +10,7 @@ import { findEmailVerificationByTokenHash, insertEmailVerification, markEmailVer
 import type { UserRow } from './users.tables.ts';
 import { bumpSessionVersion, findUserByEmail, findUserById, insertUser, setPasswordHash } from './users.repository.ts';
 import { expireOpenResets } from './password-resets.repository.ts';
+import { unitPreferencesOf } from './unit-preferences.service.ts';
 import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../workspaces/index.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
@@ -184,5 +185,6 @@ export async function loadMe(db: Queryable, userId: string): Promise<Me> {
   return {
     user: { id: row.id, name: row.name, email: row.email, emailVerified: row.email_verified_at !== null },
     memberships: memberships.map((m) => ({ workspaceId: m.workspace_id, workspaceName: m.workspace_name, role: m.role })),
+    units: unitPreferencesOf(row),
   };
 }

@@ -27,3 +27,7 @@ export async function bumpSessionVersion(db: Queryable, id: string): Promise<num
 export async function setPasswordHash(db: Queryable, id: string, passwordHash: string): Promise<void> {
   await db.updateTable('user').set({ password_hash: passwordHash }).where('id', '=', id).execute();
 }
+
+export async function setUnitPreferences(db: Queryable, id: string, json: string): Promise<void> {
+  await db.updateTable('user').set({ unit_preferences: json }).where('id', '=', id).execute();
+}

@@ -12,6 +12,8 @@ export interface UserTable {
   created_at: string;
   /** When the address was proved by a mailed link (or by accepting a mailed invitation); null until then (0010). */
   email_verified_at: string | null;
+  /** Display units as JSON (shared/schemas/unit-preferences.ts); null until the person picks (0015). */
+  unit_preferences: string | null;
 }
 export type UserRow = Selectable<UserTable>;
 export type NewUserRow = Insertable<UserTable>;

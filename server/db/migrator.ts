@@ -13,6 +13,7 @@ import * as m0011 from '../../migrations/0011_dyno_file_loop.ts';
 import * as m0012 from '../../migrations/0012_road_versions.ts';
 import * as m0013 from '../../migrations/0013_stored_sizes.ts';
 import * as m0014 from '../../migrations/0014_one_released_sheet.ts';
+import * as m0015 from '../../migrations/0015_unit_preferences.ts';
 import * as m0017 from '../../migrations/0017_insertion_order.ts';
 import * as m0018 from '../../migrations/0018_api_tokens.ts';
 
@@ -36,6 +37,7 @@ export const migrations: Record<string, Migration> = {
   '0012_road_versions': m0012,
   '0013_stored_sizes': m0013,
   '0014_one_released_sheet': m0014,
+  '0015_unit_preferences': m0015,
   '0017_insertion_order': m0017,
   '0018_api_tokens': m0018,
 };

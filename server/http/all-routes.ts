@@ -15,6 +15,7 @@ import { shareLinkRoutes } from '../sharing/share-links.routes.ts';
 import { sharedRoutes } from '../sharing/public.routes.ts';
 import { studyRoutes } from '../studies/studies.routes.ts';
 import { targetSheetRoutes } from '../target-sheets/target-sheets.routes.ts';
+import { unitPreferenceRoutes } from '../accounts/unit-preferences.routes.ts';
 import { vehicleRoutes } from '../vehicles/vehicles.routes.ts';
 import { workspaceRoutes } from '../workspaces/workspaces.routes.ts';
 
@@ -22,7 +23,7 @@ import { workspaceRoutes } from '../workspaces/workspaces.routes.ts';
  * Every route module of the API. A feature adds its module here (one line); the app mounts
  * whatever is listed, and tests/api/route-matrix.test.ts fails until the new routes have matrix entries.
  */
-export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes, apiTokenRoutes];
+export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes, apiTokenRoutes, unitPreferenceRoutes];
 
 export function allRoutes(deps: AppDeps): RouteDef[] {
   return routeModules.flatMap((m) => m(deps));

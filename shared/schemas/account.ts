@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { Email, GivenPassword, Id, NewPassword, PersonName } from './fields.ts';
+import { DEFAULT_UNIT_PREFERENCES, UnitPreferences } from './unit-preferences.ts';
 import { Membership, WorkspaceName } from './workspace.ts';
 
 /** POST /api/auth/signup — creates the account and a workspace it administers. */
@@ -39,7 +40,12 @@ export const User = z.object({ id: Id, name: z.string(), email: z.string(), emai
 export type User = z.infer<typeof User>;
 
 /** GET /api/auth/me, and the answer to sign-up, sign-in and accepting an invitation. */
-export const Me = z.object({ user: User, memberships: z.array(Membership) });
+export const Me = z.object({
+  user: User,
+  memberships: z.array(Membership),
+  /** Display units; an answer without them (an older server) reads as the defaults. */
+  units: UnitPreferences.default({ ...DEFAULT_UNIT_PREFERENCES }),
+});
 export type Me = z.infer<typeof Me>;
 
 /**

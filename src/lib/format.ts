@@ -88,15 +88,17 @@ export const units = {
 } satisfies Record<string, DisplayUnit>;
 
 export type UnitName = keyof typeof units;
+/** A unit by name, or one chosen by the person (lib/units). */
+export type UnitRef = UnitName | DisplayUnit;
 
 /** An SI value converted to `unit` and rounded: `{ number: "85.0", unit: "mm" }`. */
-export function formatQuantity(si: number, unit: UnitName, digits = 3): { number: string; unit: string } {
-  const u = units[unit];
+export function formatQuantity(si: number, unit: UnitRef, digits = 3): { number: string; unit: string } {
+  const u = typeof unit === 'string' ? units[unit] : unit;
   return { number: formatSig(u.fromSI(si), digits), unit: u.symbol };
 }
 
 /** The same as one string with a thin space before the unit. */
-export function formatQuantityText(si: number, unit: UnitName, digits = 3): string {
+export function formatQuantityText(si: number, unit: UnitRef, digits = 3): string {
   const { number, unit: symbol } = formatQuantity(si, unit, digits);
   return symbol ? `${number}\u2009${symbol}` : number;
 }

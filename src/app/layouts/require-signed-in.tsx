@@ -2,6 +2,7 @@ import { Navigate, Outlet, useLocation } from 'react-router';
 import { Loading } from '../../components/ui/spinner.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
 import { useMe } from '../../features/auth/api/get-me.ts';
+import { UnitsProvider } from '../../lib/units/use-units.tsx';
 
 /** Everything below needs a session; without one, go to sign-in and come back afterwards. */
 export function RequireSignedIn() {
@@ -28,5 +29,9 @@ export function RequireSignedIn() {
     const next = location.pathname + location.search;
     return <Navigate to={next === '/' ? '/signin' : `/signin?next=${encodeURIComponent(next)}`} replace />;
   }
-  return <Outlet />;
+  return (
+    <UnitsProvider prefs={me.data.units}>
+      <Outlet />
+    </UnitsProvider>
+  );
 }

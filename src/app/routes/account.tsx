@@ -6,6 +6,7 @@ import { useMe } from '../../features/auth/api/get-me.ts';
 import { AddressCheckNotice } from '../../features/auth/components/address-check-notice.tsx';
 import { ChangePasswordForm } from '../../features/auth/components/change-password-form.tsx';
 import { ApiTokensSection } from '../../features/api-tokens/components/api-tokens-section.tsx';
+import { UnitPreferencesForm } from '../../features/auth/components/unit-preferences-form.tsx';
 import { PageBody } from '../layouts/app-shell.tsx';
 import { Link } from 'react-router';
 
@@ -33,6 +34,9 @@ export function AccountRoute() {
             ))}
           </ul>
         )}
+      </Section>
+      <Section title="Units">
+        <UnitPreferencesForm units={me.units} />
       </Section>
       <Section title="Password">
         <ChangePasswordForm onChanged={() => toast.show('Password changed. Other browsers have been signed out.')} />

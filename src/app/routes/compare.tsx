@@ -23,10 +23,12 @@ import { formatQuantityText } from '../../lib/format.ts';
 import { roadLabel } from '../../../shared/runs/road-label.ts';
 import { ChartExportProvider, type ChartExportInfo } from '../../components/charts/export-context.tsx';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
+import { useUnits } from '../../lib/units/use-units.tsx';
 
 /** `/w/:workspaceId/compare`: two to four setups (run here on one scenario) or saved runs, side by side. */
 export function CompareRoute() {
   const workspace = useWorkspace();
+  const chosen = useUnits();
   const [params, setParams] = useSearchParams();
   const [entries, setEntries] = useState<CompareEntry[]>(() => entriesFromParams(params));
   const setups = useQuery(setupsQueryOptions(workspace.id));
@@ -90,7 +92,7 @@ export function CompareRoute() {
               <Section
                 title="Figures"
                 actions={
-                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result }))), exportFileName(compareExportInfo(state.runs).stem, 'figures', 'csv'))}>
+                  <Button size="sm" onClick={() => downloadText(figuresCsv(state.runs.map((r) => ({ name: r.label, result: r.view.result })), chosen), exportFileName(compareExportInfo(state.runs).stem, 'figures', 'csv'))}>
                     Figures CSV
                   </Button>
                 }

@@ -1,5 +1,7 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import { listText } from '../../lib/units/unit-table.ts';
+import { useUnits } from '../../lib/units/use-units.tsx';
 import { FreshShareLink, MakeShareLink } from '../../components/ui/share-link.tsx';
 import { Button, buttonClass } from '../../components/ui/button.tsx';
 import { Notice } from '../../components/ui/notice.tsx';
@@ -22,6 +24,7 @@ import { NotFoundRoute } from './not-found.tsx';
  */
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
+  const speedUnit = useUnits().speed;
   const { studyId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
@@ -77,7 +80,7 @@ export function StudyDetailRoute() {
                       'a setup that no longer exists'
                     )}{' '}
                     <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
-                    {s.speeds.length > 0 && <span className="figures"> at {s.speeds.join(', ')} m/s</span>} · <span className="figures">{s.definition.duration}</span> s runs
+                    {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>} · <span className="figures">{s.definition.duration}</span> s runs
                   </p>
                   <p className="mt-1 flex flex-wrap items-center gap-2">
                     <Tag tone={status.tone}>{status.text}</Tag>

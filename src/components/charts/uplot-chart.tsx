@@ -91,8 +91,16 @@ export function UChart({ options, data, className = '', onReady, resetScales = t
     if (chart && chart.data !== data) chart.setData(data, resetScales);
   }, [data, resetScales]);
 
+  // the axis titles are drawn on the canvas; this gives them to screen readers (and to tests)
+  const axisTitles = (options.axes ?? []).flatMap((a) => (typeof a.label === 'string' && a.label ? [a.label] : []));
+
   return (
     <div className={`rw-chart relative ${className}`} role="figure" aria-label={label}>
+      {axisTitles.length > 0 && (
+        <p className="sr-only" data-axis-titles>
+          Axes: {axisTitles.join('; ')}
+        </p>
+      )}
       {exportName && (
         <button
           type="button"

@@ -1,12 +1,12 @@
 import { useEffect, useState } from 'react';
 import { copyText } from '../../lib/copy-text.ts';
-import { formatQuantity, formatSig, type UnitName } from '../../lib/format.ts';
+import { formatQuantity, formatSig, type UnitRef } from '../../lib/format.ts';
 
 export interface FigureProps {
   /** The value in SI; converted to `unit` for display. */
   value: number;
   /** Display unit (see `units` in lib/format). Leave out for a bare number. */
-  unit?: UnitName;
+  unit?: UnitRef;
   /** Significant figures, 3 unless the user asked for more. */
   digits?: number;
   /** What the number is, for screen readers and the copy tooltip ("body RMS acceleration"). */

@@ -9,6 +9,7 @@ export interface BrowserLike {
   csrf: string;
   post(path: string, body?: object): request.Test;
   patch(path: string, body?: object): request.Test;
+  put(path: string, body?: object): request.Test;
   del(path: string): request.Test;
   get(path: string): request.Test;
 }
@@ -32,6 +33,7 @@ export async function browserLike(url: string): Promise<BrowserLike> {
     csrf,
     post: (path, body) => agent.post(path).set(CSRF_HEADER, csrf).send(body ?? {}),
     patch: (path, body) => agent.patch(path).set(CSRF_HEADER, csrf).send(body ?? {}),
+    put: (path, body) => agent.put(path).set(CSRF_HEADER, csrf).send(body ?? {}),
     del: (path) => agent.delete(path).set(CSRF_HEADER, csrf),
     get: (path) => agent.get(path),
   };

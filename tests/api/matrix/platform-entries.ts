@@ -88,6 +88,11 @@ export const platformEntries: MatrixEntries = {
     ok: 204,
     build: (w, caller) => ({ path: '/api/auth/password', body: { currentPassword: callerPassword(w, caller), newPassword: callerPassword(w, caller) } }),
   },
+  'PUT /api/account/units': {
+    access: 'user',
+    ok: 200,
+    build: () => ({ path: '/api/account/units', body: { damperVelocity: 'mm/s', rate: 'N/mm', speed: 'km/h', length: 'mm' } }),
+  },
   'POST /api/auth/reset/request': { access: 'public', ok: 202, build: (w) => ({ path: '/api/auth/reset/request', body: { email: w.spare.email } }) },
   'POST /api/auth/reset/confirm': {
     access: 'public',

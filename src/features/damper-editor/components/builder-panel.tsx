@@ -6,11 +6,15 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';
 import { type DisplayUnit, units } from '../../../lib/format.ts';
 import { plainIssue } from '../../../lib/plain-issue.ts';
+import { siFromShown } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { Direction } from '../model/draft.ts';
 
 type Texts = { lowSpeedSlope: string; kneeVelocity: string; highSpeedSlope: string; shape: DamperShape };
 
 const KNEE_GUESS = 0.1;
+
+const kneeText = (si: number, unit: DisplayUnit) => String(Number(unit.fromSI(si).toPrecision(6)));
 
 /** The builder's fields as their labels say them, for messages. */
 const subjects: Record<string, { label: string; unit?: DisplayUnit }> = {
@@ -20,12 +24,12 @@ const subjects: Record<string, { label: string; unit?: DisplayUnit }> = {
   shape: { label: 'Shape' },
 };
 
-/** Starting values read off the current curve: slopes below and above a 0.1 m/s knee. */
-function guess(curve: DamperCurve): Texts {
+/** Starting values read off the current curve: slopes below and above a 0.1 m/s knee (shown in `unit`). */
+function guess(curve: DamperCurve, unit: DisplayUnit = units.mps): Texts {
   const low = curveForce(curve, KNEE_GUESS) / KNEE_GUESS;
   const high = (curveForce(curve, 0.3) - curveForce(curve, KNEE_GUESS)) / (0.3 - KNEE_GUESS);
   const round = (x: number) => String(Math.max(0, Math.round(x / 10) * 10));
-  return { lowSpeedSlope: round(low), kneeVelocity: String(KNEE_GUESS), highSpeedSlope: round(high), shape: 'digressive' };
+  return { lowSpeedSlope: round(low), kneeVelocity: kneeText(KNEE_GUESS, unit), highSpeedSlope: round(high), shape: 'digressive' };
 }
 
 const shapeHints: Record<DamperShape, string> = {
@@ -40,16 +44,25 @@ const shapeHints: Record<DamperShape, string> = {
  * table with the law sampled at the usual dyno speeds plus the knee.
  */
 export function BuilderPanel({ direction, damper, onFill }: { direction: Direction; damper: Damper; onFill: (curve: DamperCurve) => void }) {
-  const [texts, setTexts] = useState<Texts>(() => guess(damper[direction]));
+  const vu = useUnits().damperVelocity;
+  const [texts, setTexts] = useState<Texts>(() => guess(damper[direction], vu));
+  const [kneeUnit, setKneeUnit] = useState(vu);
+  const kneeSI = (text: string, unit: DisplayUnit) => (text.trim() === '' || !Number.isFinite(Number(text)) ? Number.NaN : siFromShown(unit, Number(text)));
+  if (kneeUnit !== vu) {
+    // another unit chosen: the knee is re-expressed, never reinterpreted
+    const before = kneeSI(texts.kneeVelocity, kneeUnit);
+    setKneeUnit(vu);
+    if (Number.isFinite(before)) setTexts((t) => ({ ...t, kneeVelocity: kneeText(before, vu) }));
+  }
   const parsed = CurveParameters.safeParse({
     lowSpeedSlope: Number(texts.lowSpeedSlope),
-    kneeVelocity: Number(texts.kneeVelocity),
+    kneeVelocity: kneeSI(texts.kneeVelocity, kneeUnit),
     highSpeedSlope: Number(texts.highSpeedSlope),
     shape: texts.shape,
   });
   const errorOf = (key: keyof Texts) => {
     const issue = parsed.success ? undefined : parsed.error.issues.find((i) => i.path[0] === key);
-    return issue && plainIssue(issue, subjects[key]);
+    return issue && plainIssue(issue, key === 'kneeVelocity' ? { ...subjects[key], unit: kneeUnit } : subjects[key]);
   };
   const set = (key: keyof Texts) => (e: { target: { value: string } }) => setTexts((t) => ({ ...t, [key]: e.target.value }));
   const title = direction === 'compression' ? 'Compression' : 'Rebound';
@@ -60,7 +73,7 @@ export function BuilderPanel({ direction, damper, onFill }: { direction: Directi
         <Field label="Low-speed slope [N·s/m]" error={errorOf('lowSpeedSlope')}>
           <Input inputMode="decimal" className="figures text-right" value={texts.lowSpeedSlope} onChange={set('lowSpeedSlope')} />
         </Field>
-        <Field label="Knee velocity [m/s]" error={errorOf('kneeVelocity')}>
+        <Field label={`Knee velocity [${vu.symbol}]`} error={errorOf('kneeVelocity')}>
           <Input inputMode="decimal" className="figures text-right" value={texts.kneeVelocity} onChange={set('kneeVelocity')} />
         </Field>
         <Field label="High-speed slope [N·s/m]" error={errorOf('highSpeedSlope')}>

@@ -4,6 +4,8 @@ import type { Damper } from '../../../../shared/schemas/setup.ts';
 import { linearX } from '../../../components/charts/axes.ts';
 import { seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
+import { formatSig, type DisplayUnit } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { signedCurveData } from '../model/chart-data.ts';
 import type { Direction } from '../model/draft.ts';
 
@@ -28,13 +30,10 @@ interface Handle {
  * down (or focus it and use the arrow keys) to change that point's force. The force is held
  * between its neighbours' so the curve stays valid while it moves.
  */
-/** Velocity ranges offered for the chart: the whole table, or a closer look at low speeds (m/s). */
-export const chartSpans = [
-  { value: 0, label: 'all speeds' },
-  { value: 0.6, label: '±0.6 m/s' },
-  { value: 0.3, label: '±0.3 m/s' },
-  { value: 0.15, label: '±0.15 m/s' },
-] as const;
+/** Velocity ranges offered for the chart (m/s): the whole table, or a closer look at low speeds. */
+export const chartSpans = [0, 0.6, 0.3, 0.15] as const;
+
+export const chartSpanLabel = (span: number, unit: DisplayUnit) => (span === 0 ? 'all speeds' : `±${formatSig(unit.fromSI(span), 3)} ${unit.symbol}`);
 
 export function CurveChart({
   damper,
@@ -53,7 +52,13 @@ export function CurveChart({
   const chartRef = useRef<uPlot | null>(null);
   const [handles, setHandles] = useState<Handle[]>([]);
   const [dragging, setDragging] = useState<{ direction: Direction; row: number } | null>(null);
-  const curve = useMemo(() => signedCurveData(damper), [damper]);
+  const vu = useUnits().damperVelocity;
+  const vuRef = useRef(vu);
+  vuRef.current = vu;
+  const curve = useMemo(() => {
+    const c = signedCurveData(damper);
+    return { ...c, data: [(c.data[0] as number[]).map(vu.fromSI), ...c.data.slice(1)] as uPlot.AlignedData };
+  }, [damper, vu]);
   const curveRef = useRef(curve);
   curveRef.current = curve;
   const damperRef = useRef(damper);
@@ -68,7 +73,7 @@ export function CurveChart({
     for (const direction of ['compression', 'rebound'] as const) {
       const sign = direction === 'compression' ? 1 : -1;
       damperRef.current[direction].forEach(([v, f], row) => {
-        const x = u.valToPos(sign * v, 'x');
+        const x = u.valToPos(vuRef.current.fromSI(sign * v), 'x');
         // points off the shown velocity range get no handle
         if (v === 0 || x < -1 || x > o.width + 1) return;
         next.push({ direction, row, velocity: v, force: f, left: o.left - w.left + x, top: o.top - w.top + u.valToPos(sign * f, 'y') });
@@ -80,17 +85,17 @@ export function CurveChart({
   const options = useMemo<ChartOptions>(
     () => ({
       height: 300,
-      scales: { x: span > 0 ? { ...linearX, range: () => [-span, span] } : linearX },
-      axes: [themedAxis(theme, { label: 'Piston velocity, signed: compression +, rebound −', unit: 'm/s' }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 64 })],
+      scales: { x: span > 0 ? { ...linearX, range: () => [-vu.fromSI(span), vu.fromSI(span)] } : linearX },
+      axes: [themedAxis(theme, { label: 'Piston velocity, signed: compression +, rebound −', unit: vu.symbol }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 64 })],
       series: [
-        { label: 'Velocity', value: (_u, v) => (v == null ? '–' : `${v.toFixed(3)} m/s`) },
+        { label: 'Velocity', value: (_u, v) => (v == null ? '–' : `${formatSig(v, 3)} ${vu.symbol}`) },
         { ...themedSeries({ label: 'Compression', unit: 'N', color: seriesColor(theme, 0), width: 1.5, points: true }), spanGaps: false },
         { ...themedSeries({ label: 'Rebound', unit: 'N', color: seriesColor(theme, 1), width: 1.5, points: true }), spanGaps: false },
       ],
       cursor: { drag: { x: false, y: false }, points: { size: 7 } },
       hooks: { draw: [(u) => placeHandles(u)] },
     }),
-    [theme, placeHandles, span],
+    [theme, placeHandles, span, vu],
   );
 
   const forceAt = (clientY: number): number | undefined => {
@@ -167,7 +172,7 @@ export function CurveChart({
           key={`${h.direction}-${h.row}`}
           type="button"
           disabled={readOnly}
-          aria-label={`${h.direction} point ${h.row + 1}: ${h.velocity} m/s, ${h.force} N${readOnly ? '' : '; drag or use the arrow keys to change the force'}`}
+          aria-label={`${h.direction} point ${h.row + 1}: ${formatSig(vu.fromSI(h.velocity), 4)} ${vu.symbol}, ${h.force} N${readOnly ? '' : '; drag or use the arrow keys to change the force'}`}
           data-handle={`${h.direction}-${h.row}`}
           className={`absolute z-10 -ml-1.5 -mt-1.5 size-3 rounded-full border-2 bg-paper-raised/60 outline-offset-1 ${readOnly ? 'pointer-events-none opacity-0' : 'cursor-ns-resize hover:bg-white'} ${dragging?.direction === h.direction && dragging.row === h.row ? 'ring-2 ring-accent' : ''}`}
           style={{ left: h.left, top: h.top, borderColor: h.direction === 'compression' ? seriesColor(theme, 0) : seriesColor(theme, 1), touchAction: 'none' }}

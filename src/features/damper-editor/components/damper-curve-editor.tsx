@@ -2,10 +2,11 @@ import { useEffect, useMemo, useState } from 'react';
 import { Damper, type DamperCurve } from '../../../../shared/schemas/setup.ts';
 import { Notice } from '../../../components/ui/notice.tsx';
 import type { Problem } from '../../../lib/plain-issue.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { type DraftCurves, type DraftRow, type Direction, directions, draftFromCurve, draftFromDamper, draftMatches, draftProblems, readDraft, cellText } from '../model/draft.ts';
 import { type CornerContext, dampingFigures } from '../model/figures.ts';
 import { BuilderPanel } from './builder-panel.tsx';
-import { chartSpans, CurveChart, type PointMove } from './curve-chart.tsx';
+import { chartSpanLabel, chartSpans, CurveChart, type PointMove } from './curve-chart.tsx';
 import { DampingFiguresPanel } from './damping-figures.tsx';
 import { GasEntry } from './gas-entry.tsx';
 import { PointsTable } from './points-table.tsx';
@@ -32,20 +33,28 @@ export interface DamperCurveEditorProps extends CornerContext {
  * damping ratio, all following the edits live. Controlled: `value` in, `onChange` out.
  */
 export function DamperCurveEditor({ value, onChange, readOnly = false, onProblemsChange, ...corner }: DamperCurveEditorProps) {
-  const [draft, setDraft] = useState<DraftCurves>(() => draftFromDamper(value));
+  const velocityUnit = useUnits().damperVelocity;
+  const [draft, setDraft] = useState<DraftCurves>(() => draftFromDamper(value, velocityUnit));
   const [seededFrom, setSeededFrom] = useState(value);
+  const [seededUnit, setSeededUnit] = useState(velocityUnit);
   const [span, setSpan] = useState(0);
   // A new value from outside (restore, load, builder through the parent) re-seeds the tables,
   // unless it is just our own last change echoed back.
   let shown = draft;
-  if (seededFrom !== value) {
+  if (seededUnit !== velocityUnit) {
+    // another velocity unit chosen: the cells are re-expressed from the damper, never reinterpreted
+    setSeededUnit(velocityUnit);
     setSeededFrom(value);
-    if (!draftMatches(draft, value)) {
-      shown = draftFromDamper(value);
+    shown = draftFromDamper(value, velocityUnit);
+    setDraft(shown);
+  } else if (seededFrom !== value) {
+    setSeededFrom(value);
+    if (!draftMatches(draft, value, velocityUnit)) {
+      shown = draftFromDamper(value, velocityUnit);
       setDraft(shown);
     }
   }
-  const read = useMemo(() => readDraft(shown, value), [shown, value]);
+  const read = useMemo(() => readDraft(shown, value, velocityUnit), [shown, value, velocityUnit]);
   const [gasProblems, setGasProblems] = useState<Problem[]>([]);
   const problems = useMemo(() => [...draftProblems(read), ...gasProblems], [read, gasProblems]);
   useEffect(() => {
@@ -56,7 +65,7 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
   const editRows = (direction: Direction, rows: DraftRow[]) => {
     const next = { ...shown, [direction]: rows };
     setDraft(next);
-    const out = readDraft(next, value);
+    const out = readDraft(next, value, velocityUnit);
     if (out.ok) onChange(out.damper);
   };
 
@@ -71,7 +80,7 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
   const replace = (direction: Direction, curve: DamperCurve) => {
     const parsed = Damper.safeParse({ ...value, [direction]: curve.map(([v, f]) => [Number(v.toPrecision(6)), Math.round(f * 10) / 10]) });
     if (!parsed.success) return;
-    setDraft({ ...shown, [direction]: draftFromCurve(parsed.data[direction]) });
+    setDraft({ ...shown, [direction]: draftFromCurve(parsed.data[direction], velocityUnit) });
     onChange(parsed.data);
   };
 
@@ -86,9 +95,9 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
             </p>
           </div>
           <select aria-label="Velocity range shown" value={span} onChange={(e) => setSpan(Number(e.target.value))} className="h-6 shrink-0 rounded border border-rule bg-paper-raised px-1 text-xs text-ink-soft">
-            {chartSpans.map((o) => (
-              <option key={o.value} value={o.value}>
-                {o.label}
+            {chartSpans.map((value) => (
+              <option key={value} value={value}>
+                {chartSpanLabel(value, velocityUnit)}
               </option>
             ))}
           </select>
@@ -100,7 +109,7 @@ export function DamperCurveEditor({ value, onChange, readOnly = false, onProblem
           rather than whatever width the tables leave. */}
       <div className="grid items-start gap-x-6 gap-y-4 @lg:grid-cols-2">
         {directions.map((d) => (
-          <PointsTable key={d} direction={d} rows={shown[d]} errors={read.errors[d]} readOnly={readOnly} onChange={(rows) => editRows(d, rows)} />
+          <PointsTable key={d} direction={d} velocityUnit={velocityUnit.symbol} rows={shown[d]} errors={read.errors[d]} readOnly={readOnly} onChange={(rows) => editRows(d, rows)} />
         ))}
       </div>
       <DampingFiguresPanel figures={figures} motionRatio={corner.motionRatio} />

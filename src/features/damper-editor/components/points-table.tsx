@@ -5,17 +5,20 @@ const cellClass = (bad: boolean) =>
   `figures h-7 w-20 rounded border bg-paper-raised px-2 text-right text-sm ${bad ? 'border-danger' : 'border-rule-strong'} focus-visible:border-accent disabled:bg-transparent disabled:border-transparent`;
 
 /**
- * One direction's points, cell by cell: piston velocity (m/s) and force (N) at the damper, both
+ * One direction's points, cell by cell: piston velocity (in the chosen unit) and force (N) at the damper, both
  * as magnitudes. A problem shows beside its row; the chart keeps the last valid curve meanwhile.
  */
 export function PointsTable({
   direction,
+  velocityUnit,
   rows,
   errors,
   readOnly,
   onChange,
 }: {
   direction: Direction;
+  /** Symbol of the unit the velocity cells hold. */
+  velocityUnit: string;
   rows: DraftRow[];
   errors: CellErrors[Direction];
   readOnly?: boolean;
@@ -30,7 +33,7 @@ export function PointsTable({
         <thead>
           <tr className="text-xs text-ink-faint">
             <th className="w-6 text-left font-normal">#</th>
-            <th className="px-1 text-right font-normal">Velocity [m/s]</th>
+            <th className="px-1 text-right font-normal">Velocity [{velocityUnit}]</th>
             <th className="px-1 text-right font-normal">Force [N]</th>
             <th className="sr-only">Actions and problems</th>
           </tr>

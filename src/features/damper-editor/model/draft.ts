@@ -1,11 +1,13 @@
 import { Damper, type DamperCurve } from '../../../../shared/schemas/setup.ts';
-import { units } from '../../../lib/format.ts';
+import { type DisplayUnit, units } from '../../../lib/format.ts';
 import { plainIssue, type Problem } from '../../../lib/plain-issue.ts';
+import { siFromShown } from '../../../lib/units/unit-table.ts';
 
 /**
  * What the points tables hold while someone types: text per cell, so "0." or an empty cell can
  * sit there without being thrown away. The damper is emitted only when every cell parses and
- * the whole damper passes the setup schema; until then the cells show what is wrong.
+ * the whole damper passes the setup schema; until then the cells show what is wrong. Velocity
+ * cells hold the person's chosen unit (`unit`, m/s when not given); the damper is always SI.
  */
 
 export type Direction = 'compression' | 'rebound';
@@ -31,12 +33,12 @@ export function cellText(x: number): string {
   return Number(x.toPrecision(6)).toString();
 }
 
-export function draftFromCurve(curve: DamperCurve): DraftRow[] {
-  return curve.map(([v, f]) => ({ key: newKey(), velocity: cellText(v), force: cellText(f) }));
+export function draftFromCurve(curve: DamperCurve, unit: DisplayUnit = units.mps): DraftRow[] {
+  return curve.map(([v, f]) => ({ key: newKey(), velocity: cellText(unit.fromSI(v)), force: cellText(f) }));
 }
 
-export function draftFromDamper(damper: Damper): DraftCurves {
-  return { compression: draftFromCurve(damper.compression), rebound: draftFromCurve(damper.rebound) };
+export function draftFromDamper(damper: Damper, unit: DisplayUnit = units.mps): DraftCurves {
+  return { compression: draftFromCurve(damper.compression, unit), rebound: draftFromCurve(damper.rebound, unit) };
 }
 
 export function emptyRow(after?: DraftRow): DraftRow {
@@ -81,7 +83,7 @@ export function draftProblems(outcome: DraftOutcome): Problem[] {
  * cell: text that is not a number, then the setup schema's own rules (speeds rising, force not
  * falling, nothing at rest).
  */
-export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>): DraftOutcome {
+export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>, unit: DisplayUnit = units.mps): DraftOutcome {
   const errors: CellErrors = { compression: draft.compression.map(() => ({})), rebound: draft.rebound.map(() => ({})) };
   const general: string[] = [];
   const curves = {} as Record<Direction, [number, number][]>;
@@ -96,7 +98,7 @@ export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>): DraftO
       if (v === undefined) errors[d][i].velocity = row.velocity.trim() === '' ? `${speedLabel} is empty: enter a speed in m/s` : `${speedLabel} must be a number in m/s`;
       if (f === undefined) errors[d][i].force = row.force.trim() === '' ? `${forceLabel} is empty: enter a force in N` : `${forceLabel} must be a number in N`;
       if (v === undefined || f === undefined) unreadable = true;
-      return [v ?? 0, f ?? 0];
+      return [v === undefined ? 0 : siFromShown(unit, v), f ?? 0];
     });
   }
   if (unreadable || general.length) return { ok: false, errors, general };
@@ -107,7 +109,7 @@ export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>): DraftO
     if ((d === 'compression' || d === 'rebound') && typeof row === 'number' && errors[d][row]) {
       const key = col === 0 ? 'velocity' : 'force';
       const label = cellLabel(d, row, key, curves[d][row][0]);
-      errors[d][row][key] ??= plainIssue(issue, { label, unit: key === 'velocity' ? units.mps : units.N });
+      errors[d][row][key] ??= plainIssue(issue, { label, unit: key === 'velocity' ? unit : units.N });
     } else {
       const label = d === 'compression' || d === 'rebound' ? `${title[d]} table` : 'Damper';
       general.push(plainIssue(issue, { label }));
@@ -117,8 +119,12 @@ export function readDraft(draft: DraftCurves, base: Pick<Damper, 'gas'>): DraftO
 }
 
 /** True when the draft, read, is exactly `damper` (no re-seeding needed when the parent echoes our value). */
-export function draftMatches(draft: DraftCurves, damper: Damper): boolean {
+export function draftMatches(draft: DraftCurves, damper: Damper, unit: DisplayUnit = units.mps): boolean {
+  const velocityOf = (text: string) => {
+    const v = readCell(text);
+    return v === undefined ? undefined : siFromShown(unit, v);
+  };
   return directions.every(
-    (d) => draft[d].length === damper[d].length && draft[d].every((row, i) => readCell(row.velocity) === damper[d][i][0] && readCell(row.force) === damper[d][i][1]),
+    (d) => draft[d].length === damper[d].length && draft[d].every((row, i) => velocityOf(row.velocity) === damper[d][i][0] && readCell(row.force) === damper[d][i][1]),
   );
 }

@@ -6,6 +6,8 @@ import { curveForce } from '../../../../shared/sim/damper-force.ts';
 import { linearX } from '../../../components/charts/axes.ts';
 import { seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
+import { formatSig } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { mergeColumns } from '../model/chart-columns.ts';
 
 export interface FittedCurves {
@@ -37,8 +39,11 @@ const curveXY = (curve: DamperCurve, sign: 1 | -1, vMax: number) => {
  */
 export function DynoChart({ peaks, loop, fitted }: { peaks: DynoPeakPoints; loop: DynoLoop | null; fitted: FittedCurves }) {
   const theme = useChartTheme();
-  const loopRef = useRef(loop);
-  loopRef.current = loop;
+  const vu = useUnits().damperVelocity;
+  // the loop in the shown velocity unit, as the axis is
+  const shownLoop = useMemo(() => (loop ? { velocity: loop.velocity.map(vu.fromSI), force: loop.force } : null), [loop, vu]);
+  const loopRef = useRef(shownLoop);
+  loopRef.current = shownLoop;
   const vMax = Math.max(0.05, ...peaks.compression.map((p) => p.velocity), ...peaks.rebound.map((p) => p.velocity)) * 1.05;
 
   const options = useMemo<ChartOptions>(() => {
@@ -70,9 +75,9 @@ export function DynoChart({ peaks, loop, fitted }: { peaks: DynoPeakPoints; loop
         x: { ...linearX, range: (_u, min, max) => widen(min, max, loopRef.current?.velocity) },
         y: { range: (_u, min, max) => widen(min, max, loopRef.current?.force) },
       },
-      axes: [themedAxis(theme, { label: 'Piston velocity, signed: compression +, rebound −', unit: 'm/s' }), themedAxis(theme, { label: 'Force', unit: 'N', size: 64 })],
+      axes: [themedAxis(theme, { label: 'Piston velocity, signed: compression +, rebound −', unit: vu.symbol }), themedAxis(theme, { label: 'Force', unit: 'N', size: 64 })],
       series: [
-        { label: 'Velocity', value: (_u, v) => (v == null ? '–' : `${v.toFixed(3)} m/s`) },
+        { label: 'Velocity', value: (_u, v) => (v == null ? '–' : `${formatSig(v, 3)} ${vu.symbol}`) },
         dots('Measured compression', seriesColor(theme, 0)),
         dots('Measured rebound', seriesColor(theme, 1)),
         { ...themedSeries({ label: 'Fitted compression', unit: 'N', color: seriesColor(theme, 0), width: 1.75 }), spanGaps: true },
@@ -81,16 +86,19 @@ export function DynoChart({ peaks, loop, fitted }: { peaks: DynoPeakPoints; loop
       // drawn over the series: the loop mostly hugs the fitted curve and would hide under it
       hooks: { draw: [drawLoop] },
     };
-  }, [theme]);
+  }, [theme, vu]);
 
   const data = useMemo(() => {
     return mergeColumns([
-      { x: peaks.compression.map((p) => p.velocity), y: peaks.compression.map((p) => p.force) },
-      { x: peaks.rebound.map((p) => -p.velocity), y: peaks.rebound.map((p) => -p.force) },
-      fitted.compression ? curveXY(fitted.compression, 1, vMax) : { x: [], y: [] },
-      fitted.rebound ? curveXY(fitted.rebound, -1, vMax) : { x: [], y: [] },
+      { x: peaks.compression.map((p) => vu.fromSI(p.velocity)), y: peaks.compression.map((p) => p.force) },
+      { x: peaks.rebound.map((p) => vu.fromSI(-p.velocity)), y: peaks.rebound.map((p) => -p.force) },
+      fitted.compression ? inUnit(curveXY(fitted.compression, 1, vMax)) : { x: [], y: [] },
+      fitted.rebound ? inUnit(curveXY(fitted.rebound, -1, vMax)) : { x: [], y: [] },
     ]);
-  }, [peaks, fitted, vMax]);
+    function inUnit(c: { x: number[]; y: number[] }) {
+      return { x: c.x.map(vu.fromSI), y: c.y };
+    }
+  }, [peaks, fitted, vMax, vu]);
 
   return <UChart options={options} data={data} label="Dyno force against piston velocity" exportName="dyno-fit" />;
 }

@@ -8,6 +8,7 @@ import { Field, FormError, Input, Select } from '../../../components/ui/field.ts
 import { Notice } from '../../../components/ui/notice.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
 import { useApplyDynoFit } from '../api/apply-dyno-fit.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { knotsText, readKnots, suggestKnots } from '../model/knots.ts';
 import { DynoChart } from './dyno-chart.tsx';
 import { GasInReadings } from './gas-in-readings.tsx';
@@ -37,12 +38,20 @@ export function FitPanel({
 }) {
   const apply = useApplyDynoFit(workspaceId, setupId);
   const peaks = file.summary.peaks;
-  const [knots, setKnots] = useState(() => knotsText(suggestKnots(peaks)));
+  const vu = useUnits().damperVelocity;
+  const [knots, setKnots] = useState(() => knotsText(suggestKnots(peaks), vu));
+  const [knotsUnit, setKnotsUnit] = useState(vu);
+  if (knotsUnit !== vu) {
+    // another unit chosen: the list is re-expressed, never reinterpreted
+    const before = readKnots(knots, knotsUnit);
+    setKnotsUnit(vu);
+    if (before.ok) setKnots(knotsText(before.knots, vu));
+  }
   const [chosen, setChosen] = useState<Record<DynoDirection, boolean>>({ compression: peaks.compression.length > 0, rebound: peaks.rebound.length > 0 });
   const [weighting, setWeighting] = useState<'absolute' | 'relative'>('absolute');
   const [message, setMessage] = useState(`Fitted to ${file.filename}`);
   const [saved, setSaved] = useState<number | null>(null);
-  const parsedKnots = readKnots(knots);
+  const parsedKnots = readKnots(knots, knotsUnit);
   const fit = useMemo(() => (parsedKnots.ok ? fitDamperCurves(peaks, parsedKnots.knots, { weighting }) : null), [peaks, knots, weighting]);
   const fitted = {
     compression: chosen.compression && fit?.compression.ok ? (fit.compression.table as unknown as DamperCurve) : undefined,
@@ -74,7 +83,7 @@ export function FitPanel({
       </p>
       <DynoChart peaks={peaks} loop={file.loop} fitted={fitted} />
       <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_12rem]">
-        <Field label="Fit at these piston speeds [m/s]" error={parsedKnots.ok ? undefined : parsedKnots.message} hint="A table point at each; force never falls with speed.">
+        <Field label={`Fit at these piston speeds [${vu.symbol}]`} error={parsedKnots.ok ? undefined : parsedKnots.message} hint="A table point at each; force never falls with speed.">
           <Input className="figures" value={knots} onChange={(e) => setKnots(e.target.value)} />
         </Field>
         <Field label="Weighting">

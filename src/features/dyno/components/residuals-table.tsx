@@ -1,12 +1,14 @@
 import type { DynoDirectionFit } from '../../../../shared/schemas/dyno.ts';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
 import { formatSig } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 
 /** Round-off left by the solver (1e−13 N) reads as 0, not as a figure. */
 const clean = (x: number, scale: number) => (Math.abs(x) < 1e-9 * Math.max(1, Math.abs(scale)) ? 0 : x);
 
 /** How far each measured point sits from the fitted table, in N and in % of the measured force. */
 export function ResidualsTable({ direction, fit }: { direction: 'compression' | 'rebound'; fit: DynoDirectionFit }) {
+  const vu = useUnits().damperVelocity;
   if (!fit.ok) {
     return (
       <p className="text-sm text-danger" role="alert">
@@ -20,7 +22,7 @@ export function ResidualsTable({ direction, fit }: { direction: 'compression' | 
       <Table caption={`${direction === 'compression' ? 'Compression' : 'Rebound'} residuals`}>
         <THead>
           <tr>
-            <Th numeric>Velocity [m/s]</Th>
+            <Th numeric>Velocity [{vu.symbol}]</Th>
             <Th numeric>Measured [N]</Th>
             <Th numeric>Fitted [N]</Th>
             <Th numeric>Residual [N]</Th>
@@ -30,7 +32,7 @@ export function ResidualsTable({ direction, fit }: { direction: 'compression' | 
         <TBody>
           {fit.residuals.map((r, i) => (
             <Tr key={i}>
-              <Td numeric>{formatSig(r.velocity, 3)}</Td>
+              <Td numeric>{formatSig(vu.fromSI(r.velocity), 3)}</Td>
               <Td numeric>{formatSig(r.measured, 4)}</Td>
               <Td numeric>{formatSig(r.fitted, 4)}</Td>
               <Td numeric>{formatSig(clean(r.residual, r.measured), 3)}</Td>

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { mergeColumns } from './chart-columns.ts';
-import { readKnots, suggestKnots } from './knots.ts';
+import { unitTable } from '../../../lib/units/unit-table.ts';
+import { knotsText, readKnots, suggestKnots } from './knots.ts';
 
 describe('fit speeds', () => {
   test('reads a typed list and refuses falling or non-positive speeds', () => {
@@ -8,6 +9,9 @@ describe('fit speeds', () => {
     expect(readKnots('0.1, 0.05')).toMatchObject({ ok: false, message: expect.stringMatching(/must rise/) });
     expect(readKnots('0, 0.1')).toMatchObject({ ok: false });
     expect(readKnots('')).toMatchObject({ ok: false });
+    // the same list typed in mm/s reads back to the same m/s speeds (1 mm = 0.001 m)
+    expect(readKnots('50, 100, 300, 1000', unitTable.damperVelocity['mm/s'])).toEqual({ ok: true, knots: [0.05, 0.1, 0.3, 1] });
+    expect(knotsText([0.05, 0.1, 0.3, 1], unitTable.damperVelocity['mm/s'])).toBe('50, 100, 300, 1000');
   });
 
   test('suggested speeds stay inside the measured range of both directions', () => {

@@ -1,5 +1,7 @@
 import type { DynoPeakPoints } from '../../../../shared/schemas/dyno.ts';
 import { suggestFitKnots } from '../../../../shared/dyno/fit-curve.ts';
+import { type DisplayUnit, formatSig, units } from '../../../lib/format.ts';
+import { siFromShown } from '../../../lib/units/unit-table.ts';
 
 /**
  * Speeds offered for a first fit, m/s: a coarser spread than most dyno programmes, so the
@@ -8,8 +10,11 @@ import { suggestFitKnots } from '../../../../shared/dyno/fit-curve.ts';
  */
 export const FIT_SPREAD = [0.05, 0.1, 0.2, 0.3, 0.5, 1.0] as const;
 
-/** Fit speeds typed as a list in m/s ("0.05, 0.1, 0.2"): rising, above 0, at most 20. */
-export function readKnots(text: string): { ok: true; knots: number[] } | { ok: false; message: string } {
+/** Fastest fit speed taken, m/s. */
+const MAX_KNOT = 20;
+
+/** Fit speeds typed as a list in `unit` ("0.05, 0.1, 0.2" m/s): rising, above 0, at most 20 m/s; returned in m/s. */
+export function readKnots(text: string, unit: DisplayUnit = units.mps): { ok: true; knots: number[] } | { ok: false; message: string } {
   const parts = text
     .split(/[\s,;]+/)
     .map((p) => p.trim())
@@ -17,9 +22,10 @@ export function readKnots(text: string): { ok: true; knots: number[] } | { ok: f
   if (parts.length === 0) return { ok: false, message: 'give at least one speed' };
   const knots: number[] = [];
   for (const p of parts) {
-    const x = Number(p);
-    if (!Number.isFinite(x) || x <= 0 || x > 20) return { ok: false, message: `'${p}' is not a speed above 0 and at most 20 m/s` };
-    if (knots.length && x <= knots[knots.length - 1]) return { ok: false, message: `speeds must rise (${x} after ${knots[knots.length - 1]})` };
+    const typed = Number(p);
+    const x = Number.isFinite(typed) ? siFromShown(unit, typed) : Number.NaN;
+    if (!Number.isFinite(x) || x <= 0 || x > MAX_KNOT) return { ok: false, message: `'${p}' is not a speed above 0 and at most ${formatSig(unit.fromSI(MAX_KNOT), 3)} ${unit.symbol}` };
+    if (knots.length && x <= knots[knots.length - 1]) return { ok: false, message: `speeds must rise (${p} after ${formatSig(unit.fromSI(knots[knots.length - 1]), 4)})` };
     knots.push(x);
   }
   if (knots.length > 64) return { ok: false, message: 'at most 64 speeds' };
@@ -37,4 +43,4 @@ export function suggestKnots(peaks: DynoPeakPoints): number[] {
   return common.length ? common : both;
 }
 
-export const knotsText = (knots: readonly number[]) => knots.map((k) => Number(k.toPrecision(4)).toString()).join(', ');
+export const knotsText = (knots: readonly number[], unit: DisplayUnit = units.mps) => knots.map((k) => Number(unit.fromSI(k).toPrecision(4)).toString()).join(', ');

@@ -1,13 +1,13 @@
 import type { ReactNode } from 'react';
 import { Figure } from '../../../components/ui/figure.tsx';
-import type { UnitName } from '../../../lib/format.ts';
+import type { UnitRef } from '../../../lib/format.ts';
 
 export interface FigureItem {
   label: ReactNode;
   /** Plain name for screen readers and the copy tooltip. */
   name: string;
   value: number | undefined;
-  unit?: UnitName;
+  unit?: UnitRef;
   digits?: number;
   /** Shown in the signal colour. */
   warn?: boolean;

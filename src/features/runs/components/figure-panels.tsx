@@ -1,6 +1,7 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { formatQuantityText } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { STROKE_WARNING_SHARE } from '../model/warnings.ts';
 import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
 import { ComfortScale } from './comfort-scale.tsx';
@@ -11,6 +12,7 @@ import { StrokeGauge } from './stroke-gauge.tsx';
 
 /** The figures of one run, grouped as the team judges a setup: comfort, grip, package, damper, modes. */
 export function FigurePanels({ result, setup, roadName }: { result: RunResult; setup: Setup; roadName: string }) {
+  const { damperVelocity: vu, length } = useUnits();
   const m = result.metrics;
   const bands = m.damperVelocityBands;
   const analysed = `over ${formatQuantityText(m.analysedTime, 's')} after ${formatQuantityText(result.settleTime, 's')} settling`;
@@ -71,9 +73,9 @@ export function FigurePanels({ result, setup, roadName }: { result: RunResult; s
       <FigurePanel title="Package">
         <FigureList
           items={[
-            { name: 'travelRms', label: 'Travel RMS', value: m.travelRms, unit: 'mm' },
-            { name: 'travelComp', label: 'Deepest compression', value: m.travelMaxCompression, unit: 'mm' },
-            { name: 'travelExt', label: 'Deepest extension', value: m.travelMaxExtension, unit: 'mm' },
+            { name: 'travelRms', label: 'Travel RMS', value: m.travelRms, unit: length },
+            { name: 'travelComp', label: 'Deepest compression', value: m.travelMaxCompression, unit: length },
+            { name: 'travelExt', label: 'Deepest extension', value: m.travelMaxExtension, unit: length },
             { name: 'strokeComp', label: 'Compression stroke used', value: m.strokeUsedCompression, unit: 'percent', warn: (m.strokeUsedCompression ?? 0) > STROKE_WARNING_SHARE },
             { name: 'strokeExt', label: 'Extension stroke used', value: m.strokeUsedExtension, unit: 'percent', warn: (m.strokeUsedExtension ?? 0) > STROKE_WARNING_SHARE },
             { name: 'bumpTime', label: 'On the bump stop', value: m.bumpStopTime, unit: 's', warn: m.bumpStopTime > 0 },
@@ -86,10 +88,10 @@ export function FigurePanels({ result, setup, roadName }: { result: RunResult; s
       <FigurePanel title="Damper">
         <FigureList
           items={[
-            { name: 'velRms', label: 'Piston velocity RMS', value: m.damperVelocityRms, unit: 'mmps' },
-            { name: 'bandLow', label: `Low speed, below ${formatQuantityText(bands.lowEdge, 'mmps')}`, value: bands.low, unit: 'percent' },
+            { name: 'velRms', label: 'Piston velocity RMS', value: m.damperVelocityRms, unit: vu },
+            { name: 'bandLow', label: `Low speed, below ${formatQuantityText(bands.lowEdge, vu)}`, value: bands.low, unit: 'percent' },
             { name: 'bandMid', label: 'Mid speed', value: bands.mid, unit: 'percent' },
-            { name: 'bandHigh', label: `High speed, above ${formatQuantityText(bands.highEdge, 'mmps')}`, value: bands.high, unit: 'percent' },
+            { name: 'bandHigh', label: `High speed, above ${formatQuantityText(bands.highEdge, vu)}`, value: bands.high, unit: 'percent' },
             { name: 'compShare', label: 'Moving in compression', value: bands.compression, unit: 'percent' },
             { name: 'power', label: 'Mean power dissipated', value: m.damperPowerMean, unit: 'W' },
             { name: 'energy', label: 'Energy dissipated', value: m.damperEnergy, unit: 'J' },

@@ -1,6 +1,6 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
-import { formatQuantityText, type UnitName } from '../../../lib/format.ts';
+import { formatQuantityText, type UnitRef } from '../../../lib/format.ts';
 import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
 import { STROKE_WARNING_SHARE } from '../model/warnings.ts';
 
@@ -8,7 +8,7 @@ interface Cell {
   name: string;
   title: string;
   value: number | undefined;
-  unit?: UnitName;
+  unit?: UnitRef;
   hue?: 'comfort' | 'grip';
   sub?: string;
   warn?: boolean;

@@ -11,6 +11,7 @@ import { type ChartOptions, UChart, useChartTheme } from '../../../components/ch
 import { Figure } from '../../../components/ui/figure.tsx';
 import { Spinner } from '../../../components/ui/spinner.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { simulate } from '../../../lib/simulate-client.ts';
 import { LiveScheduler } from '../model/live-scheduler.ts';
 import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
@@ -81,7 +82,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
         }
         setFailure(null);
         const thinned = thinColumns([outcome.trace.travel], outcome.trace.dt, LIVE_POINTS);
-        setShown({ result: outcome.result, time: thinned.time, travel: thinned.columns[0].map((v) => v * 1000), latencyMs: performance.now() - started, seq: ++seq.current });
+        setShown({ result: outcome.result, time: thinned.time, travel: thinned.columns[0], latencyMs: performance.now() - started, seq: ++seq.current });
       },
     });
     scheduler.current = s;
@@ -100,17 +101,18 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
     // `key` stands for the values: a new object with the same content is no change
   }, [key]);
 
+  const units = useUnits();
   const options = useMemo(
     (): ChartOptions => ({
       height: 130,
       scales: { x: linearX },
-      axes: [themedAxis(theme, { size: 28 }), themedAxis(theme, { label: 'Travel', unit: 'mm', size: 52 })],
-      series: [{ label: 's' }, themedSeries({ label: 'Travel', unit: 'mm', color: theme.ink })],
+      axes: [themedAxis(theme, { size: 28 }), themedAxis(theme, { label: 'Travel', unit: units.length.symbol, size: 52 })],
+      series: [{ label: 's' }, themedSeries({ label: 'Travel', unit: units.length.symbol, color: theme.ink })],
       legend: { show: false },
     }),
-    [theme],
+    [theme, units.length],
   );
-  const data = useMemo((): uPlot.AlignedData => (shown ? [shown.time, shown.travel] : [[], []]), [shown]);
+  const data = useMemo((): uPlot.AlignedData => (shown ? [shown.time, shown.travel.map(units.length.fromSI)] : [[], []]), [shown, units.length]);
 
   const m = shown?.result.metrics;
   const judged = shown ? rideJudgement(shown.result.road.kind, shown.result.metrics) : null;
@@ -127,7 +129,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
         </span>
       </header>
       <p className="mb-2 text-xs text-ink-soft">
-        {formatQuantityText(duration, 's')} on {roadLabel(road, seed)} at {formatQuantityText(speed, 'kmph')}; re-runs as you edit.
+        {formatQuantityText(duration, 's')} on {roadLabel(road, seed)} at {formatQuantityText(speed, units.speed)}; re-runs as you edit.
       </p>
       {failure && (
         <p role="alert" className="mb-2 rounded-sm border border-danger/30 bg-danger-wash px-2 py-1 text-xs text-danger">
@@ -161,7 +163,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
               {m.strokeUsedCompression === undefined ? <span className="text-ink-faint">—</span> : <Figure value={strokeUsed} unit="percent" label="stroke used" />}
             </LiveFigure>
             <LiveFigure name="velRms" label="Piston vel. RMS">
-              <Figure value={m.damperVelocityRms} unit="mmps" label="piston velocity RMS" />
+              <Figure value={m.damperVelocityRms} unit={units.damperVelocity} label="piston velocity RMS" />
             </LiveFigure>
             <LiveFigure name="bodyHz" label="Body mode" wide>
               <Figure value={shown.result.modal.body.naturalHz} unit="Hz" label="body frequency" /> <span className="text-xs text-ink-faint">ζ</span> <Figure value={shown.result.modal.body.dampingRatio} label="body damping ratio" />

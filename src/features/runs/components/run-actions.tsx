@@ -7,6 +7,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
 import { useToast } from '../../../components/ui/toast.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { useSaveRun } from '../api/save-run.ts';
 import { downloadText } from '../../../lib/download.ts';
 import { exportFileName, exportStem, type ExportSubject } from '../../../lib/export-name.ts';
@@ -35,6 +36,7 @@ export function runSubject(view: RunView, revision?: number): ExportSubject {
  * again from its stored inputs in a worker, since only thinned traces are stored).
  */
 export function ExportButtons({ view, request, revision }: { view: RunView; request: RunRequestInput; revision?: number }) {
+  const chosen = useUnits();
   const [rate, setRate] = useState<number>(() => (view.full ? Math.round(1 / view.full.dt) : view.result.outputRate));
   const [busy, setBusy] = useState(false);
   const toast = useToast();
@@ -55,7 +57,7 @@ export function ExportButtons({ view, request, revision }: { view: RunView; requ
 
   return (
     <>
-      <Button size="sm" onClick={() => downloadText(figuresCsv([{ name: about, result: view.result }]), exportFileName(stem, 'figures', 'csv'))}>
+      <Button size="sm" onClick={() => downloadText(figuresCsv([{ name: about, result: view.result }], chosen), exportFileName(stem, 'figures', 'csv'))}>
         Figures CSV
       </Button>
       <span className="inline-flex items-center gap-1">

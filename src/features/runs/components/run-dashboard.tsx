@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { useChartTheme } from '../../../components/charts/uplot-chart.tsx';
 import { roadLabel } from '../../../../shared/runs/road-label.ts';
 import { ResultsCaution } from '../../../components/ui/results-caution.tsx';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { RunView } from '../model/run-view.ts';
 import { ChartCard } from './charts/chart-card.tsx';
 import { DamperOperatingChart } from './charts/damper-operating-chart.tsx';
@@ -16,6 +17,7 @@ import { RunWarnings } from './run-warnings.tsx';
 /** Everything one run shows: warnings, figures by group, then the charts; the caution closes it. */
 export function RunDashboard({ view }: { view: RunView }) {
   const theme = useChartTheme();
+  const vu = useUnits().damperVelocity;
   const { result, traces, setup } = view;
   const m = result.metrics;
   const bands = m.damperVelocityBands;
@@ -26,8 +28,8 @@ export function RunDashboard({ view }: { view: RunView }) {
   const points = useMemo(() => ({ velocity: traces.damperVelocity, force: traces.damperForce }), [traces]);
   const peakV = useMemo(() => traces.damperVelocity.reduce((a, v) => Math.max(a, Math.abs(v)), 0), [traces]);
   const bandRefs = useMemo(
-    () => [bands.lowEdge, bands.highEdge].flatMap((e) => [e, -e]).map((e) => ({ axis: 'x' as const, value: e * 1000, color: theme.inkFaint, dash: [2, 3] })),
-    [bands, theme],
+    () => [bands.lowEdge, bands.highEdge].flatMap((e) => [e, -e]).map((e) => ({ axis: 'x' as const, value: vu.fromSI(e), color: theme.inkFaint, dash: [2, 3] })),
+    [bands, theme, vu],
   );
   const loadRefs = useMemo(() => [{ axis: 'x' as const, value: m.tyreLoadStatic, color: theme.inkFaint, dash: [2, 3] }], [m.tyreLoadStatic, theme]);
 
@@ -48,7 +50,7 @@ export function RunDashboard({ view }: { view: RunView }) {
         </div>
         <div className="grid gap-3 lg:grid-cols-2">
           <ChartCard title="Piston velocity distribution" detail="Share of the analysed time per velocity bin; + compression. Dotted lines: speed band edges.">
-            <HistogramChart histogram={m.damperVelocityHistogram} scale={1000} xLabel="Piston velocity" xUnit="mm/s" color={theme.accent} refs={bandRefs} label="Piston velocity histogram" exportName="damper-velocity-histogram" />
+            <HistogramChart histogram={m.damperVelocityHistogram} scale={vu.fromSI(1)} xLabel="Piston velocity" xUnit={vu.symbol} color={theme.accent} refs={bandRefs} label="Piston velocity histogram" exportName="damper-velocity-histogram" />
           </ChartCard>
           <ChartCard title="Tyre load distribution" detail="Share of the analysed time per load bin. Dotted line: static load Fz0.">
             <HistogramChart histogram={view.tyreLoadHistogram} scale={1} xLabel="Tyre load" xUnit="N" color={theme.grip} refs={loadRefs} label="Tyre load distribution" exportName="tyre-load-distribution" />

@@ -2,7 +2,8 @@ import { isoClasses } from '../../../../shared/schemas/road.ts';
 import { Field, Input, Select } from '../../../components/ui/field.tsx';
 import type { RoadListItem } from '../../../../shared/schemas/road-record.ts';
 import { fieldsOf, initialValues, inlineKinds, type InlineKind } from '../model/inline-road.ts';
-import { INLINE_ROAD, type ScenarioDraft, type ScenarioErrors } from '../model/scenario.ts';
+import { SpeedUnit } from '../../../../shared/schemas/unit-preferences.ts';
+import { INLINE_ROAD, switchSpeedUnit, type ScenarioDraft, type ScenarioErrors } from '../model/scenario.ts';
 
 export interface ScenarioFieldsProps {
   draft: ScenarioDraft;
@@ -37,12 +38,15 @@ export function ScenarioFields({ draft, onChange, errors, libraryRoads, libraryU
         <Field label="Speed" error={errors.speed} className="w-48 shrink-0">
           <div className="flex">
             <div className="min-w-0 flex-1">
-              <Input inputMode="decimal" className="rounded-r-none" aria-label="Speed value" value={draft.speed} onChange={(e) => set({ speed: e.target.value })} />
+              <Input inputMode="decimal" className="rounded-r-none" aria-label="Speed value" value={draft.speed} onChange={(e) => set({ speed: e.target.value, exactSpeed: undefined })} />
             </div>
             <div className="w-[6.2rem] shrink-0">
-              <Select aria-label="Speed unit" className="rounded-l-none border-l-0" value={draft.speedUnit} onChange={(e) => set({ speedUnit: e.target.value as 'kmh' | 'mps' })}>
-                <option value="kmh">km/h</option>
-                <option value="mps">m/s</option>
+              <Select aria-label="Speed unit" className="rounded-l-none border-l-0" value={draft.speedUnit} onChange={(e) => onChange(switchSpeedUnit(draft, SpeedUnit.parse(e.target.value)))}>
+                {SpeedUnit.options.map((u) => (
+                  <option key={u} value={u}>
+                    {u}
+                  </option>
+                ))}
               </Select>
             </div>
           </div>

@@ -1,6 +1,7 @@
 import { roadLabel } from '../../../../shared/runs/road-label.ts';
-import { formatQuantityText, formatSig, units } from '../../../lib/format.ts';
-import type { FigureRow } from './figure-rows.ts';
+import { formatQuantityText, formatSig } from '../../../lib/format.ts';
+import { displayUnitOf, type FigureRow } from './figure-rows.ts';
+import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
 import type { RunView } from './run-view.ts';
 
 /** What can be put side by side: a setup revision run here, or a saved run. */
@@ -56,9 +57,9 @@ export function likeForLikeNotes(runs: ComparedRun[]): string[] {
  * The difference of `value` against the first run's, in the row's display unit, signed
  * ("+0.042", "−3.1"), and relative when the first is not zero ("+5.2 %"). Null for the first run.
  */
-export function differenceText(row: FigureRow, first: number | undefined, value: number | undefined): { abs: string; rel: string | null } | null {
+export function differenceText(row: FigureRow, first: number | undefined, value: number | undefined, chosen?: ChosenUnits): { abs: string; rel: string | null } | null {
   if (first === undefined || value === undefined) return null;
-  const u = row.unit ? units[row.unit] : undefined;
+  const u = displayUnitOf(row, chosen);
   const d = u ? u.fromSI(value) - u.fromSI(first) : value - first;
   const sign = d > 0 ? '+' : '';
   const abs = `${sign}${formatSig(d, 2)}${u?.symbol ? `\u2009${u.symbol === '%' ? 'pt' : u.symbol}` : ''}`;

@@ -1,8 +1,8 @@
 import { csvNumber, FIGURE_DIGITS } from '../../../../shared/csv/csv-number.ts';
 import { commentText, writeCsv } from '../../../../shared/csv/write-csv.ts';
 import type { RunResult } from '../../../../shared/schemas/run.ts';
-import { units } from '../../../lib/format.ts';
-import { betterRules, figureRows } from './figure-rows.ts';
+import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
+import { betterRules, displayUnitOf, figureRows } from './figure-rows.ts';
 import type { TraceColumns } from '../../../../shared/sim/trace.ts';
 
 /**
@@ -16,10 +16,10 @@ export interface NamedResult {
 }
 
 /** One row per figure, one value column per run. */
-export function figuresCsv(runs: NamedResult[]): string {
+export function figuresCsv(runs: NamedResult[], chosen?: ChosenUnits): string {
   const header = ['group', 'figure', 'unit', ...runs.map((r) => r.name), 'ranking'];
   const rows = figureRows.map((row) => {
-    const unit = row.unit ? units[row.unit] : undefined;
+    const unit = displayUnitOf(row, chosen);
     return [
       row.group,
       row.label,

@@ -1,6 +1,7 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import { isEventRoad } from '../../../../shared/sim/metrics/rms-method.ts';
-import type { UnitName } from '../../../lib/format.ts';
+import { type DisplayUnit, units, type UnitName } from '../../../lib/format.ts';
+import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
 
 /**
  * Every figure the run pages show, in one table: the dashboard groups them, the comparison
@@ -118,4 +119,12 @@ export function bestIndex(row: FigureRow, values: (number | undefined)[], margin
   const scale = Math.max(Math.abs(best[0]), Math.abs(runnerUp[0]));
   if (!(Math.abs(runnerUp[0] - best[0]) > margin * scale)) return null;
   return best[1];
+}
+
+/** A row's display unit: piston velocities and travels follow the person's chosen units when given. */
+export function displayUnitOf(row: Pick<FigureRow, 'unit'>, chosen?: ChosenUnits): DisplayUnit | undefined {
+  if (!row.unit) return undefined;
+  if (chosen && row.unit === 'mmps') return chosen.damperVelocity;
+  if (chosen && row.unit === 'mm') return chosen.length;
+  return units[row.unit];
 }

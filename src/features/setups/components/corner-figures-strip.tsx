@@ -1,6 +1,7 @@
 import type { ModalResult } from '../../../../shared/schemas/modal.ts';
 import { GRAVITY } from '../../../../shared/sim/quarter-car.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 
 export interface CornerFiguresStripProps {
   modal: ModalResult;
@@ -26,6 +27,7 @@ function Cell({ label, children, note }: { label: string; children: React.ReactN
  * and the static sag. From the simulation core's modal analysis of the setup as shown.
  */
 export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false }: CornerFiguresStripProps) {
+  const { length, rate } = useUnits();
   const sag = (sprungMass * GRAVITY) / wheelRate;
   return (
     <section aria-label="Corner figures" className={`rounded border border-rule bg-paper-raised ${stale ? 'opacity-60' : ''}`}>
@@ -37,7 +39,7 @@ export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false
           <Figure value={modal.body.dampingRatio} digits={2} label="Body damping ratio" />
         </Cell>
         <Cell label="Static sag" note="sprung weight over wheel rate">
-          <Figure value={sag} unit="mm" label="Static sag" />
+          <Figure value={sag} unit={length} label="Static sag" />
         </Cell>
         <Cell label="Wheel hop" note={`hand estimate ${modal.classic.wheelHz.toFixed(1)} Hz`}>
           <Figure value={modal.wheel.naturalHz} unit="Hz" label="Wheel-hop natural frequency" />
@@ -46,7 +48,7 @@ export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false
           <Figure value={modal.wheel.dampingRatio} digits={2} label="Wheel-hop damping ratio" />
         </Cell>
         <Cell label="Wheel rate" note="spring × MR², with the gas rate at static">
-          <Figure value={wheelRate} unit="Npermm" label="Wheel rate" />
+          <Figure value={wheelRate} unit={rate} label="Wheel rate" />
         </Cell>
       </dl>
       <p className="border-t border-rule px-3 py-1 text-2xs text-ink-faint">

@@ -1,16 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { editableNumber, parseTyped, rateUnits, rodDiameter } from './setup-units.ts';
+import { editableNumber, parseTyped, rodDiameter } from './setup-units.ts';
 
 describe('setup display units', () => {
   it('reads a rod by its diameter: 16 mm is 2.011e-4 m²', () => {
     expect(rodDiameter.toSI(16)).toBeCloseTo((Math.PI / 4) * 0.016 ** 2, 12);
     expect(rodDiameter.fromSI(rodDiameter.toSI(16))).toBeCloseTo(16, 10);
-  });
-
-  it('converts spring rates between N/mm and N/m', () => {
-    expect(rateUnits['N/mm'].toSI(20.5)).toBe(20500);
-    expect(rateUnits['N/mm'].fromSI(20500)).toBe(20.5);
-    expect(rateUnits['N/m'].toSI(20500)).toBe(20500);
   });
 
   it('parses what people type and refuses what is not a number', () => {

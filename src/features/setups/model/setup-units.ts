@@ -1,9 +1,9 @@
 import { mToMm, rodDiameterMmToAreaM2 } from '../../../../shared/units.ts';
-import { type DisplayUnit, units } from '../../../lib/format.ts';
+import type { DisplayUnit } from '../../../lib/format.ts';
 
 /**
- * Display units of the setup page beyond the common table in lib/format: the rod entered by
- * its diameter (engineers measure a rod, not its area) and the rate unit the person picked.
+ * Display units of the setup page beyond the common table in lib/format and the person's chosen
+ * units (lib/units): the rod entered by its diameter (engineers measure a rod, not its area).
  */
 
 /** Rod cross-section shown as its diameter in mm. */
@@ -13,8 +13,6 @@ export const rodDiameter: DisplayUnit = {
   toSI: (dMm) => rodDiameterMmToAreaM2(dMm),
 };
 
-export const rateUnits = { 'N/mm': units.Npermm, 'N/m': units.Nperm } as const;
-export type RateUnit = keyof typeof rateUnits;
 
 /** Coefficient k of a stop polynomial F = Σ c_k·δ^k, in SI (N/m^k). */
 export const stopCoefficient = (k: number): DisplayUnit => ({

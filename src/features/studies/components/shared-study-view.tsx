@@ -1,4 +1,6 @@
 import { useMemo } from 'react';
+import { listText } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { SharedStudy } from '../../../../shared/schemas/study-record.ts';
 import { studyRoadNames } from '../../../../shared/study/collect.ts';
 import { Notice } from '../../../components/ui/notice.tsx';
@@ -16,6 +18,7 @@ import { StudyResults } from './study-results.tsx';
  */
 export function SharedStudyView({ shared, copyAction }: { shared: SharedStudy; copyAction?: React.ReactNode }) {
   const s = shared.study;
+  const speedUnit = useUnits().speed;
   const view = useMemo(() => studyView(s.definition, s.points, s.basePoint, true), [s]);
   const roadNames = useMemo(() => studyRoadNames(s.definition, s.roads), [s]);
   const status = statusWords[s.status];
@@ -26,7 +29,7 @@ export function SharedStudyView({ shared, copyAction }: { shared: SharedStudy; c
         <h1 className="text-xl font-semibold">{s.name}</h1>
         <p className="mt-0.5 text-sm text-ink-soft">
           From {s.base.setupName ?? 'a setup'} <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
-          {s.speeds.length > 0 && <span className="figures"> at {s.speeds.join(', ')} m/s</span>}
+          {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>}
         </p>
         <p className="mt-1 flex flex-wrap items-center gap-2 text-xs text-ink-faint">
           <Tag tone={status.tone}>{status.text}</Tag>

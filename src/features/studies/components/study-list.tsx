@@ -1,4 +1,6 @@
 import { Link } from 'react-router';
+import { listText } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { StudySummary } from '../../../../shared/schemas/study-record.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
@@ -25,6 +27,7 @@ export function sweepWords(axes: StudySummary['axes']): string {
 
 /** Saved studies of the workspace, most recently changed first. */
 export function StudyList({ workspaceId, studies }: { workspaceId: string; studies: StudySummary[] }) {
+  const speedUnit = useUnits().speed;
   return (
     <Table caption="Studies">
       <THead>
@@ -55,7 +58,7 @@ export function StudyList({ workspaceId, studies }: { workspaceId: string; studi
               <Td className="text-ink-soft">{sweepWords(s.axes)}</Td>
               <Td className="text-ink-soft">
                 {s.roadNames.join(', ')}
-                {s.speeds.length > 0 && <span className="figures"> · {s.speeds.join(', ')} m/s</span>}
+                {s.speeds.length > 0 && <span className="figures"> · {listText(s.speeds, speedUnit)}</span>}
               </Td>
               <Td>
                 <span className="flex flex-wrap gap-1 whitespace-nowrap">

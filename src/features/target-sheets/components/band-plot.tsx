@@ -1,3 +1,5 @@
+import { formatSig } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { useMemo } from 'react';
 import type uPlot from 'uplot';
 import type { DynoPeakPoints } from '../../../../shared/schemas/dyno.ts';
@@ -32,13 +34,14 @@ function withAlpha(color: string, alpha: number): string {
  */
 export function BandPlot({ compression, rebound, measured = [], height = 300, exportName, liveLegend = true }: BandPlotProps) {
   const theme = useChartTheme();
+  const vu = useUnits().damperVelocity;
   const columns = useMemo(() => bandPlotColumns({ compression, rebound }, measured.map((m) => m.peaks)), [compression, rebound, measured]);
   const labels = measured.map((m) => m.label).join('\u0000');
 
   const options = useMemo<ChartOptions>(() => {
     const edge = (label: string) => themedSeries({ label, unit: 'N', color: theme.accent, width: 1, dash: [4, 3] });
     const series: uPlot.Series[] = [
-      { label: 'Piston speed', value: (_u, v) => (v == null ? '–' : `${v} m/s`) },
+      { label: 'Piston speed', value: (_u, v) => (v == null ? '–' : `${formatSig(v, 3)} ${vu.symbol}`) },
       { ...themedSeries({ label: 'Target', unit: 'N', color: theme.ink, width: 1.5, points: true }) },
       edge('Band upper'),
       edge('Band lower'),
@@ -50,16 +53,16 @@ export function BandPlot({ compression, rebound, measured = [], height = 300, ex
     return {
       height,
       scales: { x: linearX },
-      axes: [themedAxis(theme, { label: 'Piston speed, compression positive', unit: 'm/s' }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 60 })],
+      axes: [themedAxis(theme, { label: 'Piston speed, compression positive', unit: vu.symbol }), themedAxis(theme, { label: 'Damper force', unit: 'N', size: 60 })],
       series,
       bands: [{ series: [2, 3], fill: withAlpha(theme.accent, 0.16) }],
       legend: { show: true, live: liveLegend },
     };
-  }, [theme, height, labels, liveLegend]);
+  }, [theme, height, labels, liveLegend, vu]);
 
   const data = useMemo(
-    () => [columns.x, columns.target, columns.upper, columns.lower, ...columns.measured] as unknown as uPlot.AlignedData,
-    [columns],
+    () => [columns.x.map(vu.fromSI), columns.target, columns.upper, columns.lower, ...columns.measured] as unknown as uPlot.AlignedData,
+    [columns, vu],
   );
 
   return <UChart options={options} data={data} label="Target band and measured dampers" exportName={exportName} />;

@@ -1,6 +1,7 @@
 import type { ConformityRecordDetail, DamperCheck } from '../../../../shared/schemas/target-sheet.ts';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
 import { formatDateTime } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { checkCsvHref } from '../api/get-checks.ts';
 import { statusWords } from './status-tag.tsx';
 import { speedText } from './target-table.tsx';
@@ -13,12 +14,13 @@ const worst = (d: DamperCheck) =>
 
 /** Every point of one damper: band, measured force, deviation in N and %, pass or fail. */
 function DamperDetail({ damper }: { damper: DamperCheck }) {
+  const vu = useUnits().damperVelocity;
   return (
     <Table caption={`Points of ${damper.label}`}>
       <THead>
         <tr>
           <Th>Direction</Th>
-          <Th numeric>Speed [m/s]</Th>
+          <Th numeric>Speed [{vu.symbol}]</Th>
           <Th numeric>Target [N]</Th>
           <Th numeric>Band [N]</Th>
           <Th numeric>Measured [N]</Th>
@@ -32,7 +34,7 @@ function DamperDetail({ damper }: { damper: DamperCheck }) {
           damper[dir].points.map((p) => (
             <Tr key={`${dir}-${p.velocity}`} className={p.pass ? '' : 'bg-danger-wash/50'}>
               <Td>{dir}</Td>
-              <Td numeric>{speedText(p.velocity)}</Td>
+              <Td numeric>{speedText(p.velocity, vu)}</Td>
               <Td numeric>{r1(p.target)}</Td>
               <Td numeric>
                 {r1(p.lower)} … {r1(p.upper)}

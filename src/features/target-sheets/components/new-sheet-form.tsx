@@ -5,6 +5,8 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../components/ui/field.tsx';
 import { latestRevisionsQueryOptions } from '../../../lib/queries/revisions.ts';
 import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
+import { siFromShown } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { useCreateSheet } from '../api/create-sheet.ts';
 
 /** Reads "0.025, 0.05 0.1" as speeds in m/s; undefined when the text is not a list of numbers. */
@@ -23,7 +25,13 @@ export function NewSheetForm({ workspaceId, onCreated }: { workspaceId: string; 
   const [setupId, setSetupId] = useState('');
   const revisions = useQuery(latestRevisionsQueryOptions(workspaceId, setupId || undefined));
   const [revision, setRevision] = useState('');
-  const [speeds, setSpeeds] = useState(defaultReferenceSpeeds.join(', '));
+  const vu = useUnits().damperVelocity;
+  // the list as typed, with the unit it was typed in; re-expressed when the person changes unit
+  const [speedsTyped, setSpeedsTyped] = useState<{ text: string; unit: typeof vu } | null>(null);
+  const shownList = (si: readonly number[]) => si.map((v) => String(Number(vu.fromSI(v).toPrecision(4)))).join(', ');
+  const typedSI = speedsTyped && parseSpeeds(speedsTyped.text)?.map((v) => siFromShown(speedsTyped.unit, v));
+  const speeds = speedsTyped && (speedsTyped.unit === vu || !typedSI) ? speedsTyped.text : shownList(typedSI || defaultReferenceSpeeds);
+  const setSpeeds = (text: string) => setSpeedsTyped({ text, unit: vu });
   const [tolPct, setTolPct] = useState(String(defaultTolerance.tolPct));
   const [floorN, setFloorN] = useState(String(defaultTolerance.floorN));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -35,10 +43,10 @@ export function NewSheetForm({ workspaceId, onCreated }: { workspaceId: string; 
   const submit = (e: React.FormEvent) => {
     e.preventDefault();
     const problems: Record<string, string> = {};
-    const list = parseSpeeds(speeds);
+    const list = parseSpeeds(speeds)?.map((v) => siFromShown(vu, v));
     if (!setupId) problems.setupId = 'Choose a setup';
     if (!chosenRevision) problems.revision = 'Choose a revision';
-    if (!list) problems.speeds = 'Positive speeds in m/s, separated by commas';
+    if (!list) problems.speeds = `Positive speeds in ${vu.symbol}, separated by commas`;
     if (!(Number(tolPct) >= 0 && Number(tolPct) <= 100) || tolPct.trim() === '') problems.tolPct = '0 to 100 %';
     if (!(Number(floorN) >= 0) || floorN.trim() === '') problems.floorN = '0 N or more';
     setErrors(problems);
@@ -81,7 +89,7 @@ export function NewSheetForm({ workspaceId, onCreated }: { workspaceId: string; 
         </Field>
       </div>
       <div className="grid gap-3 md:grid-cols-[2fr_1fr_1fr]">
-        <Field label="Reference speeds [m/s]" error={errors.speeds} hint="Forces are read off the damper curve at these speeds.">
+        <Field label={`Reference speeds [${vu.symbol}]`} error={errors.speeds} hint="Forces are read off the damper curve at these speeds.">
           <Input value={speeds} onChange={(e) => setSpeeds(e.target.value)} className="figures" />
         </Field>
         <Field label="Tolerance ± [%]" error={errors.tolPct}>

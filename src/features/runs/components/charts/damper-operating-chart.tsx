@@ -5,6 +5,7 @@ import { themedAxis, themedSeries } from '../../../../components/charts/chart-th
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
 import type { Damper } from '../../../../../shared/schemas/setup.ts';
 import { damperForce } from '../../../../../shared/sim/damper-force.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import { refLinesHook } from './draw-hooks.ts';
 
 export interface CurveSeries {
@@ -37,35 +38,36 @@ export interface OperatingPoints {
  */
 export function DamperOperatingChart({ curves, points, vMax, bandEdges, label = 'Damper curve', exportName = 'damper-curve', height = 240 }: { curves: CurveSeries[]; points?: OperatingPoints; vMax: number; bandEdges?: [number, number]; label?: string; exportName?: string; height?: number }) {
   const theme = useChartTheme();
+  const vu = useUnits().damperVelocity;
   const options = useMemo((): ChartOptions => {
-    const refs = (bandEdges ?? []).flatMap((e) => [e, -e]).map((e) => ({ axis: 'x' as const, value: e * 1000, color: theme.inkFaint, dash: [2, 3] }));
+    const refs = (bandEdges ?? []).flatMap((e) => [e, -e]).map((e) => ({ axis: 'x' as const, value: vu.fromSI(e), color: theme.inkFaint, dash: [2, 3] }));
     return {
       height,
       scales: { x: linearX },
-      axes: [themedAxis(theme, { label: 'Piston velocity, + compression', unit: 'mm/s' }), themedAxis(theme, { label: 'Damper force, + compression', unit: 'N', size: 60 })],
+      axes: [themedAxis(theme, { label: 'Piston velocity, + compression', unit: vu.symbol }), themedAxis(theme, { label: 'Damper force, + compression', unit: 'N', size: 60 })],
       series: [
-        { label: 'mm/s' },
+        { label: vu.symbol },
         ...curves.map((c) => ({ ...themedSeries({ label: c.label, unit: 'N', color: c.color, width: 1.75 }), spanGaps: true })),
         ...(points ? [{ label: 'Operating points', stroke: theme.accent, width: 0, paths: () => null, points: { show: true, size: 7, width: 0, fill: `${theme.accent}66`, stroke: `${theme.accent}66` } } satisfies uPlot.Series] : []),
       ],
       hooks: { draw: [refLinesHook([...refs, { axis: 'y', value: 0, color: theme.inkFaint, dash: [1, 0] }, { axis: 'x', value: 0, color: theme.inkFaint, dash: [1, 0] }])] },
     };
-  }, [theme, curves, points, bandEdges, height]);
+  }, [theme, curves, points, bandEdges, height, vu]);
 
   const data = useMemo((): uPlot.AlignedData => {
     const grid = curveGrid(curves.map((c) => c.damper), vMax);
-    if (!points) return [Array.from(grid, (v) => v * 1000), ...curves.map((c) => Array.from(grid, (v) => damperForce(c.damper, v)))];
+    if (!points) return [Array.from(grid, vu.fromSI), ...curves.map((c) => Array.from(grid, (v) => damperForce(c.damper, v)))];
     // one sorted x for curves and dots: curve values on the grid, dots where the run was
     const rows: [number, number, boolean][] = [];
     for (const v of grid) rows.push([v, 0, true]);
     for (let i = 0; i < points.velocity.length; i++) rows.push([points.velocity[i], points.force[i], false]);
     rows.sort((a, b) => a[0] - b[0]);
     return [
-      rows.map((r) => r[0] * 1000),
+      rows.map((r) => vu.fromSI(r[0])),
       ...curves.map((c) => rows.map((r) => (r[2] ? damperForce(c.damper, r[0]) : null))),
       rows.map((r) => (r[2] ? null : r[1])),
     ];
-  }, [curves, points, vMax]);
+  }, [curves, points, vMax, vu]);
 
   return <UChart options={options} data={data} label={label} exportName={exportName} />;
 }

@@ -1,6 +1,7 @@
 import { Figure } from '../../../../components/ui/figure.tsx';
 import { rideJudgement } from '../../../../../shared/sim/metrics/rms-method.ts';
-import { BEST_MARGIN, betterRules, groupTitles, bestIndex, rowsFor, type FigureGroup } from '../../model/figure-rows.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
+import { BEST_MARGIN, betterRules, displayUnitOf, groupTitles, bestIndex, rowsFor, type FigureGroup } from '../../model/figure-rows.ts';
 import { type ComparedRun, differenceText } from '../../model/compare.ts';
 import { Swatch } from './swatch.tsx';
 
@@ -13,6 +14,7 @@ const groups: FigureGroup[] = ['comfort', 'grip', 'package', 'damper', 'modal'];
 export function CompareTable({ runs }: { runs: ComparedRun[] }) {
   const rows = rowsFor(runs.map((r) => r.view.result));
   const judged = runs.map((r) => rideJudgement(r.view.result.road.kind, r.view.result.metrics));
+  const chosen = useUnits();
   return (
     <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
       <p className="px-3 pt-2 text-xs text-ink-soft">
@@ -77,7 +79,7 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                     <td className="px-2 text-xs whitespace-nowrap text-ink-faint">{betterRules[row.better]}</td>
                     {runs.map((r, i) => {
                       const v = values[i];
-                      const diff = i === 0 ? null : differenceText(row, values[0], v);
+                      const diff = i === 0 ? null : differenceText(row, values[0], v, chosen);
                       return (
                         <td key={r.key} className={`px-3 py-1 text-right align-top ${best === i ? 'bg-ok-wash/70' : ''}`} data-best={best === i || undefined}>
                           {v === undefined ? (
@@ -89,7 +91,7 @@ export function CompareTable({ runs }: { runs: ComparedRun[] }) {
                                   best
                                 </span>
                               )}
-                              <Figure value={v} unit={row.unit} label={`${row.label}, ${r.label}`} className={best === i ? 'font-semibold' : ''} />
+                              <Figure value={v} unit={displayUnitOf(row, chosen)} label={`${row.label}, ${r.label}`} className={best === i ? 'font-semibold' : ''} />
                             </span>
                           )}
                           {diff && (

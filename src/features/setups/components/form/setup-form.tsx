@@ -1,15 +1,15 @@
 import { useId } from 'react';
 import { useWatch } from 'react-hook-form';
 import type { Stroke } from '../../../../../shared/schemas/setup.ts';
-import { formatSig, units } from '../../../../lib/format.ts';
+import { Link } from 'react-router';
+import { type DisplayUnit, formatSig, units } from '../../../../lib/format.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import type { SetupForm as Form } from '../../model/use-setup-draft.ts';
-import { rateUnits } from '../../model/setup-units.ts';
 import { DerivedRow, FormBlock, QuantityRow } from './quantity-row.tsx';
-import { RateUnitToggle, useRateUnit } from './rate-unit-toggle.tsx';
 import { StopFields } from './stop-fields.tsx';
 import { ToggleRow } from './toggle-row.tsx';
 
-function WheelRate({ form, unit }: { form: Form; unit: (typeof rateUnits)[keyof typeof rateUnits] }) {
+function WheelRate({ form, unit }: { form: Form; unit: DisplayUnit }) {
   const [k, mr] = useWatch({ control: form.control, name: ['springRate', 'motionRatio'] });
   const value = typeof k === 'number' && typeof mr === 'number' ? k * mr * mr : Number.NaN;
   return (
@@ -20,6 +20,7 @@ function WheelRate({ form, unit }: { form: Form; unit: (typeof rateUnits)[keyof 
 }
 
 function StrokeFields({ form }: { form: Form }) {
+  const { length } = useUnits();
   const stroke = useWatch({ control: form.control, name: 'stroke' }) as Stroke | undefined;
   return (
     <>
@@ -31,8 +32,8 @@ function StrokeFields({ form }: { form: Form }) {
       />
       {stroke && (
         <>
-          <QuantityRow control={form.control} name="stroke.compression" label="Towards bump" unit={units.mm} />
-          <QuantityRow control={form.control} name="stroke.extension" label="Towards rebound" unit={units.mm} />
+          <QuantityRow control={form.control} name="stroke.compression" label="Towards bump" unit={length} />
+          <QuantityRow control={form.control} name="stroke.extension" label="Towards rebound" unit={length} />
         </>
       )}
     </>
@@ -68,8 +69,7 @@ function Notes({ form }: { form: Form }) {
  * charge) is edited in the damper panel beside it; everything else is here.
  */
 export function SetupForm({ form }: { form: Form }) {
-  const [rateUnit, setRateUnit] = useRateUnit();
-  const rate = rateUnits[rateUnit];
+  const { rate, length } = useUnits();
   const { control } = form;
   return (
     <div aria-label="Setup values" role="group">
@@ -77,7 +77,14 @@ export function SetupForm({ form }: { form: Form }) {
         <QuantityRow control={control} name="sprungMass" label="Sprung mass" unit={units.kg} />
         <QuantityRow control={control} name="unsprungMass" label="Unsprung mass" unit={units.kg} />
       </FormBlock>
-      <FormBlock title="Spring" aside={<RateUnitToggle value={rateUnit} onChange={setRateUnit} />}>
+      <FormBlock
+        title="Spring"
+        aside={
+          <Link to="/account" className="text-2xs text-ink-faint hover:text-accent hover:underline" title="Units are chosen on your account page">
+            units
+          </Link>
+        }
+      >
         <QuantityRow control={control} name="springRate" label="Spring rate" unit={rate} />
         <QuantityRow control={control} name="motionRatio" label="Motion ratio" unit={units.ratio} hint="damper travel per wheel travel" />
         <WheelRate form={form} unit={rate} />
@@ -85,7 +92,7 @@ export function SetupForm({ form }: { form: Form }) {
       <FormBlock title="Tyre">
         <QuantityRow control={control} name="tyreRate" label="Vertical rate" unit={rate} />
         <QuantityRow control={control} name="tyreDamping" label="Damping" unit={units.Nspm} />
-        <QuantityRow control={control} name="tyreFootprint" label="Footprint length" unit={units.mm} optional hint="blank: point contact" />
+        <QuantityRow control={control} name="tyreFootprint" label="Footprint length" unit={length} optional hint="blank: point contact" />
       </FormBlock>
       <FormBlock title="End stops (at the wheel)">
         <StopFields form={form} which="bumpStop" />

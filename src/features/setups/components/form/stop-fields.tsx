@@ -1,6 +1,7 @@
 import { useWatch } from 'react-hook-form';
 import type { EndStop } from '../../../../../shared/schemas/setup.ts';
 import { units } from '../../../../lib/format.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import type { SetupForm } from '../../model/use-setup-draft.ts';
 import { stopCoefficient } from '../../model/setup-units.ts';
 import { QuantityRow } from './quantity-row.tsx';
@@ -25,6 +26,7 @@ const words: Record<Which, { title: string; travel: string }> = {
 /** An end stop: present or not, its clearance from static, and its force law (polynomial or table), all at the wheel. */
 export function StopFields({ form, which }: { form: SetupForm; which: Which }) {
   const { control, setValue } = form;
+  const { length } = useUnits();
   const stop = useWatch({ control, name: which }) as EndStop | undefined;
   const set = (path: string, value: unknown) => setValue(path as never, value as never, { shouldDirty: true, shouldValidate: true });
 
@@ -33,7 +35,7 @@ export function StopFields({ form, which }: { form: SetupForm; which: Which }) {
       <ToggleRow label={words[which].title} hint={stop ? `engages in ${words[which].travel}` : 'none'} checked={Boolean(stop)} onChange={(on) => set(which, on ? structuredClone(defaults[which]) : undefined)} />
       {stop && (
         <>
-          <QuantityRow control={control} name={`${which}.clearance`} label="Clearance from static" unit={units.mm} />
+          <QuantityRow control={control} name={`${which}.clearance`} label="Clearance from static" unit={length} />
           <ChoiceRow<LawKind>
             label="Force law"
             value={stop.law.kind}
@@ -61,7 +63,7 @@ export function StopFields({ form, which }: { form: SetupForm; which: Which }) {
             <>
               {stop.law.points.map((_, i) => (
                 <div key={i}>
-                  <QuantityRow control={control} name={`${which}.law.points.${i}.0`} label={`Point ${i + 1} deflection δ`} unit={units.mm} />
+                  <QuantityRow control={control} name={`${which}.law.points.${i}.0`} label={`Point ${i + 1} deflection δ`} unit={length} />
                   <QuantityRow control={control} name={`${which}.law.points.${i}.1`} label={`Point ${i + 1} force`} unit={units.N} />
                 </div>
               ))}
