@@ -11,7 +11,7 @@ export interface NavEntry {
   label: string;
   /** Path under `/w/:workspaceId` the entry opens ("setups"). */
   path: string;
-  /** Position in the rail: Corners 10, Roads 20, Runs 30, Studies 40, Target sheets 50, Team 80, Activity 90. */
+  /** Position in the rail: Corners 10, Roads 20, Runs 30, Compare 35, Studies 40, Target sheets 50, Team 80, Activity 90. */
   order: number;
   /** Hide the entry from roles below this one (the server enforces it regardless). */
   minRole?: Role;

@@ -5,6 +5,5 @@ export const section: SectionModule = {
   workspaceRoutes: [
     { path: 'runs', lazy: async () => ({ Component: (await import('../routes/runs.tsx')).RunsRoute }) },
     { path: 'runs/:runId', lazy: async () => ({ Component: (await import('../routes/run-detail.tsx')).RunDetailRoute }) },
-    { path: 'compare', lazy: async () => ({ Component: (await import('../routes/compare.tsx')).CompareRoute }) },
   ],
 };
