@@ -110,7 +110,7 @@ describe('studies: results', () => {
     expect(done.points[3].values).toEqual({ reboundScale: 1.4, springRate: 38000 });
     expect(done.results).toMatchObject({ plannedPoints: 4, savedPoints: 4, plannedRuns: 5, savedRuns: 5, elapsedMs: 1234, workers: 2, ranBy: { name: 'Ines Caddow' } });
     // the summary is exactly what the shared code gives on the stored points
-    expect(done.results?.compromise).toEqual(studyBestCompromise(done.definition, done.points));
+    expect(done.results?.compromise).toEqual(studyBestCompromise(done.definition, done.points, undefined, done.basePoint));
     expect(done.results?.tradeOff).toEqual(studyTradeOff(done.definition, done.points, done.basePoint));
     expect(done.results?.compromise.ok).toBe(true);
     // aggregated figures and objectives were rebuilt from the runs (one road, one speed: equal)
