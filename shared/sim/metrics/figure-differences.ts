@@ -4,7 +4,8 @@ import type { Metrics } from '../../schemas/metrics.ts';
  * How far one run's figures are from a reference run's, figure by figure, each relative to a
  * scale that fits it: the figure itself for levels, peaks and energies; the whole (1) for
  * shares of time and of the damper speed histogram; the analysed time for times spent on a
- * stop; the static load for the minimum tyre load (0 whenever the wheel lifts). Used to hold
+ * stop; the static load for the minimum tyre load (0 whenever the wheel lifts); the travel's RMS
+ * for the mean travel (near 0 on a symmetric or short run, so its own size is no scale). Used to hold
  * one integrator to another (tests, `npm run bench`).
  */
 export interface FigureDifference {
@@ -30,7 +31,7 @@ export function figureDifferences(a: Metrics, ref: Metrics): FigureDifference[] 
   const fa = metricFigures(a);
   const fr = metricFigures(ref);
   const scaleOf = (k: string, v: number) =>
-    SHARES.has(k) || k.startsWith('damperVelocityHistogram.') ? 1 : k.endsWith('StopTime') ? ref.analysedTime : k === 'tyreLoadMin' ? ref.tyreLoadStatic : Math.abs(v);
+    SHARES.has(k) || k.startsWith('damperVelocityHistogram.') ? 1 : k.endsWith('StopTime') ? ref.analysedTime : k === 'tyreLoadMin' ? ref.tyreLoadStatic : k === 'travelMean' ? ref.travelRms : Math.abs(v);
   return Object.keys(fr).map((key) => ({ key, relative: Math.abs((fa[key] ?? NaN) - fr[key]) / Math.max(scaleOf(key, fr[key]), 1e-300) }));
 }
 
