@@ -4,10 +4,13 @@ import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
 
 const odexShim = fileURLToPath(new URL('./node_modules/odex/src/odex.js', import.meta.url));
+const zodBrowser = fileURLToPath(new URL('./shared/zod-browser.ts', import.meta.url));
 
-export default defineConfig({
+export default defineConfig(({ command, mode }) => ({
   plugins: [react(), tailwindcss()],
-  resolve: { alias: { odex: odexShim } },
+  // The browser build (and the dev server) gets zod with its compiler off (shared/zod-browser.ts);
+  // tests in Node and the server keep the compiled parsers.
+  resolve: { alias: [{ find: 'odex', replacement: odexShim }, ...(command === 'build' || mode !== 'test' ? [{ find: /^zod$/, replacement: zodBrowser }] : [])] },
   worker: { format: 'es' },
   // No data: URIs: the CSP allows fonts and images from 'self' only.
   // No source maps in the served build (they would publish the whole client source).
@@ -75,4 +78,4 @@ export default defineConfig({
       },
     ],
   },
-});
+}));

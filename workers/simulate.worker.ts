@@ -1,4 +1,3 @@
-import '../shared/zod-jitless.ts';
 import * as Comlink from 'comlink';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
 import { simulateJob, transferablesOf, type SimulateExtras, type SimulateOutcome } from '../shared/runs/simulate-job.ts';

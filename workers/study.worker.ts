@@ -1,4 +1,3 @@
-import '../shared/zod-jitless.ts';
 import * as Comlink from 'comlink';
 import { createStudyRunner, type StudyJobOutcome, type StudyRunContext, type StudyRunJob, type StudyRunner } from '../shared/study/run-jobs.ts';
 import { warmUpStudyCode } from '../shared/study/warm-up.ts';

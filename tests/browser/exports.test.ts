@@ -92,7 +92,7 @@ describe('exports', () => {
     const created = await apiWrite(session, 'POST', `/api/workspaces/${workspaceId}/setups`, { setup: { ...revision.document, name }, message: 'First revision' });
     expect(created.status()).toBe(201);
     const { id } = await created.json();
-    await page.goto(`/w/${workspaceId}/corners/${id}`);
+    await page.goto(`/w/${workspaceId}/corners/${id}?part=revisions`);
     await page.getByRole('table', { name: 'Revisions' }).waitFor();
     await page.getByText('This setup has one revision, so there is nothing to compare yet.').waitFor();
     expect(await page.getByText(/Changes from r1 to r1/).count()).toBe(0);
@@ -206,7 +206,7 @@ describe('smaller faults', () => {
 
     // the setup's share panel uses the same control
     const setups = SetupsResponse.parse(await (await page.request.get(`/api/workspaces/${workspaceId}/setups`)).json()).setups;
-    await page.goto(`/w/${workspaceId}/corners/${setups[0].id}`);
+    await page.goto(`/w/${workspaceId}/corners/${setups[0].id}?part=links`);
     await page.getByRole('button', { name: 'Make read-only link' }).click();
     await page.getByRole('status').filter({ hasText: 'Read-only link to' }).getByRole('button', { name: 'Copy link' }).waitFor();
     await context.close();

@@ -97,7 +97,8 @@ describe('runs in the browser', () => {
       ['loadMin', cli.metrics.tyreLoadMin, 'N'],
       ['travelRms', cli.metrics.travelRms, 'mm'],
       ['travelComp', cli.metrics.travelMaxCompression, 'mm'],
-      ['velRms', cli.metrics.damperVelocityRms, 'mmps'],
+      // damper velocity in the default display unit (m/s; a person may choose another)
+      ['velRms', cli.metrics.damperVelocityRms, 'mps'],
       ['energy', cli.metrics.damperEnergy, 'J'],
     ];
     for (const [name, value, unit] of checks) {
