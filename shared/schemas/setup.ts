@@ -176,6 +176,13 @@ export const Setup = z.strictObject({
    * Omit for point contact.
    */
   tyreFootprint: meters.positive().max(1).optional(),
+  /**
+   * Loaded tyre radius, m. Given, the tyre rolls over bumps, potholes and kerbs as a circle of
+   * this radius (enveloping: it meets a step before reaching it and bridges part of a short
+   * pothole) instead of touching the road at one point; random, sine and measured roads are not
+   * affected. On event roads it takes the place of the footprint.
+   */
+  tyreRadius: meters.positive().max(1).optional(),
   damper: Damper,
   bumpStop: EndStop.optional(),
   reboundStop: EndStop.optional(),

@@ -56,7 +56,7 @@ export function runCorner(input: RunRequestInput): RunOutcome {
   if (!statics.ok) return { ok: false, stage: 'input', reason: `setup.${statics.reason}` };
 
   const road: Road = req.road.kind === 'iso8608' && req.seed !== undefined ? { ...req.road, seed: req.seed } : req.road;
-  const built = buildRoad(road, speed, duration, setup.tyreFootprint);
+  const built = buildRoad(road, speed, duration, setup.tyreFootprint, setup.tyreRadius);
   if (!built.ok) return { ok: false, stage: 'input', reason: built.reason };
 
   const tolerance = req.tolerance ?? DEFAULT_TOLERANCE;

@@ -71,7 +71,7 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
     if (found === undefined) {
       const doc = ctx.roads[job.roadIndex];
       const road: Road = doc.kind === 'iso8608' && job.seed !== undefined ? { ...doc, seed: job.seed } : doc;
-      const built = buildRoad(road, job.speed, ctx.duration, setup.tyreFootprint);
+      const built = buildRoad(road, job.speed, ctx.duration, setup.tyreFootprint, setup.tyreRadius);
       found = built.ok ? sampleRoad(built.road, ctx.duration, plan) : built.reason;
       if (roads.size >= ROAD_CACHE) roads.delete(roads.keys().next().value!);
       roads.set(key, found);

@@ -28,6 +28,7 @@ const scalarFields: Array<[string, string, DisplayUnit | undefined]> = [
   ['tyreRate', 'Tyre rate', units.Npermm],
   ['tyreDamping', 'Tyre damping', units.Nspm],
   ['tyreFootprint', 'Tyre footprint', units.mm],
+  ['tyreRadius', 'Tyre rolling radius', units.mm],
   ['damper.gas.force', 'Gas force', units.N],
   ['damper.gas.pressure', 'Gas pressure', units.bar],
   ['damper.gas.rodArea', 'Rod diameter', rodDiameter],

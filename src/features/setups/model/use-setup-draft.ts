@@ -51,7 +51,7 @@ export interface SetupDraft {
 }
 
 /** Optional top-level fields a form may add; listed so a clean form compares equal to its revision. */
-const optionalKeys = ['tyreFootprint', 'bumpStop', 'reboundStop', 'stroke', 'notes'] as const;
+const optionalKeys = ['tyreFootprint', 'tyreRadius', 'bumpStop', 'reboundStop', 'stroke', 'notes'] as const;
 
 /**
  * The document with every optional key present (undefined when absent). The form's dirty check

@@ -93,6 +93,7 @@ export function SetupForm({ form }: { form: Form }) {
         <QuantityRow control={control} name="tyreRate" label="Vertical rate" unit={rate} />
         <QuantityRow control={control} name="tyreDamping" label="Damping" unit={units.Nspm} />
         <QuantityRow control={control} name="tyreFootprint" label="Footprint length" unit={length} optional hint="blank: point contact" />
+        <QuantityRow control={control} name="tyreRadius" label="Rolling radius (event roads)" unit={length} optional hint="blank: point contact over bumps, potholes and kerbs" />
       </FormBlock>
       <FormBlock title="End stops (at the wheel)">
         <StopFields form={form} which="bumpStop" />
