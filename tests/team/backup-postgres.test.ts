@@ -1,7 +1,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { Me } from '../../shared/schemas/account.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
 import { bundleServer, prepareDatabase, type ServerProcess, startServerProcess } from '../../server/bench/server-process.ts';
@@ -9,14 +9,13 @@ import { callJson, signInAs } from '../../server/bench/session-client.ts';
 import { backupPostgres, restorePostgres } from '../../server/cli/postgres-backup.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { openDatabase } from '../../server/db/database.ts';
-import { adminQuery } from '../../server/db/local-postgres.ts';
+import { createClusterDatabase } from '../api/helpers/test-database.ts';
 import { cornerDocument } from '../api/helpers/setup-fixtures.ts';
 
 // `npm run backup` / `restore` with DATABASE_URL: pg_dump while the server writes, a restore
 // that refuses while a server is connected, and after it every save acknowledged before the
 // backup began, and none made after it.
 
-const cluster = inject('postgresCluster')!;
 const dir = mkdtempSync(join(tmpdir(), 'rw-pgbackup-'));
 let bundle: Awaited<ReturnType<typeof bundleServer>> | undefined;
 let server: ServerProcess | undefined;
@@ -37,8 +36,7 @@ async function savedMessages(url: string): Promise<Set<string>> {
 
 describe('backup and restore on PostgreSQL', () => {
   it('dumps the live database while writes go on, refuses to restore under a running server, then restores the snapshot', async () => {
-    await adminQuery(cluster.adminUrl, 'create database backup_pg template ridewright_template');
-    const url = cluster.adminUrl.replace(/\/[^/]*$/, '/backup_pg');
+    const url = await createClusterDatabase('backup_pg');
     await prepareDatabase(url);
     bundle = await bundleServer();
     server = await startServerProcess({ dbPath: join(dir, 'unused.sqlite'), bundle: bundle.path, readyTimeoutMs: 180_000, env: { DATABASE_URL: url } });

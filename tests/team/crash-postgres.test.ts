@@ -1,14 +1,14 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { Me } from '../../shared/schemas/account.ts';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
 import { bundleServer, prepareDatabase, type ServerProcess, startServerProcess } from '../../server/bench/server-process.ts';
 import { callJson, signInAs } from '../../server/bench/session-client.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
 import { openDatabase } from '../../server/db/database.ts';
-import { adminQuery } from '../../server/db/local-postgres.ts';
+import { createClusterDatabase } from '../api/helpers/test-database.ts';
 import { cornerDocument } from '../api/helpers/setup-fixtures.ts';
 
 // The SIGKILL test of tests/crash on PostgreSQL: the real server takes setup revisions from two
@@ -17,7 +17,6 @@ import { cornerDocument } from '../api/helpers/setup-fixtures.ts';
 // audit entry or neither (one transaction).
 
 const KILLS = Number(process.env.CRASH_PG_KILLS ?? 10);
-const cluster = inject('postgresCluster')!;
 const dir = mkdtempSync(join(tmpdir(), 'rw-crash-pg-'));
 let bundle: Awaited<ReturnType<typeof bundleServer>> | undefined;
 let server: ServerProcess | undefined;
@@ -31,8 +30,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 describe('crash safety on PostgreSQL', () => {
   it(`keeps every acknowledged save through ${KILLS} SIGKILLs of the server`, async () => {
-    await adminQuery(cluster.adminUrl, 'create database crash_pg template ridewright_template');
-    const url = cluster.adminUrl.replace(/\/[^/]*$/, '/crash_pg');
+    const url = await createClusterDatabase('crash_pg');
     await prepareDatabase(url);
     bundle = await bundleServer();
     const start = () => startServerProcess({ dbPath: join(dir, 'unused.sqlite'), bundle: bundle!.path, readyTimeoutMs: 180_000, env: { DATABASE_URL: url } });

@@ -2,20 +2,19 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pino from 'pino';
-import { afterAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { Me } from '../../shared/schemas/account.ts';
 import { callJson, type Session, signInAs } from '../../server/bench/session-client.ts';
 import { prepareDatabase } from '../../server/bench/server-process.ts';
 import { copySqliteToPostgres } from '../../server/cli/copy-database.ts';
 import { loadConfig } from '../../server/config.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
-import { adminQuery } from '../../server/db/local-postgres.ts';
+import { clusterDatabaseUrl, createClusterDatabase } from '../api/helpers/test-database.ts';
 import { type RunningServer, startServer } from '../../server/start-server.ts';
 
 // `npm run db:copy`: the seeded demo database copied from SQLite into an empty PostgreSQL
 // database gives the same answers from the API, list for list and field for field.
 
-const cluster = inject('postgresCluster')!;
 const dir = mkdtempSync(join(tmpdir(), 'rw-copy-'));
 const servers: RunningServer[] = [];
 afterAll(async () => {
@@ -48,8 +47,7 @@ describe('npm run db:copy', () => {
   it('copies every table of a seeded SQLite database into empty PostgreSQL, and the API answers the same from both', async () => {
     const file = join(dir, 'demo.sqlite');
     await prepareDatabase(file);
-    await adminQuery(cluster.adminUrl, 'create database copy_target');
-    const url = cluster.adminUrl.replace(/\/[^/]*$/, '/copy_target');
+    const url = await createClusterDatabase('copy_target', { empty: true });
 
     const copied = await copySqliteToPostgres(file, url);
     const rows = Object.fromEntries(copied.map((c) => [c.table, c.rows]));
@@ -73,7 +71,7 @@ describe('npm run db:copy', () => {
   it('refuses to copy into a database that already holds data, and changes nothing there', async () => {
     const file = join(dir, 'again.sqlite');
     await prepareDatabase(file);
-    const url = cluster.adminUrl.replace(/\/[^/]*$/, '/copy_target');
+    const url = clusterDatabaseUrl('copy_target');
     await expect(copySqliteToPostgres(file, url)).rejects.toThrow(/not empty: table \w+ has \d+ rows/);
   });
 });

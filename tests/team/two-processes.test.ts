@@ -1,20 +1,19 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Me } from '../../shared/schemas/account.ts';
 import { SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { bundleServer, prepareDatabase, type ServerProcess, startServerProcess } from '../../server/bench/server-process.ts';
 import { callJson, signInAs } from '../../server/bench/session-client.ts';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/core/demo-people.ts';
-import { adminQuery } from '../../server/db/local-postgres.ts';
+import { createClusterDatabase } from '../api/helpers/test-database.ts';
 import { cornerDocument } from '../api/helpers/setup-fixtures.ts';
 
 // Two real server processes (`server/main.ts`) on one PostgreSQL database, as a team would run
 // them behind a load balancer: what one process decides (a sign-out, the attempts an address
 // has used) holds on the other, because it lives in the database and not in process memory.
 
-const cluster = inject('postgresCluster')!;
 const dir = mkdtempSync(join(tmpdir(), 'rw-team-'));
 const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!;
 const SIGN_IN_LIMIT = 5;
@@ -23,8 +22,7 @@ let a: ServerProcess;
 let b: ServerProcess;
 
 beforeAll(async () => {
-  await adminQuery(cluster.adminUrl, 'create database team_two template ridewright_template');
-  const url = cluster.adminUrl.replace(/\/[^/]*$/, '/team_two');
+  const url = await createClusterDatabase('team_two');
   await prepareDatabase(url);
   bundle = await bundleServer();
   const start = () =>

@@ -17,13 +17,27 @@ export interface TestDatabase {
   drop(): Promise<void>;
 }
 
+/**
+ * A new database on the test cluster, copied from the migrated template (or empty with
+ * `{ empty: true }`); returns its URL. For tests that need a database of a name they know.
+ */
+export async function createClusterDatabase(name: string, opts: { empty?: boolean } = {}): Promise<string> {
+  const cluster = inject('postgresCluster');
+  if (!cluster) throw new Error('a PostgreSQL test database needs the global setup of the api-pg or team project');
+  await adminQuery(cluster.adminUrl, `create database ${name}${opts.empty ? '' : ` template ${cluster.template}`}`);
+  return clusterDatabaseUrl(name);
+}
+
+/** The URL of a database `name` on the test cluster. */
+export function clusterDatabaseUrl(name: string): string {
+  return inject('postgresCluster')!.adminUrl.replace(/\/[^/]*$/, `/${name}`);
+}
+
 export async function openTestDatabase(): Promise<TestDatabase> {
   if (process.env.RIDEWRIGHT_TEST_DATABASE === 'postgres') {
-    const cluster = inject('postgresCluster');
-    if (!cluster) throw new Error('RIDEWRIGHT_TEST_DATABASE=postgres needs the api-pg project\'s global setup');
+    const cluster = inject('postgresCluster')!;
     const name = `t_${randomBytes(6).toString('hex')}`;
-    await adminQuery(cluster.adminUrl, `create database ${name} template ${cluster.template}`);
-    const target = cluster.adminUrl.replace(/\/[^/]*$/, `/${name}`);
+    const target = await createClusterDatabase(name);
     const db = openDatabase(target);
     return {
       db,
