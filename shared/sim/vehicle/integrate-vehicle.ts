@@ -26,16 +26,17 @@ export interface AxleRoads {
 }
 
 /**
- * Axle inputs from one road built for duration + delay: the rear axle starts at the road's
- * origin and the front a wheelbase ahead of it, so no input is read before the road begins.
+ * Axle inputs from the road built for duration + delay (once per axle when their tyres read it
+ * differently, else `frontRoad` is the same road): the rear axle starts at the road's origin
+ * and the front a wheelbase ahead of it, so no input is read before the road begins.
  */
-export function axleRoads(road: RoadExcitation, delay: number): AxleRoads {
+export function axleRoads(road: RoadExcitation, delay: number, frontRoad: RoadExcitation = road): AxleRoads {
   const front: RoadExcitation = {
     sample(t, out) {
-      road.sample(t + delay, out);
+      frontRoad.sample(t + delay, out);
     },
-    breakpoints: road.breakpoints.map((b) => b - delay).filter((b) => b > 0),
-    summary: road.summary,
+    breakpoints: frontRoad.breakpoints.map((b) => b - delay).filter((b) => b > 0),
+    summary: frontRoad.summary,
   };
   return { front, rear: road, delay };
 }
