@@ -157,7 +157,7 @@ function main(argv: string[]): number {
     allowPositionals: false,
   });
   if (values.vehicle) return mainVehicle(values);
-  if (!values.setup) throw new InputError('--setup (or --vehicle) is required');
+  if (!values.setup) throw new InputError('--setup is required (or --vehicle for a whole vehicle)');
   if (!values.road) throw new InputError('--road is required');
   const setup = readJson(values.setup, 'setup');
   const road = resolveCsvRoad(readJson(values.road, 'road'), values.road);
