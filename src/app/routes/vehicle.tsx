@@ -88,7 +88,7 @@ export function VehicleRoute() {
             )}
             <VehicleSummaryPanel workspaceId={workspace.id} vehicle={v} />
             {v.front && v.rear && <WholeVehicle workspaceId={workspace.id} frontId={v.front.id} rearId={v.rear.id} />}
-            <ResultsCaution />
+            <ResultsCaution model="simplified models: one corner, and the body on two axles in the pitch plane" />
           </>
         );
       }}

@@ -100,13 +100,12 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
   }, [key]);
 
   const numberField = (name: keyof Body, label: string, unitText: string, toShown: (si: number) => number, toSI: (shown: number) => number, min: number) => (
-    <label className="flex flex-col gap-0.5 text-xs text-ink-soft">
-      <span>
+    <label className="flex w-36 flex-col gap-0.5 text-xs text-ink-soft">
+      <span className="whitespace-nowrap">
         {label}
         {unitText && <span className="text-ink-faint">, {unitText}</span>}
       </span>
       <Input
-        className="w-24"
         inputMode="decimal"
         name={name}
         value={texts[name] ?? String(Number(toShown(body[name] as number).toPrecision(4)))}
@@ -143,9 +142,9 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
         {formatQuantityText(DURATION, 's')} on {ROADS.find((x) => x.key === body.roadKey)!.label}, re-run as you edit. Nothing here is saved.
       </p>
       <div className="mt-2 flex flex-wrap items-end gap-3">
-        <label className="flex flex-col gap-0.5 text-xs text-ink-soft">
+        <label className="flex w-56 flex-col gap-0.5 text-xs text-ink-soft">
           Road
-          <Select className="w-56" name="road" value={body.roadKey} onChange={(e) => setBody((b) => ({ ...b, roadKey: e.target.value }))}>
+          <Select name="road" value={body.roadKey} onChange={(e) => setBody((b) => ({ ...b, roadKey: e.target.value }))}>
             {ROADS.map((x) => (
               <option key={x.key} value={x.key}>
                 {x.label}
@@ -167,7 +166,7 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
       )}
       {!r && !failure && <p className="py-4 text-sm text-ink-faint">Running…</p>}
       {r && (
-        <div className={`mt-3 grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.2fr)_minmax(0,1fr)] ${stale ? 'opacity-60 transition-opacity' : 'transition-opacity'}`}>
+        <div className={`mt-3 grid gap-4 lg:grid-cols-[minmax(0,1.25fr)_minmax(0,1.1fr)_minmax(0,0.9fr)] ${stale ? 'opacity-60 transition-opacity' : 'transition-opacity'}`}>
           <div>
             <h3 className="text-xs font-semibold text-ink-soft">Modes</h3>
             <table className="mt-1 w-full text-sm" aria-label="Vehicle modes">
@@ -200,7 +199,7 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
                       <td className="text-right">
                         <Figure value={m.dampingRatio} digits={2} label={`${label} damping ratio`} />
                       </td>
-                      <td className="text-right text-xs text-ink-soft">{m.nodeBehindFrontAxle === null ? '—' : stillPoint(m.nodeBehindFrontAxle, r.linear.geometry.wheelbase)}</td>
+                      <td className="pl-2 text-right text-xs whitespace-nowrap text-ink-soft">{m.nodeBehindFrontAxle === null ? '—' : stillPoint(m.nodeBehindFrontAxle, r.linear.geometry.wheelbase)}</td>
                     </tr>
                   );
                 })}
@@ -232,10 +231,11 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
                   <dd className="text-right">
                     <Figure value={s.pointTotal} unit="mps2" label={`${s.name} point vibration total value`} />
                   </dd>
-                  <dt className="pl-2 text-2xs text-ink-faint">vertical Wk · {s.comfort.primary}</dt>
+                  <dt className="pl-2 text-2xs text-ink-faint">vertical, Wk</dt>
                   <dd className="text-right text-xs">
                     <Figure value={s.verticalWkRms} unit="mps2" label={`${s.name} Wk-weighted vertical`} />
                   </dd>
+                  <dd className="col-span-2 pb-1 pl-2 text-2xs text-comfort">{s.comfort.bands.join(' / ')}</dd>
                 </div>
               ))}
               <dt className="text-xs text-comfort">Pitch, We RMS</dt>
