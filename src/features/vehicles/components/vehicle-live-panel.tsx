@@ -100,7 +100,7 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
   }, [key]);
 
   const numberField = (name: keyof Body, label: string, unitText: string, toShown: (si: number) => number, toSI: (shown: number) => number, min: number) => (
-    <label className="flex w-36 flex-col gap-0.5 text-xs text-ink-soft">
+    <label className="flex w-28 flex-col gap-0.5 text-xs text-ink-soft">
       <span className="whitespace-nowrap">
         {label}
         {unitText && <span className="text-ink-faint">, {unitText}</span>}
@@ -154,7 +154,7 @@ export function VehicleLivePanel({ front, rear }: { front: Setup; rear: Setup })
         </label>
         {numberField('speed', 'Speed', units.speed.symbol, units.speed.fromSI, (n) => siFromShown(units.speed, n), 0)}
         {numberField('wheelbase', 'Wheelbase', 'm', (x) => x, (x) => x, 0.5)}
-        {numberField('radius', 'Pitch radius of gyration', 'm', (x) => x, (x) => x, 0)}
+        {numberField('radius', 'Pitch radius k', 'm', (x) => x, (x) => x, 0)}
         {numberField('frontRebound', 'Front rebound', '×', (x) => x, (x) => x, 0)}
         {numberField('rearRebound', 'Rear rebound', '×', (x) => x, (x) => x, 0)}
       </div>
