@@ -45,7 +45,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
   let sink: MailSink | undefined;
   if (!config.smtp) sink = await startMailSink({ db, port: config.sinkPort });
   const mailer = createMailer(config.smtp ? { kind: 'smtp', settings: config.smtp } : { kind: 'sink', port: sink!.port }, config.mailFrom, logger);
-  const fleet = config.redisUrl ? openFleetQueue(config.redisUrl) : null;
+  const fleet = config.redisUrl ? openFleetQueue(config.redisUrl, (err) => logger.warn({ err: err.message }, 'team workers queue')) : null;
   const { app } = createApp({
     db,
     secret: resolveSecret(config),

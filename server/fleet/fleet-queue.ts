@@ -40,8 +40,10 @@ export interface FleetQueue {
   close(): Promise<void>;
 }
 
-export function openFleetQueue(redisUrl: string): FleetQueue {
+/** `onError`: Redis going away (the client reconnects by itself); without it such errors are ignored. */
+export function openFleetQueue(redisUrl: string, onError: (err: Error) => void = () => {}): FleetQueue {
   const queue = new Queue(FLEET_QUEUE, { connection: fleetConnection(redisUrl) });
+  queue.on('error', onError);
   return {
     async addChunks(jobs) {
       for (let i = 0; i < jobs.length; i += 500) {

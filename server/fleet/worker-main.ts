@@ -23,15 +23,21 @@ const threads = positive(process.env.FLEET_THREADS, availableParallelism());
 // How long a chunk stays with a worker that stopped answering before another takes it.
 const lockMs = positive(process.env.FLEET_LOCK_MS, 30_000);
 const checkMs = positive(process.env.FLEET_CHECK_MS, 5_000);
+const logChunks = process.env.FLEET_LOG_CHUNKS === '1';
 
 const db = openDatabase(config.database);
-const queue = openFleetQueue(redisUrl);
+const queue = openFleetQueue(redisUrl, (err) => logger.warn({ err: err.message }, 'queue connection'));
 const pool = new Piscina({ filename: new URL('./chunk-thread.mjs', import.meta.url).href, minThreads: threads, maxThreads: threads, idleTimeout: 60_000 });
 const deps: ChunkDeps = { db, queue, pool, now: () => new Date() };
 
 const worker = new Worker(
   FLEET_QUEUE,
-  async (job: Job) => (job.name === 'finish' ? finishRun(deps, job.data as FinishJob) : processChunk(deps, job.data as ChunkJob)),
+  async (job: Job) => {
+    if (job.name === 'finish') return finishRun(deps, job.data as FinishJob);
+    // one line per chunk taken, for the fault tests and for watching a worker by eye
+    if (logChunks) console.log(`took chunk ${job.id}`);
+    return processChunk(deps, job.data as ChunkJob);
+  },
   { connection: fleetConnection(redisUrl), concurrency: threads, lockDuration: lockMs, stalledInterval: lockMs, maxStalledCount: 3 },
 );
 worker.on('failed', (job, err) => {
