@@ -13,7 +13,7 @@ import { createStudy } from '../../server/studies/studies.service.ts';
 import { addMember, createUser, createWorkspace, sessionHeaders, type TestUser } from '../api/helpers/people.ts';
 import { exampleSetup, insertSetup } from '../api/helpers/runs.ts';
 import { createTestApp, type TestApp } from '../api/helpers/test-app.ts';
-import { type RedisProcess, startRedis, startWorker, type WorkerProcess } from './helpers/processes.ts';
+import { type RedisProcess, startRedis, startWorker, type WorkerProcess } from '../../server/bench/fleet-processes.ts';
 
 // The team's workers with real processes: redis-server on loopback, two `npm run worker`
 // processes on one SQLite file (WAL), the API in this process. Each study is checked point by

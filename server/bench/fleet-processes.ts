@@ -64,7 +64,7 @@ export interface WorkerProcess {
   kill(signal?: NodeJS.Signals): Promise<void>;
 }
 
-const root = fileURLToPath(new URL('../../../', import.meta.url));
+const root = fileURLToPath(new URL('../../', import.meta.url));
 
 /** `npm run worker` (server/fleet/worker-main.ts) as its own process, on one thread unless told. */
 export async function startWorker(env: Record<string, string>): Promise<WorkerProcess> {
