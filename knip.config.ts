@@ -3,6 +3,9 @@ export default {
   entry: [
     'server/jobs/heavy-worker.mjs',
     'server/jobs/heavy-tasks.ts',
+    'server/fleet/chunk-thread.mjs',
+    'server/fleet/chunk-task.ts',
+    'server/fleet/worker-main.ts',
     'bench/sweep-worker.ts',
     'migrations/*.ts',
     'workers/*.ts',

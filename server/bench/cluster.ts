@@ -27,6 +27,8 @@ const arg = (name: string, fallback: number) => {
   return i >= 0 ? Number(process.argv[i + 1]) : fallback;
 };
 const POINTS = arg('--points', 400);
+// Chunks of a fifth of the design size, so that two workers share a dozen or more of them.
+process.env.FLEET_CHUNK_MS ??= '200';
 const DURATION = 60;
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-cluster-'));

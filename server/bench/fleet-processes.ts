@@ -82,7 +82,11 @@ export async function startWorker(env: Record<string, string>): Promise<WorkerPr
     partial = parts.pop()!;
     for (const line of parts) {
       lines.push(line);
-      for (const w of [...waiters]) if (w.pattern.test(line)) (waiters.splice(waiters.indexOf(w), 1), w.resolve(line));
+      for (const w of [...waiters]) {
+        if (!w.pattern.test(line)) continue;
+        waiters.splice(waiters.indexOf(w), 1);
+        w.resolve(line);
+      }
     }
   });
   const nextLine = (pattern: RegExp) => new Promise<string>((resolve) => waiters.push({ pattern, resolve }));
