@@ -5,7 +5,6 @@ export default {
     'server/jobs/heavy-tasks.ts',
     'server/fleet/chunk-thread.mjs',
     'server/fleet/chunk-task.ts',
-    'server/fleet/worker-main.ts',
     'bench/sweep-worker.ts',
     'migrations/*.ts',
     'workers/*.ts',
@@ -16,6 +15,10 @@ export default {
   ],
   project: ['src/**/*.{ts,tsx,css}', 'server/**/*.{ts,mjs}', 'shared/**/*.ts', 'workers/**/*.ts', 'migrations/**/*.ts', 'cli/**/*.ts', 'bench/**/*.ts', 'tests/**/*.ts'],
   ignore: ['tests/lint/fixtures/**'],
+  // Debian's package, started by the fleet tests and bench:cluster (server/bench/fleet-processes.ts)
+  ignoreBinaries: ['redis-server'],
+  // pinned for the drive-fitting work of issue 15's other half, not yet imported on this branch
+  ignoreDependencies: ['ml-levenberg-marquardt'],
   ignoreExportsUsedInFile: true,
   // Stylesheets import the fonts and Tailwind: read their @import lines as imports.
   compilers: {

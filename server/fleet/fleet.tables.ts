@@ -1,4 +1,4 @@
-import type { Insertable, Selectable } from 'kysely';
+import type { Insertable } from 'kysely';
 
 /**
  * `running`: chunks are on the queue; `finishing`: every unit is written and the summary is being
@@ -29,5 +29,4 @@ export interface StudyFleetRunTable {
   updated_at: string;
   finished_at: string | null;
 }
-export type FleetRunRow = Selectable<StudyFleetRunTable>;
 export type NewFleetRunRow = Insertable<StudyFleetRunTable>;
