@@ -7,7 +7,7 @@
  * asserted; timings depend on the machine and what else runs on it. `--points N` (default 400).
  */
 import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { StudyDefinition } from '../../shared/schemas/study.ts';
 import { expandStudy } from '../../shared/study/expand.ts';
@@ -80,7 +80,7 @@ try {
   console.error(`in-process: ${inProcessMs.toFixed(2)} ms per ${DURATION} s run on one thread`);
 
   const trial = async (n: number) => {
-    while (workers.length < n) workers.push(await startWorker({ REDIS_URL: redis.url, RIDEWRIGHT_DB: dbFile, DATABASE_URL: '', FLEET_LOG_CHUNKS: '0' }));
+    while (workers.length < n) workers.push(await startWorker({ REDIS_URL: redis.url, RIDEWRIGHT_DB: dbFile, DATABASE_URL: '', FLEET_LOG_CHUNKS: '1' }));
     const made = await createStudy(db, { workspaceId: rev.workspaceId }, { id: rev.userId, name: rev.userName }, { definition: def(`${n} worker(s)`) }, new Date());
     if (!made.ok) throw new Error(made.message);
     const started = performance.now();
@@ -99,12 +99,21 @@ try {
   };
   // a first study warms the workers' threads (tsx, the integrator) before anything is timed
   await trial(1);
+  for (const w of workers) w.lines.length = 0;
   const one = await trial(1);
   const two = await trial(2);
   const rate1 = one.runs / one.seconds;
   const rate2 = two.runs / two.seconds;
   const efficiency = rate2 / (2 * rate1);
   const perChunkOverheadMs = ((one.seconds * 1000) - one.runs * inProcessMs) / one.chunks;
+  // measured inside the workers: a chunk's time in the worker beyond its runs on the thread
+  const timings = workers.flatMap((w) => w.lines.flatMap((l) => {
+    const m = /stored: ([\d.]+) ms in the worker, ([\d.]+) ms of runs/.exec(l);
+    return m ? [{ worker: Number(m[1]), thread: Number(m[2]) }] : [];
+  }));
+  const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] ?? NaN;
+  const inWorkerOverhead = median(timings.map((x) => x.worker - x.thread));
+  const threadMsPerRun = timings.reduce((a, x) => a + x.thread, 0) / Math.max(1, timings.length) / (one.runs / one.chunks);
   const workerMsPerRun = 1000 / rate1;
 
   // 10⁶ runs on 20 machines × 16 cores, at this machine's per-thread rate and the two-process efficiency
@@ -120,13 +129,15 @@ try {
     ['one worker process (1 thread)', `${rate1.toFixed(1)} runs/s (${workerMsPerRun.toFixed(2)} ms per run, ${((workerMsPerRun / inProcessMs - 1) * 100).toFixed(1)} % over in-process)`],
     ['two worker processes (1 thread each)', `${rate2.toFixed(1)} runs/s`],
     ['scaling efficiency 1 → 2 processes', `${(efficiency * 100).toFixed(0)} %`],
-    ['queue and storage cost per chunk', `${perChunkOverheadMs.toFixed(0)} ms (${one.chunks} chunks of ${runsPerChunk.toFixed(0)} runs)`],
+    ['worker thread, ms per run (all chunks)', `${threadMsPerRun.toFixed(2)} ms (${((threadMsPerRun / inProcessMs - 1) * 100).toFixed(1)} % over in-process)`],
+    ['in the worker beyond the runs, per chunk (median)', `${inWorkerOverhead.toFixed(1)} ms (clone, judge, one transaction)`],
+    ['wall time beyond in-process runs, per chunk', `${perChunkOverheadMs.toFixed(0)} ms (${one.chunks} chunks of ${runsPerChunk.toFixed(0)} runs; includes load from others)`],
     ['10⁶ runs on 20 × 16 cores', `${fleetRate.toFixed(0)} runs/s → ${(1e6 / fleetRate / 60).toFixed(1)} min`],
     ['  chunks per second at that rate', chunksPerSecond.toFixed(0)],
     ['  Redis commands per second (≈10 per chunk)', redisOps.toFixed(0)],
     ['  database transactions per second (1 per chunk)', chunksPerSecond.toFixed(0)],
   ];
-  console.log('\nbench:cluster on this machine (2 cores, shared)');
+  console.log(`\nbench:cluster on this machine (2 cores, shared; load average now ${loadavg()[0].toFixed(1)})`);
   for (const [k, v] of rows) console.log(`  ${k.padEnd(48)} ${v}`);
 } finally {
   await Promise.all(workers.map((w) => w.kill('SIGTERM')));

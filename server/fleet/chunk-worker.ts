@@ -72,18 +72,19 @@ function pointsOf(ctx: StudyContext, units: number[], outcomes: StudyJobOutcome[
   });
 }
 
-export type ChunkResult = 'stored' | 'stopped';
+/** How the chunk ended, with the ms its runs took on the thread (the rest of its time is queue, clone and storage). */
+export type ChunkResult = { outcome: 'stored' | 'stopped'; threadMs: number };
 
 export async function processChunk(deps: ChunkDeps, job: ChunkJob): Promise<ChunkResult> {
   const run = await findFleetRun(deps.db, job.studyId);
-  if (!run || run.generation !== job.generation || run.state !== 'running') return 'stopped';
+  if (!run || run.generation !== job.generation || run.state !== 'running') return { outcome: 'stopped', threadMs: 0 };
   const ctx = await contextOf(deps.db, job);
   const units = chunkUnitsOf({ units: ctx.plan.units, chunkUnits: run.chunk_units }, job.chunk);
   const jobs: StudyRunJob[] = units.flatMap((u) =>
     (ctx.plan.jobsOf.get(u) ?? []).map((j) => ({ pointIndex: u, values: u === -1 ? {} : ctx.plan.expanded.points[u].values, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}) })),
   );
   const input: ChunkTaskInput = { key: `${job.studyId}.${job.generation}`, context: ctx.run, jobs };
-  const { outcomes } = (await deps.pool.run(input, { name: 'runChunk' })) as { outcomes: StudyJobOutcome[] };
+  const { outcomes, threadMs } = (await deps.pool.run(input, { name: 'runChunk' })) as { outcomes: StudyJobOutcome[]; threadMs: number };
   const rows = pointsOf(ctx, units, outcomes).map((p) => studyPointRow(job.studyId, p));
   const last = await deps.db.transaction().execute(async (trx) => {
     const at = deps.now().toISOString();
@@ -94,9 +95,9 @@ export async function processChunk(deps: ChunkDeps, job: ChunkJob): Promise<Chun
     const after = await findFleetRun(trx, job.studyId);
     return after !== undefined && after.units_done >= after.units_total && (await moveFleetRun(trx, job.studyId, job.generation, ['running'], 'finishing', at));
   });
-  if (last === null) return 'stopped';
+  if (last === null) return { outcome: 'stopped', threadMs };
   if (last) await deps.queue.addFinish({ studyId: job.studyId, workspaceId: job.workspaceId, generation: job.generation });
-  return 'stored';
+  return { outcome: 'stored', threadMs };
 }
 
 /** Ranks the stored points and marks the study complete, once. */

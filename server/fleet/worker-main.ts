@@ -36,7 +36,10 @@ const worker = new Worker(
     if (job.name === 'finish') return finishRun(deps, job.data as FinishJob);
     // one line per chunk taken, for the fault tests and for watching a worker by eye
     if (logChunks) console.log(`took chunk ${job.id}`);
-    return processChunk(deps, job.data as ChunkJob);
+    const started = performance.now();
+    const done = await processChunk(deps, job.data as ChunkJob);
+    if (logChunks) console.log(`chunk ${job.id} ${done.outcome}: ${(performance.now() - started).toFixed(1)} ms in the worker, ${done.threadMs.toFixed(1)} ms of runs`);
+    return done;
   },
   { connection: fleetConnection(redisUrl), concurrency: threads, lockDuration: lockMs, stalledInterval: lockMs, maxStalledCount: 3 },
 );
