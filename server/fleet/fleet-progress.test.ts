@@ -26,13 +26,13 @@ const row = (over: Partial<FleetRunView> = {}): FleetRunView => ({
 
 describe('fleet progress', () => {
   it('takes the rate over the last seconds of readings, and the time left from it', () => {
-    const samples = [0, 1000, 2000].map((dt, i) => ({ at: t0 + 10_000 + dt, runs: 300 + 50 * i }));
-    const p = progressOf(row(), t0 + 12_000, samples);
+    const samples = [0, 5000, 10_000].map((dt, i) => ({ at: t0 + 10_000 + dt, runs: 250 + 250 * i }));
+    const p = progressOf(row(), t0 + 20_000, samples);
     expect(p.runsPerSecond).toBe(50);
     expect(p.secondsLeft).toBe(600 / 50);
   });
 
-  it('falls back to the whole start when the readings span under a second, counting only runs of this start', () => {
+  it('falls back to the whole start when the readings span under five seconds, counting only runs of this start', () => {
     const p = progressOf(row({ runs_at_start: 200 }), t0 + 10_000, []);
     expect(p.runsPerSecond).toBe(20);
     expect(p.secondsLeft).toBe(30);
@@ -45,7 +45,7 @@ describe('fleet progress', () => {
   });
 
   it('keeps only the readings of the last window', () => {
-    const kept = withSample([{ at: 0, runs: 0 }, { at: 4000, runs: 10 }], { at: 8000, runs: 20 });
-    expect(kept.map((s) => s.at)).toEqual([4000, 8000]);
+    const kept = withSample([{ at: 0, runs: 0 }, { at: 10_000, runs: 10 }], { at: 25_000, runs: 20 });
+    expect(kept.map((s) => s.at)).toEqual([10_000, 25_000]);
   });
 });

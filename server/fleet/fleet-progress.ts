@@ -7,17 +7,20 @@ export interface RunsSample {
   runs: number;
 }
 
-const WINDOW_MS = 5000;
+// Chunks land in bursts (each stores a second or more of runs at once), so the window spans
+// several of them before its rate is trusted.
+const WINDOW_MS = 20_000;
+const MIN_SPAN_MS = 5_000;
 
 /**
- * Progress as the page shows it. The rate is taken over the last few seconds of `samples` when
- * they span at least one, else over the whole of this start; time left assumes it holds.
+ * Progress as the page shows it. The rate is taken over the last 20 s of `samples` when they
+ * span at least 5 s, else over the whole of this start; time left assumes it holds.
  */
 export function progressOf(row: FleetRunView, now: number, samples: readonly RunsSample[] = []): FleetProgress {
   const live = row.state === 'running';
   const recent = samples.filter((s) => s.at >= now - WINDOW_MS);
   let rate: number | null = null;
-  if (recent.length >= 2 && recent[recent.length - 1].at - recent[0].at >= 1000) {
+  if (recent.length >= 2 && recent[recent.length - 1].at - recent[0].at >= MIN_SPAN_MS) {
     rate = (recent[recent.length - 1].runs - recent[0].runs) / ((recent[recent.length - 1].at - recent[0].at) / 1000);
   } else {
     const end = row.finished_at ? Date.parse(row.finished_at) : now;

@@ -191,7 +191,11 @@ export function StudyDetailRoute() {
                   pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
                 />
               ) : (
-                <Notice>This study has not been run yet. {canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}</Notice>
+                <Notice>
+                  {onWorkers
+                    ? 'The results appear here when the workers have run every point.'
+                    : `This study has not been run yet. ${canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}`}
+                </Notice>
               )}
             </div>
             <ResultsCaution />
