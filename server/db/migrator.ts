@@ -47,7 +47,10 @@ export const migrations: Record<string, Migration> = {
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {
-  return new Migrator({ db, provider: { getMigrations: async () => migrations } });
+  // Branches take migration numbers ahead of time, so one can land after a higher number has
+  // already run on someone's database; each migration touches only its own tables and columns,
+  // so running a late lower number afterwards is safe (Kysely refuses it by default).
+  return new Migrator({ db, provider: { getMigrations: async () => migrations }, allowUnorderedMigrations: true });
 }
 
 /** Runs every pending migration; returns Kysely's result set (error as a value). */
