@@ -40,7 +40,7 @@ export function roadFromProfile(data: DriveData, road: MeasuredRoad, footprint: 
     spline.at(offset + s[i], out);
     elevation[i] = out[0] - z0;
   }
-  return { ok: true, elevation, method: `profile "${road.name}" from ${offset} m` };
+  return { ok: true, elevation, method: `profile "${road.name ?? "measured"}" from ${offset} m` };
 }
 
 /** Lowest frequency kept when a displacement is integrated from an acceleration, Hz. */

@@ -22,7 +22,8 @@ export interface FitParameter {
   inRoadEstimate: boolean;
 }
 
-const scaleTable = (table: Setup['damper']['compression'], k: number) => table.map(([v, f]) => [v, f * k] as [number, number]);
+type Table = Setup['damper']['compression'];
+const scaleTable = (table: Table, k: number): Table => table.map(([v, f]) => [v, f * k]) as Table;
 
 export const fitParameters: readonly FitParameter[] = [
   {
@@ -30,7 +31,7 @@ export const fitParameters: readonly FitParameter[] = [
     label: 'Sprung mass',
     unit: 'kg',
     read: (s) => s.sprungMass,
-    write: (s, v) => ({ ...s, sprungMass: v }),
+    write: (s, v) => ({ ...s, sprungMass: v as Setup['sprungMass'] }),
     scalesWithMotion: true,
     inRoadEstimate: true,
   },
@@ -39,7 +40,7 @@ export const fitParameters: readonly FitParameter[] = [
     label: 'Unsprung mass',
     unit: 'kg',
     read: (s) => s.unsprungMass,
-    write: (s, v) => ({ ...s, unsprungMass: v }),
+    write: (s, v) => ({ ...s, unsprungMass: v as Setup['unsprungMass'] }),
     scalesWithMotion: true,
     inRoadEstimate: true,
   },
@@ -48,7 +49,7 @@ export const fitParameters: readonly FitParameter[] = [
     label: 'Spring rate',
     unit: 'N/m',
     read: (s) => s.springRate,
-    write: (s, v) => ({ ...s, springRate: v }),
+    write: (s, v) => ({ ...s, springRate: v as Setup['springRate'] }),
     scalesWithMotion: true,
     inRoadEstimate: false,
   },
@@ -57,7 +58,7 @@ export const fitParameters: readonly FitParameter[] = [
     label: 'Tyre rate',
     unit: 'N/m',
     read: (s) => s.tyreRate,
-    write: (s, v) => ({ ...s, tyreRate: v }),
+    write: (s, v) => ({ ...s, tyreRate: v as Setup['tyreRate'] }),
     scalesWithMotion: true,
     inRoadEstimate: true,
   },

@@ -1,21 +1,20 @@
 import seedrandom from 'seedrandom';
 import { commentText, writeCsv } from '../csv/write-csv.ts';
 import type { DriveData } from '../schemas/drive.ts';
-import type { MeasuredRoad } from '../schemas/road.ts';
 import type { Setup } from '../schemas/setup.ts';
 import { generateIso8608Profile } from '../sim/roads/iso8608.ts';
-import type { IsoClass } from '../schemas/road.ts';
+import { type IsoClass, Iso8608Road, type MeasuredRoad } from '../schemas/road.ts';
 import { elevationExcitation, roadFromProfile } from './drive-road.ts';
 import { rms } from './fit-figures.ts';
 import { simulateDrive } from './simulate-drive.ts';
 
 /** An invented measured profile: an ISO 8608 road of a class and seed written out as points every `spacing` m. */
 export function syntheticProfile(name: string, isoClass: IsoClass, seed: number, length = 1024, spacing = 0.05): MeasuredRoad {
-  const iso = generateIso8608Profile({ kind: 'iso8608', name, class: isoClass, seed, length });
+  const iso = generateIso8608Profile(Iso8608Road.parse({ kind: 'iso8608', name, class: isoClass, seed, length }));
   const every = Math.max(1, Math.round(spacing / iso.dx));
   const points: [number, number][] = [];
   for (let i = 0; i < iso.z.length; i += every) points.push([i * iso.dx, iso.z[i]]);
-  return { kind: 'measured', name, points, detrend: 'none' };
+  return { kind: 'measured', name, points: points as MeasuredRoad['points'], detrend: 'none' };
 }
 
 export interface SyntheticDriveOptions {
@@ -47,9 +46,9 @@ export function syntheticDrive(o: SyntheticDriveOptions): SyntheticOutcome {
   const skeleton: DriveData = { dt, speed, channels: {} };
   const road = roadFromProfile(skeleton, o.road, o.setup.tyreFootprint);
   if (!road.ok) return road;
-  const sim = simulateDrive(o.setup, elevationExcitation(road.elevation, dt, o.road.name), n, dt, 'odex', 1e-8);
+  const sim = simulateDrive(o.setup, elevationExcitation(road.elevation, dt, road.method), n, dt, 'odex', 1e-8);
   if (!sim.ok) return sim;
-  const random = seedrandom(`drive-noise:${o.seed}`);
+  const random = seedrandom(`drive-noise:${String(o.seed)}`);
   const gauss = () => Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
   const channels: DriveData['channels'] = {};
   for (const [key, clean] of Object.entries(sim.channels) as [keyof typeof sim.channels, Float64Array][]) {

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { plainLine, plainLineMessage } from './fields.ts';
-import { RevisionMessage, RevisionSummary } from './setup-record.ts';
+import { RevisionMessage } from './setup-record.ts';
 import { Setup } from './setup.ts';
 
 /**
@@ -87,5 +87,5 @@ export const ApplyDriveFitInput = z.object({
 });
 export type ApplyDriveFitInput = z.infer<typeof ApplyDriveFitInput>;
 
-export const ApplyDriveFitResult = z.object({ drive: DriveItem, revision: RevisionSummary });
+export const ApplyDriveFitResult = z.object({ drive: DriveItem, revision: z.object({ id: z.string(), number: z.number().int().positive() }) });
 export type ApplyDriveFitResult = z.infer<typeof ApplyDriveFitResult>;

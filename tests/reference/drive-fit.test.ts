@@ -8,12 +8,12 @@ import { Setup } from '../../shared/schemas/setup.ts';
 // profile at a varying speed by the reference integrator (odex at 1e-8), 5 % Gaussian noise on
 // every signal; the fit starts from the example setup, with its own integrator (rk4).
 const base = Setup.parse(JSON.parse(readFileSync(new URL('../../examples/pipit-front.setup.json', import.meta.url), 'utf8')));
-const truth: Setup = {
+const truth = Setup.parse({
   ...base,
   springRate: base.springRate * 1.1,
   unsprungMass: base.unsprungMass * 0.9,
-  damper: { ...base.damper, rebound: base.damper.rebound.map(([v, f]) => [v, f * 0.85] as [number, number]) },
-};
+  damper: { ...base.damper, rebound: base.damper.rebound.map(([v, f]) => [v, f * 0.85]) },
+});
 const road = syntheticProfile('check lane', 'C', 7, 512);
 const drive = syntheticDrive({ setup: truth, road, duration: 12, rate: 100, speed: 18, speedSwing: 3, noise: 0.05, seed: 1 });
 if (!drive.ok) throw new Error(drive.reason);

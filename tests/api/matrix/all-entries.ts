@@ -1,5 +1,6 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { apiTokensEntries } from './api-tokens-entries.ts';
+import { drivesEntries } from './drives-entries.ts';
 import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
@@ -19,4 +20,5 @@ export const allEntries: MatrixEntries = {
   ...studiesEntries,
   ...targetSheetsEntries,
   ...apiTokensEntries,
+  ...drivesEntries,
 };
