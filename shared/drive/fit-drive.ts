@@ -2,6 +2,7 @@ import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { type DriveFitRequest, type DriveFitRequestInput, DriveFitRequest as DriveFitRequestSchema, type FitParameterKey } from '../schemas/drive-fit.ts';
 import { type DriveChannel, driveChannels } from '../schemas/drive.ts';
 import type { Setup } from '../schemas/setup.ts';
+import { quantityLabel } from './drive-header.ts';
 import { elevationExcitation, estimateRoad, roadFromProfile } from './drive-road.ts';
 import { applyParameters, fitParameterOf, fitParameters } from './fit-parameters.ts';
 import { bandCoherence, centred, normalisedError, pairSpectra, rms } from './fit-figures.ts';
@@ -61,6 +62,8 @@ export type DriveFitOutcome =
       residualCorrelation: number;
     }
   | { ok: false; reason: string };
+
+const cap = (s: string) => s[0].toUpperCase() + s.slice(1);
 
 function issuePath(path: PropertyKey[]): string {
   return path.map(String).join('.') || '(request)';
@@ -247,8 +250,8 @@ export function fitDrive(input: DriveFitRequestInput): DriveFitOutcome {
   });
 
   const reasons = channelFits.flatMap((f) => [
-    ...(f.error > GOOD_FIT.maxNormalisedError ? [`${f.channel}: normalised error ${(f.error * 100).toFixed(0)} % is above ${GOOD_FIT.maxNormalisedError * 100} %`] : []),
-    ...(f.coherence < GOOD_FIT.minCoherence ? [`${f.channel}: mean coherence ${f.coherence.toFixed(2)} is below ${GOOD_FIT.minCoherence}`] : []),
+    ...(f.error > GOOD_FIT.maxNormalisedError ? [`${cap(quantityLabel[f.channel])}: normalised error ${(f.error * 100).toFixed(0)} % is above ${GOOD_FIT.maxNormalisedError * 100} %`] : []),
+    ...(f.coherence < GOOD_FIT.minCoherence ? [`${cap(quantityLabel[f.channel])}: mean coherence ${f.coherence.toFixed(2)} is below ${GOOD_FIT.minCoherence}`] : []),
   ]);
   const atLimit = parameters.filter((q, k) => best[k] <= FACTOR_RANGE.min * 1.0001 || best[k] >= FACTOR_RANGE.max * 0.9999);
   for (const q of atLimit) reasons.push(`${q.label} stopped at the edge of its range (${FACTOR_RANGE.min}× to ${FACTOR_RANGE.max}× its start)`);

@@ -69,6 +69,13 @@ describe('drive fit', () => {
     await page.getByText(`Saved as revision ${setup.latestRevision + 1}, citing pipit-front-lane-drive.csv.`).waitFor();
     const after = SetupDetail.parse(await (await page.request.get(`${ws}/setups/${setup.id}`)).json());
     expect(after.revision.message).toMatch(/fitted to drive pipit-front-lane-drive\.csv/);
+
+    // the same drive over another lane of the library is reported as a poor fit and cannot be saved
+    await page.getByLabel('Road under the drive').selectOption({ label: 'Test lane behind the works (invented)' });
+    await page.getByRole('button', { name: 'Run the fit' }).click();
+    await page.getByText('Poor fit: check the road and the signals before using these values').waitFor({ timeout: 60_000 });
+    expect(await page.getByRole('button', { name: /Save the fitted corner as revision/ }).isDisabled()).toBe(true);
+    await shoot(page, 'drive-fit-wrong-road');
     await context.close();
   });
 });

@@ -17,8 +17,8 @@ export function DriveTraceChart({ fit, settle }: { fit: ChannelFit; settle: numb
       axes: [themedAxis(theme, { label: 'Time', unit: 's' }), themedAxis(theme, { label, unit: unit.symbol, size: 64 })],
       series: [
         { label: 'Time' },
-        themedSeries({ label: 'Measured', unit: unit.symbol, color: seriesColor(theme, 0), width: 1 }),
-        themedSeries({ label: 'Model', unit: unit.symbol, color: seriesColor(theme, 1), width: 1.25 }),
+        themedSeries({ label: 'Measured', unit: unit.symbol, color: seriesColor(theme, 0), width: 2 }),
+        themedSeries({ label: 'Model', unit: unit.symbol, color: seriesColor(theme, 1), width: 1 }),
       ],
     }),
     [theme, label, unit],
@@ -44,7 +44,7 @@ export function DriveSpectrumChart({ fit }: { fit: ChannelFit }) {
       axes: [themedAxis(theme, { label: 'Frequency', unit: 'Hz', log: true }), themedAxis(theme, { label: `${label} PSD`, unit: `(${unit.symbol})²/Hz`, size: 70, log: true })],
       series: [
         { label: 'Frequency' },
-        themedSeries({ label: 'Measured', unit: `(${unit.symbol})²/Hz`, color: seriesColor(theme, 0), width: 1.25 }),
+        themedSeries({ label: 'Measured', unit: `(${unit.symbol})²/Hz`, color: seriesColor(theme, 0), width: 2.5 }),
         themedSeries({ label: 'Model', unit: `(${unit.symbol})²/Hz`, color: seriesColor(theme, 1), width: 1.25 }),
       ],
     }),

@@ -50,7 +50,7 @@ export function DriveFitPanel(props: DriveFitPanelProps) {
   const speed = useUnits().speed;
 
   return (
-    <div className="grid gap-4" data-testid="drive-fit-panel">
+    <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] gap-4" data-testid="drive-fit-panel">
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
           {drives.isPending ? (
@@ -176,7 +176,7 @@ function DriveFit({ workspaceId, setupId, setup, latestRevision, readOnly, draft
   const toggle = <T,>(list: T[], item: T, on: boolean) => (on ? [...list, item] : list.filter((x) => x !== item));
 
   return (
-    <div className="grid gap-4">
+    <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] gap-4">
       <p className="text-xs text-ink-soft">
         {drive.summary.samples} samples at {formatSig(drive.summary.rate, 3)} Hz over {drive.summary.duration.toFixed(1)} s, {drive.summary.distance.toFixed(0)} m driven. Columns:{' '}
         {drive.summary.columns.map((c) => `${c.header}`).join(', ')}.
@@ -242,7 +242,7 @@ function DriveFit({ workspaceId, setupId, setup, latestRevision, readOnly, draft
 
       {result && !result.ok && <Notice tone="danger" title="The fit could not be made">{result.reason}</Notice>}
       {fitted && shownFit && (
-        <section aria-label="Fit result" className="grid gap-4">
+        <section aria-label="Fit result" className="grid min-w-0 grid-cols-[minmax(0,1fr)] gap-4">
           <FitResults fit={fitted} />
           <div className="flex flex-wrap items-center gap-2 text-sm" role="group" aria-label="Signal shown">
             {fitted.channels.map((c) => (
@@ -252,7 +252,7 @@ function DriveFit({ workspaceId, setupId, setup, latestRevision, readOnly, draft
             ))}
           </div>
           <DriveTraceChart fit={shownFit} settle={settleValue} />
-          <div className="grid gap-4 lg:grid-cols-2">
+          <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
             <DriveSpectrumChart fit={shownFit} />
             <DriveCoherenceChart fit={shownFit} />
           </div>

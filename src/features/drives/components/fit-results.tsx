@@ -11,7 +11,7 @@ type Fitted = Extract<DriveFitOutcome, { ok: true }>;
 /** The verdict, the fitted parameters with their bounds, and the figures per signal. */
 export function FitResults({ fit }: { fit: Fitted }) {
   const units = useUnits();
-  const shown = (unit: string, si: number) => (unit === 'N/m' ? `${formatSig(units.rate.fromSI(si), 4)} ${units.rate.symbol}` : unit === 'kg' ? `${formatSig(si, 4)} kg` : `${formatSig(si, 3)}×`);
+  const shown = (unit: string, si: number, digits = 4) => (unit === 'N/m' ? `${formatSig(units.rate.fromSI(si), digits)} ${units.rate.symbol}` : unit === 'kg' ? `${formatSig(si, digits)} kg` : `${formatSig(si, Math.min(digits, 3))}×`);
   return (
     <div className="grid gap-3">
       {fit.verdict.good ? (
@@ -27,7 +27,7 @@ export function FitResults({ fit }: { fit: Fitted }) {
           </ul>
         </Notice>
       )}
-      <div className="grid gap-4 xl:grid-cols-2">
+      <div className="grid gap-4 2xl:grid-cols-2">
         <Table caption="Fitted parameters (± the 95 % interval from the Jacobian at the optimum)">
           <THead>
             <Tr>
@@ -42,10 +42,10 @@ export function FitResults({ fit }: { fit: Fitted }) {
             {fit.parameters.map((p) => (
               <Tr key={p.key}>
                 <Td>{p.label}</Td>
-                <Td numeric>{shown(p.unit, p.start)}</Td>
-                <Td numeric>{shown(p.unit, p.value)}</Td>
-                <Td numeric>{p.halfWidth === null ? 'not identifiable' : shown(p.unit, p.halfWidth)}</Td>
-                <Td numeric>{`${p.value >= p.start ? '+' : ''}${formatSig((p.value / p.start - 1) * 100, 2)} %`}</Td>
+                <Td numeric className="whitespace-nowrap">{shown(p.unit, p.start)}</Td>
+                <Td numeric className="whitespace-nowrap">{shown(p.unit, p.value)}</Td>
+                <Td numeric className="whitespace-nowrap">{p.halfWidth === null ? 'not identifiable' : shown(p.unit, p.halfWidth, 2)}</Td>
+                <Td numeric className="whitespace-nowrap">{`${p.value >= p.start ? '+' : '−'}${formatSig(Math.abs(p.value / p.start - 1) * 100, 2)} %`}</Td>
               </Tr>
             ))}
           </TBody>
@@ -63,9 +63,9 @@ export function FitResults({ fit }: { fit: Fitted }) {
             {fit.channels.map((c) => (
               <Tr key={c.channel}>
                 <Td>{channelDisplay(c.channel, units).label}</Td>
-                <Td numeric>{(c.startError * 100).toFixed(1)} %</Td>
-                <Td numeric>{(c.error * 100).toFixed(1)} %</Td>
-                <Td numeric>{c.coherence.toFixed(2)}</Td>
+                <Td numeric className="whitespace-nowrap">{(c.startError * 100).toFixed(1)} %</Td>
+                <Td numeric className="whitespace-nowrap">{(c.error * 100).toFixed(1)} %</Td>
+                <Td numeric className="whitespace-nowrap">{c.coherence.toFixed(2)}</Td>
               </Tr>
             ))}
           </TBody>
