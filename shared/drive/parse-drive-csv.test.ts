@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { columnLetter, parseDriveCsv } from './parse-drive-csv.ts';
+import { driveCsv } from './synthetic-drive.ts';
 
 const rows = (n: number, row: (i: number) => string) => Array.from({ length: n }, (_, i) => row(i)).join('\n');
 
@@ -41,6 +42,17 @@ describe('parseDriveCsv', () => {
     expect(none.ok === false && none.errors[0].message).toMatch(/no signal/);
     const back = parseDriveCsv(`time [s],speed [m/s],body accel [g]\n${rows(20, (i) => `${i === 10 ? 0.05 : i / 100},15,0`)}`);
     expect(back.ok === false && back.errors[0]).toMatchObject({ line: 12, column: 'A (time [s])' });
+  });
+
+  it('reads back a drive it wrote (km/h, g, mm in the file; SI inside)', () => {
+    const n = 40;
+    const data = { dt: 0.005, speed: Array.from({ length: n }, (_, i) => 12 + i / 100), channels: { bodyAccel: Array.from({ length: n }, (_, i) => Math.sin(i / 3)), wheelTravel: Array.from({ length: n }, (_, i) => 0.01 * Math.cos(i / 5)) } };
+    const r = parseDriveCsv(driveCsv(data, 'round trip'));
+    if (!r.ok) throw new Error(r.errors[0].message);
+    expect(r.summary.columns.map((c) => c.quantity)).toEqual(['time', 'speed', 'bodyAccel', 'wheelTravel']);
+    r.data.speed.forEach((v, i) => expect(v).toBeCloseTo(data.speed[i], 2));
+    r.data.channels.bodyAccel?.forEach((v, i) => expect(v).toBeCloseTo(data.channels.bodyAccel[i], 3));
+    r.data.channels.wheelTravel?.forEach((v, i) => expect(v).toBeCloseTo(data.channels.wheelTravel[i], 5));
   });
 
   it('letters columns as a spreadsheet does', () => {
