@@ -17,12 +17,13 @@ import { readCheckFiles, type UploadedText } from '../target-sheets/read-check-f
 import { type DriveReadResult, readDrive } from '../../shared/drive/read-drive.ts';
 
 export type MeasuredUploadResult =
-  | { ok: true; definitionJson: string; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
+  | { ok: true; definitionBytes: Uint8Array; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
   | { ok: false; message: string; fields?: FieldIssue[] };
 
 /** A measured-profile CSV → the road definition and its figures, or what is wrong (by line or field). */
-export function measuredUpload(input: { text: string; filename: string; fields: MeasuredUploadFields; maxRows: number }): MeasuredUploadResult {
-  const { text, filename, fields } = input;
+export function measuredUpload(input: { content: Uint8Array; filename: string; fields: MeasuredUploadFields; maxRows: number }): MeasuredUploadResult {
+  const { filename, fields } = input;
+  const text = new TextDecoder().decode(input.content);
   const parsed = parseMeasuredCsv(text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit, maxRows: input.maxRows });
   if (!parsed.ok) return { ok: false, message: `${filename} was not saved: ${parsed.reason}`, fields: parsed.issues };
   const definition = Road.safeParse({
@@ -38,8 +39,9 @@ export function measuredUpload(input: { text: string; filename: string; fields: 
   }
   const figures = figuresOfRoad(definition.data);
   if (!figures.ok) return { ok: false, message: `${filename} was not saved: ${figures.reason}` };
-  // Text, not the object: a string crosses to the request thread in one copy, 500 000 points would not.
-  return { ok: true, definitionJson: JSON.stringify(definition.data), figures: figures.figures };
+  // UTF-8 bytes, not the object or a string: they cross to the request thread in one copy and are
+  // stored and sent from there without being decoded or encoded again.
+  return { ok: true, definitionBytes: new TextEncoder().encode(JSON.stringify(definition.data)), figures: figures.figures };
 }
 
 /** A road's figures (resampling, spectrum, class fit). */

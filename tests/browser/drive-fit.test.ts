@@ -1,10 +1,11 @@
 import { readFileSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SetupDetail } from '../../shared/schemas/setup-record.ts';
+import { appUrl } from './helpers/app-url.ts';
 import { apiWrite, csrfToken, demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 const SIZES = [
   { width: 1440, height: 900 },
   { width: 1280, height: 800 },
