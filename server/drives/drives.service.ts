@@ -8,6 +8,8 @@ import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 import { readStored } from '../core/stored-json.ts';
+import { fieldsAFitChanges } from '../../shared/drive/fit-parameters.ts';
+import type { Setup } from '../../shared/schemas/setup.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
 
 const noSetup = () => fail('not_found', 'No such setup in this workspace.');
@@ -145,9 +147,11 @@ export async function applyDriveFit(db: Db, ws: WorkspaceRef, actor: Actor, setu
   });
 }
 
-/** Top-level fields (and damper tables' velocities) that differ although no drive fit changes them. */
-function changedOutsideFit(before: Record<string, unknown>, after: Record<string, unknown>): string[] {
-  const fitted = new Set(['sprungMass', 'unsprungMass', 'springRate', 'tyreRate', 'damper']);
+/** Top-level fields (and the damper tables' velocities and gas) that differ although no drive fit parameter changes them. */
+function changedOutsideFit(current: Setup, next: Setup): string[] {
+  const fitted = fieldsAFitChanges(current);
+  const before = current as Record<string, unknown>;
+  const after = next as Record<string, unknown>;
   const keys = new Set([...Object.keys(before), ...Object.keys(after)]);
   const out = [...keys].filter((k) => !fitted.has(k) && JSON.stringify(before[k]) !== JSON.stringify(after[k]));
   const b = before.damper as { compression: [number, number][]; rebound: [number, number][]; gas?: unknown };

@@ -93,3 +93,16 @@ export const fitParameterOf = (key: FitParameterKey): FitParameter => {
 export function applyParameters(setup: Setup, keys: readonly FitParameterKey[], values: readonly number[]): Setup {
   return keys.reduce((s, key, i) => fitParameterOf(key).write(s, values[i]), setup);
 }
+
+/**
+ * Top-level setup fields a drive fit may change: those any parameter's `write` touches. The
+ * server accepts a fitted corner only when nothing else differs from the revision it came from.
+ */
+export function fieldsAFitChanges(setup: Setup): Set<string> {
+  const out = new Set<string>();
+  for (const p of fitParameters) {
+    const moved = p.write(setup, p.read(setup) * 1.01) as Record<string, unknown>;
+    for (const key of Object.keys(moved)) if (moved[key] !== (setup as Record<string, unknown>)[key]) out.add(key);
+  }
+  return out;
+}
