@@ -13,7 +13,7 @@ import type { DynoCheckFields } from '../../shared/schemas/target-sheet.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
-import { readCheckFiles, type UploadedText } from '../target-sheets/read-check-files.ts';
+import { checkContentJson, readCheckFiles } from '../target-sheets/read-check-files.ts';
 import { type DriveReadResult, readDrive } from '../../shared/drive/read-drive.ts';
 
 export type MeasuredUploadResult =
@@ -59,9 +59,17 @@ export function dynoFit(input: { peaks: DynoPeakPoints; knots: ApplyDynoFitInput
   return fitDamperCurves(input.peaks, input.knots, { weighting: input.weighting });
 }
 
-/** The files of a target-sheet check read as measured dampers (every file, every line). */
-export function sheetCheckFiles(input: { files: UploadedText[]; fields: DynoCheckFields }) {
-  return readCheckFiles(input.files, input.fields);
+/**
+ * The files of a target-sheet check, sent as bytes, decoded and read as measured dampers (every
+ * file, every line); with them the files as they are kept, as UTF-8 JSON bytes, so the request
+ * thread neither decodes a dozen megabytes nor writes them into JSON.
+ */
+export function sheetCheckFiles(input: { files: { content: Uint8Array; filename: string; bytes: number }[]; fields: DynoCheckFields }) {
+  const decoder = new TextDecoder();
+  const files = input.files.map((f) => ({ text: decoder.decode(f.content), filename: f.filename, bytes: f.bytes }));
+  const read = readCheckFiles(files, input.fields);
+  if (!read.ok) return read;
+  return { ...read, value: { ...read.value, contentBytes: new TextEncoder().encode(checkContentJson(files, read.value.measured)) } };
 }
 
 /** The best compromise and the trade-off front over a study's saved points. */
