@@ -9,6 +9,7 @@ import type { AuditLogTable } from '../audit/audit.tables.ts';
 import type { OutboxMessageTable, OutboxRecipientTable } from '../mail/outbox.tables.ts';
 import type { RoadTable, RoadVersionTable } from '../roads/roads.tables.ts';
 import type { DynoFileTable } from '../dyno/dyno-files.tables.ts';
+import type { DriveTable } from '../drives/drives.tables.ts';
 import type { RunTable } from '../runs/runs.tables.ts';
 import type { SetupRevisionTable, SetupTable } from '../setups/setups.tables.ts';
 import type { VehicleTable } from '../vehicles/vehicles.tables.ts';
@@ -44,6 +45,7 @@ export interface Database {
   road: RoadTable;
   road_version: RoadVersionTable;
   dyno_file: DynoFileTable;
+  drive: DriveTable;
   run: RunTable;
   study: StudyTable;
   study_point: StudyPointTable;

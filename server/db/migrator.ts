@@ -17,6 +17,7 @@ import * as m0015 from '../../migrations/0015_unit_preferences.ts';
 import * as m0017 from '../../migrations/0017_insertion_order.ts';
 import * as m0018 from '../../migrations/0018_api_tokens.ts';
 import * as m0019 from '../../migrations/0019_fleet_runs.ts';
+import * as m0021 from '../../migrations/0021_drives.ts';
 import * as m0023 from '../../migrations/0023_road_kind.ts';
 
 /**
@@ -43,6 +44,7 @@ export const migrations: Record<string, Migration> = {
   '0017_insertion_order': m0017,
   '0018_api_tokens': m0018,
   '0019_fleet_runs': m0019,
+  '0021_drives': m0021,
   '0023_road_kind': m0023,
 };
 

@@ -1,6 +1,7 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { apiTokensEntries } from './api-tokens-entries.ts';
 import { fleetEntries } from './fleet-entries.ts';
+import { drivesEntries } from './drives-entries.ts';
 import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
@@ -21,4 +22,5 @@ export const allEntries: MatrixEntries = {
   ...fleetEntries,
   ...targetSheetsEntries,
   ...apiTokensEntries,
+  ...drivesEntries,
 };
