@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { RoadInput } from '../schemas/road.ts';
-import { Setup, type SetupInput } from '../schemas/setup.ts';
+import { Damper, Setup, type SetupInput } from '../schemas/setup.ts';
 import { compileDamperForce } from './damper-compiled.ts';
 import { complexGains } from './linear/frequency-response.ts';
 import { cornerModel, newCornerForces, staticEquilibrium } from './quarter-car.ts';
@@ -197,7 +197,7 @@ describe('controlled damper', () => {
     const pip = Setup.parse(pipit);
     const firm = { compression: pip.damper.compression.map(([v, f]) => [v, 3 * f]), rebound: pip.damper.rebound.map(([v, f]) => [v, 3 * f]) } as typeof soft;
     const lo = compileDamperForce(pip.damper);
-    const hi = compileDamperForce(firm);
+    const hi = compileDamperForce(Damper.parse(firm));
     const laws = [
       { kind: 'skyhook', gain: 3000, mode: 'continuous' },
       { kind: 'skyhook', gain: 3000, mode: 'onOff' },

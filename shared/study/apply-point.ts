@@ -33,6 +33,8 @@ export function classicBodyDampingRatio(setup: Setup, choice?: EquivalentDamping
  * 3. `targetBodyDampingRatio` then scales both curves by one factor so the classic estimate
  *    (`classicBodyDampingRatio`) equals it; the curve shapes and the compression/rebound split
  *    are kept. The equivalent coefficient is linear in force, so one factor reaches it exactly.
+ * 4. `mountRate`, `frictionBreakaway`, `skyGain`, `groundGain`, `controlBlend` set the strut
+ *    parts (applyParts); the gains and the blend need the base's controlled damper.
  * `speed` belongs to the run, not the setup, and is ignored here. The result is parsed by the
  * setup schema, so a value it refuses comes back as a failure naming the field.
  */
@@ -53,6 +55,8 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
   const r = both * (values.reboundScale ?? 1);
   next.damper.compression = scaleCurve(base.damper.compression, c);
   next.damper.rebound = scaleCurve(base.damper.rebound, r);
+  const parts = applyParts(next, base, values);
+  if (parts) return { ok: false, message: parts };
 
   let parsed = Setup.safeParse(next);
   if (!parsed.success) return failure(parsed.error);
@@ -72,4 +76,32 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
 function failure(error: { issues: { path: PropertyKey[]; message: string }[] }): ApplyPointResult {
   const i = error.issues[0];
   return { ok: false, message: `${i.path.map(String).join('.')}: ${i.message}` };
+}
+
+/** Friction smoothing speed used when a sweep adds friction to a setup without it, m/s. */
+const ADDED_FRICTION_SMOOTHING = 0.005;
+
+/** Applies the strut-part values; returns why it cannot, or undefined. */
+function applyParts(next: SetupInput, base: Setup, values: StudyPointValues): string | undefined {
+  if (values.mountRate !== undefined) next.topMount = { ...(base.topMount ?? {}), rate: values.mountRate };
+  if (values.frictionBreakaway !== undefined) {
+    next.friction = values.frictionBreakaway === 0 ? undefined : { smoothingSpeed: base.friction?.smoothingSpeed ?? ADDED_FRICTION_SMOOTHING, breakaway: values.frictionBreakaway };
+  }
+  const { skyGain, groundGain, controlBlend } = values;
+  if (skyGain === undefined && groundGain === undefined && controlBlend === undefined) return undefined;
+  const control = base.damper.control;
+  if (!control) return 'damper.control: the base setup has no controlled damper to set gains on';
+  const law = { ...control.law };
+  if (law.kind === 'blend') {
+    if (skyGain !== undefined) law.skyGain = skyGain as typeof law.skyGain;
+    if (groundGain !== undefined) law.groundGain = groundGain as typeof law.groundGain;
+    if (controlBlend !== undefined) law.blend = controlBlend;
+  } else {
+    if (controlBlend !== undefined) return 'damper.control.law: a skyhook share needs the blend law';
+    const own = law.kind === 'skyhook' ? skyGain : groundGain;
+    if ((law.kind === 'skyhook' ? groundGain : skyGain) !== undefined) return `damper.control.law: a ${law.kind} law has no ${law.kind === 'skyhook' ? 'groundhook' : 'skyhook'} gain`;
+    if (own !== undefined) law.gain = own as typeof law.gain;
+  }
+  next.damper.control = { ...control, law };
+  return undefined;
 }

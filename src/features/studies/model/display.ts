@@ -43,6 +43,11 @@ export const parameterUnit: Record<StudyParameter, UnitName> = {
   tyreRate: 'Npermm',
   unsprungMass: 'kg',
   gasForce: 'N',
+  mountRate: 'Npermm',
+  frictionBreakaway: 'N',
+  skyGain: 'Nspm',
+  groundGain: 'Nspm',
+  controlBlend: 'ratio',
   speed: 'mps',
 };
 
