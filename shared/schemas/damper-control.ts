@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { newtonSecondsPerMeter, seconds } from '../units.ts';
+import { newtonSecondsPerMeter } from '../units.ts';
 
 /**
  * How a controlled damper chooses its force. Gains are at the damper, like the force tables
@@ -34,4 +34,3 @@ export const ControlLaw = z.discriminatedUnion('kind', [
   }),
 ]);
 export type ControlLaw = z.infer<typeof ControlLaw>;
-export type ControlLawKind = ControlLaw['kind'];
