@@ -30,7 +30,7 @@ export function MountFrictionFields({ form }: { form: SetupForm }) {
       <ToggleRow label="Top mount" hint={mount ? 'in series with the damper' : 'rigid'} checked={Boolean(mount)} onChange={(on) => set('topMount', on ? { rate: 1.5e6, damping: 0 } : undefined)} />
       {mount && (
         <>
-          <QuantityRow control={control} name="topMount.rate" label="Mount rate (along the damper)" unit={rate} />
+          <QuantityRow control={control} name="topMount.rate" label="Mount rate" unit={rate} hint="along the damper" />
           <QuantityRow control={control} name="topMount.damping" label="Mount damping" unit={units.Nspm} />
         </>
       )}
