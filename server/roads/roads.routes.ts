@@ -46,8 +46,11 @@ export const roadRoutes: RouteModule = (deps) => [
     path: `${base}/:roadId`,
     access: 'viewer',
     handler: async (req, res) => {
-      // RoadDetail as JSON text (see getRoadJson).
-      res.type('application/json').send(unwrap(await getRoadJson(deps.db, workspaceOf(req), pathParam(req, 'roadId'))));
+      // RoadDetail as JSON bytes with a version tag (see getRoadJson).
+      const { body, etag } = unwrap(await getRoadJson(deps.db, workspaceOf(req), pathParam(req, 'roadId')));
+      res.set('ETag', etag);
+      if (req.fresh) res.status(304).end();
+      else res.type('application/json').send(body);
     },
   },
   {

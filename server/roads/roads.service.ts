@@ -12,7 +12,19 @@ import {
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import { deleteRoadRow, findRoad, findRoadListItem, insertRoad, isRoadVersionReferenced, keepRoadVersion, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
+import {
+  deleteRoadRow,
+  findRoad,
+  findRoadListItem,
+  findRoadWithDefinitionBytes,
+  insertRoad,
+  isRoadVersionReferenced,
+  keepCurrentRoadVersion,
+  listRoads,
+  type RoadDetailRow,
+  type RoadListRow,
+  updateRoadRow,
+} from './roads.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
@@ -67,9 +79,14 @@ export async function listRoadLibrary(db: Db, ws: WorkspaceRef): Promise<RoadsRe
  * A road with its definition, as JSON text: the stored definition (checked when it was saved, up
  * to megabytes for a measured profile) is sent as it is, never parsed again on a read.
  */
-export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<string>> {
-  const row = await findRoad(db, ws.workspaceId, roadId);
-  return row ? ok(withRawJson(toListItem(row), 'definition', row.definition)) : noRoad();
+export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<{ body: Buffer; etag: string }>> {
+  const row = await findRoadWithDefinitionBytes(db, ws.workspaceId, roadId);
+  if (!row) return noRoad();
+  // The body is the bytes of the stored text around the small head; the tag names the version
+  // and the last change, so nobody hashes megabytes to make one.
+  const [open, close] = withRawJson(toListItem(row), 'definition', '\u0000').split('\u0000');
+  const body = Buffer.concat([Buffer.from(open!), row.definition_bytes, Buffer.from(close!)]);
+  return ok({ body, etag: `W/"road-${row.id}-v${row.version}-${Date.parse(row.updated_at)}"` });
 }
 
 const kindWords: Record<Road['kind'], string> = {
@@ -120,6 +137,7 @@ async function insertRoadRowInTx(
     id,
     workspace_id: ws.workspaceId,
     name: road.name,
+    kind: road.kind,
     definition: road.definition,
     bytes: Buffer.byteLength(road.definition),
     source,
@@ -167,13 +185,12 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
     const at = now.toISOString();
     // A study that ran this version keeps running it: the old definition is kept before it is replaced.
     const version = input.definition ? row.version + 1 : row.version;
-    if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: at });
-    }
+    if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) await keepCurrentRoadVersion(trx, ws.workspaceId, roadId, at);
     const definitionText = JSON.stringify({ ...definition, name });
     await updateRoadRow(trx, ws.workspaceId, roadId, {
       version,
       name,
+      kind: definition.kind,
       definition: definitionText,
       bytes: Buffer.byteLength(definitionText),
       summary,
@@ -202,11 +219,10 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
 /** Removes a road from the library; saved runs keep their own copy, studies the version they refer to. */
 export async function deleteRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
   return db.transaction().execute(async (trx) => {
-    const row = await findRoad(trx, ws.workspaceId, roadId);
+    // the list row, not the document: a removal never reads megabytes of points
+    const row = await findRoadListItem(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
-    if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: now.toISOString() });
-    }
+    if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) await keepCurrentRoadVersion(trx, ws.workspaceId, roadId, now.toISOString());
     await deleteRoadRow(trx, ws.workspaceId, roadId);
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
