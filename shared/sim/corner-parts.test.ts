@@ -219,4 +219,21 @@ describe('controlled damper', () => {
       expect(firmSeen, law.kind).toBeGreaterThan(0);
     }
   });
+
+  it('the default integrator stays within 0.1 % of odex at 1e-8 with a mount and with a lagging controlled valve', () => {
+    const pip = Setup.parse(pipit);
+    const firm = { compression: pip.damper.compression.map(([v, f]) => [v, 2.5 * f]), rebound: pip.damper.rebound.map(([v, f]) => [v, 2.5 * f]) };
+    const setups: SetupInput[] = [
+      { ...pipit, topMount: { rate: 1.5e6 } },
+      { ...pipit, damper: { ...pipit.damper, control: { firm: firm as never, responseTime: 0.01, law: { kind: 'skyhook', gain: 2500 } } } },
+    ];
+    for (const setup of setups) {
+      const ref = runCorner({ setup, road: isoC, speed: 20, duration: 3, settleTime: 0.5, integrator: 'odex', tolerance: 1e-8 });
+      const fast = runCorner({ setup, road: isoC, speed: 20, duration: 3, settleTime: 0.5 });
+      if (!ref.ok || !fast.ok) throw new Error('run failed');
+      for (const key of ['bodyAccelWkRms', 'tyreLoadRms', 'travelRms', 'damperVelocityRms'] as const) {
+        expect(Math.abs(fast.result.metrics[key] / ref.result.metrics[key] - 1), key).toBeLessThan(1e-3);
+      }
+    }
+  });
 });
