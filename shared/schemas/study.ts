@@ -21,6 +21,7 @@ export const studyParameters = [
   'skyGain',
   'groundGain',
   'controlBlend',
+  'controlOn',
   'speed',
 ] as const;
 /**
@@ -31,7 +32,8 @@ export const studyParameters = [
  * `mountRate` (N/m) sets the top mount's rate (adding an undamped mount), `frictionBreakaway`
  * (N) the strut friction (adding it at 5 mm/s smoothing; 0 removes it); `skyGain`,
  * `groundGain` (N·s/m) and `controlBlend` (0–1) set the controlled damper's law, which the
- * base setup must have;
+ * base setup must have; `controlOn` below 0.5 takes the control off (the damper runs passive on
+ * its soft tables), so a 0–1 axis of two steps puts passive and controlled points on one chart;
  * `speed` (m/s) replaces the study's speed list.
  */
 export const StudyParameter = z.enum(studyParameters);
@@ -52,6 +54,7 @@ export const studyParameterRange: Record<StudyParameter, { min: number; max: num
   skyGain: { min: 0, max: 1e6 },
   groundGain: { min: 0, max: 1e6 },
   controlBlend: { min: 0, max: 1 },
+  controlOn: { min: 0, max: 1 },
   speed: { min: 0.5, max: 100 },
 };
 

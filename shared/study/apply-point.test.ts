@@ -63,5 +63,11 @@ describe('applyPoint', () => {
     });
     const b = ok(applyPoint(blend, { skyGain: 3000, controlBlend: 0.8 }));
     expect(b.damper.control?.law).toEqual({ kind: 'blend', mode: 'continuous', skyGain: 3000, groundGain: 500, blend: 0.8 });
+    // A 0–1 axis of `controlOn` puts the same corner passive (soft tables) and controlled on one chart.
+    expect(ok(applyPoint(blend, { controlOn: 0, skyGain: 3000 })).damper.control).toBeUndefined();
+    expect(ok(applyPoint(blend, { controlOn: 1 })).damper.control).toEqual(blend.damper.control);
+    // The firm bound scales with the soft one, so "damper ×" keeps the valve's range in proportion.
+    const scaledBlend = ok(applyPoint(blend, { damperScale: 2, skyGain: 3000 }));
+    expect(scaledBlend.damper.control?.firm.rebound[0][1]).toBeCloseTo(2 * blend.damper.control!.firm.rebound[0][1], 9);
   });
 });

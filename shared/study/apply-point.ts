@@ -29,7 +29,8 @@ export function classicBodyDampingRatio(setup: Setup, choice?: EquivalentDamping
  *    `gasForce` sets the static gas force (a charge given by pressure keeps its rod area and
  *    stiffening, its pressure set to force/area; 0 removes the charge).
  * 2. `damperScale` multiplies every force of both curves; `compressionScale` and `reboundScale`
- *    multiply one direction's forces (speeds unchanged).
+ *    multiply one direction's forces (speeds unchanged); a controlled damper's firm tables
+ *    scale with its soft ones (here and in step 3).
  * 3. `targetBodyDampingRatio` then scales both curves by one factor so the classic estimate
  *    (`classicBodyDampingRatio`) equals it; the curve shapes and the compression/rebound split
  *    are kept. The equivalent coefficient is linear in force, so one factor reaches it exactly.
@@ -55,6 +56,7 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
   const r = both * (values.reboundScale ?? 1);
   next.damper.compression = scaleCurve(base.damper.compression, c);
   next.damper.rebound = scaleCurve(base.damper.rebound, r);
+  if (base.damper.control) next.damper.control = { ...base.damper.control, firm: { compression: scaleCurve(base.damper.control.firm.compression, c), rebound: scaleCurve(base.damper.control.firm.rebound, r) } };
   const parts = applyParts(next, base, values);
   if (parts) return { ok: false, message: parts };
 
@@ -66,6 +68,8 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
     const s = values.targetBodyDampingRatio / now;
     next.damper.compression = scaleCurve(parsed.data.damper.compression, s);
     next.damper.rebound = scaleCurve(parsed.data.damper.rebound, s);
+    const ctl = parsed.data.damper.control;
+    if (ctl) next.damper.control = { ...ctl, firm: { compression: scaleCurve(ctl.firm.compression, s), rebound: scaleCurve(ctl.firm.rebound, s) } };
     notes.push(`curves scaled ×${s.toFixed(3)} to reach body damping ratio ${values.targetBodyDampingRatio}`);
     parsed = Setup.safeParse(next);
     if (!parsed.success) return failure(parsed.error);
@@ -87,8 +91,12 @@ function applyParts(next: SetupInput, base: Setup, values: StudyPointValues): st
   if (values.frictionBreakaway !== undefined) {
     next.friction = values.frictionBreakaway === 0 ? undefined : { smoothingSpeed: base.friction?.smoothingSpeed ?? ADDED_FRICTION_SMOOTHING, breakaway: values.frictionBreakaway };
   }
-  const { skyGain, groundGain, controlBlend } = values;
-  if (skyGain === undefined && groundGain === undefined && controlBlend === undefined) return undefined;
+  const { skyGain, groundGain, controlBlend, controlOn } = values;
+  if (controlOn !== undefined && controlOn < 0.5) {
+    next.damper.control = undefined;
+    return undefined;
+  }
+  if (skyGain === undefined && groundGain === undefined && controlBlend === undefined && controlOn === undefined) return undefined;
   const control = base.damper.control;
   if (!control) return 'damper.control: the base setup has no controlled damper to set gains on';
   const law = { ...control.law };
@@ -102,6 +110,6 @@ function applyParts(next: SetupInput, base: Setup, values: StudyPointValues): st
     if ((law.kind === 'skyhook' ? groundGain : skyGain) !== undefined) return `damper.control.law: a ${law.kind} law has no ${law.kind === 'skyhook' ? 'groundhook' : 'skyhook'} gain`;
     if (own !== undefined) law.gain = own as typeof law.gain;
   }
-  next.damper.control = { ...control, law };
+  next.damper.control = { ...(next.damper.control ?? control), law };
   return undefined;
 }

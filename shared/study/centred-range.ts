@@ -28,6 +28,7 @@ const spread: Record<Exclude<StudyParameter, 'speed'>, number> = {
   skyGain: 0.5,
   groundGain: 0.5,
   controlBlend: 0.5,
+  controlOn: 1,
 };
 
 /** One significant figure, so the steps read cleanly and the centre stays exactly the base value. */
@@ -58,6 +59,8 @@ export function baseValue(parameter: Exclude<StudyParameter, 'speed'>, base: Set
     case 'groundGain':
     case 'controlBlend':
       return controlValue(parameter, base);
+    case 'controlOn':
+      return base.damper.control ? 1 : 0;
   }
 }
 
@@ -73,6 +76,7 @@ export function centredRange(parameter: StudyParameter, base: Setup): CentredRan
   if (parameter === 'gasForce' && centre === 0) return { from: 0, to: 400, steps: 5 };
   if (centre === 0 && startWhenAbsent[parameter]) return startWhenAbsent[parameter];
   if (parameter === 'controlBlend') return { from: 0, to: 1, steps: 5 };
+  if (parameter === 'controlOn') return { from: 0, to: 1, steps: 2 };
   const half = roundHalf(spread[parameter] * centre);
   return { from: Math.max(limits.min, centre - half), to: Math.min(limits.max, centre + half), steps: 5 };
 }

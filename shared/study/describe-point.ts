@@ -16,6 +16,7 @@ export const studyParameterInfo: Record<StudyParameter, { label: string; unit: s
   skyGain: { label: 'skyhook gain', unit: 'N·s/m', format: (x) => `skyhook ${group(x)} N·s/m` },
   groundGain: { label: 'groundhook gain', unit: 'N·s/m', format: (x) => `groundhook ${group(x)} N·s/m` },
   controlBlend: { label: 'skyhook share', unit: '', format: (x) => `skyhook share ${x.toFixed(2)}` },
+  controlOn: { label: 'control (0 passive, 1 on)', unit: '', format: (x) => (x >= 0.5 ? 'controlled' : 'passive') },
   speed: { label: 'speed', unit: 'm/s', format: (x) => `speed ${group(x)} m/s` },
 };
 

@@ -50,6 +50,7 @@ export const parameterUnit: Record<StudyParameter, UnitName> = {
   skyGain: 'Nspm',
   groundGain: 'Nspm',
   controlBlend: 'ratio',
+  controlOn: 'ratio',
   speed: 'mps',
 };
 

@@ -62,6 +62,7 @@ export const parameterDefaults: Record<StudyParameter, { from: number; to: numbe
   skyGain: { from: 0, to: 4000, steps: 5 },
   groundGain: { from: 0, to: 4000, steps: 5 },
   controlBlend: { from: 0, to: 1, steps: 5 },
+  controlOn: { from: 0, to: 1, steps: 2 },
   speed: { from: 10, to: 35, steps: 6 },
 };
 
