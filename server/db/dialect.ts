@@ -35,3 +35,9 @@ export function isUniqueViolation(err: unknown): boolean {
 export function textAsBytes(db: Pick<Queryable, 'getExecutor'>, column: string): RawBuilder<Buffer> {
   return databaseKind(db) === 'postgres' ? sql<Buffer>`convert_to(${sql.ref(column)}, 'UTF8')` : sql<Buffer>`cast(${sql.ref(column)} as blob)`;
 }
+
+/** UTF-8 bytes written into a text column as text (the reverse of `textAsBytes`). */
+export function bytesAsText(db: Pick<Queryable, 'getExecutor'>, bytes: Uint8Array): RawBuilder<string> {
+  const buffer = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  return databaseKind(db) === 'postgres' ? sql<string>`convert_from(${buffer}, 'UTF8')` : sql<string>`cast(${buffer} as text)`;
+}

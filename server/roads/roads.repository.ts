@@ -1,12 +1,17 @@
 import { sql } from 'kysely';
-import { textAsBytes } from '../db/dialect.ts';
+import { bytesAsText, textAsBytes } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewRoadRow, RoadTable } from './roads.tables.ts';
 
 /** SQL for the road library. */
 
-export async function insertRoad(db: Queryable, row: NewRoadRow): Promise<void> {
-  await db.insertInto('road').values(row).execute();
+/** A new road; its definition as text, or as UTF-8 bytes made in a worker (stored as the same text). */
+export async function insertRoad(db: Queryable, row: Omit<NewRoadRow, 'definition'> & { definition: string | Uint8Array }): Promise<void> {
+  const { definition, ...rest } = row;
+  await db
+    .insertInto('road')
+    .values({ ...rest, definition: typeof definition === 'string' ? definition : bytesAsText(db, definition) })
+    .execute();
 }
 
 /** Roads with the names of who made and last changed them; `withDefinition` adds the (possibly large) document. */

@@ -34,6 +34,12 @@ import { withRawJson } from '../core/json-splice.ts';
 
 const noRoad = () => fail('not_found', 'No such road in this workspace.');
 
+/** JSON bytes of `head` with `key` set to stored JSON bytes (see `withRawJson`, its text form). */
+function jsonAround(head: object, key: string, rawJson: Uint8Array): Buffer {
+  const [open, close] = withRawJson(head, key, '\u0000').split('\u0000');
+  return Buffer.concat([Buffer.from(open!), rawJson, Buffer.from(close!)]);
+}
+
 function toListItem(r: RoadListRow): RoadListItem {
   return {
     id: r.id,
@@ -84,8 +90,7 @@ export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Pro
   if (!row) return noRoad();
   // The body is the bytes of the stored text around the small head; the tag names the version
   // and the last change, so nobody hashes megabytes to make one.
-  const [open, close] = withRawJson(toListItem(row), 'definition', '\u0000').split('\u0000');
-  const body = Buffer.concat([Buffer.from(open!), row.definition_bytes, Buffer.from(close!)]);
+  const body = jsonAround(toListItem(row), 'definition', row.definition_bytes);
   return ok({ body, etag: `W/"road-${row.id}-v${row.version}-${Date.parse(row.updated_at)}"` });
 }
 
@@ -126,7 +131,7 @@ async function insertRoadRowInTx(
   trx: Queryable,
   ws: WorkspaceRef,
   actor: Actor,
-  road: { name: string; kind: Road['kind']; definition: string },
+  road: { name: string; kind: Road['kind']; definition: string | Uint8Array },
   source: RoadSource,
   figures: RoadFigures,
   now: Date,
@@ -139,7 +144,7 @@ async function insertRoadRowInTx(
     name: road.name,
     kind: road.kind,
     definition: road.definition,
-    bytes: Buffer.byteLength(road.definition),
+    bytes: typeof road.definition === 'string' ? Buffer.byteLength(road.definition) : road.definition.byteLength,
     source,
     summary: JSON.stringify(figures),
     created_by: actor.id,
@@ -249,21 +254,21 @@ export async function uploadMeasuredRoad(
   db: Db,
   ws: WorkspaceRef,
   actor: Actor,
-  file: { text: string; filename: string },
+  file: { content: Uint8Array; filename: string },
   fields: MeasuredUploadFields,
   now: Date,
-): Promise<Outcome<string>> {
-  // Parsing, checking, the figures and the JSON text of up to 500 000 rows are made in a worker
-  // thread; this thread stores the text and answers with it, never parsing it again.
-  const done = await runHeavy('measuredUpload', { text: file.text, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
+): Promise<Outcome<Buffer>> {
+  // Decoding, parsing, checking, the figures and the JSON of up to 500 000 rows are made in a
+  // worker thread; this thread stores the bytes as text and answers with them, never decoding them.
+  const done = await runHeavy('measuredUpload', { content: file.content, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
   if (!done.ok) return done;
   const out = done.value;
   if (!out.ok) return fail('bad_request', out.message, out.fields);
-  const road = { name: fields.name, kind: 'measured' as const, definition: out.definitionJson };
+  const road = { name: fields.name, kind: 'measured' as const, definition: out.definitionBytes };
   return db.transaction().execute(async (trx) => {
     const id = await insertRoadRowInTx(trx, ws, actor, road, 'measured', out.figures, now);
     const row = await findRoadListItem(trx, ws.workspaceId, id);
     if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
-    return ok(withRawJson(toListItem(row), 'definition', out.definitionJson));
+    return ok(jsonAround(toListItem(row), 'definition', out.definitionBytes));
   });
 }

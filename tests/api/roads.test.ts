@@ -139,6 +139,10 @@ describe('road library', () => {
 
   it('sends a road as its stored bytes with a version tag: unchanged it answers 304, changed it sends the new kind and definition', async () => {
     const measured = RoadDetail.parse((await upload(measuredCsv(400), { name: 'Tagged lane' }).expect(201)).body);
+    // the worker's bytes are stored as text, as every other road is
+    const stored = await t.db.selectFrom('road').select('definition').where('id', '=', measured.id).executeTakeFirstOrThrow();
+    expect(typeof stored.definition).toBe('string');
+    expect(JSON.parse(stored.definition)).toEqual(measured.definition);
     const first = await eng.get(`${roads}/${measured.id}`).expect(200);
     const tag = first.headers.etag as string;
     expect(tag).toMatch(/^W\/"road-/);
