@@ -127,23 +127,26 @@ export function cornerModelWithParts(setup: Setup, statics: StaticState, limitRa
     return v;
   };
 
-  const evaluateExtra = (zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, xe: ArrayLike<number>, dxe: { [i: number]: number }, out: CornerForces) => {
+  /** `states`: false when called without the extra states (see `evaluate` below). */
+  const core = (zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, xe: ArrayLike<number>, dxe: { [i: number]: number }, out: CornerForces, states: boolean) => {
+    const controlSlot = states ? layout.control : -1;
+    const mountSlot = states ? layout.mount : -1;
     const x = zu - zs;
     const u = mr * (vu - vs);
     if (demandOf) {
       const demand = demandOf(vs, vu);
       if (bounded) {
         const target = targetSetting(mode, demand, u, soft(u), firm(u));
-        if (layout.control >= 0) {
-          const s = xe[layout.control];
-          dxe[layout.control] = (target - s) / tau;
+        if (controlSlot >= 0) {
+          const s = xe[controlSlot];
+          dxe[controlSlot] = (target - s) / tau;
           setting = s < 0 ? 0 : s > 1 ? 1 : s;
         } else {
           setting = target;
         }
-      } else if (layout.control >= 0) {
-        extra = xe[layout.control];
-        dxe[layout.control] = (demand - extra) / tau;
+      } else if (controlSlot >= 0) {
+        extra = xe[controlSlot];
+        dxe[controlSlot] = (demand - extra) / tau;
       } else {
         extra = demand;
       }
@@ -151,11 +154,11 @@ export function cornerModelWithParts(setup: Setup, statics: StaticState, limitRa
     let v = u;
     let mountForce: number;
     let fd: number;
-    if (layout.mount >= 0) {
-      const delta = xe[layout.mount];
+    if (mountSlot >= 0) {
+      const delta = xe[mountSlot];
       const fg = gasChange === null ? 0 : gasChange(mr * x - delta);
       v = solvePiston(u, mountRate * delta + mountDamping * u - fg);
-      dxe[layout.mount] = u - v;
+      dxe[mountSlot] = u - v;
       fd = strutForce(v);
       mountForce = mountRate * delta + mountDamping * (u - v);
     } else {
@@ -178,9 +181,11 @@ export function cornerModelWithParts(setup: Setup, statics: StaticState, limitRa
     out.tyreLoad = fz0 + change;
   };
 
-  // `evaluate` without the extra states reads them at rest (mount undeflected; a lagging valve soft, an actuator idle).
-  const restX = new Float64Array(4 + layout.count);
-  const restDx = new Float64Array(4 + layout.count);
+  const evaluateExtra = (zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, xe: ArrayLike<number>, dxe: { [i: number]: number }, out: CornerForces) =>
+    core(zs, vs, zu, vu, zRoad, vRoad, xe, dxe, out, true);
+  // `evaluate`, for callers that carry only the four states (the vehicle model), takes the
+  // mount as rigid and the valve as instant: the parts' forces without their states.
+  const none = new Float64Array(0);
   const extraScales = [layout.mount, layout.control].filter((i) => i >= 0).map((i) => (i === layout.mount ? 1e-4 : bounded ? 0.01 : 10));
 
   return {
@@ -189,7 +194,7 @@ export function cornerModelWithParts(setup: Setup, statics: StaticState, limitRa
     extraStates: layout.count,
     extraScales,
     evaluate(zs, vs, zu, vu, zRoad, vRoad, out) {
-      evaluateExtra(zs, vs, zu, vu, zRoad, vRoad, restX, restDx, out);
+      core(zs, vs, zu, vu, zRoad, vRoad, none, none, out, false);
     },
     evaluateExtra,
     switches(zs, _vs, zu, vu, zRoad, vRoad, out) {
