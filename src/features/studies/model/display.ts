@@ -45,6 +45,12 @@ export const parameterUnit: Record<StudyParameter, UnitName> = {
   tyreRate: 'Npermm',
   unsprungMass: 'kg',
   gasForce: 'N',
+  mountRate: 'Npermm',
+  frictionBreakaway: 'N',
+  skyGain: 'Nspm',
+  groundGain: 'Nspm',
+  controlBlend: 'ratio',
+  controlOn: 'ratio',
   speed: 'mps',
 };
 

@@ -57,6 +57,12 @@ export const parameterDefaults: Record<StudyParameter, { from: number; to: numbe
   tyreRate: { from: 160, to: 280, steps: 5 },
   unsprungMass: { from: 28, to: 48, steps: 5 },
   gasForce: { from: 0, to: 400, steps: 5 },
+  mountRate: { from: 500, to: 3000, steps: 6 },
+  frictionBreakaway: { from: 0, to: 200, steps: 5 },
+  skyGain: { from: 0, to: 4000, steps: 5 },
+  groundGain: { from: 0, to: 4000, steps: 5 },
+  controlBlend: { from: 0, to: 1, steps: 5 },
+  controlOn: { from: 0, to: 1, steps: 2 },
   speed: { from: 10, to: 35, steps: 6 },
 };
 
