@@ -6,6 +6,7 @@ import { eventEndTime } from '../sim/roads/event-end.ts';
 import { buildRoad } from '../sim/roads/index.ts';
 import { applyPoint } from './apply-point.ts';
 import { figuresFromMetrics } from './figures.ts';
+import { ensembleSeed, roadTakesSeeds } from './seeds.ts';
 import type { TraceColumns } from '../sim/trace.ts';
 import { integrateCorner } from '../sim/integrate.ts';
 import { cornerModel, staticEquilibrium } from '../sim/quarter-car.ts';
@@ -37,6 +38,8 @@ export interface StudyRunJob {
   /** m/s */
   speed: number;
   seed?: number;
+  /** Which of the study's road seeds (shared/study/seeds.ts); absent or 0: the road's own (or `seed`). */
+  seedIndex?: number;
 }
 
 /** The outcome of one job: the run's figures, or why it failed (also when the point's setup is invalid). */
@@ -62,15 +65,23 @@ export interface StudyRunner {
 export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
   const roads = new Map<string, SampledRoad | string>();
   const setups = new Map<number, ReturnType<typeof applyPoint>>();
+  // A road that ignores seeds gives the same run for every seed: the first seed's is kept for the rest.
+  const unseeded = new Map<string, StudyJobOutcome>();
   let trace: TraceColumns | undefined;
+
+  function roadFor(job: StudyRunJob): Road {
+    const doc = ctx.roads[job.roadIndex];
+    if (doc.kind !== 'iso8608') return doc;
+    const seed = ensembleSeed(job.seed ?? doc.seed, job.seedIndex ?? 0);
+    return seed === doc.seed ? doc : { ...doc, seed };
+  }
 
   function sampled(job: StudyRunJob, setup: Setup): SampledRoad | string {
     const plan = stepPlanFor(setup);
-    const key = `${job.roadIndex}|${job.speed}|${job.seed ?? ''}|${plan.outputsPerStep}|${plan.substeps}|${setup.tyreFootprint ?? ''}`;
+    const road = roadFor(job);
+    const key = `${job.roadIndex}|${job.speed}|${road.kind === 'iso8608' ? road.seed : ''}|${plan.outputsPerStep}|${plan.substeps}|${setup.tyreFootprint ?? ''}`;
     let found = roads.get(key);
     if (found === undefined) {
-      const doc = ctx.roads[job.roadIndex];
-      const road: Road = doc.kind === 'iso8608' && job.seed !== undefined ? { ...doc, seed: job.seed } : doc;
       const built = buildRoad(road, job.speed, ctx.duration, setup.tyreFootprint, setup.tyreRadius);
       found = built.ok ? sampleRoad(built.road, ctx.duration, plan) : built.reason;
       if (roads.size >= ROAD_CACHE) roads.delete(roads.keys().next().value!);
@@ -90,23 +101,36 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
     return s;
   }
 
+  function runOnce(job: StudyRunJob): StudyJobOutcome {
+    const base = { roadIndex: job.roadIndex, speed: job.speed };
+    const applied = setupOf(job);
+    if (!applied.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: applied.message }, setupError: applied.message };
+    const road = sampled(job, applied.setup);
+    if (typeof road === 'string') return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: road } };
+    const statics = staticEquilibrium(applied.setup);
+    if (!statics.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: `setup.${statics.reason}` } };
+    const model = cornerModel(applied.setup, statics.state);
+    const integrated = integrateCorner(model, road.road, { duration: ctx.duration, outputRate: STUDY_OUTPUT_RATE, sampled: road, reuse: trace });
+    if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
+    trace = integrated.trace;
+    const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
+    const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
+    const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd });
+    return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state) } };
+  }
+
   return {
     run(job) {
-      const base = { roadIndex: job.roadIndex, speed: job.speed };
-      const applied = setupOf(job);
-      if (!applied.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: applied.message }, setupError: applied.message };
-      const road = sampled(job, applied.setup);
-      if (typeof road === 'string') return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: road } };
-      const statics = staticEquilibrium(applied.setup);
-      if (!statics.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: `setup.${statics.reason}` } };
-      const model = cornerModel(applied.setup, statics.state);
-      const integrated = integrateCorner(model, road.road, { duration: ctx.duration, outputRate: STUDY_OUTPUT_RATE, sampled: road, reuse: trace });
-      if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
-      trace = integrated.trace;
-      const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
-      const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
-      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd });
-      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state) } };
+      const tag = (o: StudyJobOutcome): StudyJobOutcome => (job.seedIndex === undefined ? o : { ...o, run: { ...o.run, seedIndex: job.seedIndex } });
+      if (job.seedIndex === undefined || roadTakesSeeds(ctx.roads[job.roadIndex])) return tag(runOnce(job));
+      const key = `${job.pointIndex}|${job.roadIndex}|${job.speed}`;
+      let first = unseeded.get(key);
+      if (!first) {
+        first = runOnce(job);
+        if (unseeded.size >= 256) unseeded.delete(unseeded.keys().next().value!);
+        unseeded.set(key, first);
+      }
+      return tag(first);
     },
   };
 }
