@@ -28,7 +28,15 @@ export interface StudyRunContext {
   duration: number;
   /** s; absent: the single-run default for the road. */
   settleTime?: number;
+  /**
+   * Sampled roads to keep (12 when absent, at most 64): a study should keep one per road, speed
+   * and seed of a point, or every job of a many-seed study samples its road again.
+   */
+  roadSlots?: number;
 }
+
+/** Road slots a study needs: every (road, speed, seed) of one point, and one spare. */
+export const studyRoadSlots = (def: { roads: readonly unknown[]; speeds: readonly number[]; seeds?: number }) => def.roads.length * Math.max(1, def.speeds.length) * (def.seeds ?? 1) + 1;
 
 /** One run to make, with its point's swept values. */
 export interface StudyRunJob {
@@ -56,7 +64,6 @@ export function defaultStudySettle(road: Road, duration: number): number {
   return transient ? Math.min(2, duration / 4) : 0;
 }
 
-const ROAD_CACHE = 12;
 
 export interface StudyRunner {
   run(job: StudyRunJob): StudyJobOutcome;
@@ -64,6 +71,7 @@ export interface StudyRunner {
 
 export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
   const roads = new Map<string, SampledRoad | string>();
+  const roadSlots = Math.min(64, Math.max(12, ctx.roadSlots ?? 12));
   const setups = new Map<number, ReturnType<typeof applyPoint>>();
   // A road that ignores seeds gives the same run for every seed: the first seed's is kept for the rest.
   const unseeded = new Map<string, StudyJobOutcome>();
@@ -84,7 +92,7 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
     if (found === undefined) {
       const built = buildRoad(road, job.speed, ctx.duration, setup.tyreFootprint, setup.tyreRadius);
       found = built.ok ? sampleRoad(built.road, ctx.duration, plan) : built.reason;
-      if (roads.size >= ROAD_CACHE) roads.delete(roads.keys().next().value!);
+      if (roads.size >= roadSlots) roads.delete(roads.keys().next().value!);
       roads.set(key, found);
     }
     return found;
