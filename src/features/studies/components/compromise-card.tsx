@@ -67,7 +67,7 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
           {[def.comfortFigure, def.gripFigure]
             .flatMap((k) => {
               const r = winner.spread?.[k];
-              return r ? [`${figureLabel(k)} runs from ${withUnit(k, r.min)} to ${withUnit(k, r.max)} (standard deviation ${withUnit(k, r.sd)})`] : [];
+              return r ? [`${figureLabel(k, false)} runs from ${withUnit(k, r.min)} to ${withUnit(k, r.max)} (standard deviation ${withUnit(k, r.sd)})`] : [];
             })
             .join(', and ')}
           .

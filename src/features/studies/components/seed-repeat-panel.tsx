@@ -87,7 +87,7 @@ export function SeedRepeatPanel({ setup, road, speed, duration, settleTime, seed
             {result.failed > 0 ? `; ${result.failed} failed and are left out` : ''}. Road seeds {result.roadSeeds.slice(0, 4).join(', ')}
             {result.roadSeeds.length > 4 ? ', …' : ''}.
           </p>
-          <Table aria-label="Figures over road seeds">
+          <Table caption="Figures over road seeds">
             <THead>
               <Tr>
                 <Th>Figure</Th>
