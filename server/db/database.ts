@@ -14,6 +14,7 @@ import type { SetupRevisionTable, SetupTable } from '../setups/setups.tables.ts'
 import type { VehicleTable } from '../vehicles/vehicles.tables.ts';
 import type { ShareLinkTable } from '../sharing/share-links.tables.ts';
 import type { StudyPointTable, StudyTable } from '../studies/studies.tables.ts';
+import type { StudyFleetRunTable } from '../fleet/fleet.tables.ts';
 import type { DynoCheckTable, TargetSheetEventTable, TargetSheetTable } from '../target-sheets/target-sheets.tables.ts';
 import type { ThrottleEventTable } from '../limits/throttle.tables.ts';
 import type { InvitationTable } from '../workspaces/invitations.tables.ts';
@@ -46,6 +47,7 @@ export interface Database {
   run: RunTable;
   study: StudyTable;
   study_point: StudyPointTable;
+  study_fleet_run: StudyFleetRunTable;
   target_sheet: TargetSheetTable;
   target_sheet_event: TargetSheetEventTable;
   dyno_check: DynoCheckTable;

@@ -31,6 +31,8 @@ export const figureUnit: Record<StudyFigureKey, UnitName> = {
   damperPowerMean: 'W',
   damperEnergy: 'J',
   staticSag: 'mm',
+  endOfStrokeDepth: 'mm',
+  bodyDampingRatioOnRoad: 'ratio',
 };
 
 /** Parameters are entered and shown in these units (spring and tyre rates per mm, as the trade quotes them). */
