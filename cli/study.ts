@@ -15,7 +15,7 @@ import { parseArgs } from 'node:util';
 import { Piscina } from 'piscina';
 import { createPointCollector, studyRoadNames } from '../shared/study/collect.ts';
 import { expandStudy } from '../shared/study/expand.ts';
-import type { StudyJobOutcome, StudyRunJob } from '../shared/study/run-jobs.ts';
+import { studyRoadSlots, type StudyJobOutcome, type StudyRunJob } from '../shared/study/run-jobs.ts';
 import { studyBestCompromise, studyTradeOff } from '../shared/study/study-compromise.ts';
 import { readStudyFile, StudyInputError } from './study-input.ts';
 import type { StudyChunk } from './study-task.ts';
@@ -54,7 +54,7 @@ async function main(argv: string[]): Promise<number> {
   try {
     outcomes = await Promise.all(
       chunks.map((chunkJobs) => {
-        const chunk: StudyChunk = { base: baseSetup, roads, duration: definition.duration, settleTime: definition.settleTime, jobs: chunkJobs };
+        const chunk: StudyChunk = { base: baseSetup, roads, duration: definition.duration, settleTime: definition.settleTime, roadSlots: studyRoadSlots(definition), jobs: chunkJobs };
         return pool.run(chunk, { name: 'runStudyChunk' }) as Promise<StudyJobOutcome[]>;
       }),
     );

@@ -4,7 +4,7 @@ import { Setup } from '../../shared/schemas/setup.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { StudyPointResult, StudyRunOutcome } from '../../shared/schemas/study-result.ts';
 import { judgeUploadedPoint, studyRoadNames } from '../../shared/study/collect.ts';
-import type { StudyJobOutcome, StudyRunContext, StudyRunJob } from '../../shared/study/run-jobs.ts';
+import { studyRoadSlots, type StudyJobOutcome, type StudyRunContext, type StudyRunJob } from '../../shared/study/run-jobs.ts';
 import { readStored } from '../core/stored-json.ts';
 import type { Db } from '../db/database.ts';
 import { closeStudyRunInTx, definitionOf, findStudy, insertStudyPointsOnce, studyPointRow, studyRoadsOf } from '../studies/index.ts';
@@ -47,7 +47,7 @@ async function contextOf(db: Db, job: ChunkJob): Promise<StudyContext> {
     const def = definitionOf(row);
     const roads = await studyRoadsOf(db, row, def);
     const base = readStored(Setup, row.base_document, 'study base setup');
-    made = { def, plan: fleetPlan(def), roadNames: studyRoadNames(def, roads), run: { base, roads, duration: def.duration, settleTime: def.settleTime } };
+    made = { def, plan: fleetPlan(def), roadNames: studyRoadNames(def, roads), run: { base, roads, duration: def.duration, settleTime: def.settleTime, roadSlots: studyRoadSlots(def) } };
   } catch (err) {
     throw new UnrecoverableError(`The study's stored input cannot be read: ${(err as Error).message}`);
   }
@@ -81,7 +81,7 @@ export async function processChunk(deps: ChunkDeps, job: ChunkJob): Promise<Chun
   const ctx = await contextOf(deps.db, job);
   const units = chunkUnitsOf({ units: ctx.plan.units, chunkUnits: run.chunk_units }, job.chunk);
   const jobs: StudyRunJob[] = units.flatMap((u) =>
-    (ctx.plan.jobsOf.get(u) ?? []).map((j) => ({ pointIndex: u, values: u === -1 ? {} : ctx.plan.expanded.points[u].values, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}) })),
+    (ctx.plan.jobsOf.get(u) ?? []).map((j) => ({ pointIndex: u, values: u === -1 ? {} : ctx.plan.expanded.points[u].values, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}), ...(j.seedIndex !== undefined ? { seedIndex: j.seedIndex } : {}) })),
   );
   const input: ChunkTaskInput = { key: `${job.studyId}.${job.generation}`, context: ctx.run, jobs };
   const { outcomes, threadMs } = (await deps.pool.run(input, { name: 'runChunk' })) as { outcomes: StudyJobOutcome[]; threadMs: number };

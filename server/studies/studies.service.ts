@@ -7,6 +7,7 @@ import { type CreateStudyInput, type StudiesResponse, type StudyDetail, StudyRes
 import { StudyDefinition } from '../../shared/schemas/study.ts';
 import { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { applyPoint } from '../../shared/study/apply-point.ts';
+import { ensembleFigures } from '../../shared/study/ensemble.ts';
 import { studyRoadNames } from '../../shared/study/collect.ts';
 import { describePoint } from '../../shared/study/describe-point.ts';
 import { plannedCounts, pointValuesAt } from '../../shared/study/expand.ts';
@@ -75,8 +76,12 @@ export function definitionOf(row: Pick<StudyViewRow, 'definition'>): StudyDefini
   return readStored(StudyDefinition, row.definition, 'study definition');
 }
 
-export function toPointResult(r: StudyPointRow): StudyPointResult {
-  return StudyPointResult.parse({
+/**
+ * A stored point. Its spread over the seeds is not stored but worked out again from its runs
+ * with the shared code (cheap next to reading the runs), so it cannot disagree with them.
+ */
+export function toPointResult(r: StudyPointRow, def?: Pick<StudyDefinition, 'aggregate' | 'seeds'>): StudyPointResult {
+  const point = StudyPointResult.parse({
     index: r.idx,
     values: JSON.parse(r.params),
     runs: JSON.parse(r.metrics),
@@ -85,6 +90,11 @@ export function toPointResult(r: StudyPointRow): StudyPointResult {
     feasible: r.feasible === 1,
     violations: JSON.parse(r.reasons),
   });
+  if (def && def.seeds > 1) {
+    const { spread } = ensembleFigures(point.runs, def.aggregate, def.seeds);
+    if (spread) point.spread = spread;
+  }
+  return point;
 }
 
 export function toSummary(row: StudyListRow, def: StudyDefinition = definitionOf(row)): StudySummary {
@@ -118,7 +128,7 @@ export function toSummary(row: StudyListRow, def: StudyDefinition = definitionOf
 /** The full study: summary, definition, the snapshots it runs from, and its saved points. */
 export async function detailOf(db: Queryable, row: StudyViewRow): Promise<StudyDetail> {
   const def = definitionOf(row);
-  const points = (await listStudyPoints(db, row.id)).map(toPointResult);
+  const points = (await listStudyPoints(db, row.id)).map((r) => toPointResult(r, def));
   return {
     ...toSummary(row, def),
     definition: def,
@@ -149,7 +159,7 @@ export async function getStudyJson(db: Db, ws: WorkspaceRef, studyId: string): P
   const row = await findStudy(db, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
-  const points = (await listStudyPoints(db, row.id)).map(toPointResult);
+  const points = (await listStudyPoints(db, row.id)).map((r) => toPointResult(r, def));
   const head: Omit<StudyDetail, 'roads'> = {
     ...toSummary(row, def),
     definition: def,

@@ -1,9 +1,9 @@
 import type { FieldIssue } from '../../shared/errors.ts';
 import type { FinishStudyRunInput, SaveStudyPointsInput, SetStudyBaselineInput, StudyDetail, StudyResultsSummary } from '../../shared/schemas/study-record.ts';
 import { type StudyPointResult, StudyPointValues } from '../../shared/schemas/study-result.ts';
-import { jobsByPoint, judgeUploadedPoint, studyRoadNames } from '../../shared/study/collect.ts';
+import { judgeUploadedPoint, studyRoadNames } from '../../shared/study/collect.ts';
 import { describePoint } from '../../shared/study/describe-point.ts';
-import { expandStudy } from '../../shared/study/expand.ts';
+import { studyPlan } from '../../shared/study/expand.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
 import type { Db, Queryable } from '../db/database.ts';
 import type { NewStudyPointRow } from './studies.tables.ts';
@@ -51,8 +51,8 @@ export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, stu
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
-  const expanded = expandStudy(def);
-  const expected = jobsByPoint(expanded);
+  // Looked up point by point: a study of 10⁶ runs is never expanded whole for a slice of points.
+  const plan = studyPlan(def);
   const names = studyRoadNames(def, typedInRoads(def));
   const issues: FieldIssue[] = [];
   const rows: NewStudyPointRow[] = [];
@@ -60,7 +60,7 @@ export async function storeStudyPointsInTx(trx: Queryable, ws: WorkspaceRef, stu
   input.points.forEach((upload, i) => {
     if (indices.has(upload.index)) issues.push({ path: `points.${i}.index`, message: `Point ${upload.index} is sent twice.` });
     indices.add(upload.index);
-    const judged = judgeUploadedPoint(def, expanded, expected, upload, names, `points.${i}`);
+    const judged = judgeUploadedPoint(def, plan, undefined, upload, names, `points.${i}`);
     if (judged.ok) rows.push(pointRow(studyId, judged.point));
     else issues.push(...judged.issues);
   });
@@ -79,10 +79,11 @@ export async function finishStudyRun(db: Db, ws: WorkspaceRef, actor: Actor, stu
   const row = await findStudy(db, ws.workspaceId, studyId);
   if (!row) return noStudy();
   // Ranking thousands of points takes a while: a worker thread does it, outside the transaction.
-  const all = (await listStudyPoints(db, studyId)).map(toPointResult);
+  const def = definitionOf(row);
+  const all = (await listStudyPoints(db, studyId)).map((r) => toPointResult(r, def));
   const points = all.filter((p) => p.index >= 0);
   const base = all.find((p) => p.index === -1) ?? null;
-  const done = await runHeavy('studyRunFigures', { def: definitionOf(row), points, base });
+  const done = await runHeavy('studyRunFigures', { def, points, base });
   if (!done.ok) return done;
   return db.transaction().execute((trx) => closeStudyRunInTx(trx, ws, actor, studyId, input, now, { pointCount: points.length, ...done.value }));
 }
@@ -110,7 +111,7 @@ export async function closeStudyRunInTx(
   const row = await findStudy(trx, ws.workspaceId, studyId);
   if (!row) return noStudy();
   const def = definitionOf(row);
-  const all = (await listStudyPoints(trx, studyId)).map(toPointResult);
+  const all = (await listStudyPoints(trx, studyId)).map((r) => toPointResult(r, def));
   const points = all.filter((p) => p.index >= 0);
   if (ranked && ranked.pointCount !== points.length) return fail('conflict', 'Points were saved while the run was being finished; finish it again.');
   const base = all.find((p) => p.index === -1);

@@ -16,6 +16,8 @@ export const StudyRunOutcome = z.object({
   roadIndex: z.number().int().nonnegative(),
   /** m/s */
   speed: z.number().positive(),
+  /** Which of the study's road seeds (0: the road's own, the default); absent in a one-seed study. */
+  seedIndex: z.number().int().min(0).max(49).optional(),
   /** null when the run failed. */
   figures: StudyFigures.nullable(),
   error: z.string().optional(),
@@ -38,13 +40,29 @@ export const StudyViolation = z.object({
 });
 export type StudyViolation = z.infer<typeof StudyViolation>;
 
+/** How one figure of a point scatters over the study's road seeds. */
+export const FigureSpread = z.object({
+  /** Sample standard deviation over the seeds (n − 1). */
+  sd: z.number(),
+  min: z.number(),
+  max: z.number(),
+  /** Seeds it was taken over (those whose runs all gave the figure). */
+  n: z.number().int().positive(),
+});
+export type FigureSpread = z.infer<typeof FigureSpread>;
+
 export const StudyPointResult = z.object({
   /** Position in sweep order; −1 for the unchanged base setup. */
   index: z.number().int().min(-1),
   values: StudyPointValues,
   runs: z.array(StudyRunOutcome),
-  /** Figures combined over the point's successful runs (mean or worst, per the definition). */
+  /**
+   * Figures combined over the point's successful runs (mean or worst, per the definition). Over
+   * several seeds: combined per seed, then the mean over the seeds.
+   */
   figures: StudyFigures,
+  /** Over several seeds: each figure's spread across them (absent in a one-seed study). */
+  spread: z.partialRecord(StudyFigureKey, FigureSpread).optional(),
   /** Aggregated value of each objective, in the definition's order; null when missing. */
   objectives: z.array(z.number().nullable()),
   feasible: z.boolean(),

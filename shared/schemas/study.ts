@@ -3,8 +3,9 @@ import { Id, plainLine, plainLineMessage } from './fields.ts';
 import { Road } from './road.ts';
 
 /**
- * A study: the base setup revision swept over one or two parameters, each point run over every
- * road at every speed, judged by weighted figures within limits. SI units throughout.
+ * A study: the base setup revision swept over one to four parameters, each point run over every
+ * road at every speed (and, for random roads, over several road seeds), judged by weighted
+ * figures within limits. SI units throughout.
  */
 
 export const studyParameters = [
@@ -165,14 +166,21 @@ export const StudyConstraints = z.object({
 });
 export type StudyConstraints = z.infer<typeof StudyConstraints>;
 
-/** Runs one study may ask for (points × roads × speeds). */
-export const STUDY_MAX_RUNS = 20_000;
+/** A whole number with its thousands set off by spaces (2 000 200). */
+const thousands = (n: number) => String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ' ');
+
+/** Runs one study may ask for (points × roads × speeds × seeds, the base setup's runs included). */
+export const STUDY_MAX_RUNS = 1_000_000;
+/** Swept parameters one study may have. */
+export const STUDY_MAX_AXES = 4;
+/** Road seeds one point may be run over. */
+export const STUDY_MAX_SEEDS = 50;
 
 const studyDefinitionFields = {
   name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
   /** The setup revision every point starts from. */
   base: z.object({ setupId: Id, revisionId: Id }),
-  axes: z.array(SweepAxis).min(1).max(2),
+  axes: z.array(SweepAxis).min(1).max(STUDY_MAX_AXES, `at most ${STUDY_MAX_AXES} swept parameters`),
   roads: z.array(StudyRoad).min(1).max(8),
   /** Vehicle speeds, m/s; must be empty when `speed` is a swept axis. */
   speeds: z.array(z.number().min(0.5).max(100)).max(8),
@@ -180,6 +188,13 @@ const studyDefinitionFields = {
   duration: z.number().min(1).max(600).default(60),
   /** Start of the analysed part, s; default as for single runs. */
   settleTime: z.number().nonnegative().max(600).optional(),
+  /**
+   * Road seeds each point runs over (1: the road's own seed only). Seed 1 is the road's own,
+   * the others are derived from it (shared/study/seeds.ts); only ISO 8608 roads change with the
+   * seed, so event and measured roads give the same run for every seed. A point's figures are
+   * then the mean over the seeds, with their spread.
+   */
+  seeds: z.number().int().min(1).max(STUDY_MAX_SEEDS).default(1),
   /** How figures combine over roads and speeds: their mean, or the worst of them. */
   aggregate: z.enum(['mean', 'worst']).default('mean'),
   objectives: z.array(StudyObjective).min(1).max(6),
@@ -200,7 +215,9 @@ export const StudyDefinition = z
   .object(studyDefinitionFields)
   .superRefine((d, ctx) => {
     const params = d.axes.map((a) => a.parameter);
-    if (params.length === 2 && params[0] === params[1]) ctx.addIssue({ code: 'custom', path: ['axes', 1, 'parameter'], message: 'the two axes must sweep different parameters' });
+    params.forEach((p, i) => {
+      if (params.indexOf(p) < i) ctx.addIssue({ code: 'custom', path: ['axes', i, 'parameter'], message: 'each axis must sweep a different parameter' });
+    });
     if (params.includes('damperScale') && params.includes('targetBodyDampingRatio')) {
       ctx.addIssue({ code: 'custom', path: ['axes'], message: 'damper scale and target damping ratio both set the damper level; sweep one of them' });
     }
@@ -211,8 +228,12 @@ export const StudyDefinition = z
     if (new Set(figures).size !== figures.length) ctx.addIssue({ code: 'custom', path: ['objectives'], message: 'each figure may be judged once' });
     if (!d.objectives.some((o) => o.weight > 0)) ctx.addIssue({ code: 'custom', path: ['objectives'], message: 'give at least one figure a weight above 0' });
     const points = d.axes.reduce((n, a) => n * a.steps, 1);
-    const runs = points * d.roads.length * Math.max(1, d.speeds.length);
-    if (runs > STUDY_MAX_RUNS) ctx.addIssue({ code: 'custom', path: ['axes'], message: `${runs} runs asked for; at most ${STUDY_MAX_RUNS}` });
+    const perPoint = d.roads.length * Math.max(1, d.speeds.length) * d.seeds;
+    const runs = points * perPoint + (sweptSpeed ? 0 : perPoint);
+    if (runs > STUDY_MAX_RUNS) {
+      const how = `${thousands(points)} points × ${d.roads.length} road${d.roads.length === 1 ? '' : 's'} × ${Math.max(1, d.speeds.length)} speed${d.speeds.length === 1 ? '' : 's'} × ${d.seeds} seed${d.seeds === 1 ? '' : 's'}`;
+      ctx.addIssue({ code: 'custom', path: ['axes'], message: `this study needs ${thousands(runs)} runs (${how}, with the base setup's); at most ${thousands(STUDY_MAX_RUNS)}` });
+    }
     const c = d.constraints;
     if (c.minStaticSag !== undefined && c.maxStaticSag !== undefined && c.minStaticSag > c.maxStaticSag) {
       ctx.addIssue({ code: 'custom', path: ['constraints', 'maxStaticSag'], message: 'the most static sag must not be below the least' });

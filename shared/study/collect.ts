@@ -4,7 +4,7 @@ import type { StudyDefinition } from '../schemas/study.ts';
 import type { StudyPointResult, StudyRunOutcome } from '../schemas/study-result.ts';
 import { roadLabel } from '../runs/road-label.ts';
 import { evaluatePoint } from './evaluate-point.ts';
-import type { ExpandedStudy, StudyJob } from './expand.ts';
+import type { ExpandedStudy, StudyJob, StudyPlan } from './expand.ts';
 
 /**
  * Turning runs into point results, the same way in the browser (as a run goes) and on the
@@ -35,43 +35,62 @@ export function jobsByPoint(expanded: ExpandedStudy): Map<number, StudyJob[]> {
   return map;
 }
 
-type Def = Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'>;
+type Def = Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'> & { seeds?: number };
+
+/** The points and jobs of a study, from its full expansion (small studies, in the browser) or looked up point by point (studyPlan). */
+export type StudyJobsSource = ExpandedStudy | StudyPlan;
+
+function asPlan(source: StudyJobsSource, expected?: Map<number, StudyJob[]>): StudyPlan {
+  if ('jobsOf' in source) return source;
+  const byPoint = expected ?? jobsByPoint(source);
+  return {
+    pointCount: source.points.length,
+    valuesOf: (index) => (index === -1 ? (byPoint.has(-1) ? {} : undefined) : source.points[index]?.values),
+    jobsOf: (index) => byPoint.get(index),
+  };
+}
+
+const runKey = (r: { roadIndex: number; speed: number; seedIndex?: number }) => `${r.roadIndex}|${r.speed}|${r.seedIndex ?? 0}`;
+const runWords = (r: { roadIndex: number; speed: number; seedIndex?: number }) => `road ${r.roadIndex + 1} at ${r.speed} m/s${r.seedIndex ? ` with seed ${r.seedIndex + 1}` : ''}`;
 
 /**
- * A saved point checked against its expected jobs: one run per (road, speed) of the point, no
- * more, no fewer. Returns the judged point, or the problems by field path under `prefix`.
+ * A saved point checked against its expected jobs: one run per (road, speed, seed) of the
+ * point, no more, no fewer. Returns the judged point, or the problems by field path under
+ * `prefix`. `expectedJobs` is only a shortcut for callers that already grouped an expansion.
  */
 export function judgeUploadedPoint(
   def: Def,
-  expanded: ExpandedStudy,
-  expectedJobs: Map<number, StudyJob[]>,
+  source: StudyJobsSource,
+  expectedJobs: Map<number, StudyJob[]> | undefined,
   upload: { index: number; runs: readonly StudyRunOutcome[]; setupError?: string },
   roadNames: readonly string[],
   prefix: string,
 ): { ok: true; point: StudyPointResult } | { ok: false; issues: FieldIssue[] } {
-  const jobs = expectedJobs.get(upload.index);
+  const plan = asPlan(source, expectedJobs);
+  const jobs = plan.jobsOf(upload.index);
   if (!jobs) {
-    const why = upload.index === -1 ? 'this study sweeps speed, so it has no base-setup runs' : `the study has points 0 to ${expanded.points.length - 1}`;
+    const why = upload.index === -1 ? 'this study sweeps speed, so it has no base-setup runs' : `the study has points 0 to ${plan.pointCount - 1}`;
     return { ok: false, issues: [{ path: `${prefix}.index`, message: `No point ${upload.index}: ${why}.` }] };
   }
   const issues: FieldIssue[] = [];
-  if (upload.runs.length !== jobs.length) issues.push({ path: `${prefix}.runs`, message: `Point ${upload.index} has ${jobs.length} runs (roads × speeds); ${upload.runs.length} were sent.` });
+  const seeds = def.seeds ?? 1;
+  if (upload.runs.length !== jobs.length) issues.push({ path: `${prefix}.runs`, message: `Point ${upload.index} has ${jobs.length} runs (roads × speeds${seeds > 1 ? ' × seeds' : ''}); ${upload.runs.length} were sent.` });
+  const order = new Map(jobs.map((j, k) => [runKey(j), k]));
   const seen = new Set<string>();
   upload.runs.forEach((run, k) => {
-    const key = `${run.roadIndex}|${run.speed}`;
-    if (!jobs.some((j) => j.roadIndex === run.roadIndex && j.speed === run.speed)) {
-      issues.push({ path: `${prefix}.runs.${k}`, message: `Point ${upload.index} has no run on road ${run.roadIndex + 1} at ${run.speed} m/s.` });
+    const key = runKey(run);
+    if (!order.has(key) || (seeds === 1 && run.seedIndex !== undefined)) {
+      issues.push({ path: `${prefix}.runs.${k}`, message: `Point ${upload.index} has no run on ${runWords(run)}.` });
     } else if (seen.has(key)) {
-      issues.push({ path: `${prefix}.runs.${k}`, message: `The run on road ${run.roadIndex + 1} at ${run.speed} m/s is sent twice.` });
+      issues.push({ path: `${prefix}.runs.${k}`, message: `The run on ${runWords(run)} is sent twice.` });
     }
     seen.add(key);
     if (run.figures === null && !run.error) issues.push({ path: `${prefix}.runs.${k}.error`, message: 'A run without figures must say why it failed.' });
   });
   if (issues.length) return { ok: false, issues };
-  const values = upload.index === -1 ? {} : expanded.points[upload.index].values;
+  const values = plan.valuesOf(upload.index) ?? {};
   // Runs in the job order, whatever order they came in.
-  const order = (r: StudyRunOutcome) => jobs.findIndex((j) => j.roadIndex === r.roadIndex && j.speed === r.speed);
-  const runs = [...upload.runs].sort((a, b) => order(a) - order(b));
+  const runs = [...upload.runs].sort((a, b) => order.get(runKey(a))! - order.get(runKey(b))!);
   const point = evaluatePoint(def, { index: upload.index, values }, runs, { setupError: upload.setupError, roadName: (i) => roadNames[i] ?? `road ${i + 1}` });
   return { ok: true, point };
 }
@@ -80,22 +99,32 @@ export function judgeUploadedPoint(
  * Collects job outcomes as they arrive and hands back each point once all its runs are in.
  * Used by the browser runner; `points()` lists the finished ones in sweep order.
  */
-export function createPointCollector(def: Def, expanded: ExpandedStudy, roadNames: readonly string[]) {
-  const expected = jobsByPoint(expanded);
+export function createPointCollector(def: Def, source: StudyJobsSource, roadNames: readonly string[]) {
+  const plan = asPlan(source);
+  const expected = new Map<number, number>();
+  const jobCount = (index: number) => {
+    let n = expected.get(index);
+    if (n === undefined) {
+      n = plan.jobsOf(index)?.length ?? -1;
+      expected.set(index, n);
+    }
+    return n;
+  };
   const pending = new Map<number, { runs: StudyRunOutcome[]; setupError?: string }>();
   const done = new Map<number, StudyPointResult>();
   return {
     /** Adds one run; returns the point when it was the point's last. */
     add(pointIndex: number, run: StudyRunOutcome, setupError?: string): StudyPointResult | null {
-      const jobs = expected.get(pointIndex);
-      if (!jobs || done.has(pointIndex)) throw new Error(`collector: unexpected run for point ${pointIndex}`);
+      const count = jobCount(pointIndex);
+      if (count < 0 || done.has(pointIndex)) throw new Error(`collector: unexpected run for point ${pointIndex}`);
       const entry = pending.get(pointIndex) ?? { runs: [] };
       entry.runs.push(run);
       if (setupError) entry.setupError = setupError;
       pending.set(pointIndex, entry);
-      if (entry.runs.length < jobs.length) return null;
+      if (entry.runs.length < count) return null;
       pending.delete(pointIndex);
-      const judged = judgeUploadedPoint(def, expanded, expected, { index: pointIndex, ...entry }, roadNames, 'point');
+      expected.delete(pointIndex);
+      const judged = judgeUploadedPoint(def, plan, undefined, { index: pointIndex, ...entry }, roadNames, 'point');
       if (!judged.ok) throw new Error(`collector: ${judged.issues[0].message}`);
       done.set(pointIndex, judged.point);
       return judged.point;

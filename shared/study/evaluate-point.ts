@@ -1,9 +1,9 @@
 import type { StudyDefinition } from '../schemas/study.ts';
 import type { StudyPointResult, StudyPointValues, StudyRunOutcome, StudyViolation } from '../schemas/study-result.ts';
-import { aggregateFigures } from './aggregate.ts';
+import { ensembleFigures } from './ensemble.ts';
 
 const pct = (x: number) => `${(100 * x).toFixed(1)} %`;
-const where = (run: StudyRunOutcome, roadName: (i: number) => string) => `on ${roadName(run.roadIndex)} at ${run.speed} m/s`;
+const where = (run: StudyRunOutcome, roadName: (i: number) => string) => `on ${roadName(run.roadIndex)} at ${run.speed} m/s${run.seedIndex ? ` (seed ${run.seedIndex + 1})` : ''}`;
 
 /**
  * Limits checked run by run: a point is feasible only when every road and speed meets every
@@ -43,12 +43,13 @@ export function runViolations(def: Pick<StudyDefinition, 'constraints'>, run: St
 }
 
 /**
- * One point's result from its runs: figures aggregated over the successful runs, the objective
- * values in the definition's order, and feasibility with every reason. Pass `setupError` when
+ * One point's result from its runs: figures aggregated over the successful runs (over several
+ * seeds: the mean over the seeds, with the spread), the objective values in the definition's
+ * order, and feasibility with every reason — every run of every seed must meet the limits. Pass `setupError` when
  * the swept values could not make a valid setup (the point then has no runs).
  */
 export function evaluatePoint(
-  def: Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'>,
+  def: Pick<StudyDefinition, 'aggregate' | 'objectives' | 'constraints'> & { seeds?: number },
   point: { index: number; values: StudyPointValues },
   runs: readonly StudyRunOutcome[],
   opts: { setupError?: string; roadName?: (i: number) => string } = {},
@@ -56,13 +57,13 @@ export function evaluatePoint(
   const violations: StudyViolation[] = opts.setupError
     ? [{ kind: 'setupInvalid', limit: null, value: null, roadIndex: null, speed: null, message: opts.setupError }]
     : runs.flatMap((r) => runViolations(def, r, opts.roadName));
-  const ok = runs.flatMap((r) => (r.figures ? [r.figures] : []));
-  const figures = aggregateFigures(ok, def.aggregate);
+  const { figures, spread } = ensembleFigures(runs, def.aggregate, def.seeds ?? 1);
   return {
     index: point.index,
     values: point.values,
     runs: [...runs],
     figures,
+    ...(spread ? { spread } : {}),
     objectives: def.objectives.map((o) => figures[o.figure] ?? null),
     feasible: violations.length === 0 && runs.length > 0,
     violations,

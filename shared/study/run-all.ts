@@ -4,7 +4,7 @@ import type { StudyDefinition } from '../schemas/study.ts';
 import type { StudyPointResult } from '../schemas/study-result.ts';
 import { createPointCollector, studyRoadNames } from './collect.ts';
 import { expandStudy } from './expand.ts';
-import { createStudyRunner } from './run-jobs.ts';
+import { createStudyRunner, studyRoadSlots } from './run-jobs.ts';
 
 /**
  * A whole study run in this thread, in sweep order: the same runner the browser workers use and
@@ -13,7 +13,7 @@ import { createStudyRunner } from './run-jobs.ts';
  */
 export function runStudyHere(def: StudyDefinition, baseSetup: Setup, roads: Road[]): { points: StudyPointResult[]; base: StudyPointResult | null } {
   const expanded = expandStudy(def);
-  const runner = createStudyRunner({ base: baseSetup, roads, duration: def.duration, settleTime: def.settleTime });
+  const runner = createStudyRunner({ base: baseSetup, roads, duration: def.duration, settleTime: def.settleTime, roadSlots: studyRoadSlots(def) });
   const collector = createPointCollector(def, expanded, studyRoadNames(def, roads));
   for (const job of [...expanded.jobs, ...expanded.baseJobs]) {
     const values = job.pointIndex === -1 ? {} : expanded.points[job.pointIndex].values;

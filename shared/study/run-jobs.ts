@@ -8,6 +8,7 @@ import { eventEndTime } from '../sim/roads/event-end.ts';
 import { buildRoad } from '../sim/roads/index.ts';
 import { applyPoint } from './apply-point.ts';
 import { figuresFromMetrics } from './figures.ts';
+import { ensembleSeed, roadTakesSeeds } from './seeds.ts';
 import type { TraceColumns } from '../sim/trace.ts';
 import { integrateCorner } from '../sim/integrate.ts';
 import { cornerModel, staticEquilibrium } from '../sim/quarter-car.ts';
@@ -29,7 +30,15 @@ export interface StudyRunContext {
   duration: number;
   /** s; absent: the single-run default for the road. */
   settleTime?: number;
+  /**
+   * Sampled roads to keep (12 when absent, at most 64): a study should keep one per road, speed
+   * and seed of a point, or every job of a many-seed study samples its road again.
+   */
+  roadSlots?: number;
 }
+
+/** Road slots a study needs: every (road, speed, seed) of one point, and one spare. */
+export const studyRoadSlots = (def: { roads: readonly unknown[]; speeds: readonly number[]; seeds?: number }) => def.roads.length * Math.max(1, def.speeds.length) * (def.seeds ?? 1) + 1;
 
 /** One run to make, with its point's swept values. */
 export interface StudyRunJob {
@@ -39,6 +48,8 @@ export interface StudyRunJob {
   /** m/s */
   speed: number;
   seed?: number;
+  /** Which of the study's road seeds (shared/study/seeds.ts); absent or 0: the road's own (or `seed`). */
+  seedIndex?: number;
 }
 
 /** The outcome of one job: the run's figures, or why it failed (also when the point's setup is invalid). */
@@ -55,7 +66,6 @@ export function defaultStudySettle(road: Road, duration: number): number {
   return transient ? Math.min(2, duration / 4) : 0;
 }
 
-const ROAD_CACHE = 12;
 
 export interface StudyRunner {
   run(job: StudyRunJob): StudyJobOutcome;
@@ -63,19 +73,28 @@ export interface StudyRunner {
 
 export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
   const roads = new Map<string, SampledRoad | string>();
+  const roadSlots = Math.min(64, Math.max(12, ctx.roadSlots ?? 12));
   const setups = new Map<number, ReturnType<typeof applyPoint>>();
+  // A road that ignores seeds gives the same run for every seed: the first seed's is kept for the rest.
+  const unseeded = new Map<string, StudyJobOutcome>();
   let trace: TraceColumns | undefined;
+
+  function roadFor(job: StudyRunJob): Road {
+    const doc = ctx.roads[job.roadIndex];
+    if (doc.kind !== 'iso8608') return doc;
+    const seed = ensembleSeed(job.seed ?? doc.seed, job.seedIndex ?? 0);
+    return seed === doc.seed ? doc : { ...doc, seed };
+  }
 
   function sampled(job: StudyRunJob, setup: Setup): SampledRoad | string {
     const plan = stepPlanFor(setup);
-    const key = `${job.roadIndex}|${job.speed}|${job.seed ?? ''}|${plan.outputsPerStep}|${plan.substeps}|${setup.tyreFootprint ?? ''}`;
+    const road = roadFor(job);
+    const key = `${job.roadIndex}|${job.speed}|${road.kind === 'iso8608' ? road.seed : ''}|${plan.outputsPerStep}|${plan.substeps}|${setup.tyreFootprint ?? ''}`;
     let found = roads.get(key);
     if (found === undefined) {
-      const doc = ctx.roads[job.roadIndex];
-      const road: Road = doc.kind === 'iso8608' && job.seed !== undefined ? { ...doc, seed: job.seed } : doc;
       const built = buildRoad(road, job.speed, ctx.duration, setup.tyreFootprint, setup.tyreRadius);
       found = built.ok ? sampleRoad(built.road, ctx.duration, plan) : built.reason;
-      if (roads.size >= ROAD_CACHE) roads.delete(roads.keys().next().value!);
+      if (roads.size >= roadSlots) roads.delete(roads.keys().next().value!);
       roads.set(key, found);
     }
     return found;
@@ -92,28 +111,41 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
     return s;
   }
 
+  function runOnce(job: StudyRunJob): StudyJobOutcome {
+    const base = { roadIndex: job.roadIndex, speed: job.speed };
+    const applied = setupOf(job);
+    if (!applied.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: applied.message }, setupError: applied.message };
+    const road = sampled(job, applied.setup);
+    if (typeof road === 'string') return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: road } };
+    const statics = staticEquilibrium(applied.setup);
+    if (!statics.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: `setup.${statics.reason}` } };
+    const model = cornerModel(applied.setup, statics.state);
+    const integrated = integrateCorner(model, road.road, { duration: ctx.duration, outputRate: STUDY_OUTPUT_RATE, sampled: road, reuse: trace });
+    if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
+    trace = integrated.trace;
+    const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
+    const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
+    const from = firstSample(integrated.trace, settleTime);
+    const metrics = {
+      ...computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd }),
+      ...strokeAndTableFigures(integrated.trace, from, applied.setup),
+      ...roadDampingFigures(integrated.trace, from),
+    };
+    return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state, applied.setup) } };
+  }
+
   return {
     run(job) {
-      const base = { roadIndex: job.roadIndex, speed: job.speed };
-      const applied = setupOf(job);
-      if (!applied.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: applied.message }, setupError: applied.message };
-      const road = sampled(job, applied.setup);
-      if (typeof road === 'string') return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: road } };
-      const statics = staticEquilibrium(applied.setup);
-      if (!statics.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: `setup.${statics.reason}` } };
-      const model = cornerModel(applied.setup, statics.state);
-      const integrated = integrateCorner(model, road.road, { duration: ctx.duration, outputRate: STUDY_OUTPUT_RATE, sampled: road, reuse: trace });
-      if (!integrated.ok) return { pointIndex: job.pointIndex, run: { ...base, figures: null, error: integrated.reason } };
-      trace = integrated.trace;
-      const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
-      const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
-      const from = firstSample(integrated.trace, settleTime);
-      const metrics = {
-        ...computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd }),
-        ...strokeAndTableFigures(integrated.trace, from, applied.setup),
-        ...roadDampingFigures(integrated.trace, from),
-      };
-      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state, applied.setup) } };
+      const tag = (o: StudyJobOutcome): StudyJobOutcome => (job.seedIndex === undefined ? o : { ...o, run: { ...o.run, seedIndex: job.seedIndex } });
+      if (job.seedIndex === undefined || roadTakesSeeds(ctx.roads[job.roadIndex])) return tag(runOnce(job));
+      const key = `${job.pointIndex}|${job.roadIndex}|${job.speed}`;
+      let first = unseeded.get(key);
+      if (!first) {
+        first = runOnce(job);
+        if (unseeded.size >= 256) unseeded.delete(unseeded.keys().next().value!);
+        unseeded.set(key, first);
+      }
+      return tag(first);
     },
   };
 }

@@ -122,3 +122,8 @@ export function formatDate(iso: string): string {
   const d = new Date(iso);
   return Number.isNaN(d.getTime()) ? '—' : dateOnly.format(d);
 }
+
+/** A whole count with its thousands set off by thin spaces (12 345, 1 000 000), exact. */
+export function formatCount(n: number): string {
+  return String(Math.round(n)).replace(/\B(?=(\d{3})+(?!\d))/g, '\u2009');
+}

@@ -12,6 +12,7 @@ import { LiveTryout } from '../../features/runs/components/live-tryout.tsx';
 import { RunDashboard } from '../../features/runs/components/run-dashboard.tsx';
 import { type RunChoice, RunForm } from '../../features/runs/components/run-form.tsx';
 import { RunStatus } from '../../features/runs/components/run-status.tsx';
+import { SeedRepeatPanel } from '../../features/studies/components/seed-repeat-panel.tsx';
 import { SetupRunsList } from '../../features/runs/components/setup-runs-list.tsx';
 import { useSimulation } from '../../features/runs/model/use-simulation.ts';
 import { formatQuantityText } from '../../lib/format.ts';
@@ -84,6 +85,20 @@ export function RunsRoute() {
                 <LiveTryout key={state.elapsedMs} initial={state.view.setup} road={state.view.road} speed={state.view.result.speed} seed={state.view.seed} />
               </div>
             )}
+          </details>
+          <details className="mb-5 rounded border border-rule bg-paper/60 px-3 py-2">
+            <summary className="cursor-pointer text-sm font-medium text-accent">Repeat over several road seeds</summary>
+            <div className="mt-2">
+              <SeedRepeatPanel
+                key={state.elapsedMs}
+                setup={state.view.setup}
+                road={state.view.road}
+                speed={state.view.result.speed}
+                duration={state.view.result.duration}
+                settleTime={state.view.result.settleTime}
+                seed={state.view.seed}
+              />
+            </div>
           </details>
           <ChartExportProvider value={{ stem: exportStem(runSubject(state.view, target.revisionNumber)), context: runTitle(state.view, target.revisionNumber) }}>
             <RunDashboard view={state.view} />

@@ -95,6 +95,12 @@ export function StudyDetailRoute() {
                     )}{' '}
                     <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
                     {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>} · <span className="figures">{s.definition.duration}</span> s runs
+                    {s.definition.seeds > 1 && (
+                      <>
+                        {' '}
+                        · over <span className="figures">{s.definition.seeds}</span> road seeds
+                      </>
+                    )}
                   </p>
                   <p className="mt-1 flex flex-wrap items-center gap-2">
                     <Tag tone={status.tone}>{status.text}</Tag>

@@ -23,7 +23,7 @@ export interface BenchResult {
   status: string;
 }
 
-const definition = StudyDefinition.parse({
+const definitionOver = (seeds: number) => StudyDefinition.parse({
   name: 'Benchmark: damper scale × spring rate',
   base: { setupId: 'bench', revisionId: 'bench' },
   axes: [
@@ -38,11 +38,14 @@ const definition = StudyDefinition.parse({
     { figure: 'tyreLoadRatio', weight: 1 },
   ],
   constraints: { maxStrokeUsed: 0.9 },
+  seeds,
 });
+const definition = definitionOver(1);
 const baseSetup = Setup.parse(pipit);
 const roads = definition.roads.map((r) => (r.source === 'inline' ? r.road : (null as never)));
 
-async function run(): Promise<BenchResult> {
+/** One run of the study, each point over `seeds` road seeds (1: the plain 400-run study). */
+async function run(seeds = 1): Promise<BenchResult> {
   let last = performance.now();
   let longestGapMs = 0;
   const timer = setInterval(() => {
@@ -55,7 +58,7 @@ async function run(): Promise<BenchResult> {
   let longestProgressGapMs = 0;
   const started = performance.now();
   const handle = startStudyRun(
-    { definition, baseSetup, roads },
+    { definition: definitionOver(seeds), baseSetup, roads },
     {
       onProgress: () => {
         const now = performance.now();

@@ -50,7 +50,10 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
         {[def.comfortFigure, def.gripFigure].map((k) => (
           <div key={k} className="flex gap-1.5">
             <dt className="text-ink-soft">{figureLabel(k)}</dt>
-            <dd className="figures">{figureText(k, winner.figures[k])}</dd>
+            <dd className="figures">
+              {figureText(k, winner.figures[k])}
+              {winner.spread?.[k] && <span className="text-ink-soft"> ± {figureText(k, winner.spread[k].sd)}</span>}
+            </dd>
           </div>
         ))}
         <div className="flex gap-1.5">
@@ -58,6 +61,18 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
           <dd className="figures">{c.score.toFixed(3)}</dd>
         </div>
       </dl>
+      {winner.spread && (
+        <p className="mt-2 text-sm text-ink" data-testid="compromise-spread">
+          Chosen on the mean over {def.seeds} road seeds. Across them,{' '}
+          {[def.comfortFigure, def.gripFigure]
+            .flatMap((k) => {
+              const r = winner.spread?.[k];
+              return r ? [`${figureLabel(k, false)} runs from ${withUnit(k, r.min)} to ${withUnit(k, r.max)} (standard deviation ${withUnit(k, r.sd)})`] : [];
+            })
+            .join(', and ')}
+          .
+        </p>
+      )}
       <div className="mt-2 space-y-1 text-sm text-ink">
         {why.map((s) => (
           <p key={s}>{s}</p>

@@ -2,7 +2,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { readChartTheme } from '../../../components/charts/chart-theme.ts';
 import { formatSig } from '../../../lib/format.ts';
-import { heatGrid } from '../model/chart-data.ts';
+import { heatGrid, type StudySlice } from '../model/chart-data.ts';
 import { figureLabel, figureSymbol, parameterLabel } from '../model/display.ts';
 import { positionOf, type StudyView } from '../model/study-view.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
@@ -34,6 +34,8 @@ export interface HeatMapProps {
   baselineIndex: number | null;
   selected: number | null;
   onSelect: (index: number) => void;
+  /** With more than two swept parameters: which two the map shows and where the others are held. */
+  slice?: StudySlice;
 }
 
 /**
@@ -41,14 +43,16 @@ export interface HeatMapProps {
  * breaking a limit hatched in the warning colour, the best compromise and the baseline outlined.
  * Drawn on a canvas (a grid of cells is not what a line-chart library is for).
  */
-export function HeatMap({ view, figure, baselineIndex, selected, onSelect }: HeatMapProps) {
-  const grid = useMemo(() => heatGrid(view, figure), [view, figure]);
+export function HeatMap({ view, figure, baselineIndex, selected, onSelect, slice }: HeatMapProps) {
+  const grid = useMemo(() => heatGrid(view, figure, slice), [view, figure, slice]);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const hostRef = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(640);
   const height = 360;
   const bestIndex = view.compromise?.ok ? view.points[view.compromise.winner]?.index : undefined;
-  const [a, b] = view.definition.axes;
+  const axes = view.definition.axes;
+  const a = axes[slice?.mapAxes[0] ?? 0];
+  const b = axes[slice?.mapAxes[1] ?? 1];
   const about = useChartExport();
 
   useEffect(() => {

@@ -97,7 +97,15 @@ export function PointsTable({ view, selected, onSelect }: { view: StudyView; sel
         accessorFn: (r) => r.point.figures[k] ?? null,
         sortUndefined: 'last',
         meta: { numeric: true },
-        cell: (c) => <span className="figures">{figureText(k, c.getValue<number | null>())}</span>,
+        cell: (c) => {
+          const sd = c.row.original.point.spread?.[k]?.sd;
+          return (
+            <span className="figures">
+              {figureText(k, c.getValue<number | null>())}
+              {sd !== undefined && <span className="text-ink-faint"> ±{figureText(k, sd)}</span>}
+            </span>
+          );
+        },
       })),
     ],
     [def.axes, figures],

@@ -6,6 +6,7 @@ import type { RoadListItem } from '../../../../shared/schemas/road-record.ts';
 import type { SetupSummary } from '../../../../shared/schemas/setup-record.ts';
 import { StudyDefinition } from '../../../../shared/schemas/study.ts';
 import { plannedCounts } from '../../../../shared/study/expand.ts';
+import { formatCount } from '../../../lib/format.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { FormError } from '../../../components/ui/field.tsx';
 import { Loading } from '../../../components/ui/spinner.tsx';
@@ -13,7 +14,7 @@ import { latestRevisionsQueryOptions, revisionQueryOptions } from '../../../lib/
 import { staticEquilibrium } from '../../../../shared/sim/quarter-car.ts';
 import { roadsQueryOptions } from '../../../lib/queries/roads.ts';
 import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
-import { defaultFormValues, fieldOfIssue, formToDefinition, startingRange, type StudyFormValues } from '../model/study-form.ts';
+import { defaultFormValues, fieldOfIssue, formToDefinition, startingRange, type StudyFormValues, sweptAxisCount } from '../model/study-form.ts';
 import { AxisFieldset } from './study-form/axis-fieldset.tsx';
 import { BaseFields } from './study-form/base-fields.tsx';
 import { LimitsFieldset } from './study-form/limits-fieldset.tsx';
@@ -98,7 +99,7 @@ function StudyFormBody({
   // Once the base is known, ranges nobody has typed into start centred on its values.
   useEffect(() => {
     if (!baseSetup) return;
-    for (const i of [0, 1] as const) {
+    for (const i of [0, 1, 2, 3] as const) {
       const touched = (['from', 'to', 'steps'] as const).some((k) => getFieldState(`axes.${i}.${k}`).isDirty);
       const parameter = getValues(`axes.${i}.parameter`);
       if (touched || !parameter) continue;
@@ -117,11 +118,12 @@ function StudyFormBody({
   }, [serverFields, setError]);
 
   const twoAxes = watched.twoAxes ?? true;
+  const axisCount = sweptAxisCount({ twoAxes, moreAxes: watched.moreAxes ?? 0 });
   const counts = useMemo(() => {
     const r = StudyDefinition.safeParse(formToDefinition(watched as StudyFormValues, () => 'x'));
     return r.success ? plannedCounts(r.data) : null;
   }, [watched]);
-  const sweptSpeed = (watched.axes ?? []).slice(0, twoAxes ? 2 : 1).some((a) => a?.parameter === 'speed');
+  const sweptSpeed = (watched.axes ?? []).slice(0, axisCount).some((a) => a?.parameter === 'speed');
 
   return (
     <FormProvider {...form}>
@@ -129,14 +131,26 @@ function StudyFormBody({
         <BaseFields setups={live} chosen={chosen} revisionNumbers={revisions.data?.revisions.map((r) => r.number)} />
 
         <div className="grid gap-3 lg:grid-cols-2">
-          {axes.fields.slice(0, twoAxes ? 2 : 1).map((field, i) => (
-            <AxisFieldset key={field.id} index={i === 0 ? 0 : 1} base={baseSetup} />
+          {axes.fields.slice(0, axisCount).map((field, i) => (
+            <AxisFieldset key={field.id} index={i} base={baseSetup} />
           ))}
         </div>
-        <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" {...register('twoAxes')} className="size-4 accent-[var(--color-accent)]" />
-          Sweep a second parameter (a grid of points)
-        </label>
+        <div className="flex flex-wrap items-center gap-4">
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" {...register('twoAxes')} className="size-4 accent-[var(--color-accent)]" />
+            Sweep a second parameter (a grid of points)
+          </label>
+          {twoAxes && axisCount < 4 && (
+            <Button variant="quiet" size="sm" onClick={() => setValue('moreAxes', axisCount - 1)}>
+              Sweep a {axisCount === 2 ? 'third' : 'fourth'} parameter
+            </Button>
+          )}
+          {axisCount > 2 && (
+            <Button variant="quiet" size="sm" onClick={() => setValue('moreAxes', axisCount - 3)}>
+              Drop the {axisCount === 3 ? 'third' : 'fourth'} parameter
+            </Button>
+          )}
+        </div>
 
         <RoadsFieldset libraryRoads={libraryRoads} firstRoad={firstRoad} sweptSpeed={sweptSpeed} />
 
@@ -153,7 +167,8 @@ function StudyFormBody({
           <p className="text-sm text-ink-soft" aria-live="polite">
             {counts ? (
               <>
-                <span className="figures">{counts.points}</span> points, <span className="figures">{counts.runs}</span> runs of <span className="figures">{watched.duration}</span> s, in this browser.
+                <span className="figures">{formatCount(counts.points)}</span> points, <span className="figures">{formatCount(counts.runs)}</span> runs of <span className="figures">{watched.duration}</span> s
+                {(watched.seeds ?? 1) > 1 ? <> ({watched.seeds} road seeds a point)</> : null}, in this browser.
               </>
             ) : (
               'Fill in the study to see how many runs it makes.'

@@ -12,6 +12,7 @@ import { figureLabel, parameterLabel, parameterText } from '../model/display.ts'
 import { pointsCsv } from '../model/points-csv.ts';
 import { downloadText } from '../../../lib/download.ts';
 import type { StudyView } from '../model/study-view.ts';
+import { defaultSlice, type StudySlice } from '../model/chart-data.ts';
 import { CompromiseCard } from './compromise-card.tsx';
 import { FigureLinesChart } from './figure-lines-chart.tsx';
 import { HeatMap } from './heat-map.tsx';
@@ -46,9 +47,10 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
   const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
   const [mapFigure, setMapFigure] = useState<StudyFigureKey>(def.objectives[0]?.figure ?? def.comfortFigure);
   const [lineFigure, setLineFigure] = useState<StudyFigureKey>(def.comfortFigure);
-  const [along, setAlong] = useState<0 | 1>(0);
-  const [holdAt, setHoldAt] = useState(0);
-  const other = def.axes[along === 0 ? 1 : 0];
+  const [slice, setSlice] = useState<StudySlice>(() => defaultSlice(def.axes.length));
+  const setHold = (axis: number, at: number) => setSlice((s) => ({ ...s, holdAt: s.holdAt.map((v, k) => (k === axis ? at : v)) }));
+  const many = def.axes.length > 2;
+  const seeded = (def.seeds ?? 1) > 1;
   const c = view.compromise;
   const noFront = c && !c.ok && c.reason === 'no-feasible-point' ? c.explanation.slice(0, 2).join(' ') : null;
   const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
@@ -82,11 +84,16 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
         <p className="rounded border border-dashed border-rule px-3 py-2 text-sm text-ink-soft">The map, the figures along each parameter and the table of points appear when the run ends.</p>
       ) : (
         <>
-          <div className={`grid gap-4 ${def.axes.length === 2 ? 'xl:grid-cols-2' : ''}`}>
-            {def.axes.length === 2 && (
+          {seeded && (
+            <p className="text-sm text-ink-soft" data-testid="seed-note">
+              Every point ran over {def.seeds} ISO 8608 road seeds: figures are the mean over the seeds, and the spread is their standard deviation (event and measured roads are the same for every seed).
+            </p>
+          )}
+          <div className={`grid gap-4 ${def.axes.length >= 2 ? 'xl:grid-cols-2' : ''}`}>
+            {def.axes.length >= 2 && (
               <section aria-label="Map of a figure" className="rounded border border-rule bg-paper-raised p-3">
                 <div className="mb-2 flex flex-wrap items-end gap-3 pr-20">
-                  <h2 className="text-base font-semibold">Map over both parameters</h2>
+                  <h2 className="text-base font-semibold">{many ? 'Map over two parameters' : 'Map over both parameters'}</h2>
                   <Field label="Figure" className="w-80 max-w-full">
                     <Select value={mapFigure} onChange={(e) => setMapFigure(e.target.value as StudyFigureKey)}>
                       {present.map((k) => (
@@ -96,8 +103,36 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
                       ))}
                     </Select>
                   </Field>
+                  {many && (
+                    <>
+                      {([0, 1] as const).map((side) => (
+                        <Field key={side} label={side === 0 ? 'Across' : 'Up'} className="w-44">
+                          <Select
+                            value={slice.mapAxes[side]}
+                            onChange={(e) => {
+                              const pick = Number(e.target.value);
+                              setSlice((s) => {
+                                const mapAxes: [number, number] = [...s.mapAxes];
+                                // Choosing the axis the other side shows swaps them.
+                                if (mapAxes[1 - side] === pick) mapAxes[1 - side] = mapAxes[side];
+                                mapAxes[side] = pick;
+                                return { ...s, mapAxes };
+                              });
+                            }}
+                          >
+                            {def.axes.map((a, i) => (
+                              <option key={a.parameter} value={i}>
+                                {parameterLabel(a.parameter, false)}
+                              </option>
+                            ))}
+                          </Select>
+                        </Field>
+                      ))}
+                      <HoldFields axes={def.axes} skip={slice.mapAxes} holdAt={slice.holdAt} onHold={setHold} />
+                    </>
+                  )}
                 </div>
-                <HeatMap view={view} figure={mapFigure} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} />
+                <HeatMap view={view} figure={mapFigure} baselineIndex={baselineIndex} selected={selected} onSelect={setSelected} slice={slice} />
                 <p className="mt-1 text-xs text-ink-soft">Hatched cells break a limit. Outlined: best compromise (violet), baseline (olive).</p>
               </section>
             )}
@@ -113,16 +148,10 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
                     ))}
                   </Select>
                 </Field>
-                {def.axes.length === 2 && other && (
+                {def.axes.length >= 2 && (
                   <>
                     <Field label="Across" className="w-44">
-                      <Select
-                        value={along}
-                        onChange={(e) => {
-                          setAlong(Number(e.target.value) as 0 | 1);
-                          setHoldAt(0);
-                        }}
-                      >
+                      <Select value={slice.along} onChange={(e) => setSlice((sl) => ({ ...sl, along: Number(e.target.value) }))}>
                         {def.axes.map((a, i) => (
                           <option key={a.parameter} value={i}>
                             {parameterLabel(a.parameter, false)}
@@ -130,19 +159,12 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
                         ))}
                       </Select>
                     </Field>
-                    <Field label={`At ${parameterLabel(other.parameter)}`} className="w-36">
-                      <Select value={holdAt} onChange={(e) => setHoldAt(Number(e.target.value))}>
-                        {sweepValues(other).map((v, i) => (
-                          <option key={i} value={i}>
-                            {parameterText(other.parameter, v)}
-                          </option>
-                        ))}
-                      </Select>
-                    </Field>
+                    <HoldFields axes={def.axes} skip={[slice.along]} holdAt={slice.holdAt} onHold={setHold} />
                   </>
                 )}
               </div>
-              <FigureLinesChart view={view} figure={lineFigure} along={along} holdAt={holdAt} roadNames={roadNames} />
+              <FigureLinesChart view={view} figure={lineFigure} along={slice.along} holdAt={slice.holdAt} roadNames={roadNames} />
+              {seeded && <p className="mt-1 text-xs text-ink-soft">Lines: the mean over the seeds; shaded: ±1 standard deviation.</p>}
             </section>
           </div>
 
@@ -160,5 +182,26 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
       )}
     </div>
     </ChartExportProvider>
+  );
+}
+
+/** The value each swept parameter not on a chart is held at (a slice of the sweep). */
+function HoldFields({ axes, skip, holdAt, onHold }: { axes: StudyView['definition']['axes']; skip: readonly number[]; holdAt: readonly number[]; onHold: (axis: number, at: number) => void }) {
+  return (
+    <>
+      {axes.map((a, i) =>
+        skip.includes(i) ? null : (
+          <Field key={a.parameter} label={`At ${parameterLabel(a.parameter)}`} className="w-36">
+            <Select value={holdAt[i] ?? 0} onChange={(e) => onHold(i, Number(e.target.value))}>
+              {sweepValues(a).map((v, k) => (
+                <option key={k} value={k}>
+                  {parameterText(a.parameter, v)}
+                </option>
+              ))}
+            </Select>
+          </Field>
+        ),
+      )}
+    </>
   );
 }

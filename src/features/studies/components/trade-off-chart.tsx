@@ -78,6 +78,39 @@ export function TradeOffChart({ view, baselineIndex, selected, onSelect, describ
         { label: 'Baseline (lead’s pick)', stroke: theme.grip, paths: noLine, points: dot(26, theme.grip, 'transparent', 2.5) },
       ],
       hooks: {
+        // Over several seeds each point carries its ±1 sd range both ways, drawn under the dots.
+        drawSeries: [
+          (u, si) => {
+            const c = colsRef.current;
+            if (si !== 1 || !c.range) return;
+            const { xLo, xHi, yLo, yHi } = c.range;
+            const ctx = u.ctx;
+            ctx.save();
+            ctx.beginPath();
+            ctx.rect(u.bbox.left, u.bbox.top, u.bbox.width, u.bbox.height);
+            ctx.clip();
+            ctx.strokeStyle = theme.inkFaint;
+            ctx.globalAlpha = 0.55;
+            ctx.lineWidth = Math.max(1, devicePixelRatio);
+            ctx.beginPath();
+            for (let i = 0; i < c.x.length; i++) {
+              const y = c.feasible[i] ?? c.infeasible[i] ?? c.base[i];
+              if (y === null) continue;
+              const px = u.valToPos(c.x[i], 'x', true);
+              const py = u.valToPos(y, 'y', true);
+              if (xLo[i] !== null && xHi[i] !== null) {
+                ctx.moveTo(u.valToPos(xLo[i]!, 'x', true), py);
+                ctx.lineTo(u.valToPos(xHi[i]!, 'x', true), py);
+              }
+              if (yLo[i] !== null && yHi[i] !== null) {
+                ctx.moveTo(px, u.valToPos(yLo[i]!, 'y', true));
+                ctx.lineTo(px, u.valToPos(yHi[i]!, 'y', true));
+              }
+            }
+            ctx.stroke();
+            ctx.restore();
+          },
+        ],
         ready: [
           (u) => {
             u.over.addEventListener('click', () => {
@@ -107,7 +140,9 @@ export function TradeOffChart({ view, baselineIndex, selected, onSelect, describ
     <div>
       <UChart options={withSelection} data={data} exportName="comfort against grip" label="Comfort against grip, with the trade-off front" />
       <p className="mt-1 min-h-5 text-xs text-ink-soft" aria-live="polite">
-        {hover !== null ? `${describe(hover)} — click to pick it` : 'Lower is better on both axes: the front is where more comfort costs grip. Hover a point to name it; click to pick it.'}
+        {hover !== null
+          ? `${describe(hover)} — click to pick it`
+          : `Lower is better on both axes: the front is where more comfort costs grip.${cols.range ? ` Dots are the mean over ${view.definition.seeds} road seeds; bars span ±1 standard deviation.` : ''} Hover a point to name it; click to pick it.`}
       </p>
     </div>
   );

@@ -2,7 +2,8 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { StudyDefinition } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
-import { expandStudy } from '../../../../shared/study/expand.ts';
+import { evaluatePoint } from '../../../../shared/study/evaluate-point.ts';
+import { expandStudy, pointIndexOf } from '../../../../shared/study/expand.ts';
 import { figureLines, heatGrid, tradeOffColumns } from './chart-data.ts';
 import { pointsCsv } from './points-csv.ts';
 import { studyView } from './study-view.ts';
@@ -83,7 +84,7 @@ describe('study chart data', () => {
   });
 
   it('figure lines: one line per road and speed from the runs, the other axis held', () => {
-    const l = figureLines(studyView(def, points, base, true), 'bodyAccelWkRms', 0, 1, ['Class C lane']);
+    const l = figureLines(studyView(def, points, base, true), 'bodyAccelWkRms', 0, [0, 1], ['Class C lane']);
     expect(l.x).toEqual([0.5, 1, 1.5]);
     expect(l.lines.map((x) => x.label)).toEqual(['Class C lane · 20 m/s', 'Class C lane · 30 m/s']);
     expect(l.lines[1].y[2]).toBeCloseTo((0.5 + 0.45 + 0.12) * 1.2, 12);
@@ -100,5 +101,51 @@ describe('study chart data', () => {
     const lift = rows[0].indexOf('time off the road [%]');
     expect(Number(rows[2][lift])).toBeCloseTo(0.1, 12);
     expect(rows.slice(2).filter((r) => r[rows[0].indexOf('best compromise')] === 'yes')).toHaveLength(1);
+  });
+
+  describe('over seeds and more than two parameters', () => {
+    const def3 = StudyDefinition.parse({ ...def, axes: [...def.axes, { parameter: 'tyreRate', from: 2e5, to: 3e5, steps: 2 }], speeds: [20], seeds: 3 });
+    /** Invented per-seed figures: seed k adds k·0.1 to comfort, so the mean is +0.1 and the sd 0.1 (sample sd of 0, 0.1, 0.2). */
+    const seeded = expandStudy(def3).points.map((p) => {
+      const d = p.values.damperScale ?? 1;
+      const t = (p.values.tyreRate ?? 2e5) / 2e5;
+      const runs = [0, 1, 2].map((k) => ({ roadIndex: 0, speed: 20, seedIndex: k, figures: { bodyAccelWkRms: d + t + 0.1 * k, tyreLoadRatio: 0.3 - 0.1 * d } }));
+      return evaluatePoint(def3, p, runs);
+    });
+    const view = studyView(def3, seeded, null, true);
+
+    it('trade-off ranges span ±1 sd around each mean', () => {
+      const c = tradeOffColumns(view, null);
+      const i = c.pointAt.indexOf(0);
+      expect(c.x[i]).toBeCloseTo(0.5 + 1 + 0.1, 12);
+      expect(c.range?.xLo[i]).toBeCloseTo(0.5 + 1 + 0.1 - 0.1, 12);
+      expect(c.range?.xHi[i]).toBeCloseTo(0.5 + 1 + 0.1 + 0.1, 12);
+      // Grip does not scatter here: no range, shown in % as the page shows it.
+      expect(c.range?.yHi[i]).toBeCloseTo(25, 10);
+    });
+
+    it('figure lines are the mean over seeds in a ±1 sd band, the third axis held where asked', () => {
+      const l = figureLines(view, 'bodyAccelWkRms', 0, [0, 1, 1], ['lane']);
+      expect(l.lines).toHaveLength(1);
+      // damper 1.5, tyre 3e5 (held at position 1): 1.5 + 1.5 + 0.1
+      expect(l.lines[0].y[2]).toBeCloseTo(3.1, 12);
+      expect(l.lines[0].lo?.[2]).toBeCloseTo(3.0, 12);
+      expect(l.lines[0].hi?.[2]).toBeCloseTo(3.2, 12);
+    });
+
+    it('the map shows the two chosen axes with the third held', () => {
+      const g = heatGrid(view, 'bodyAccelWkRms', { mapAxes: [0, 2], along: 0, holdAt: [0, 1, 0] });
+      expect(g?.ys).toEqual([200, 300]);
+      expect(g?.index[1][1]).toBe(pointIndexOf(def3.axes, [1, 1, 1]));
+      expect(g?.cells[1][1]).toBeCloseTo(1 + 1.5 + 0.1, 12);
+    });
+
+    it('CSV: each figure as mean, sd, least and greatest over the seeds', () => {
+      const rows = Papa.parse<string[]>(pointsCsv(view).trim()).data;
+      const at = rows[0].indexOf('Wk-weighted body acceleration, mean over seeds [m/s²]');
+      expect(at).toBeGreaterThan(0);
+      expect(rows[0].slice(at + 1, at + 4)).toEqual(['Wk-weighted body acceleration, sd over seeds [m/s²]', 'Wk-weighted body acceleration, min over seeds [m/s²]', 'Wk-weighted body acceleration, max over seeds [m/s²]']);
+      expect(rows[1].slice(at, at + 4).map(Number).map((x) => +x.toFixed(9))).toEqual([1.6, 0.1, 1.5, 1.7]);
+    });
   });
 });

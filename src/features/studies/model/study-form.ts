@@ -23,7 +23,12 @@ export interface StudyFormValues {
   /** Revision number as the select holds it. */
   revision: string;
   twoAxes: boolean;
+  /** Parameters swept beyond the second (0–2), when a second is swept. */
+  moreAxes: number;
+  /** Always four, the unused ones kept so a parameter comes back as it was left. */
   axes: AxisValues[];
+  /** Road seeds per point (1: the road's own only). */
+  seeds: number;
   /** `library:<roadId>` or `iso:<class>` (a generated ISO 8608 road); seed blank keeps the road's own. */
   roads: { choice: string; seed: string }[];
   /** m/s, separated by commas or spaces. */
@@ -83,7 +88,9 @@ export function defaultFormValues(firstRoad: string): StudyFormValues {
     setupId: '',
     revision: '',
     twoAxes: true,
-    axes: [axisDefaults('damperScale'), axisDefaults('springRate')],
+    moreAxes: 0,
+    axes: [axisDefaults('damperScale'), axisDefaults('springRate'), axisDefaults('tyreRate'), axisDefaults('unsprungMass')],
+    seeds: 1,
     roads: [{ choice: firstRoad, seed: '' }],
     speeds: '20',
     duration: 60,
@@ -113,8 +120,11 @@ const optionalNumber = (text: string, scale = 1): number | undefined => {
  * The definition the form describes, ready for `StudyDefinition.safeParse`. `revisionId` maps
  * the chosen revision number to its id (undefined while the list loads).
  */
+/** How many parameters the form sweeps (1–4). */
+export const sweptAxisCount = (v: Pick<StudyFormValues, 'twoAxes' | 'moreAxes'>): number => (v.twoAxes ? 2 + Math.max(0, Math.min(2, Number(v.moreAxes) || 0)) : 1);
+
 export function formToDefinition(v: StudyFormValues, revisionId: (n: number) => string | undefined): StudyDefinitionInput {
-  const axes = (v.twoAxes ? v.axes.slice(0, 2) : v.axes.slice(0, 1)).map((a) => ({
+  const axes = v.axes.slice(0, sweptAxisCount(v)).map((a) => ({
     parameter: a.parameter,
     from: parameterToSI(a.parameter, Number(a.from)),
     to: parameterToSI(a.parameter, Number(a.to)),
@@ -150,6 +160,7 @@ export function formToDefinition(v: StudyFormValues, revisionId: (n: number) => 
     roads,
     speeds,
     duration: Number(v.duration),
+    seeds: Number(v.seeds ?? 1),
     aggregate: v.aggregate,
     objectives: v.objectives.map((o) => ({ figure: o.figure, weight: Number(o.weight) })),
     comfortFigure: v.comfortFigure,

@@ -1,5 +1,6 @@
 import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
-import { expandStudy } from '../../../../shared/study/expand.ts';
+import type { StudyPointValues } from '../../../../shared/schemas/study-result.ts';
+import { expandStudy, type StudyJob } from '../../../../shared/study/expand.ts';
 import type { StudyRunJob } from '../../../../shared/study/run-jobs.ts';
 
 /**
@@ -20,12 +21,17 @@ export function batchSize(totalRuns: number, workers: number): number {
   return Math.max(1, Math.min(MAX_BATCH, Math.ceil(totalRuns / (Math.max(1, workers) * 6))));
 }
 
-export function planBatches(def: Pick<StudyDefinition, 'axes' | 'roads' | 'speeds'>, workers: number): BatchPlan {
+export function planBatches(def: Pick<StudyDefinition, 'axes' | 'roads' | 'speeds'> & { seeds?: number }, workers: number): BatchPlan {
   const expanded = expandStudy(def);
-  const jobs: StudyRunJob[] = [
-    ...expanded.baseJobs.map((j) => ({ pointIndex: -1, values: {}, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}) })),
-    ...expanded.jobs.map((j) => ({ pointIndex: j.pointIndex, values: expanded.points[j.pointIndex].values, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}) })),
-  ];
+  const runJob = (j: StudyJob, values: StudyPointValues): StudyRunJob => ({
+    pointIndex: j.pointIndex,
+    values,
+    roadIndex: j.roadIndex,
+    speed: j.speed,
+    ...(j.seed !== undefined ? { seed: j.seed } : {}),
+    ...(j.seedIndex !== undefined ? { seedIndex: j.seedIndex } : {}),
+  });
+  const jobs: StudyRunJob[] = [...expanded.baseJobs.map((j) => runJob(j, {})), ...expanded.jobs.map((j) => runJob(j, expanded.points[j.pointIndex].values))];
   const size = batchSize(jobs.length, workers);
   const batches: StudyRunJob[][] = [];
   for (let i = 0; i < jobs.length; i += size) batches.push(jobs.slice(i, i + size));

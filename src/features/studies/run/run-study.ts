@@ -4,7 +4,7 @@ import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
 import { createPointCollector, studyRoadNames } from '../../../../shared/study/collect.ts';
 import { expandStudy } from '../../../../shared/study/expand.ts';
-import type { StudyJobOutcome, StudyRunContext } from '../../../../shared/study/run-jobs.ts';
+import { studyRoadSlots, type StudyJobOutcome, type StudyRunContext } from '../../../../shared/study/run-jobs.ts';
 import { planBatches } from './plan-batches.ts';
 import { studyPool, studyPoolSize } from './study-pool.ts';
 
@@ -61,7 +61,7 @@ export function startStudyRun(input: StudyRunInput, handlers: StudyRunHandlers =
   const plan = planBatches(def, workers);
   const expanded = expandStudy(def);
   const collector = createPointCollector(def, expanded, studyRoadNames(def, input.roads));
-  const context: StudyRunContext = { base: input.baseSetup, roads: input.roads, duration: def.duration, settleTime: def.settleTime };
+  const context: StudyRunContext = { base: input.baseSetup, roads: input.roads, duration: def.duration, settleTime: def.settleTime, roadSlots: studyRoadSlots(def) };
   // Workers keep one runner per key: a new key per run, so a changed definition never reuses stale roads.
   const key = `study-run-${Date.now()}-${++runCounter}`;
   const controller = new AbortController();

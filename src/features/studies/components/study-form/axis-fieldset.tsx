@@ -6,12 +6,14 @@ import { startingRange } from '../../model/study-form.ts';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
 
 /** One swept parameter and its range; picking a parameter fills in a range centred on the base setup's value. */
-export function AxisFieldset({ index: i, base }: { index: 0 | 1; base: Setup | undefined }) {
+const ordinal = ['First', 'Second', 'Third', 'Fourth'];
+
+export function AxisFieldset({ index: i, base }: { index: number; base: Setup | undefined }) {
   const { register, setValue } = useStudyFormContext();
   const e = useFieldError();
   return (
-    <fieldset className="rounded border border-rule p-3" aria-label={i === 0 ? 'First swept parameter' : 'Second swept parameter'}>
-      <legend className="px-1 text-sm font-semibold">{i === 0 ? 'Swept parameter' : 'Second swept parameter'}</legend>
+    <fieldset className="rounded border border-rule p-3" aria-label={`${ordinal[i]} swept parameter`}>
+      <legend className="px-1 text-sm font-semibold">{i === 0 ? 'Swept parameter' : `${ordinal[i]} swept parameter`}</legend>
       <Field label="Parameter" error={e(`axes.${i}.parameter`)} className="mb-2">
         <Select
           {...register(`axes.${i}.parameter`, {

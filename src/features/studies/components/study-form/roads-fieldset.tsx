@@ -59,6 +59,9 @@ export function RoadsFieldset({ libraryRoads, firstRoad, sweptSpeed }: { library
         <Field label="Run length [s]" error={e('duration')} className="w-32">
           <Input type="number" min={1} max={600} step="any" {...register('duration', { valueAsNumber: true })} />
         </Field>
+        <Field label="Road seeds per point" hint="ISO 8608 roads only" error={e('seeds')} className="w-40">
+          <Input type="number" min={1} max={50} {...register('seeds', { valueAsNumber: true })} />
+        </Field>
         <Field label="Over roads and speeds" hint="how each point's figures combine" className="w-52">
           <Select {...register('aggregate')}>
             <option value="mean">take the mean</option>
@@ -66,6 +69,9 @@ export function RoadsFieldset({ libraryRoads, firstRoad, sweptSpeed }: { library
           </Select>
         </Field>
       </div>
+      <p className="mt-2 text-xs text-ink-soft">
+        With several seeds each point runs over as many ISO 8608 profiles (seed 1 is the road&apos;s own, the others derived from it) and shows their mean and spread; event and measured roads are the same for every seed.
+      </p>
     </fieldset>
   );
 }
