@@ -17,8 +17,6 @@ export default {
   ignore: ['tests/lint/fixtures/**'],
   // Debian's package, started by the fleet tests and bench:cluster (server/bench/fleet-processes.ts)
   ignoreBinaries: ['redis-server'],
-  // pinned for the drive-fitting work of issue 15's other half, not yet imported on this branch
-  ignoreDependencies: ['ml-levenberg-marquardt'],
   ignoreExportsUsedInFile: true,
   // Stylesheets import the fonts and Tailwind: read their @import lines as imports.
   compilers: {
