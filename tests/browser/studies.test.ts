@@ -40,7 +40,7 @@ describe('studies in the browser', () => {
     await second.getByLabel('To').fill('40');
     await second.getByLabel('Steps').fill('4');
     await form.getByLabel('Road 1').selectOption('iso:C');
-    await form.getByLabel('Speeds [m/s]').fill('20');
+    await form.getByLabel('Speeds [km/h]').fill('72');
     await form.getByLabel('Run length [s]').fill('20');
     await form.getByText('16 points, 17 runs of 20 s').waitFor();
     await screenshot(page, 'study-form-engineer-1280');

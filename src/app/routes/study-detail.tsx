@@ -11,6 +11,7 @@ import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
+import { useStudyDisplay } from '../../features/studies/model/display.ts';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
 import { useRunWhenAsked, useStudyPage } from '../../features/studies/run/use-study-page.ts';
 import { formatDateTime, formatSig } from '../../lib/format.ts';
@@ -25,6 +26,7 @@ import { NotFoundRoute } from './not-found.tsx';
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
   const speedUnit = useUnits().speed;
+  const display = useStudyDisplay();
   const { studyId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
@@ -79,7 +81,7 @@ export function StudyDetailRoute() {
                     ) : (
                       'a setup that no longer exists'
                     )}{' '}
-                    <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
+                    <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes, display)} · {roadNames.join(', ')}
                     {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>} · <span className="figures">{s.definition.duration}</span> s runs
                   </p>
                   <p className="mt-1 flex flex-wrap items-center gap-2">

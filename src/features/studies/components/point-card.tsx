@@ -2,19 +2,21 @@ import type { ReactNode } from 'react';
 import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
-import { figureLabel, figureText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 /** The point picked on a chart or in the table: its values, whether it meets the limits (and why not), its main figures. */
 export function PointCard({ view, index, actions }: { view: StudyView; index: number; actions?: ReactNode }) {
   const point = index === -1 ? view.base : view.points.find((p) => p.index === index);
+  const d = useStudyDisplay();
   if (!point) return null;
+  const { figureLabel, figureText } = d;
   const def = view.definition;
   const keys: StudyFigureKey[] = [...new Set<StudyFigureKey>([def.comfortFigure, def.gripFigure, ...def.objectives.map((o) => o.figure), 'strokeUsed', 'liftOffFraction'])];
   return (
     <section aria-label="Picked point" className="rounded border border-rule bg-paper-raised px-4 py-3">
       <p className="text-xs font-medium tracking-wide text-ink-faint uppercase">Picked point {index >= 0 ? `#${index}` : ''}</p>
-      <h2 className="text-base font-semibold">{index === -1 ? 'The base setup, unchanged' : describePoint(def.axes, point.values)}</h2>
+      <h2 className="text-base font-semibold">{index === -1 ? 'The base setup, unchanged' : describePoint(def.axes, point.values, d.parameterWords)}</h2>
       <p className="mt-1 text-sm">{point.feasible ? <span className="text-ok">Meets every limit.</span> : <Tag tone="signal">breaks a limit</Tag>}</p>
       {!point.feasible && (
         <ul className="mt-1 list-disc pl-5 text-sm text-signal-ink">

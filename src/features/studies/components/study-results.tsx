@@ -8,7 +8,7 @@ import { sweepValues } from '../../../../shared/study/expand.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, Select } from '../../../components/ui/field.tsx';
 import { Section } from '../../../components/ui/page-header.tsx';
-import { figureLabel, parameterLabel, parameterText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { pointsCsv } from '../model/points-csv.ts';
 import { downloadText } from '../../../lib/download.ts';
 import type { StudyView } from '../model/study-view.ts';
@@ -41,6 +41,8 @@ export interface StudyResultsProps {
  */
 export function StudyResults({ view, roadNames, baselineIndex, pointActions, running = false, base }: StudyResultsProps) {
   const def = view.definition;
+  const d = useStudyDisplay();
+  const { figureLabel, parameterLabel, parameterText } = d;
   const about = studyExportInfo(def.name, roadNames, def.speeds, base);
   const [selected, setSelected] = useState<number | null>(null);
   const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
@@ -51,7 +53,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
   const other = def.axes[along === 0 ? 1 : 0];
   const c = view.compromise;
   const noFront = c && !c.ok && c.reason === 'no-feasible-point' ? c.explanation.slice(0, 2).join(' ') : null;
-  const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
+  const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}, d.parameterWords));
 
   return (
     <ChartExportProvider value={about}>
@@ -149,7 +151,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
           <Section
             title="All points"
             actions={
-              <Button size="sm" onClick={() => downloadText(pointsCsv(view), exportFileName(about.stem, 'points', 'csv'))}>
+              <Button size="sm" onClick={() => downloadText(pointsCsv(view, d), exportFileName(about.stem, 'points', 'csv'))}>
                 Export CSV
               </Button>
             }

@@ -1,7 +1,7 @@
 import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
 import { sweepValues } from '../../../../shared/study/expand.ts';
-import { figureToDisplay, parameterToDisplay } from './display.ts';
+import { defaultStudyDisplay, type StudyDisplay } from './display.ts';
 import type { StudyView } from './study-view.ts';
 
 /**
@@ -26,7 +26,8 @@ export interface TradeOffColumns {
   pointAt: number[];
 }
 
-export function tradeOffColumns(view: StudyView, baselineIndex: number | null): TradeOffColumns {
+export function tradeOffColumns(view: StudyView, baselineIndex: number | null, d: StudyDisplay = defaultStudyDisplay): TradeOffColumns {
+  const { figureToDisplay } = d;
   const { comfortFigure: cf, gripFigure: gf } = view.definition;
   const frontIdx = new Set((view.tradeOff?.front ?? []).map((pos) => view.points[pos]?.index));
   const bestIdx = view.compromise?.ok ? view.points[view.compromise.winner]?.index : undefined;
@@ -70,7 +71,8 @@ export interface HeatGrid {
   max: number;
 }
 
-export function heatGrid(view: StudyView, figure: StudyFigureKey): HeatGrid | null {
+export function heatGrid(view: StudyView, figure: StudyFigureKey, d: StudyDisplay = defaultStudyDisplay): HeatGrid | null {
+  const { figureToDisplay, parameterToDisplay } = d;
   const [a, b] = view.definition.axes;
   if (!b) return null;
   const xs = sweepValues(a).map((v) => parameterToDisplay(a.parameter, v));
@@ -111,7 +113,9 @@ export interface FigureLines {
   lines: { label: string; roadIndex: number; speed: number; y: (number | null)[] }[];
 }
 
-export function figureLines(view: StudyView, figure: StudyFigureKey, along: 0 | 1, holdAt: number, roadNames: readonly string[]): FigureLines {
+export function figureLines(view: StudyView, figure: StudyFigureKey, along: 0 | 1, holdAt: number, roadNames: readonly string[], d: StudyDisplay = defaultStudyDisplay): FigureLines {
+  const { figureToDisplay, parameterToDisplay } = d;
+  const speedUnit = d.units.speed;
   const axes = view.definition.axes;
   const axis = axes[along] ?? axes[0];
   const inner = axes[1]?.steps ?? 1;
@@ -125,7 +129,7 @@ export function figureLines(view: StudyView, figure: StudyFigureKey, along: 0 | 
       const key = `${run.roadIndex}|${run.speed}`;
       let line = combos.get(key);
       if (!line) {
-        line = { label: `${roadNames[run.roadIndex] ?? `road ${run.roadIndex + 1}`} · ${+run.speed.toPrecision(3)} m/s`, roadIndex: run.roadIndex, speed: run.speed, y: values.map(() => null) };
+        line = { label: `${roadNames[run.roadIndex] ?? `road ${run.roadIndex + 1}`} · ${+speedUnit.fromSI(run.speed).toPrecision(3)} ${speedUnit.symbol}`, roadIndex: run.roadIndex, speed: run.speed, y: values.map(() => null) };
         combos.set(key, line);
       }
       const v = run.figures?.[figure];

@@ -1,6 +1,6 @@
 import { studyParameters, type StudyParameter } from '../../../../../shared/schemas/study.ts';
 import { Field, Input, Select } from '../../../../components/ui/field.tsx';
-import { parameterLabel } from '../../model/display.ts';
+import { useStudyDisplay } from '../../model/display.ts';
 import type { Setup } from '../../../../../shared/schemas/setup.ts';
 import { startingRange } from '../../model/study-form.ts';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
@@ -9,6 +9,7 @@ import { useFieldError, useStudyFormContext } from './field-error.ts';
 export function AxisFieldset({ index: i, base }: { index: 0 | 1; base: Setup | undefined }) {
   const { register, setValue } = useStudyFormContext();
   const e = useFieldError();
+  const display = useStudyDisplay();
   return (
     <fieldset className="rounded border border-rule p-3" aria-label={i === 0 ? 'First swept parameter' : 'Second swept parameter'}>
       <legend className="px-1 text-sm font-semibold">{i === 0 ? 'Swept parameter' : 'Second swept parameter'}</legend>
@@ -16,7 +17,7 @@ export function AxisFieldset({ index: i, base }: { index: 0 | 1; base: Setup | u
         <Select
           {...register(`axes.${i}.parameter`, {
             onChange: (ev: React.ChangeEvent<HTMLSelectElement>) => {
-              const d = startingRange(ev.target.value as StudyParameter, base);
+              const d = startingRange(ev.target.value as StudyParameter, base, display);
               setValue(`axes.${i}.from`, d.from);
               setValue(`axes.${i}.to`, d.to);
               setValue(`axes.${i}.steps`, d.steps);
@@ -25,7 +26,7 @@ export function AxisFieldset({ index: i, base }: { index: 0 | 1; base: Setup | u
         >
           {studyParameters.map((p) => (
             <option key={p} value={p}>
-              {parameterLabel(p)}
+              {display.parameterLabel(p)}
             </option>
           ))}
         </Select>
