@@ -49,7 +49,7 @@ describe('diffSetups', () => {
 
   it('gives each row the unit the person chose: rates in lbf/in, lengths in in, damper speeds in mm/s; masses and forces stay SI', () => {
     const u = chosenUnits({ damperVelocity: 'mm/s', rate: 'lbf/in', speed: 'mph', length: 'in' });
-    const next = Setup.parse({ ...base, sprungMass: 320, springRate: 21500, damper: { ...base.damper, compression: [[0.06, 110], [0.3, 291]] }, bumpStop: { ...base.bumpStop, clearance: 0.05 } });
+    const next = Setup.parse({ ...base, sprungMass: 320, springRate: 21500, damper: { ...base.damper, compression: [[0.06, 115], [0.3, 291]] }, bumpStop: { ...base.bumpStop, clearance: 0.05 } });
     const unitOf = Object.fromEntries(diffSetups(base, next, u).map((r) => [r.label, r.unit]));
     // 1 lbf/in = 175.126835 N/m and 1 in = 0.0254 m (NIST SP 811, B.8)
     expect(unitOf['Spring rate']?.symbol).toBe('lbf/in');
