@@ -11,7 +11,7 @@ import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
-import { useStudyDisplay } from '../../features/studies/model/display.ts';
+import { savedPointName, useStudyDisplay } from '../../features/studies/model/display.ts';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
 import { useRunWhenAsked, useStudyPage } from '../../features/studies/run/use-study-page.ts';
 import { formatDateTime, formatSig } from '../../lib/format.ts';
@@ -94,7 +94,7 @@ export function StudyDetailRoute() {
                     )}
                     {s.baseline && (
                       <Tag tone="accent">
-                        baseline: {s.baseline.label} (by {s.baseline.chosenBy.name})
+                        baseline: {savedPointName(display, s.definition.axes, s.baseline)} (by {s.baseline.chosenBy.name})
                       </Tag>
                     )}
                   </p>

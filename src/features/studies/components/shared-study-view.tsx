@@ -9,7 +9,7 @@ import { Tag } from '../../../components/ui/tag.tsx';
 import { formatDateTime } from '../../../lib/format.ts';
 import { studyView } from '../model/study-view.ts';
 import { statusWords, sweepWords } from './study-list.tsx';
-import { useStudyDisplay } from '../model/display.ts';
+import { savedPointName, useStudyDisplay } from '../model/display.ts';
 import { StudyResults } from './study-results.tsx';
 
 /**
@@ -37,7 +37,7 @@ export function SharedStudyView({ shared, copyAction }: { shared: SharedStudy; c
           <Tag tone={status.tone}>{status.text}</Tag>
           Shared by {shared.sharedBy} on {formatDateTime(shared.sharedAt)}
           {shared.expiresAt ? `, until ${formatDateTime(shared.expiresAt)}` : ''}
-          {s.baseline && <Tag tone="accent">baseline: {s.baseline.label}</Tag>}
+          {s.baseline && <Tag tone="accent">baseline: {savedPointName(d, s.definition.axes, s.baseline)}</Tag>}
         </p>
         {copyAction && <div className="mt-2">{copyAction}</div>}
       </header>

@@ -5,7 +5,7 @@ import type { StudySummary } from '../../../../shared/schemas/study-record.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
 import { formatDateTime } from '../../../lib/format.ts';
-import { type StudyDisplay, useStudyDisplay } from '../model/display.ts';
+import { savedPointName, type StudyDisplay, useStudyDisplay } from '../model/display.ts';
 
 export const statusWords: Record<StudySummary['status'], { text: string; tone: 'plain' | 'accent' | 'signal' }> = {
   draft: { text: 'not run yet', tone: 'plain' },
@@ -45,7 +45,7 @@ export function StudyList({ workspaceId, studies }: { workspaceId: string; studi
       <TBody>
         {studies.map((s) => {
           const status = statusWords[s.status];
-          const verdict = s.results?.best?.label ?? null;
+          const verdict = s.results?.best ? savedPointName(d, s.axes, s.results.best) : null;
           return (
             <Tr key={s.id}>
               <Td>

@@ -5,7 +5,7 @@ import type { StudyPointResult } from '../../../../shared/schemas/study-result.t
 import { expandStudy } from '../../../../shared/study/expand.ts';
 import { figureLines, heatGrid, tradeOffColumns } from './chart-data.ts';
 import { chosenUnits } from '../../../lib/units/unit-table.ts';
-import { studyDisplay } from './display.ts';
+import { savedPointName, studyDisplay } from './display.ts';
 import { pointsCsv } from './points-csv.ts';
 import { studyView } from './study-view.ts';
 
@@ -134,5 +134,11 @@ describe('study chart data', () => {
     // 20 m/s ÷ 0.44704 = 44.7387 mph
     expect(figureLines(view, 'bodyAccelWkRms', 0, 1, ['Class C lane'], imperial).lines.map((l) => l.label)).toEqual(['Class C lane · 44.7 mph', 'Class C lane · 67.1 mph']);
     expect(view.compromise?.ok && view.compromise.explanation.join(' ')).toMatch(/lbf\/in/);
+  });
+
+  it('names a saved point (baseline, best) from its sweep index in the chosen units, the stored words when the index is unknown', () => {
+    // point 5 of the 3 × 2 grid: damper ×1.50, spring 30 000 N/m
+    expect(savedPointName(imperial, def.axes, { pointIndex: 5, label: 'damper ×1.50, spring rate 30 000 N/m' })).toBe('damper ×1.50, spring rate 171\u2009lbf/in');
+    expect(savedPointName(imperial, def.axes, { pointIndex: 99, label: 'as stored' })).toBe('as stored');
   });
 });

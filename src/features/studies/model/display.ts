@@ -1,7 +1,8 @@
 import { DEFAULT_UNIT_PREFERENCES } from '../../../../shared/schemas/unit-preferences.ts';
 import type { StudyFigureKey, StudyParameter } from '../../../../shared/schemas/study.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
-import { studyParameterInfo } from '../../../../shared/study/describe-point.ts';
+import { describePoint, studyParameterInfo } from '../../../../shared/study/describe-point.ts';
+import { pointValuesAt } from '../../../../shared/study/expand.ts';
 import { type DisplayUnit, formatSig, units, type UnitName } from '../../../lib/format.ts';
 import { chosenUnits, type ChosenUnits, type QuantityKind } from '../../../lib/units/unit-table.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
@@ -122,6 +123,15 @@ export function studyDisplay(u: ChosenUnits): StudyDisplay {
     parameterWords: Object.fromEntries(chosen.map((p) => [p, (si: number) => `${studyParameterInfo[p].label} ${parameterWithUnit(p, si)}`])),
     parameterWithUnit,
   };
+}
+
+/**
+ * A saved point (best compromise, baseline) named in the reader's units from its sweep index;
+ * the label stored with it (SI words) when the index is outside the sweep.
+ */
+export function savedPointName(d: StudyDisplay, axes: Parameters<typeof pointValuesAt>[0], point: { pointIndex: number; label: string }): string {
+  const values = pointValuesAt(axes, point.pointIndex);
+  return values ? describePoint(axes, values, d.parameterWords) : point.label;
 }
 
 /** The display of the default units (pages and tests outside a signed-in person's choice). */
