@@ -84,7 +84,8 @@ export function defaultFormValues(firstRoad: string, d: StudyDisplay = defaultSt
     twoAxes: true,
     axes: [axisDefaults('damperScale', d), axisDefaults('springRate', d)],
     roads: [{ choice: firstRoad, seed: '' }],
-    speeds: String(shownIn(d.units.speed, DEFAULT_SPEED)),
+    // three figures: 72 km/h, 20 m/s, 44.7 mph
+    speeds: String(Number(d.units.speed.fromSI(DEFAULT_SPEED).toPrecision(3))),
     duration: 60,
     aggregate: 'mean',
     objectives: [
