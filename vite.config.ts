@@ -80,7 +80,6 @@ export default defineConfig(({ command, mode }) => ({
           globalSetup: ['tests/browser/global-setup.ts'],
           testTimeout: 120_000,
           hookTimeout: 180_000,
-          fileParallelism: false,
         },
       },
     ],

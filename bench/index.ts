@@ -15,7 +15,8 @@ import { figuresFromMetrics } from '../shared/study/figures.ts';
 import { createStudyRunner } from '../shared/study/run-jobs.ts';
 import { worstDifference } from '../shared/sim/metrics/figure-differences.ts';
 import type { IntegratorName } from '../shared/schemas/run.ts';
-import { DURATION, isoC, linearSetup, nonLinearSetup, request, SPEED, studyContext, sweepJobs, sweepRequests } from './problems.ts';
+import { runVehicle } from '../shared/sim/vehicle/run-vehicle.ts';
+import { DURATION, isoC, vehicleRun, linearSetup, nonLinearSetup, request, SPEED, studyContext, sweepJobs, sweepRequests } from './problems.ts';
 import { median, timeIt, type Timings } from './stats.ts';
 import { startPool } from './sweep.ts';
 
@@ -91,6 +92,7 @@ async function main() {
     if (!out.ok) throw new Error(out.reason);
   }, REPEATS);
   row('60 s non-linear run, road already generated (ms, median)', ms(warm), 'default path; as in a live run that keeps its road');
+  benchVehicle();
 
   // 3. 400 runs over 2 worker threads.
   const requests = sweepRequests();
@@ -163,6 +165,22 @@ async function main() {
   process.stdout.write(`\nSingle-thread figures are "CPU / wall" medians: CPU time is the cost on one core, wall time also\ncounts waiting for the CPU when the machine is shared. The sweep is wall time.\n`);
   process.stdout.write(`\n${'figure'.padEnd(w0)}  ${'value'.padStart(w1)}  note\n${'-'.repeat(w0 + w1 + 8)}\n${lines.join('\n')}\n`);
   process.stdout.write(`\nrepeats: ${REPEATS} (sweep ${SWEEP_REPEATS}); Node ${process.version}; load average ${(await import('node:os')).loadavg().map((x) => x.toFixed(1)).join(' ')}\n`);
+}
+
+/** The Pipit hatchback (both non-linear corners) over the same road: a whole vehicle run. */
+function benchVehicle() {
+  const vehicleRequest = { ...vehicleRun(), road: isoC, speed: SPEED, duration: DURATION };
+  let last: ReturnType<typeof runVehicle> | undefined;
+  const times = timeIt(() => {
+    last = runVehicle(vehicleRequest);
+    if (!last.ok) throw new Error(last.reason);
+  }, REPEATS);
+  const t = last?.ok ? last.result.timing : undefined;
+  row(
+    '60 s vehicle run (pitch plane, two non-linear axles), road already generated (ms, median)',
+    ms(times),
+    t ? `integration ${t.integrateMs.toFixed(0)} ms of the last; ${t.steps} steps, ${t.rejectedSteps} rejected, ${t.rhsEvaluations} RHS evaluations` : '',
+  );
 }
 
 main().catch((e) => {

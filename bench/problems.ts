@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { Road, type RoadInput } from '../shared/schemas/road.ts';
 import type { RunRequestInput } from '../shared/schemas/run.ts';
 import { Setup, type SetupInput } from '../shared/schemas/setup.ts';
+import type { VehicleSetupInput } from '../shared/schemas/vehicle-setup.ts';
 import type { StudyRunContext, StudyRunJob } from '../shared/study/run-jobs.ts';
 
 /** The reference problems: the Pipit front corner on ISO 8608 class C, seed 7, at 20 m/s. */
@@ -58,3 +59,8 @@ export function sweepJobs(): StudyRunJob[] {
   }
   return out;
 }
+
+/** The Pipit hatchback example with its corner files read in. */
+export const vehicleRun = (): { vehicle: VehicleSetupInput } => ({
+  vehicle: { ...example<VehicleSetupInput>('pipit.vehicle.json'), front: nonLinearSetup, rear: example<SetupInput>('pipit-rear.setup.json') },
+});

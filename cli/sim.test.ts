@@ -83,4 +83,25 @@ describe('npm run sim', { timeout: 60_000 }, () => {
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/road\.csv lane\.csv: line 4: elevation "oops" is not a number/);
   });
+
+  it('--vehicle prints the vehicle families: modes, flat-ride checks, seat and axle figures, timing', () => {
+    const r = sim('--vehicle', 'examples/pipit.vehicle.json', '--road', 'examples/speed-bump.road.json', '--speed', '10', '--duration', '5');
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(Object.keys(out.linear.modes).sort()).toEqual(['frontHop', 'heave', 'pitch', 'rearHop']);
+    expect(out.linear.flatRide.frontBelowRear).toBe(true);
+    expect(out.wheelbaseDelay).toBeCloseTo(0.255, 12);
+    expect(out.figures.seats.map((s: { name: string }) => s.name)).toEqual(['driver', 'rear passenger']);
+    for (const end of ['front', 'rear']) expect(out.figures[end].travelMaxCompression).toBeGreaterThan(0);
+    expect(out.timing.rhsEvaluations).toBeGreaterThan(0);
+  });
+
+  it('a bad vehicle field exits with 2 and names it', () => {
+    const vehicle = { ...JSON.parse(readFileSync(join(root, 'examples/pipit.vehicle.json'), 'utf8')), front: join(root, 'examples/pipit-front.setup.json'), rear: join(root, 'examples/pipit-rear.setup.json') };
+    delete vehicle.pitchRadiusOfGyration;
+    const r = sim('--vehicle', file('v.json', JSON.stringify(vehicle)), '--road', 'examples/iso-c.road.json', '--speed', '20', '--duration', '3');
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/^sim: vehicle\.pitchInertia: give exactly one of pitchInertia and pitchRadiusOfGyration/);
+  });
 });

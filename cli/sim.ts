@@ -1,9 +1,15 @@
 /**
- * Headless runner: one corner over one road, the same code the browser workers run.
+ * Headless runner: one corner, or a whole vehicle in the pitch plane, over one road, the same
+ * code the browser workers run.
  *
  *   npm run --silent sim -- --setup S.json --road R.json --speed 20 --duration 60
  *                           [--seed 7] [--traces out.csv] [--rate 500]
  *                           [--integrator rk4|odex] [--tolerance 1e-4 (odex)]
+ *   npm run --silent sim -- --vehicle V.json --road R.json --speed 20 --duration 60
+ *                           [--seed 7] [--rate 500]
+ *
+ * A vehicle file may name its front and rear setup files instead of holding them
+ * ("front": "pipit-front.setup.json"); paths are relative to the vehicle file.
  *
  * Prints exactly one JSON object on stdout (modal figures, metrics, road, timing). Exit status:
  * 0 done, 2 bad input (the message on stderr names the field, file or CSV line), 1 the
@@ -19,6 +25,7 @@ import { parseArgs } from 'node:util';
 import { IntegratorName } from '../shared/schemas/run.ts';
 import { parseMeasuredCsv, type LengthUnit } from '../shared/sim/roads/measured-csv.ts';
 import { runCorner } from '../shared/sim/run-corner.ts';
+import { runVehicle } from '../shared/sim/vehicle/run-vehicle.ts';
 import type { TraceColumns } from '../shared/sim/trace.ts';
 
 class InputError extends Error {}
@@ -87,11 +94,56 @@ function writeTraces(path: string, trace: TraceColumns) {
   writeFileSync(path, lines.join('\n') + '\n');
 }
 
+/** Replaces a vehicle file's front/rear setup paths by the setups read from them. */
+function resolveVehicleSetups(vehicle: unknown, vehiclePath: string): unknown {
+  if (typeof vehicle !== 'object' || vehicle === null) return vehicle;
+  const out: Record<string, unknown> = { ...(vehicle as Record<string, unknown>) };
+  for (const end of ['front', 'rear']) {
+    if (typeof out[end] === 'string') out[end] = readJson(resolve(dirname(vehiclePath), out[end] as string), 'vehicle');
+  }
+  return out;
+}
+
+function mainVehicle(values: Record<string, string | undefined>): number {
+  if (values.setup) throw new InputError('give --setup or --vehicle, not both');
+  if (values.traces || values.integrator || values.tolerance) throw new InputError('--traces, --integrator and --tolerance apply to corner runs only');
+  if (!values.road) throw new InputError('--road is required');
+  const vehicle = resolveVehicleSetups(readJson(values.vehicle!, 'vehicle'), values.vehicle!);
+  const road = resolveCsvRoad(readJson(values.road, 'road'), values.road);
+  const outcome = runVehicle({
+    vehicle: vehicle as never,
+    road: road as never,
+    speed: numberArg(values.speed, 'speed', true)!,
+    duration: numberArg(values.duration, 'duration', true)!,
+    seed: numberArg(values.seed, 'seed', false),
+    outputRate: numberArg(values.rate, 'rate', false),
+  });
+  if (!outcome.ok) {
+    process.stderr.write(`sim: ${outcome.reason}\n`);
+    return outcome.stage === 'input' ? 2 : 1;
+  }
+  const { result } = outcome;
+  const report = {
+    vehicle: result.vehicleName,
+    speed: result.speed,
+    duration: result.duration,
+    settleTime: result.settleTime,
+    wheelbaseDelay: result.wheelbaseDelay,
+    road: result.road,
+    linear: result.linear,
+    figures: result.figures,
+    timing: result.timing,
+  };
+  process.stdout.write(JSON.stringify(report, null, 2) + '\n');
+  return 0;
+}
+
 function main(argv: string[]): number {
   const { values } = parseArgs({
     args: argv,
     options: {
       setup: { type: 'string' },
+      vehicle: { type: 'string' },
       road: { type: 'string' },
       speed: { type: 'string' },
       duration: { type: 'string' },
@@ -104,7 +156,8 @@ function main(argv: string[]): number {
     strict: true,
     allowPositionals: false,
   });
-  if (!values.setup) throw new InputError('--setup is required');
+  if (values.vehicle) return mainVehicle(values);
+  if (!values.setup) throw new InputError('--setup is required (or --vehicle for a whole vehicle)');
   if (!values.road) throw new InputError('--road is required');
   const setup = readJson(values.setup, 'setup');
   const road = resolveCsvRoad(readJson(values.road, 'road'), values.road);

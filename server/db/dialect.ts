@@ -27,8 +27,17 @@ export function isUniqueViolation(err: unknown): boolean {
   return code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY' || code === '23505';
 }
 
-/** A top-level text field of a JSON document kept in a text column (`json_extract` / `->>`). */
-export function jsonTextField(db: Pick<Queryable, 'getExecutor'>, column: string, key: string): RawBuilder<string> {
-  if (!/^\w+$/.test(key)) throw new Error(`not a plain JSON key: ${key}`);
-  return databaseKind(db) === 'postgres' ? sql<string>`(${sql.ref(column)}::json ->> ${sql.lit(key)})` : sql<string>`json_extract(${sql.ref(column)}, ${sql.lit(`$.${key}`)})`;
+/**
+ * A text column read as its UTF-8 bytes (a Buffer from either driver), for documents that are
+ * sent on as they are: megabytes decoded into a string and encoded back cost the request thread
+ * far more than the copy.
+ */
+export function textAsBytes(db: Pick<Queryable, 'getExecutor'>, column: string): RawBuilder<Buffer> {
+  return databaseKind(db) === 'postgres' ? sql<Buffer>`convert_to(${sql.ref(column)}, 'UTF8')` : sql<Buffer>`cast(${sql.ref(column)} as blob)`;
+}
+
+/** UTF-8 bytes written into a text column as text (the reverse of `textAsBytes`). */
+export function bytesAsText(db: Pick<Queryable, 'getExecutor'>, bytes: Uint8Array): RawBuilder<string> {
+  const buffer = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  return databaseKind(db) === 'postgres' ? sql<string>`convert_from(${buffer}, 'UTF8')` : sql<string>`cast(${buffer} as text)`;
 }

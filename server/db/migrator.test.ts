@@ -31,4 +31,20 @@ describe('migrator', () => {
     expect(tables.rows).toEqual([]);
     await db.destroy();
   });
+
+  it('0023 fills the new road kind column from each stored definition', async () => {
+    const db = openDatabase(':memory:');
+    expect((await createMigrator(db).migrateTo('0018_api_tokens')).error).toBeUndefined();
+    await sql`insert into user (id, email, name, password_hash, created_at) values ('u1', 'a@tallisbrume.example', 'A', 'x', '2026-01-01')`.execute(db);
+    await sql`insert into workspace (id, name, created_at) values ('w1', 'W', '2026-01-01')`.execute(db);
+    for (const [id, kind] of [['r1', 'measured'], ['r2', 'kerb']]) {
+      const definition = JSON.stringify({ kind, name: id });
+      await sql`insert into road (id, workspace_id, name, definition, source, summary, bytes, created_by, created_at, updated_by, updated_at)
+        values (${id}, 'w1', ${id}, ${definition}, 'defined', '{}', 10, 'u1', '2026-01-01', 'u1', '2026-01-01')`.execute(db);
+    }
+    expect((await migrateToLatest(db)).error).toBeUndefined();
+    const rows = await sql<{ id: string; kind: string }>`select id, kind from road order by id`.execute(db);
+    expect(rows.rows).toEqual([{ id: 'r1', kind: 'measured' }, { id: 'r2', kind: 'kerb' }]);
+    await db.destroy();
+  });
 });

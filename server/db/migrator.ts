@@ -16,6 +16,7 @@ import * as m0014 from '../../migrations/0014_one_released_sheet.ts';
 import * as m0015 from '../../migrations/0015_unit_preferences.ts';
 import * as m0017 from '../../migrations/0017_insertion_order.ts';
 import * as m0018 from '../../migrations/0018_api_tokens.ts';
+import * as m0023 from '../../migrations/0023_road_kind.ts';
 
 /**
  * Every migration, imported statically: Kysely's FileMigrationProvider loads `.ts` through
@@ -40,6 +41,7 @@ export const migrations: Record<string, Migration> = {
   '0015_unit_preferences': m0015,
   '0017_insertion_order': m0017,
   '0018_api_tokens': m0018,
+  '0023_road_kind': m0023,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {

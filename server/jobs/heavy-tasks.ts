@@ -13,15 +13,16 @@ import type { DynoCheckFields } from '../../shared/schemas/target-sheet.ts';
 import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
-import { readCheckFiles, type UploadedText } from '../target-sheets/read-check-files.ts';
+import { checkContentJson, readCheckFiles } from '../target-sheets/read-check-files.ts';
 
 export type MeasuredUploadResult =
-  | { ok: true; definitionJson: string; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
+  | { ok: true; definitionBytes: Uint8Array; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
   | { ok: false; message: string; fields?: FieldIssue[] };
 
 /** A measured-profile CSV → the road definition and its figures, or what is wrong (by line or field). */
-export function measuredUpload(input: { text: string; filename: string; fields: MeasuredUploadFields; maxRows: number }): MeasuredUploadResult {
-  const { text, filename, fields } = input;
+export function measuredUpload(input: { content: Uint8Array; filename: string; fields: MeasuredUploadFields; maxRows: number }): MeasuredUploadResult {
+  const { filename, fields } = input;
+  const text = new TextDecoder().decode(input.content);
   const parsed = parseMeasuredCsv(text, { distanceUnit: fields.distanceUnit, elevationUnit: fields.elevationUnit, maxRows: input.maxRows });
   if (!parsed.ok) return { ok: false, message: `${filename} was not saved: ${parsed.reason}`, fields: parsed.issues };
   const definition = Road.safeParse({
@@ -37,8 +38,9 @@ export function measuredUpload(input: { text: string; filename: string; fields: 
   }
   const figures = figuresOfRoad(definition.data);
   if (!figures.ok) return { ok: false, message: `${filename} was not saved: ${figures.reason}` };
-  // Text, not the object: a string crosses to the request thread in one copy, 500 000 points would not.
-  return { ok: true, definitionJson: JSON.stringify(definition.data), figures: figures.figures };
+  // UTF-8 bytes, not the object or a string: they cross to the request thread in one copy and are
+  // stored and sent from there without being decoded or encoded again.
+  return { ok: true, definitionBytes: new TextEncoder().encode(JSON.stringify(definition.data)), figures: figures.figures };
 }
 
 /** A road's figures (resampling, spectrum, class fit). */
@@ -56,9 +58,17 @@ export function dynoFit(input: { peaks: DynoPeakPoints; knots: ApplyDynoFitInput
   return fitDamperCurves(input.peaks, input.knots, { weighting: input.weighting });
 }
 
-/** The files of a target-sheet check read as measured dampers (every file, every line). */
-export function sheetCheckFiles(input: { files: UploadedText[]; fields: DynoCheckFields }) {
-  return readCheckFiles(input.files, input.fields);
+/**
+ * The files of a target-sheet check, sent as bytes, decoded and read as measured dampers (every
+ * file, every line); with them the files as they are kept, as UTF-8 JSON bytes, so the request
+ * thread neither decodes a dozen megabytes nor writes them into JSON.
+ */
+export function sheetCheckFiles(input: { files: { content: Uint8Array; filename: string; bytes: number }[]; fields: DynoCheckFields }) {
+  const decoder = new TextDecoder();
+  const files = input.files.map((f) => ({ text: decoder.decode(f.content), filename: f.filename, bytes: f.bytes }));
+  const read = readCheckFiles(files, input.fields);
+  if (!read.ok) return read;
+  return { ...read, value: { ...read.value, contentBytes: new TextEncoder().encode(checkContentJson(files, read.value.measured)) } };
 }
 
 /** The best compromise and the trade-off front over a study's saved points. */

@@ -1,11 +1,17 @@
-import { jsonTextField } from '../db/dialect.ts';
+import { sql } from 'kysely';
+import { bytesAsText, textAsBytes } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
-import type { NewRoadRow, RoadTable, RoadVersionTable } from './roads.tables.ts';
+import type { NewRoadRow, RoadTable } from './roads.tables.ts';
 
 /** SQL for the road library. */
 
-export async function insertRoad(db: Queryable, row: NewRoadRow): Promise<void> {
-  await db.insertInto('road').values(row).execute();
+/** A new road; its definition as text, or as UTF-8 bytes made in a worker (stored as the same text). */
+export async function insertRoad(db: Queryable, row: Omit<NewRoadRow, 'definition'> & { definition: string | Uint8Array }): Promise<void> {
+  const { definition, ...rest } = row;
+  await db
+    .insertInto('road')
+    .values({ ...rest, definition: typeof definition === 'string' ? definition : bytesAsText(db, definition) })
+    .execute();
 }
 
 /** Roads with the names of who made and last changed them; `withDefinition` adds the (possibly large) document. */
@@ -26,8 +32,7 @@ function roadQuery(db: Queryable, workspaceId: string) {
       'r.updated_at',
       'cu.name as created_by_name',
       'uu.name as updated_by_name',
-      // the kind is read from the document so lists need not load measured points
-      jsonTextField(db, 'r.definition', 'kind').as('kind'),
+      'r.kind',
     ])
     .where('r.workspace_id', '=', workspaceId);
 }
@@ -43,6 +48,15 @@ export function findRoad(db: Queryable, workspaceId: string, roadId: string) {
 }
 export type RoadDetailRow = NonNullable<Awaited<ReturnType<typeof findRoad>>>;
 
+/**
+ * One road with its definition as UTF-8 bytes, for sending as it is: a measured road's
+ * definition is megabytes, and reading it as bytes skips decoding it into a string and encoding
+ * it back on the request thread.
+ */
+export function findRoadWithDefinitionBytes(db: Queryable, workspaceId: string, roadId: string) {
+  return roadQuery(db, workspaceId).select(textAsBytes(db, 'r.definition').as('definition_bytes')).where('r.id', '=', roadId).executeTakeFirst();
+}
+
 /** One road as listed, without its (possibly large) definition. */
 export function findRoadListItem(db: Queryable, workspaceId: string, roadId: string) {
   return roadQuery(db, workspaceId).where('r.id', '=', roadId).executeTakeFirst();
@@ -52,7 +66,7 @@ export async function updateRoadRow(
   db: Queryable,
   workspaceId: string,
   roadId: string,
-  patch: Partial<Pick<RoadTable, 'name' | 'definition' | 'bytes' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
+  patch: Partial<Pick<RoadTable, 'name' | 'kind' | 'definition' | 'bytes' | 'source' | 'summary' | 'updated_by' | 'updated_at'>> & { version?: number },
 ): Promise<void> {
   await db.updateTable('road').set(patch).where('workspace_id', '=', workspaceId).where('id', '=', roadId).execute();
 }
@@ -73,9 +87,23 @@ export async function isRoadVersionReferenced(db: Queryable, workspaceId: string
   return rows.some((r) => (JSON.parse(r.road_refs!) as ({ roadId: string; version: number } | null)[]).some((ref) => ref?.roadId === roadId && ref.version === version));
 }
 
-/** Keeps a definition that is about to be replaced or removed (a study still refers to it). */
-export async function keepRoadVersion(db: Queryable, row: RoadVersionTable): Promise<void> {
-  await db.insertInto('road_version').values(row).onConflict((oc) => oc.doNothing()).execute();
+/**
+ * Keeps the road's current definition as a version before it is replaced or removed (a study
+ * still refers to it), copied inside the database so the document never passes through here.
+ */
+export async function keepCurrentRoadVersion(db: Queryable, workspaceId: string, roadId: string, at: string): Promise<void> {
+  await db
+    .insertInto('road_version')
+    .columns(['road_id', 'version', 'workspace_id', 'definition', 'bytes', 'created_at'])
+    .expression((eb) =>
+      eb
+        .selectFrom('road')
+        .select(['id', 'version', 'workspace_id', 'definition', 'bytes', sql.lit(at).as('created_at')])
+        .where('workspace_id', '=', workspaceId)
+        .where('id', '=', roadId),
+    )
+    .onConflict((oc) => oc.doNothing())
+    .execute();
 }
 
 /**

@@ -1,7 +1,7 @@
 import { CreateRoadInput, MeasuredUploadFields, type RoadDetail, type RoadsResponse, UpdateRoadInput } from '../../shared/schemas/road-record.ts';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import { unwrap } from '../core/errors.ts';
-import { singleTextUpload, uploadedText, withinUploadQuota } from '../uploads/index.ts';
+import { singleTextUpload, uploadedTextBytes, withinUploadQuota } from '../uploads/index.ts';
 import { createRoad, deleteRoad, getRoadJson, listRoadLibrary, MEASURED_MAX_BYTES, updateRoad, uploadMeasuredRoad } from './roads.service.ts';
 import type { RouteModule } from '../http/registry.ts';
 
@@ -36,8 +36,8 @@ export const roadRoutes: RouteModule = (deps) => [
     before: [singleTextUpload(MEASURED_MAX_BYTES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = MeasuredUploadFields.parse(req.body ?? {});
-      const file = uploadedText(req.file);
-      // RoadDetail as JSON text (see uploadMeasuredRoad).
+      const file = uploadedTextBytes(req.file);
+      // RoadDetail as JSON bytes (see uploadMeasuredRoad).
       res.status(201).type('application/json').send(unwrap(await uploadMeasuredRoad(deps.db, workspaceOf(req), userOf(req), file, fields, deps.clock())));
     },
   },
@@ -46,8 +46,11 @@ export const roadRoutes: RouteModule = (deps) => [
     path: `${base}/:roadId`,
     access: 'viewer',
     handler: async (req, res) => {
-      // RoadDetail as JSON text (see getRoadJson).
-      res.type('application/json').send(unwrap(await getRoadJson(deps.db, workspaceOf(req), pathParam(req, 'roadId'))));
+      // RoadDetail as JSON bytes with a version tag (see getRoadJson).
+      const { body, etag } = unwrap(await getRoadJson(deps.db, workspaceOf(req), pathParam(req, 'roadId')));
+      res.set('ETag', etag);
+      if (req.fresh) res.status(304).end();
+      else res.type('application/json').send(body);
     },
   },
   {

@@ -12,7 +12,19 @@ import {
 } from '../../shared/schemas/road-record.ts';
 import { Road } from '../../shared/schemas/road.ts';
 import type { Db, Queryable } from '../db/database.ts';
-import { deleteRoadRow, findRoad, findRoadListItem, insertRoad, isRoadVersionReferenced, keepRoadVersion, listRoads, type RoadDetailRow, type RoadListRow, updateRoadRow } from './roads.repository.ts';
+import {
+  deleteRoadRow,
+  findRoad,
+  findRoadListItem,
+  findRoadWithDefinitionBytes,
+  insertRoad,
+  isRoadVersionReferenced,
+  keepCurrentRoadVersion,
+  listRoads,
+  type RoadDetailRow,
+  type RoadListRow,
+  updateRoadRow,
+} from './roads.repository.ts';
 import { recordAudit } from '../audit/index.ts';
 import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
@@ -21,6 +33,12 @@ import { withRawJson } from '../core/json-splice.ts';
 
 
 const noRoad = () => fail('not_found', 'No such road in this workspace.');
+
+/** JSON bytes of `head` with `key` set to stored JSON bytes (see `withRawJson`, its text form). */
+function jsonAround(head: object, key: string, rawJson: Uint8Array): Buffer {
+  const [open, close] = withRawJson(head, key, '\u0000').split('\u0000');
+  return Buffer.concat([Buffer.from(open!), rawJson, Buffer.from(close!)]);
+}
 
 function toListItem(r: RoadListRow): RoadListItem {
   return {
@@ -67,9 +85,13 @@ export async function listRoadLibrary(db: Db, ws: WorkspaceRef): Promise<RoadsRe
  * A road with its definition, as JSON text: the stored definition (checked when it was saved, up
  * to megabytes for a measured profile) is sent as it is, never parsed again on a read.
  */
-export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<string>> {
-  const row = await findRoad(db, ws.workspaceId, roadId);
-  return row ? ok(withRawJson(toListItem(row), 'definition', row.definition)) : noRoad();
+export async function getRoadJson(db: Db, ws: WorkspaceRef, roadId: string): Promise<Outcome<{ body: Buffer; etag: string }>> {
+  const row = await findRoadWithDefinitionBytes(db, ws.workspaceId, roadId);
+  if (!row) return noRoad();
+  // The body is the bytes of the stored text around the small head; the tag names the version
+  // and the last change, so nobody hashes megabytes to make one.
+  const body = jsonAround(toListItem(row), 'definition', row.definition_bytes);
+  return ok({ body, etag: `W/"road-${row.id}-v${row.version}-${Date.parse(row.updated_at)}"` });
 }
 
 const kindWords: Record<Road['kind'], string> = {
@@ -109,7 +131,7 @@ async function insertRoadRowInTx(
   trx: Queryable,
   ws: WorkspaceRef,
   actor: Actor,
-  road: { name: string; kind: Road['kind']; definition: string },
+  road: { name: string; kind: Road['kind']; definition: string | Uint8Array },
   source: RoadSource,
   figures: RoadFigures,
   now: Date,
@@ -120,8 +142,9 @@ async function insertRoadRowInTx(
     id,
     workspace_id: ws.workspaceId,
     name: road.name,
+    kind: road.kind,
     definition: road.definition,
-    bytes: Buffer.byteLength(road.definition),
+    bytes: typeof road.definition === 'string' ? Buffer.byteLength(road.definition) : road.definition.byteLength,
     source,
     summary: JSON.stringify(figures),
     created_by: actor.id,
@@ -167,13 +190,12 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
     const at = now.toISOString();
     // A study that ran this version keeps running it: the old definition is kept before it is replaced.
     const version = input.definition ? row.version + 1 : row.version;
-    if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: at });
-    }
+    if (input.definition && (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version))) await keepCurrentRoadVersion(trx, ws.workspaceId, roadId, at);
     const definitionText = JSON.stringify({ ...definition, name });
     await updateRoadRow(trx, ws.workspaceId, roadId, {
       version,
       name,
+      kind: definition.kind,
       definition: definitionText,
       bytes: Buffer.byteLength(definitionText),
       summary,
@@ -202,11 +224,10 @@ export async function updateRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId:
 /** Removes a road from the library; saved runs keep their own copy, studies the version they refer to. */
 export async function deleteRoad(db: Db, ws: WorkspaceRef, actor: Actor, roadId: string, now: Date): Promise<Outcome<null>> {
   return db.transaction().execute(async (trx) => {
-    const row = await findRoad(trx, ws.workspaceId, roadId);
+    // the list row, not the document: a removal never reads megabytes of points
+    const row = await findRoadListItem(trx, ws.workspaceId, roadId);
     if (!row) return noRoad();
-    if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) {
-      await keepRoadVersion(trx, { road_id: roadId, version: row.version, workspace_id: ws.workspaceId, definition: row.definition, bytes: Buffer.byteLength(row.definition), created_at: now.toISOString() });
-    }
+    if (await isRoadVersionReferenced(trx, ws.workspaceId, roadId, row.version)) await keepCurrentRoadVersion(trx, ws.workspaceId, roadId, now.toISOString());
     await deleteRoadRow(trx, ws.workspaceId, roadId);
     await recordAudit(trx, {
       workspaceId: ws.workspaceId,
@@ -233,21 +254,21 @@ export async function uploadMeasuredRoad(
   db: Db,
   ws: WorkspaceRef,
   actor: Actor,
-  file: { text: string; filename: string },
+  file: { content: Uint8Array; filename: string },
   fields: MeasuredUploadFields,
   now: Date,
-): Promise<Outcome<string>> {
-  // Parsing, checking, the figures and the JSON text of up to 500 000 rows are made in a worker
-  // thread; this thread stores the text and answers with it, never parsing it again.
-  const done = await runHeavy('measuredUpload', { text: file.text, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
+): Promise<Outcome<Buffer>> {
+  // Decoding, parsing, checking, the figures and the JSON of up to 500 000 rows are made in a
+  // worker thread; this thread stores the bytes as text and answers with them, never decoding them.
+  const done = await runHeavy('measuredUpload', { content: file.content, filename: file.filename, fields, maxRows: MEASURED_MAX_ROWS });
   if (!done.ok) return done;
   const out = done.value;
   if (!out.ok) return fail('bad_request', out.message, out.fields);
-  const road = { name: fields.name, kind: 'measured' as const, definition: out.definitionJson };
+  const road = { name: fields.name, kind: 'measured' as const, definition: out.definitionBytes };
   return db.transaction().execute(async (trx) => {
     const id = await insertRoadRowInTx(trx, ws, actor, road, 'measured', out.figures, now);
     const row = await findRoadListItem(trx, ws.workspaceId, id);
     if (!row) throw new Error(`road ${id} vanished inside its own transaction`);
-    return ok(withRawJson(toListItem(row), 'definition', out.definitionJson));
+    return ok(jsonAround(toListItem(row), 'definition', out.definitionBytes));
   });
 }

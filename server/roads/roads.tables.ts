@@ -7,6 +7,8 @@ export interface RoadTable {
   /** JSON of `Road` (shared/schemas/road.ts). */
   definition: string;
   source: 'defined' | 'measured';
+  /** `Road['kind']` of the definition, kept beside it so lists never read the document (0023). */
+  kind: string;
   /** Rises by one each time the definition changes (0012); studies refer to id + version. */
   version: Generated<number>;
   /** JSON of `RoadFigures` (shared/schemas/road-record.ts). */

@@ -18,7 +18,6 @@ import { fail, ok, type Outcome } from '../core/outcome.ts';
 import { toSheet } from './target-sheets.service.ts';
 import type { Actor, WorkspaceRef } from '../core/actor.ts';
 import { runHeavy } from '../jobs/heavy-pool.ts';
-import type { UploadedText } from './read-check-files.ts';
 
 
 /** What `dyno_check.result` holds. */
@@ -70,17 +69,19 @@ export async function runSheetCheck(
   ws: WorkspaceRef,
   actor: Actor,
   sheetId: string,
-  files: UploadedText[],
+  files: { content: Uint8Array; filename: string; bytes: number }[],
   fields: DynoCheckFields,
   now: Date,
 ): Promise<Outcome<ConformityRecordDetail>> {
   if (!(await findSheet(db, ws.workspaceId, sheetId))) return noSheet();
-  // Reading a dozen 2 MB records takes seconds: a worker thread does it.
+  // Reading a dozen 2 MB records takes seconds: a worker thread does it, and hands back the
+  // files as they are kept, already as bytes.
   const done = await runHeavy('sheetCheckFiles', { files, fields });
   if (!done.ok) return done;
   const read = done.value;
   if (!read.ok) return read;
-  return db.transaction().execute((trx) => storeSheetCheckInTx(trx, ws, actor, sheetId, files, read.value, now));
+  const kept = { filenames: files.map((f) => f.filename), content: read.value.contentBytes };
+  return db.transaction().execute((trx) => storeSheetCheckInTx(trx, ws, actor, sheetId, kept, read.value, now));
 }
 
 /** Checks already-read dampers against the sheet and keeps the result, inside an open transaction. */
@@ -89,7 +90,7 @@ export async function storeSheetCheckInTx(
   ws: WorkspaceRef,
   actor: Actor,
   sheetId: string,
-  files: UploadedText[],
+  files: { filenames: string[]; content: string | Uint8Array },
   read: { measured: MeasuredDamper[]; options: Partial<DynoParseOptions> },
   now: Date,
 ): Promise<Outcome<ConformityRecordDetail>> {
@@ -99,13 +100,13 @@ export async function storeSheetCheckInTx(
   const sheet = toSheet(row);
   const report = checkConformity(sheet, measured.map((m) => ({ label: m.label, peaks: m.peaks })));
   const id = randomUUID();
-  const content = JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text })));
+  const { content } = files;
   await insertDynoCheck(trx, {
     id,
     sheet_id: sheetId,
-    filename: files.map((f) => f.filename).join(', '),
+    filename: files.filenames.join(', '),
     content,
-    bytes: Buffer.byteLength(content),
+    bytes: typeof content === 'string' ? Buffer.byteLength(content) : content.byteLength,
     result: JSON.stringify({ report, measured, sheetStatus: sheet.status, options: DynoParseOptions.parse(options) }),
     uploaded_by: actor.id,
     created_at: now.toISOString(),

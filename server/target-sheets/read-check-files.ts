@@ -55,3 +55,8 @@ export function readCheckFiles(files: UploadedText[], fields: DynoCheckFields): 
   }
   return ok({ measured, options });
 }
+
+/** The files of a check as kept with it: JSON of `{ label, filename, text }` in upload order. */
+export function checkContentJson(files: UploadedText[], measured: MeasuredDamper[]): string {
+  return JSON.stringify(files.map((f, i) => ({ label: measured[i].label, filename: f.filename, text: f.text })));
+}

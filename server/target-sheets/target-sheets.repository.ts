@@ -1,4 +1,4 @@
-import { insertionOrder } from '../db/dialect.ts';
+import { bytesAsText, insertionOrder } from '../db/dialect.ts';
 import type { Queryable } from '../db/database.ts';
 import type { NewDynoCheckRow, NewTargetSheetRow, TargetSheetEventTable, TargetSheetPatch } from './target-sheets.tables.ts';
 
@@ -83,8 +83,13 @@ export function findUserAddress(db: Queryable, userId: string) {
   return db.selectFrom('user').select(['id', 'name', 'email']).where('id', '=', userId).executeTakeFirst();
 }
 
-export async function insertDynoCheck(db: Queryable, row: NewDynoCheckRow): Promise<void> {
-  await db.insertInto('dyno_check').values(row).execute();
+/** A check; the files it keeps as text, or as UTF-8 bytes made in a worker (stored as the same text). */
+export async function insertDynoCheck(db: Queryable, row: Omit<NewDynoCheckRow, 'content'> & { content: string | Uint8Array }): Promise<void> {
+  const { content, ...rest } = row;
+  await db
+    .insertInto('dyno_check')
+    .values({ ...rest, content: typeof content === 'string' ? content : bytesAsText(db, content) })
+    .execute();
 }
 
 function checkQuery(db: Queryable, sheetId: string) {

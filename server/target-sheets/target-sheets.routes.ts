@@ -18,7 +18,7 @@ import type { Request } from 'express';
 import { pathParam, userOf, workspaceOf } from '../auth/request-context.ts';
 import type { AppDeps } from '../deps.ts';
 import { unwrap } from '../core/errors.ts';
-import { textUploads, uploadedTexts, withinUploadQuota } from '../uploads/index.ts';
+import { textUploads, uploadedTextsBytes, withinUploadQuota } from '../uploads/index.ts';
 import { listSheetChecks, runSheetCheck, sheetCheckCsv } from './checks.service.ts';
 import { createTargetSheet, deleteTargetSheet, getTargetSheet, listTargetSheets, moveTargetSheet, saveTargetSheet, supersedeTargetSheet, targetSheetCsv } from './target-sheets.service.ts';
 import type { RouteDef, RouteModule } from '../http/registry.ts';
@@ -136,7 +136,7 @@ export const targetSheetRoutes: RouteModule = (deps) => [
     before: [textUploads(DYNO_MAX_BYTES, DYNO_CHECK_MAX_FILES), withinUploadQuota(deps)],
     handler: async (req, res) => {
       const fields = DynoCheckFields.parse(req.body ?? {});
-      const files = uploadedTexts(req.files);
+      const files = uploadedTextsBytes(req.files);
       const body: ConformityRecordDetail = unwrap(await runSheetCheck(deps.db, workspaceOf(req), userOf(req), sheetId(req), files, fields, deps.clock()));
       res.status(201).json(body);
     },

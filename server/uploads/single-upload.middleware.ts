@@ -22,10 +22,19 @@ export function singleTextUpload(maxBytes: number): RequestHandler {
   };
 }
 
-/** The uploaded file as UTF-8 text, or a 400 when there is none or it is not text. */
-export function uploadedText(file: Express.Multer.File | undefined): { text: string; filename: string; bytes: number } {
+/**
+ * The uploaded file's bytes, or a 400 when there is none or it is not text. A big file is handed
+ * to a worker thread as bytes and decoded there, not on the request thread.
+ */
+export function uploadedTextBytes(file: Express.Multer.File | undefined): { content: Buffer; filename: string; bytes: number } {
   if (!file) throw new HttpError('bad_request', 'Choose a file to upload.', [{ path: 'file', message: 'Required' }]);
   if (file.buffer.includes(0)) throw new HttpError('bad_request', `${file.originalname} is not a text file; upload a CSV.`, [{ path: 'file', message: 'not a text file' }]);
   const filename = file.originalname.slice(0, 200) || 'upload.csv';
-  return { text: file.buffer.toString('utf8'), filename, bytes: file.size };
+  return { content: file.buffer, filename, bytes: file.size };
+}
+
+/** The uploaded file as UTF-8 text, or a 400 when there is none or it is not text. */
+export function uploadedText(file: Express.Multer.File | undefined): { text: string; filename: string; bytes: number } {
+  const { content, filename, bytes } = uploadedTextBytes(file);
+  return { text: content.toString('utf8'), filename, bytes };
 }

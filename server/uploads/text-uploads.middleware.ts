@@ -24,11 +24,11 @@ export function textUploads(maxBytes: number, maxFiles: number): RequestHandler 
   };
 }
 
-/** The uploaded files as UTF-8 text; a 400 naming the file when one is not text. */
-export function uploadedTexts(files: unknown): { text: string; filename: string; bytes: number }[] {
+/** The uploaded files' bytes (decoded in a worker thread); a 400 naming the file when one is not text. */
+export function uploadedTextsBytes(files: unknown): { content: Buffer; filename: string; bytes: number }[] {
   const list = Array.isArray(files) ? (files as Express.Multer.File[]) : [];
   return list.map((file) => {
     if (file.buffer.includes(0)) throw new HttpError('bad_request', `${file.originalname} is not a text file; upload CSV files. Nothing was saved.`, [{ path: 'file', message: 'not a text file' }]);
-    return { text: file.buffer.toString('utf8'), filename: file.originalname.slice(0, 200) || 'upload.csv', bytes: file.size };
+    return { content: file.buffer, filename: file.originalname.slice(0, 200) || 'upload.csv', bytes: file.size };
   });
 }

@@ -108,11 +108,16 @@ export const studyFigureKeys = [
   'damperPowerMean',
   'damperEnergy',
   'staticSag',
+  'endOfStrokeDepth',
+  'bodyDampingRatioOnRoad',
 ] as const;
 /**
  * Single-number figures of a run a study keeps and can judge by: the scalar `Metrics` of the run
  * plus `strokeUsed` = the larger of the compression and extension stroke used, and `staticSag`,
- * how far the body sits down at rest (spring and tyre, m): the ride height a point costs.
+ * how far the body sits down at rest (spring and tyre, m): the ride height a point costs;
+ * `endOfStrokeDepth`, how far travel went past either end of the stroke into the hard limit (m,
+ * 0 when it never reached it), and `bodyDampingRatioOnRoad`, the body damping ratio from the
+ * damping the damper gave on that road (ΣF·v / Σv²) rather than from its table's 0–0.3 m/s slope.
  */
 export const StudyFigureKey = z.enum(studyFigureKeys);
 export type StudyFigureKey = z.infer<typeof StudyFigureKey>;

@@ -3,6 +3,8 @@ import type { RoadExcitation } from './roads/excitation.ts';
 import { integrateOdex } from './integrate-odex.ts';
 import { integrateRk4 } from './integrate-rk4.ts';
 import { DEFAULT_INTEGRATOR, type IntegrationOptions, type IntegrationOutcome } from './integration-options.ts';
+import { integrateVehicleRk4, type AxleRoads, type VehicleIntegrationOptions, type VehicleIntegrationOutcome } from './vehicle/integrate-vehicle.ts';
+import type { VehicleModel } from './vehicle/vehicle-model.ts';
 
 /**
  * Time integration of the corner, sampled on a uniform output grid, by one of two methods:
@@ -17,4 +19,13 @@ import { DEFAULT_INTEGRATOR, type IntegrationOptions, type IntegrationOutcome } 
 
 export function integrateCorner(model: CornerModel, road: RoadExcitation, opts: IntegrationOptions): IntegrationOutcome {
   return (opts.integrator ?? DEFAULT_INTEGRATOR) === 'odex' ? integrateOdex(model, road, opts) : integrateRk4(model, road, opts);
+}
+
+/**
+ * Time integration of the pitch-plane vehicle (vehicle/vehicle-model.ts) by the corner's
+ * default method, fixed-step RK4 with located switches, on both axles at once
+ * (vehicle/integrate-vehicle.ts). The odex reference is corner-only for now.
+ */
+export function integrateVehicle(model: VehicleModel, roads: AxleRoads, opts: VehicleIntegrationOptions): VehicleIntegrationOutcome {
+  return integrateVehicleRk4(model, roads, opts);
 }

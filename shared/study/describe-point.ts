@@ -6,7 +6,7 @@ export const studyParameterInfo: Record<StudyParameter, { label: string; unit: s
   damperScale: { label: 'damper scale', unit: '×', format: (x) => `damper ×${x.toFixed(2)}` },
   compressionScale: { label: 'compression scale', unit: '×', format: (x) => `compression ×${x.toFixed(2)}` },
   reboundScale: { label: 'rebound scale', unit: '×', format: (x) => `rebound ×${x.toFixed(2)}` },
-  targetBodyDampingRatio: { label: 'body damping ratio', unit: '', format: (x) => `body damping ratio ${x.toFixed(3)}` },
+  targetBodyDampingRatio: { label: 'body damping ratio (table slope)', unit: '', format: (x) => `body damping ratio ${x.toFixed(3)} by table slope` },
   springRate: { label: 'spring rate', unit: 'N/m', format: (x) => `spring rate ${group(x)} N/m` },
   tyreRate: { label: 'tyre rate', unit: 'N/m', format: (x) => `tyre rate ${group(x)} N/m` },
   unsprungMass: { label: 'unsprung mass', unit: 'kg', format: (x) => `unsprung mass ${group(x)} kg` },

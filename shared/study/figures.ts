@@ -1,5 +1,7 @@
 import type { Metrics } from '../schemas/metrics.ts';
+import type { Setup } from '../schemas/setup.ts';
 import type { StudyFigureKey, StudyFigures } from '../schemas/study.ts';
+import { linearCorner } from '../sim/quarter-car.ts';
 
 /** Which chart family a figure belongs to; `comfort` and `grip` feed the trade-off chart. */
 export type FigureFamily = 'comfort' | 'grip' | 'travel' | 'damper';
@@ -41,13 +43,27 @@ export const studyFigureInfo: Record<StudyFigureKey, FigureInfo> = {
   damperPowerMean: { label: 'mean damper power', unit: 'W', goal: 'min', family: 'damper' },
   damperEnergy: { label: 'damper energy', unit: 'J', goal: 'min', family: 'damper' },
   staticSag: { label: 'static sag', unit: 'm', goal: 'min', family: 'travel' },
+  endOfStrokeDepth: { label: 'travel past the end of stroke', unit: 'm', goal: 'min', family: 'travel' },
+  // neither good nor bad in itself: higher-is-better only so "worst" picks the least damped run
+  bodyDampingRatioOnRoad: { label: 'body damping ratio on the road', unit: '', goal: 'max', family: 'damper' },
 };
 
 /**
- * The single-number figures of one run's metrics, plus `strokeUsed` (the larger way, when a
- * stroke is given) and, given the corner at rest, its static sag.
+ * The body damping ratio the damper actually gave on a road: the energy-equivalent coefficient
+ * of the run (ΣF·v / Σv² at the damper) taken to the wheel, over 2·√(wheel rate · sprung mass),
+ * the same classic form as the modal figures use for the table's slope.
  */
-export function figuresFromMetrics(m: Metrics, statics?: { bodySag: number }): StudyFigures {
+function bodyDampingRatioFrom(setup: Setup, coefficient: number): number {
+  const c = linearCorner(setup, { coefficient, compression: coefficient, rebound: coefficient, definition: 'energy-equivalent on the road' });
+  return c.wheelDamping / (2 * Math.sqrt(c.wheelRate * c.sprungMass));
+}
+
+/**
+ * The single-number figures of one run's metrics, plus `strokeUsed` (the larger way, when a
+ * stroke is given), the deepest travel past either end of the stroke, and, given the corner at
+ * rest, its static sag; given the setup and the run's on-road damping, the damping ratio it gave.
+ */
+export function figuresFromMetrics(m: Metrics, statics?: { bodySag: number }, setup?: Setup): StudyFigures {
   const f: StudyFigures = {
     bodyAccelRms: m.bodyAccelRms,
     bodyAccelPeak: m.bodyAccelPeak,
@@ -74,5 +90,9 @@ export function figuresFromMetrics(m: Metrics, statics?: { bodySag: number }): S
   if (m.strokeUsedCompression !== undefined || m.strokeUsedExtension !== undefined) {
     f.strokeUsed = Math.max(m.strokeUsedCompression ?? 0, m.strokeUsedExtension ?? 0);
   }
+  if (m.endOfStrokeDepthCompression !== undefined || m.endOfStrokeDepthExtension !== undefined) {
+    f.endOfStrokeDepth = Math.max(m.endOfStrokeDepthCompression ?? 0, m.endOfStrokeDepthExtension ?? 0);
+  }
+  if (setup && m.damperEquivalentOnRoad !== undefined) f.bodyDampingRatioOnRoad = bodyDampingRatioFrom(setup, m.damperEquivalentOnRoad);
   return f;
 }

@@ -88,3 +88,37 @@ describe('study runner (RK4 on the shared sampled road) against the reference in
     expect(out.run.figures?.staticSag).toBeCloseTo(expected, 9);
   });
 });
+
+describe('what a study point says about the end of stroke and the damping it really gave', () => {
+  it('flags travel past the end of stroke with the same depth the single run reports (the soft corner bottoms on class D)', () => {
+    const values = { damperScale: 0.5 };
+    const road = { kind: 'iso8608', class: 'D', seed: 3 } as RoadInput;
+    const applied = applyPoint(pipit, values);
+    if (!applied.ok) throw new Error(applied.message);
+    const ref = runCorner({ setup: applied.setup, road, speed: 20, duration: 20, integrator: 'odex' });
+    if (!ref.ok) throw new Error(ref.reason);
+    const refDepth = Math.max(ref.result.metrics.endOfStrokeDepthCompression ?? 0, ref.result.metrics.endOfStrokeDepthExtension ?? 0);
+    const runner = createStudyRunner({ base: pipit, roads: [road as never], duration: 20 });
+    const out = runner.run({ pointIndex: 0, values, roadIndex: 0, speed: 20 });
+    expect(refDepth).toBeGreaterThan(0);
+    // the depth is a few millimetres; the fixed 4 ms step locates the deepest point within 0.5 mm
+    expect(Math.abs(out.run.figures!.endOfStrokeDepth! - refDepth)).toBeLessThan(5e-4);
+    const smooth = createStudyRunner({ base: pipit, roads: [{ kind: 'iso8608', class: 'B', seed: 3 } as never], duration: 20 });
+    expect(smooth.run({ pointIndex: 0, values: {}, roadIndex: 0, speed: 20 }).run.figures!.endOfStrokeDepth).toBe(0);
+  });
+
+  it('a linear damper gives on the road exactly the damping ratio its table slope gives (ΣF·v/Σv² of F = c·v is c)', () => {
+    const linear = Setup.parse({ ...pipit, damper: { compression: [[1, 1400]], rebound: [[1, 1400]] } });
+    const runner = createStudyRunner({ base: linear, roads: [{ kind: 'iso8608', class: 'C', seed: 7 } as never], duration: 10 });
+    const out = runner.run({ pointIndex: 0, values: { targetBodyDampingRatio: 0.3 }, roadIndex: 0, speed: 20 });
+    expect(out.run.figures!.bodyDampingRatioOnRoad).toBeCloseTo(0.3, 6);
+  });
+
+  it('the demo damper, set to ζ 0.3 by its 0–0.3 m/s slope, gives a different ratio on a road (the bias the figure exposes)', () => {
+    const runner = createStudyRunner({ base: pipit, roads: [{ kind: 'iso8608', class: 'C', seed: 7 } as never], duration: 10 });
+    const out = runner.run({ pointIndex: 0, values: { targetBodyDampingRatio: 0.3 }, roadIndex: 0, speed: 20 });
+    const onRoad = out.run.figures!.bodyDampingRatioOnRoad!;
+    expect(onRoad).toBeGreaterThan(0);
+    expect(Math.abs(onRoad - 0.3)).toBeGreaterThan(0.01);
+  });
+});

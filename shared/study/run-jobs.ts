@@ -1,7 +1,9 @@
 import type { Road } from '../schemas/road.ts';
 import type { Setup } from '../schemas/setup.ts';
 import type { StudyPointValues, StudyRunOutcome } from '../schemas/study-result.ts';
-import { computeMetrics } from '../sim/metrics/compute-metrics.ts';
+import { computeMetrics, firstSample } from '../sim/metrics/compute-metrics.ts';
+import { roadDampingFigures } from '../sim/metrics/road-damping.ts';
+import { strokeAndTableFigures } from '../sim/metrics/stroke-limits.ts';
 import { eventEndTime } from '../sim/roads/event-end.ts';
 import { buildRoad } from '../sim/roads/index.ts';
 import { applyPoint } from './apply-point.ts';
@@ -105,8 +107,13 @@ export function createStudyRunner(ctx: StudyRunContext): StudyRunner {
       trace = integrated.trace;
       const settleTime = ctx.settleTime ?? defaultStudySettle(ctx.roads[job.roadIndex], ctx.duration);
       const eventEnd = eventEndTime(ctx.roads[job.roadIndex], job.speed, applied.setup.tyreFootprint);
-      const metrics = computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd });
-      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state) } };
+      const from = firstSample(integrated.trace, settleTime);
+      const metrics = {
+        ...computeMetrics(integrated.trace, { settleTime, staticTyreLoad: statics.state.tyreLoad, stroke: applied.setup.stroke, eventEnd }),
+        ...strokeAndTableFigures(integrated.trace, from, applied.setup),
+        ...roadDampingFigures(integrated.trace, from),
+      };
+      return { pointIndex: job.pointIndex, run: { ...base, figures: figuresFromMetrics(metrics, statics.state, applied.setup) } };
     },
   };
 }

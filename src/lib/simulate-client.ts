@@ -1,6 +1,7 @@
 import type { RunRequestInput } from '../../shared/schemas/run.ts';
 import type { SimulateExtras, SimulateOutcome } from '../../shared/runs/simulate-job.ts';
-import type { SimulateApi } from '../../workers/simulate.worker.ts';
+import type { VehicleRunRequestInput } from '../../shared/schemas/vehicle-run.ts';
+import type { SimulateApi, VehicleSimulateOutcome } from '../../workers/simulate.worker.ts';
 import { createWorkerPool, type RunOptions, type WorkerPool } from './worker-pool.ts';
 
 /**
@@ -48,6 +49,16 @@ export async function simulate(request: RunRequestInput, options: SimulateOption
   const { signal, spectra, response } = options;
   // Comlink's Remote<> rewrites the return type structurally; the value is the worker's SimulateOutcome.
   const outcome = await simulatePool().run((api) => api.simulate(request, { spectra, response }) as unknown as Promise<SimulateOutcome>, { signal });
+  if (outcome.status === 'done') return outcome.value;
+  if (outcome.status === 'cancelled') return { ok: false, cancelled: true, reason: 'cancelled' };
+  return { ok: false, reason: `The simulation stopped: ${outcome.reason}` };
+}
+
+export type VehicleSimulateResult = VehicleSimulateOutcome | { ok: false; cancelled: true; reason: string };
+
+/** Runs one pitch-plane vehicle in a worker of the same pool; cancelling stops the computation. */
+export async function simulateVehicle(request: VehicleRunRequestInput, options: RunOptions = {}): Promise<VehicleSimulateResult> {
+  const outcome = await simulatePool().run((api) => api.simulateVehicle(request) as unknown as Promise<VehicleSimulateOutcome>, { signal: options.signal });
   if (outcome.status === 'done') return outcome.value;
   if (outcome.status === 'cancelled') return { ok: false, cancelled: true, reason: 'cancelled' };
   return { ok: false, reason: `The simulation stopped: ${outcome.reason}` };

@@ -65,7 +65,7 @@ describe('heavy steps of dyno, sheet and study routes run in the pool', () => {
 
   it('a target-sheet check reads its files in a worker: over budget nothing is kept', async () => {
     const sheet = await freshSheet(t, { workspaceId, workspaceName, engineer, lead });
-    const files = [{ text: peaksCsv, filename: 'unit-1.csv', bytes: peaksCsv.length }];
+    const files = [{ content: Buffer.from(peaksCsv), filename: 'unit-1.csv', bytes: peaksCsv.length }];
     await starve();
     const before = await count('dyno_check');
     const refused = await runSheetCheck(t.db, ws, actor, sheet.sheet.id, files, { label: [] }, now());

@@ -137,6 +137,25 @@ describe('road library', () => {
     expect(await auditActions(made.id)).toEqual(['road.created', 'road.updated']);
   });
 
+  it('sends a road as its stored bytes with a version tag: unchanged it answers 304, changed it sends the new kind and definition', async () => {
+    const measured = RoadDetail.parse((await upload(measuredCsv(400), { name: 'Tagged lane' }).expect(201)).body);
+    // the worker's bytes are stored as text, as every other road is
+    const stored = await t.db.selectFrom('road').select('definition').where('id', '=', measured.id).executeTakeFirstOrThrow();
+    expect(typeof stored.definition).toBe('string');
+    expect(JSON.parse(stored.definition)).toEqual(measured.definition);
+    const first = await eng.get(`${roads}/${measured.id}`).expect(200);
+    const tag = first.headers.etag as string;
+    expect(tag).toMatch(/^W\/"road-/);
+    expect(RoadDetail.parse(first.body)).toEqual(measured);
+    await eng.get(`${roads}/${measured.id}`).set('If-None-Match', tag).expect(304);
+    t.clock.advance(60_000);
+    await put(`${roads}/${measured.id}`, { name: 'Tagged lane, renamed' }).expect(200);
+    const after = await eng.get(`${roads}/${measured.id}`).set('If-None-Match', tag).expect(200);
+    expect(RoadDetail.parse(after.body).definition.name).toBe('Tagged lane, renamed');
+    const list = RoadsResponse.parse((await eng.get(roads).expect(200)).body);
+    expect(list.roads.find((r) => r.id === measured.id)?.kind).toBe('measured');
+  });
+
   it('deletes a road; it is gone from the library afterwards', async () => {
     const made = RoadDetail.parse((await eng.post(roads, { name: 'Temporary', definition: { kind: 'sine', amplitude: 0.01, wavelength: 4 } }).expect(201)).body);
     await eng.del(`${roads}/${made.id}`).expect(204);

@@ -1,9 +1,10 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { freshEmail, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
 import { signUpAndConfirm } from './helpers/sign-up.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {

@@ -1,8 +1,9 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 /** Desktop and laptop sizes the bench must read well at. */
 const SIZES = [
   { width: 1440, height: 900 },

@@ -1,8 +1,9 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, expect, it } from 'vitest';
 import { apiSession, demoUser, launchBrowser, newSession, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();

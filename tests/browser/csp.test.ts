@@ -1,12 +1,13 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiSession, demoUser, launchBrowser, newSession, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
 // The built app under its own strict Content Security Policy (server/app.ts): every page the
 // rail leads to, the first item of each list, the account, outbox, signed-out and shared pages
 // load without a single CSP violation (scripts, styles, fonts, images, workers, connections).
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();

@@ -1,8 +1,9 @@
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoUser, launchBrowser, newSession, RESULTS_DIR, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
 const PEAKS_CSV = fileURLToPath(new URL('../../examples/dyno/pipit-front-peaks.csv', import.meta.url));
 const RECORD_CSV = fileURLToPath(new URL('../../examples/dyno/pipit-front-sine-record.csv', import.meta.url));
@@ -10,7 +11,7 @@ const RECORD_CSV = fileURLToPath(new URL('../../examples/dyno/pipit-front-sine-r
 const BAD_CSV = 'velocity [m/s],compression force [N],rebound force [N]\n0.05,120,300\n0.1,lots,520\n0.2,330,800\n';
 const SETUP = 'Brume Skerry rear, road';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {

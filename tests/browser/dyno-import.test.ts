@@ -1,9 +1,10 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TargetSheetDetail, TargetSheetsResponse } from '../../shared/schemas/target-sheet.ts';
 import { demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 const SIZES = [
   { width: 1440, height: 900 },
   { width: 1280, height: 800 },

@@ -1,9 +1,10 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 /** Per-test limit on a machine shared with other work (a limit, not a timed assertion). */
 const LIMIT = 300_000;
 let browser: Browser;

@@ -1,13 +1,14 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Locator, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { StudiesResponse } from '../../shared/schemas/study-record.ts';
 import { RoadsResponse } from '../../shared/schemas/road-record.ts';
 import { RunList } from '../../shared/schemas/run-record.ts';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { TargetSheetsResponse } from '../../shared/schemas/target-sheet.ts';
 import { apiWrite, demoUser, RESULTS_DIR, launchBrowser, newSession, screenshot, type Session, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
 /**
  * Exports and the smaller faults around them: full-rate trace CSVs of a saved run with a name
@@ -16,7 +17,7 @@ import { apiWrite, demoUser, RESULTS_DIR, launchBrowser, newSession, screenshot,
  * study link, the labelled supplier notes, the sign-in sketch with compression up.
  */
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 const LIMIT = 180_000;
 const SIZES = [

@@ -1,5 +1,5 @@
 import { type ChildProcess, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -12,8 +12,12 @@ import { seedDemo } from '../../server/db/seed/seed-demo.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
-    /** Where the app under test answers, e.g. http://127.0.0.1:41234 (no trailing slash). */
-    baseUrl: string;
+    /**
+     * One app per vitest worker, each on its own copy of the seeded database, so two browser files
+     * can run at once without seeing each other's writes. Tests read theirs with `appUrl()`
+     * (helpers/app-url.ts), never this list directly.
+     */
+    baseUrls: string[];
     /** The built client the app serves, with Vite's manifest in `.vite/manifest.json` (bundle-size.test.ts reads it). */
     clientDir: string;
   }
@@ -56,26 +60,72 @@ function freePort(): Promise<number> {
   });
 }
 
+type ChildApp = { child: ChildProcess; baseUrl: string };
+
+/** Starts one app on a free loopback port over `dbPath`, serving the build in `distDir`. */
+async function startApp(dbPath: string, distDir: string): Promise<ChildApp> {
+  // another process may take the probed port before the server binds it: try a few
+  for (let attempt = 1; ; attempt++) {
+    const port = await freePort();
+    const env: NodeJS.ProcessEnv = {
+      ...process.env,
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      RIDEWRIGHT_DB: dbPath,
+      RIDEWRIGHT_DEMO: '1',
+      RIDEWRIGHT_TEST_DIST: distDir,
+      // the tests sign in many times from one address; limiting is covered by the API tests
+      RIDEWRIGHT_RATE_LIMIT: '0',
+      SMTP_SINK_PORT: '0',
+      NODE_ENV: 'test',
+    };
+    for (const key of ['SMTP_HOST', 'SMTP_PORT', 'SMTP_USER', 'SMTP_PASS', 'RIDEWRIGHT_SECRET', 'DATABASE_URL', 'REDIS_URL']) delete env[key];
+    const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'tests/browser/helpers/serve-built-client.ts')], {
+      cwd: root,
+      env,
+      stdio: ['pipe', 'pipe', 'pipe'],
+    });
+    try {
+      return { child, baseUrl: await waitForReady(child, 60_000) };
+    } catch (error) {
+      if (child.exitCode === null) child.kill('SIGKILL');
+      if (attempt >= 3 || !String(error).includes('EADDRINUSE')) throw error;
+    }
+  }
+}
+
+async function stopApp({ child }: ChildApp): Promise<void> {
+  if (child.exitCode !== null) return;
+  const exited = new Promise<void>((done) => child.once('exit', () => done()));
+  child.kill('SIGTERM');
+  const forced = setTimeout(() => child.kill('SIGKILL'), 5_000);
+  await exited;
+  clearTimeout(forced);
+}
+
 /**
- * Builds the client once, seeds a fresh SQLite file with the demo workspace, starts the app on
- * a free loopback port in demo mode (so the mail sink and /api/outbox run), and hands the URL
- * to the tests as `inject('baseUrl')`.
+ * Builds the client once, seeds one SQLite file with the demo workspace, copies it once per
+ * vitest worker, starts one app per copy on a free loopback port in demo mode (so each has its
+ * mail sink and /api/outbox), and hands the addresses to the tests as `inject('baseUrls')`.
+ * A file always talks to the app of the worker it runs in (`appUrl()`), so files that run at the
+ * same time never share a database, and the files of one worker share one as they always did.
  */
 export default async function setup(project: TestProject) {
   const dir = mkdtempSync(join(tmpdir(), 'ridewright-browser-'));
   const distDir = join(dir, 'dist');
-  const dbPath = join(dir, 'ridewright.sqlite');
-  let child: ChildProcess | undefined;
-  const killChild = () => {
-    if (child && child.exitCode === null) child.kill('SIGKILL');
+  const templatePath = join(dir, 'seeded.sqlite');
+  const apps: ChildApp[] = [];
+  const killAll = () => {
+    for (const { child } of apps) if (child.exitCode === null) child.kill('SIGKILL');
   };
-  process.once('exit', killChild);
+  process.once('exit', killAll);
 
   try {
     await build({ root, configFile: join(root, 'vite.config.ts'), logLevel: 'warn', build: { outDir: distDir, emptyOutDir: true, sourcemap: false, manifest: true } });
     project.provide('clientDir', distDir);
 
-    const db = openDatabase(dbPath);
+    const db = openDatabase(templatePath);
     try {
       const { error } = await migrateToLatest(db);
       if (error) throw error;
@@ -84,53 +134,26 @@ export default async function setup(project: TestProject) {
       await db.destroy();
     }
 
-    let baseUrl = '';
-    // another process may take the probed port before the server binds it: try a few
-    for (let attempt = 1; !baseUrl; attempt++) {
-      const port = await freePort();
-      const env: NodeJS.ProcessEnv = {
-        ...process.env,
-        HOST: '127.0.0.1',
-        PORT: String(port),
-        PUBLIC_URL: `http://127.0.0.1:${port}`,
-        RIDEWRIGHT_DB: dbPath,
-        RIDEWRIGHT_DEMO: '1',
-        RIDEWRIGHT_TEST_DIST: distDir,
-        // the tests sign in many times from one address; limiting is covered by the API tests
-        RIDEWRIGHT_RATE_LIMIT: '0',
-        SMTP_SINK_PORT: '0',
-        NODE_ENV: 'test',
-      };
-      for (const key of ['SMTP_HOST', 'SMTP_PORT', 'SMTP_USER', 'SMTP_PASS', 'RIDEWRIGHT_SECRET']) delete env[key];
-      child = spawn(process.execPath, ['--import', 'tsx', join(root, 'tests/browser/helpers/serve-built-client.ts')], {
-        cwd: root,
-        env,
-        stdio: ['pipe', 'pipe', 'pipe'],
-      });
-      try {
-        baseUrl = await waitForReady(child, 60_000);
-      } catch (error) {
-        killChild();
-        if (attempt >= 3 || !String(error).includes('EADDRINUSE')) throw error;
-      }
-    }
-    project.provide('baseUrl', baseUrl);
+    const workers = Math.max(1, Number(project.config.maxWorkers) || 1);
+    const started = await Promise.all(
+      Array.from({ length: workers }, (_, index) => {
+        const appDir = join(dir, `app-${index + 1}`);
+        mkdirSync(appDir);
+        const dbPath = join(appDir, 'ridewright.sqlite');
+        copyFileSync(templatePath, dbPath);
+        return startApp(dbPath, distDir).then((app) => (apps.push(app), app));
+      }),
+    );
+    project.provide('baseUrls', started.map((app) => app.baseUrl));
   } catch (error) {
-    killChild();
+    killAll();
     rmSync(dir, { recursive: true, force: true });
     throw error;
   }
 
   return async () => {
-    const running = child;
-    if (running && running.exitCode === null) {
-      const exited = new Promise<void>((done) => running.once('exit', () => done()));
-      running.kill('SIGTERM');
-      const forced = setTimeout(() => running.kill('SIGKILL'), 5_000);
-      await exited;
-      clearTimeout(forced);
-    }
-    process.removeListener('exit', killChild);
+    await Promise.all(apps.map(stopApp));
+    process.removeListener('exit', killAll);
     rmSync(dir, { recursive: true, force: true });
   };
 }

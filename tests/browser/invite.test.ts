@@ -1,8 +1,9 @@
 import type { APIRequestContext, Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiSession, demoUser, freshEmail, launchBrowser, linkIn, newSession, screenshot, signIn, signOut, waitForMail } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 let outbox: APIRequestContext;
 

@@ -1,9 +1,10 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiSession, freshEmail, launchBrowser, linkIn, newSession, signIn, signOut, waitForMail } from './helpers/browser.ts';
 import { signUpAndConfirm } from './helpers/sign-up.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {

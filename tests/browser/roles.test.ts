@@ -1,9 +1,10 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../shared/schemas/workspace.ts';
 import { apiWrite, demoUser, launchBrowser, newSession, screenshot, signIn, TABLET } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {

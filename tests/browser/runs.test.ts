@@ -4,12 +4,13 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { formatQuantity, type UnitName } from '../../src/lib/format.ts';
 import { demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 /** Per-test limit: several runs on a machine shared with other work (a limit, not a timed assertion). */
 const LIMIT = 300_000;
 const run = promisify(execFile);
@@ -147,7 +148,9 @@ describe('runs in the browser', () => {
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await page.getByRole('status', { name: 'Run in progress' }).waitFor();
     expect(await page.getByTestId('current-result').count()).toBe(0);
-    await page.getByRole('button', { name: 'Cancel run' }).click();
+    // force: the button is there (the status above says the run is going); Playwright's
+    // stability wait counts animation frames, which a loaded machine can stretch past the run
+    await page.getByRole('button', { name: 'Cancel run' }).click({ force: true });
     await page.getByRole('status', { name: 'Run in progress' }).waitFor({ state: 'detached' });
     expect(await page.getByTestId('current-result').count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Cancel run' }).count()).toBe(0);

@@ -1,10 +1,11 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoUser, launchBrowser, newSession, RESULTS_DIR, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {
@@ -188,6 +189,21 @@ describe('corner setups', () => {
     await page.getByRole('region', { name: 'Front and rear compared' }).waitFor();
     expect(await page.getByRole('button', { name: 'Edit vehicle' }).count()).toBe(0);
     await picture(page, 'vehicle-viewer-1280');
+
+    // The whole vehicle runs live (scratch, so a viewer may try it): a rear rebound change moves the seat figures.
+    const live = page.getByRole('region', { name: 'Whole vehicle, live' });
+    const runsShown = (n: number) => page.waitForFunction((k) => Number(document.querySelector('[data-vehicle-live]')?.getAttribute('data-run-seq')) >= k, n);
+    await runsShown(1);
+    expect(await live.getByRole('table', { name: 'Vehicle modes' }).getByRole('row').count()).toBe(5);
+    expect(await live.getByRole('list', { name: 'Flat-ride checks' }).getByRole('listitem').count()).toBe(4);
+    const rearSeat = () => live.locator('[data-seat="rear passenger"] dd').first().textContent();
+    const before = await rearSeat();
+    await live.getByLabel(/^Rear rebound/).fill('2');
+    await runsShown(2);
+    expect(await rearSeat()).not.toBe(before);
+    await picture(page, 'vehicle-live-1280');
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await picture(page, 'vehicle-live-1440');
     await context.close();
   });
 });

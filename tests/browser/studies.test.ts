@@ -1,10 +1,11 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RevisionsResponse, SetupDetail, SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { StudiesResponse, StudyDetail } from '../../shared/schemas/study-record.ts';
 import { apiWrite, demoUser, launchBrowser, newSession, screenshot, signIn } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 /** The study the engineer makes, opened by the viewer afterwards. */
 let made: { workspaceId: string; studyId: string; name: string } | undefined;

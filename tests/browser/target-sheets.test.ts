@@ -1,12 +1,13 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SetupsResponse } from '../../shared/schemas/setup-record.ts';
 import { TargetSheetDetail, TargetSheetsResponse, type TargetPoint } from '../../shared/schemas/target-sheet.ts';
 import { apiSession, demoUser, launchBrowser, linkIn, newSession, RESULTS_DIR, screenshot, signIn, waitForMail } from './helpers/browser.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 
 beforeAll(async () => {

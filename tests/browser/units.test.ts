@@ -1,12 +1,13 @@
 import type { APIRequestContext, Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { join } from 'node:path';
 import { apiSession, demoUser, launchBrowser, newSession, RESULTS_DIR, screenshot, signIn } from './helpers/browser.ts';
 import { SetupsResponse, SetupRevision } from '../../shared/schemas/setup-record.ts';
 import { StudiesResponse, StudyDetail } from '../../shared/schemas/study-record.ts';
 import { TargetSheetDetail } from '../../shared/schemas/target-sheet.ts';
+import { appUrl } from './helpers/app-url.ts';
 
-const baseUrl = inject('baseUrl');
+const baseUrl = appUrl();
 let browser: Browser;
 let api: APIRequestContext;
 const defaults = { damperVelocity: 'm/s', rate: 'N/mm', speed: 'km/h', length: 'mm' };

@@ -1,7 +1,7 @@
 import type { Role } from '../../../shared/schemas/workspace.ts';
 import type { TargetPoint } from '../../../shared/schemas/target-sheet.ts';
 import { storeSheetCheckInTx } from '../../target-sheets/checks.service.ts';
-import { readCheckFiles } from '../../target-sheets/read-check-files.ts';
+import { checkContentJson, readCheckFiles } from '../../target-sheets/read-check-files.ts';
 import { createTargetSheetInTx, moveTargetSheetInTx, saveTargetSheetInTx } from '../../target-sheets/target-sheets.service.ts';
 import type { Queryable } from '../database.ts';
 import { DEMO_USERS, DEMO_WORKSPACE_NAME } from '../../core/demo-people.ts';
@@ -78,7 +78,8 @@ export const seedTargetSheets: SeedStep = async (trx, ctx) => {
     return { text, filename: `${unit.toLowerCase()}.csv`, bytes: text.length };
   });
   const read = must(readCheckFiles(files, { label: ['PF-0151', 'PF-0152'] }), 'read dyno files');
-  must(await storeSheetCheckInTx(trx, ws('engineer'), engineer, id, files, read, daysBefore(ctx.now, 5)), 'dyno check');
+  const kept = { filenames: files.map((f) => f.filename), content: checkContentJson(files, read.measured) };
+  must(await storeSheetCheckInTx(trx, ws('engineer'), engineer, id, kept, read, daysBefore(ctx.now, 5)), 'dyno check');
 
   const rear = await setupNamed(trx, ctx.workspaceId, 'Brume Pipit rear, baseline');
   must(await createTargetSheetInTx(trx, ws('engineer'), engineer, { setupId: rear, revision: 1 }, daysBefore(ctx.now, 2)), 'draft');

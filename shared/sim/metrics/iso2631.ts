@@ -9,29 +9,35 @@ import type { ComfortGrading, ComfortLabel } from '../../schemas/metrics.ts';
 const TWO_PI = 2 * Math.PI;
 
 /** s-domain biquad (b2 s² + b1 s + b0) / (a2 s² + a1 s + a0) with the frequency to pre-warp at. */
-interface AnalogStage {
+export interface AnalogStage {
   b: [number, number, number];
   a: [number, number, number];
   warpHz: number;
 }
 
-function wkStages(): AnalogStage[] {
+/** Annex A's band limit (0.4 Hz high-pass, 100 Hz low-pass, Q = 1/√2) and an acceleration–velocity transition (f3, f4, Q4), common to several weightings. */
+export function bandAndTransitionStages(f3: number, f4: number, q4: number): AnalogStage[] {
   const w1 = TWO_PI * 0.4;
   const w2 = TWO_PI * 100;
-  const w3 = TWO_PI * 12.5;
-  const w4 = TWO_PI * 12.5;
-  const w5 = TWO_PI * 2.37;
-  const w6 = TWO_PI * 3.35;
+  const w3 = TWO_PI * f3;
+  const w4 = TWO_PI * f4;
   const q1 = Math.SQRT1_2;
   const q2 = Math.SQRT1_2;
-  const q4 = 0.63;
-  const q5 = 0.91;
-  const q6 = 0.91;
   const k3 = (w4 * w4) / w3;
   return [
     { b: [1, 0, 0], a: [1, w1 / q1, w1 * w1], warpHz: 0.4 },
     { b: [0, 0, w2 * w2], a: [1, w2 / q2, w2 * w2], warpHz: 100 },
-    { b: [0, k3, k3 * w3], a: [1, w4 / q4, w4 * w4], warpHz: 12.5 },
+    { b: [0, k3, k3 * w3], a: [1, w4 / q4, w4 * w4], warpHz: f4 },
+  ];
+}
+
+function wkStages(): AnalogStage[] {
+  const w5 = TWO_PI * 2.37;
+  const w6 = TWO_PI * 3.35;
+  const q5 = 0.91;
+  const q6 = 0.91;
+  return [
+    ...bandAndTransitionStages(12.5, 12.5, 0.63),
     // One pre-warp frequency for a stage with two corners: their geometric mean.
     { b: [1, w5 / q5, w5 * w5], a: [1, w6 / q6, w6 * w6], warpHz: Math.sqrt(2.37 * 3.35) },
   ];
@@ -41,10 +47,15 @@ const STAGES = wkStages();
 
 /** Complex Wk(j2πf) as [re, im]. */
 export function wkComplex(fHz: number): [number, number] {
+  return cascadeComplex(STAGES, fHz);
+}
+
+/** Complex response of a cascade of analog stages at f, [re, im]. */
+export function cascadeComplex(stages: readonly AnalogStage[], fHz: number): [number, number] {
   const w = TWO_PI * fHz;
   let re = 1;
   let im = 0;
-  for (const { b, a } of STAGES) {
+  for (const { b, a } of stages) {
     // Polynomial in s = jw: p2 s² + p1 s + p0 = (p0 − p2 w²) + j p1 w
     const nr = b[2] - b[0] * w * w;
     const ni = b[1] * w;
@@ -84,7 +95,12 @@ export interface DigitalBiquad {
  * energy above 20 Hz, so the effect on aw is far below these figures.
  */
 export function wkDigitalStages(dt: number): DigitalBiquad[] {
-  return STAGES.map(({ b, a, warpHz }) => {
+  return digitalStages(STAGES, dt);
+}
+
+/** Bilinear transform of each stage, pre-warped at its own `warpHz`. */
+export function digitalStages(stages: readonly AnalogStage[], dt: number): DigitalBiquad[] {
+  return stages.map(({ b, a, warpHz }) => {
     const wp = TWO_PI * warpHz;
     const k = wp / Math.tan((wp * dt) / 2);
     const k2 = k * k;

@@ -9,8 +9,9 @@ import { useToast } from '../../components/ui/toast.tsx';
 import { useDeleteVehicle } from '../../features/vehicles/api/delete-vehicle.ts';
 import { useVehicle } from '../../features/vehicles/api/get-vehicle.ts';
 import { VehicleForm } from '../../features/vehicles/components/vehicle-form.tsx';
+import { VehicleLivePanel } from '../../features/vehicles/components/vehicle-live-panel.tsx';
 import { VehicleSummaryPanel } from '../../features/vehicles/components/vehicle-summary.tsx';
-import { setupsQueryOptions } from '../../lib/queries/setups.ts';
+import { setupQueryOptions, setupsQueryOptions } from '../../lib/queries/setups.ts';
 import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 /** `/w/:workspaceId/vehicles/:vehicleId`: both corners' modes and the front/rear comparison. */
@@ -86,10 +87,19 @@ export function VehicleRoute() {
               />
             )}
             <VehicleSummaryPanel workspaceId={workspace.id} vehicle={v} />
-            <ResultsCaution />
+            {v.front && v.rear && <WholeVehicle workspaceId={workspace.id} frontId={v.front.id} rearId={v.rear.id} />}
+            <ResultsCaution model="simplified models: one corner, and the body on two axles in the pitch plane" />
           </>
         );
       }}
     </QueryGuard>
   );
+}
+
+/** The live pitch-plane run, once both corners' latest revisions have loaded. */
+function WholeVehicle({ workspaceId, frontId, rearId }: { workspaceId: string; frontId: string; rearId: string }) {
+  const front = useQuery(setupQueryOptions(workspaceId, frontId));
+  const rear = useQuery(setupQueryOptions(workspaceId, rearId));
+  if (!front.data || !rear.data) return null;
+  return <VehicleLivePanel front={front.data.revision.document} rear={rear.data.revision.document} />;
 }

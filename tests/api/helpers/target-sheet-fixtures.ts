@@ -39,7 +39,7 @@ export async function freshSheet(t: TestApp, cast: SheetCast, status: TargetShee
 
 /** A stored conformity check of the sheet against `csv`. */
 export async function freshCheck(t: TestApp, cast: SheetCast, sheetId: string, csv: string) {
-  const outcome = await runSheetCheck(t.db, { workspaceId: cast.workspaceId }, cast.engineer, sheetId, [{ text: csv, filename: 'fixture-damper.csv', bytes: csv.length }], { label: [] }, new Date());
+  const outcome = await runSheetCheck(t.db, { workspaceId: cast.workspaceId }, cast.engineer, sheetId, [{ content: Buffer.from(csv), filename: 'fixture-damper.csv', bytes: csv.length }], { label: [] }, new Date());
   if (!outcome.ok) throw new Error(`fixture check refused: ${outcome.message}`);
   return outcome.value;
 }

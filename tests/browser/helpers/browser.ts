@@ -7,8 +7,9 @@ import { OutboxResponse, type OutboxMessage } from '../../../shared/schemas/outb
 import type { Role } from '../../../shared/schemas/workspace.ts';
 
 /**
- * Shared tools for browser tests. Every test file gets the app's address with
- * `inject('baseUrl')` (see global-setup.ts) and uses these helpers; see tests/browser/README.md.
+ * Shared tools for browser tests. Every test file gets its app's address with `appUrl()`
+ * (helpers/app-url.ts, one app per vitest worker; see global-setup.ts) and uses these helpers;
+ * see tests/browser/README.md.
  */
 
 const root = resolve(fileURLToPath(new URL('../../..', import.meta.url)));

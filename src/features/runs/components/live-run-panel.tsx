@@ -13,7 +13,7 @@ import { Spinner } from '../../../components/ui/spinner.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 import { simulate } from '../../../lib/simulate-client.ts';
-import { LiveScheduler } from '../model/live-scheduler.ts';
+import { LiveScheduler } from '../../../lib/live-scheduler.ts';
 import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
 import { runWarnings } from '../model/warnings.ts';
 

@@ -12,7 +12,18 @@ export function PointCard({ view, index, actions }: { view: StudyView; index: nu
   if (!point) return null;
   const { figureLabel, figureText } = d;
   const def = view.definition;
-  const keys: StudyFigureKey[] = [...new Set<StudyFigureKey>([def.comfortFigure, def.gripFigure, ...def.objectives.map((o) => o.figure), 'strokeUsed', 'liftOffFraction'])];
+  const sweepsDampingRatio = def.axes.some((a) => a.parameter === 'targetBodyDampingRatio');
+  const keys: StudyFigureKey[] = [
+    ...new Set<StudyFigureKey>([
+      def.comfortFigure,
+      def.gripFigure,
+      ...def.objectives.map((o) => o.figure),
+      'strokeUsed',
+      'liftOffFraction',
+      ...(sweepsDampingRatio ? (['bodyDampingRatioOnRoad'] as const) : []),
+    ]),
+  ];
+  const pastEnd = point.figures.endOfStrokeDepth ?? 0;
   return (
     <section aria-label="Picked point" className="rounded border border-rule bg-paper-raised px-4 py-3">
       <p className="text-xs font-medium tracking-wide text-ink-faint uppercase">Picked point {index >= 0 ? `#${index}` : ''}</p>
@@ -25,6 +36,18 @@ export function PointCard({ view, index, actions }: { view: StudyView; index: nu
           ))}
           {point.violations.length > 4 && <li>and {point.violations.length - 4} more</li>}
         </ul>
+      )}
+      {pastEnd > 0 && (
+        <p className="mt-1 text-sm text-signal-ink">
+          Reaches the end of the stroke: travel went {figureText('endOfStrokeDepth', pastEnd)} past it into the hard limit on at least one road. Figures
+          past that point depend on the limit's assumed stiffness.
+        </p>
+      )}
+      {sweepsDampingRatio && (
+        <p className="mt-1 text-xs text-ink-faint">
+          The swept damping ratio is set from each table's slope over 0–0.3 m/s; "body damping ratio on the road" is what the damper gave on the road
+          (ΣF·v / Σv²).
+        </p>
       )}
       <dl className="mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
         {keys

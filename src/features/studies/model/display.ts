@@ -40,6 +40,8 @@ const figureUnitOf: Record<StudyFigureKey, StudyUnit> = {
   damperPowerMean: 'W',
   damperEnergy: 'J',
   staticSag: 'length',
+  endOfStrokeDepth: 'length',
+  bodyDampingRatioOnRoad: 'ratio',
 };
 
 const parameterUnitOf: Record<StudyParameter, StudyUnit> = {
