@@ -39,7 +39,7 @@ export function PointCard({ view, index, actions }: { view: StudyView; index: nu
       )}
       {pastEnd > 0 && (
         <p className="mt-1 text-sm text-signal-ink">
-          Reaches the end of the stroke: travel went {figureText('endOfStrokeDepth', pastEnd)} past it into the hard limit on at least one road. Figures
+          Reaches the end of the stroke: travel went {d.figureWithUnit('endOfStrokeDepth', pastEnd)} past it into the hard limit on at least one road. Figures
           past that point depend on the limit's assumed stiffness.
         </p>
       )}
