@@ -68,6 +68,11 @@ export default defineConfig(({ command, mode }) => ({
       },
       {
         extends: true,
+        // The team's workers with real processes: redis-server on loopback, two worker processes, SIGKILL and restarts.
+        test: { name: 'fleet', environment: 'node', include: ['tests/fleet/**/*.test.ts'], testTimeout: 240_000, hookTimeout: 120_000 },
+      },
+      {
+        extends: true,
         // Fuzzed inputs and SIGKILL crash safety (server/THREAT-MODEL.md); bounded to a few minutes.
         test: { name: 'hardening', environment: 'node', include: ['tests/fuzz/**/*.test.ts', 'tests/crash/**/*.test.ts'], testTimeout: 240_000, hookTimeout: 60_000 },
       },

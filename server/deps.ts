@@ -2,6 +2,7 @@ import pino, { type Logger } from 'pino';
 import type { Db } from './db/database.ts';
 import { DEFAULT_HEAVY_JOB_LIMITS, type HeavyJobLimits } from './limits/index.ts';
 import type { Mailer } from './mail/index.ts';
+import type { FleetQueue } from './fleet/fleet-queue.ts';
 import { WORKSPACE_UPLOAD_QUOTA_BYTES } from './uploads/index.ts';
 
 /** How the app serves the client outside /api. */
@@ -36,6 +37,8 @@ export interface AppDeps {
   /** Express `trust proxy` setting. */
   trustProxy: boolean | number | string;
   client: ClientServing;
+  /** The queue of the team's workers (REDIS_URL); null: studies run in the browser only. */
+  fleet: FleetQueue | null;
 }
 
 export type AppOptions = Pick<AppDeps, 'db' | 'secret' | 'publicUrl' | 'mailer'> & Partial<AppDeps>;
@@ -52,6 +55,7 @@ export function resolveDeps(options: AppOptions): AppDeps {
     uploadQuotaBytes: WORKSPACE_UPLOAD_QUOTA_BYTES,
     trustProxy: false,
     client: { kind: 'none' },
+    fleet: null,
     ...options,
   };
 }

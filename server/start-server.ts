@@ -11,6 +11,7 @@ import { DEFAULT_HEAVY_JOB_LIMITS } from './limits/index.ts';
 import type { ClientServing } from './deps.ts';
 import { createMailer } from './mail/index.ts';
 import { type MailSink, startMailSink } from './mail/index.ts';
+import { openFleetQueue } from './fleet/index.ts';
 
 export const DIST_DIR = fileURLToPath(new URL('../dist/', import.meta.url));
 
@@ -44,6 +45,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
   let sink: MailSink | undefined;
   if (!config.smtp) sink = await startMailSink({ db, port: config.sinkPort });
   const mailer = createMailer(config.smtp ? { kind: 'smtp', settings: config.smtp } : { kind: 'sink', port: sink!.port }, config.mailFrom, logger);
+  const fleet = config.redisUrl ? openFleetQueue(config.redisUrl, (err) => logger.warn({ err: err.message }, 'team workers queue')) : null;
   const { app } = createApp({
     db,
     secret: resolveSecret(config),
@@ -57,6 +59,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
     rateLimit: config.rateLimit,
     trustProxy: trustProxyValue(config.trustProxy),
     client,
+    fleet,
   });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, (err?: Error) => (err ? reject(err) : resolve(s)));
@@ -77,6 +80,7 @@ export async function startServer(config: ServerConfig, logger: Logger, client: 
       mailer.close();
       await sink?.close();
       await closeHeavyPool();
+      await fleet?.close();
       await db.destroy();
     },
   };

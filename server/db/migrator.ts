@@ -16,6 +16,8 @@ import * as m0014 from '../../migrations/0014_one_released_sheet.ts';
 import * as m0015 from '../../migrations/0015_unit_preferences.ts';
 import * as m0017 from '../../migrations/0017_insertion_order.ts';
 import * as m0018 from '../../migrations/0018_api_tokens.ts';
+import * as m0019 from '../../migrations/0019_fleet_runs.ts';
+import * as m0021 from '../../migrations/0021_drives.ts';
 import * as m0023 from '../../migrations/0023_road_kind.ts';
 
 /**
@@ -41,11 +43,16 @@ export const migrations: Record<string, Migration> = {
   '0015_unit_preferences': m0015,
   '0017_insertion_order': m0017,
   '0018_api_tokens': m0018,
+  '0019_fleet_runs': m0019,
+  '0021_drives': m0021,
   '0023_road_kind': m0023,
 };
 
 export function createMigrator(db: Kysely<any>): Migrator {
-  return new Migrator({ db, provider: { getMigrations: async () => migrations } });
+  // Branches take migration numbers ahead of time, so one can land after a higher number has
+  // already run on someone's database; each migration touches only its own tables and columns,
+  // so running a late lower number afterwards is safe (Kysely refuses it by default).
+  return new Migrator({ db, provider: { getMigrations: async () => migrations }, allowUnorderedMigrations: true });
 }
 
 /** Runs every pending migration; returns Kysely's result set (error as a value). */

@@ -4,6 +4,8 @@ import { auditRoutes } from '../audit/audit.routes.ts';
 import { authRoutes } from '../accounts/auth.routes.ts';
 import { configRoutes } from './config.routes.ts';
 import { dynoFileRoutes } from '../dyno/dyno-files.routes.ts';
+import { fleetRoutes } from '../fleet/fleet.routes.ts';
+import { driveRoutes } from '../drives/drives.routes.ts';
 import { invitationRoutes } from '../workspaces/invitations.routes.ts';
 import { memberRoutes } from '../workspaces/members.routes.ts';
 import { outboxRoutes } from '../mail/outbox.routes.ts';
@@ -23,7 +25,7 @@ import { workspaceRoutes } from '../workspaces/workspaces.routes.ts';
  * Every route module of the API. A feature adds its module here (one line); the app mounts
  * whatever is listed, and tests/api/route-matrix.test.ts fails until the new routes have matrix entries.
  */
-export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, targetSheetRoutes, apiTokenRoutes, unitPreferenceRoutes];
+export const routeModules: RouteModule[] = [configRoutes, authRoutes, invitationRoutes, workspaceRoutes, memberRoutes, auditRoutes, outboxRoutes, runRoutes, roadRoutes, dynoFileRoutes, driveRoutes, setupRoutes, vehicleRoutes, shareLinkRoutes, sharedRoutes, studyRoutes, fleetRoutes, targetSheetRoutes, apiTokenRoutes, unitPreferenceRoutes];
 
 export function allRoutes(deps: AppDeps): RouteDef[] {
   return routeModules.flatMap((m) => m(deps));

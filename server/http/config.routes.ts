@@ -9,7 +9,7 @@ export const configRoutes: RouteModule = (deps) => [
     access: 'public',
     issuesCsrf: true,
     handler: (_req, res) => {
-      const body: AppConfig = { demoMode: deps.demoMode, demoUsers: deps.demoMode ? DEMO_USERS : [], signUpOpen: deps.openSignUp };
+      const body: AppConfig = { demoMode: deps.demoMode, demoUsers: deps.demoMode ? DEMO_USERS : [], signUpOpen: deps.openSignUp, teamWorkers: deps.fleet !== null };
       res.json(body);
     },
   },

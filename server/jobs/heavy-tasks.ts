@@ -14,6 +14,7 @@ import type { StudyDefinition } from '../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../shared/schemas/study-result.ts';
 import { studyBestCompromise, studyTradeOff } from '../../shared/study/study-compromise.ts';
 import { checkContentJson, readCheckFiles } from '../target-sheets/read-check-files.ts';
+import { type DriveReadResult, readDrive } from '../../shared/drive/read-drive.ts';
 
 export type MeasuredUploadResult =
   | { ok: true; definitionBytes: Uint8Array; figures: Extract<RoadFiguresOutcome, { ok: true }>['figures'] }
@@ -74,4 +75,9 @@ export function sheetCheckFiles(input: { files: { content: Uint8Array; filename:
 /** The best compromise and the trade-off front over a study's saved points. */
 export function studyRunFigures(input: { def: StudyDefinition; points: StudyPointResult[]; base?: StudyPointResult | null }) {
   return { compromise: studyBestCompromise(input.def, input.points, undefined, input.base ?? null), tradeOff: studyTradeOff(input.def, input.points, input.base ?? null) };
+}
+
+/** A measured drive log read into SI signals on an even grid, or its problems by line and column. */
+export function driveRead(input: { text: string }): DriveReadResult {
+  return readDrive(input.text);
 }

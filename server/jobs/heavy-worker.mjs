@@ -4,4 +4,4 @@ import { register } from 'tsx/esm/api';
 
 register();
 const tasks = await import('./heavy-tasks.ts');
-export const { measuredUpload, roadFigures, dynoRead, dynoFit, sheetCheckFiles, studyRunFigures } = tasks;
+export const { measuredUpload, roadFigures, dynoRead, dynoFit, sheetCheckFiles, studyRunFigures, driveRead } = tasks;

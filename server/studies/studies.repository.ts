@@ -101,6 +101,29 @@ export async function upsertStudyPoints(db: Queryable, rows: NewStudyPointRow[])
   }
 }
 
+/**
+ * Inserts points not saved yet and leaves saved ones as they are (a retried chunk of the workers
+ * gives the same values); returns the indices actually inserted.
+ */
+export async function insertStudyPointsOnce(db: Queryable, rows: NewStudyPointRow[]): Promise<number[]> {
+  const inserted: number[] = [];
+  for (let i = 0; i < rows.length; i += 100) {
+    const got = await db
+      .insertInto('study_point')
+      .values(rows.slice(i, i + 100))
+      .onConflict((oc) => oc.columns(['study_id', 'idx']).doNothing())
+      .returning('idx')
+      .execute();
+    inserted.push(...got.map((r) => r.idx));
+  }
+  return inserted;
+}
+
+/** Indices of the saved points of a study (the base setup, −1, included). */
+export async function listStudyPointIndices(db: Queryable, studyId: string): Promise<number[]> {
+  return (await db.selectFrom('study_point').select('idx').where('study_id', '=', studyId).execute()).map((r) => r.idx);
+}
+
 /** Every saved point of a study, in sweep order (the base setup, −1, first). */
 export function listStudyPoints(db: Queryable, studyId: string) {
   return db.selectFrom('study_point').selectAll().where('study_id', '=', studyId).orderBy('idx').execute();

@@ -24,7 +24,7 @@ import { runHeavy } from '../jobs/heavy-pool.ts';
 
 const noStudy = () => fail('not_found', 'No such study in this workspace.');
 
-function pointRow(studyId: string, p: StudyPointResult): NewStudyPointRow {
+export function pointRow(studyId: string, p: StudyPointResult): NewStudyPointRow {
   return {
     study_id: studyId,
     idx: p.index,

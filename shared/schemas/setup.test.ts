@@ -68,4 +68,11 @@ describe('setup and road documents', () => {
       expect(r.error!.issues.map((i) => i.path.join('.')), path).toContain(path);
     }
   });
+
+  it('a top mount without damping needs rising damper tables', () => {
+    const base = { name: 'm', sprungMass: 300, unsprungMass: 40, springRate: 25000, tyreRate: 200000, topMount: { rate: 1e6 } };
+    const flat = Setup.safeParse({ ...base, damper: { compression: [[0.1, 500], [1, 500]], rebound: [[1, 3000]] } });
+    expect(paths(flat)).toEqual([expect.stringMatching(/^topMount\.damping: a top mount without damping needs every damper table to rise/)]);
+    expect(Setup.safeParse({ ...base, topMount: { rate: 1e6, damping: 300 }, damper: { compression: [[0.1, 500], [1, 500]], rebound: [[1, 3000]] } }).success).toBe(true);
+  });
 });

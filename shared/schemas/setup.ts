@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ControlLaw } from './damper-control.ts';
 import { plainLine, plainLineMessage, plainText, plainTextMessage } from './fields.ts';
 import {
   cubicMeters,
@@ -10,6 +11,7 @@ import {
   newtonsPerMeter,
   pascals,
   asNewtonSecondsPerMeter,
+  seconds,
   squareMeters,
 } from '../units.ts';
 
@@ -97,13 +99,30 @@ export const GasCharge = z
   });
 export type GasCharge = z.infer<typeof GasCharge>;
 
-/** The damper: one table per direction plus an optional gas charge. */
+/**
+ * A controlled damper (switch: present or absent). The damper's own `compression` and
+ * `rebound` tables become its soft bound, `firm` its firm bound; the force at each instant is
+ * chosen between the two by `law`, and the valve follows its command with a first-order lag of
+ * `responseTime` (0: at once). `bounds: "none"` lifts both bounds: the asked force is added to
+ * the soft tables whatever its sign, an idealised actuator for reference checks, not a damper.
+ */
+export const DamperControl = z.strictObject({
+  firm: z.strictObject({ compression: DamperCurve, rebound: DamperCurve }),
+  /** First-order response time of the valve (or of the actuator force with no bounds), s. */
+  responseTime: seconds.nonnegative().max(1).default(0 as z.infer<typeof seconds>),
+  law: ControlLaw,
+  bounds: z.enum(['tables', 'none']).default('tables'),
+});
+export type DamperControl = z.infer<typeof DamperControl>;
+
+/** The damper: one table per direction plus an optional gas charge and an optional control. */
 export const Damper = z.strictObject({
   /** Force resisting compression (wheel moving towards the body), at the damper. */
   compression: DamperCurve,
   /** Force resisting extension (rebound), at the damper. */
   rebound: DamperCurve,
   gas: GasCharge.optional(),
+  control: DamperControl.optional(),
 });
 export type Damper = z.infer<typeof Damper>;
 
@@ -156,7 +175,44 @@ export const Stroke = z.strictObject({
 });
 export type Stroke = z.infer<typeof Stroke>;
 
-export const Setup = z.strictObject({
+/**
+ * The damper's top mount (switch: present or absent): a rubber element in series between the
+ * damper and the body, along the damper. Its deflection is a state of the model. The whole
+ * strut force (damper tables, gas change, friction) passes through it; the spring and the stops
+ * bear on the body directly.
+ */
+export const TopMount = z.strictObject({
+  /** Stiffness along the damper, N/m. */
+  rate: newtonsPerMeter.positive().max(1e9),
+  /** Damping in parallel with that stiffness, N·s/m, default none. */
+  damping: newtonSecondsPerMeter.nonnegative().max(1e6).default(asNewtonSecondsPerMeter(0)),
+});
+export type TopMount = z.infer<typeof TopMount>;
+
+/**
+ * Friction in the strut (switch: present or absent), at the damper: a Coulomb force of
+ * `breakaway` N smoothed as breakaway × tanh(v / smoothingSpeed), so it reaches 76 % of the
+ * breakaway at the smoothing speed and is a steep but finite damping below it.
+ */
+export const StrutFriction = z.strictObject({
+  breakaway: newtons.positive().max(1e4),
+  smoothingSpeed: metersPerSecond.min(1e-4).max(0.5),
+});
+export type StrutFriction = z.infer<typeof StrutFriction>;
+
+/** True when a table's force rises on every segment from the implied origin (and so past its end). */
+function risesEverywhere(curve: DamperCurve): boolean {
+  let v0 = 0;
+  let f0 = 0;
+  for (const [v, f] of curve) {
+    if (v > v0 && !(f > f0)) return false;
+    v0 = v;
+    f0 = f;
+  }
+  return true;
+}
+
+const SetupFields = z.strictObject({
   /** Display name, e.g. "Pipit front, baseline". */
   name: z.string().trim().min(1).max(120).regex(plainLine, plainLineMessage),
   /** The corner's share of the body mass, kg. */
@@ -188,8 +244,30 @@ export const Setup = z.strictObject({
   reboundStop: EndStop.optional(),
   /** Wheel travel available from static, used for the stroke-used figures. */
   stroke: Stroke.optional(),
+  /** Series stiffness between damper and body; absent: the damper bears on the body directly. */
+  topMount: TopMount.optional(),
+  /** Smoothed Coulomb friction of the strut; absent: none. */
+  friction: StrutFriction.optional(),
   /** Free text. */
   notes: z.string().max(4000).regex(plainText, plainTextMessage).optional(),
+});
+
+export const Setup = SetupFields.superRefine((s, ctx) => {
+  // A mount without damping in series with a table that goes flat would have no defined damper
+  // speed where the mount force exceeds the flat force: ask for mount damping then.
+  if (s.topMount && !(s.topMount.damping > 0)) {
+    const tables = [
+      ['compression', s.damper.compression],
+      ['rebound', s.damper.rebound],
+      ...(s.damper.control ? [['control.firm.compression', s.damper.control.firm.compression] as const, ['control.firm.rebound', s.damper.control.firm.rebound] as const] : []),
+    ] as const;
+    for (const [path, curve] of tables) {
+      if (!risesEverywhere(curve)) {
+        ctx.addIssue({ code: 'custom', path: ['topMount', 'damping'], message: `a top mount without damping needs every damper table to rise on each segment (damper.${path} has a flat one): give the mount some damping` });
+        return;
+      }
+    }
+  }
 });
 /** A parsed setup (branded SI numbers, defaults filled). */
 export type Setup = z.infer<typeof Setup>;

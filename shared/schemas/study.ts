@@ -16,6 +16,12 @@ export const studyParameters = [
   'tyreRate',
   'unsprungMass',
   'gasForce',
+  'mountRate',
+  'frictionBreakaway',
+  'skyGain',
+  'groundGain',
+  'controlBlend',
+  'controlOn',
   'speed',
 ] as const;
 /**
@@ -23,6 +29,11 @@ export const studyParameters = [
  * `compressionScale`, `reboundScale` multiply curve forces (×); `targetBodyDampingRatio` scales
  * the whole damper to that classic body damping ratio; `springRate` (N/m at the spring),
  * `tyreRate` (N/m), `unsprungMass` (kg), `gasForce` (N, static) replace the setup's value;
+ * `mountRate` (N/m) sets the top mount's rate (adding an undamped mount), `frictionBreakaway`
+ * (N) the strut friction (adding it at 5 mm/s smoothing; 0 removes it); `skyGain`,
+ * `groundGain` (N·s/m) and `controlBlend` (0–1) set the controlled damper's law, which the
+ * base setup must have; `controlOn` below 0.5 takes the control off (the damper runs passive on
+ * its soft tables), so a 0–1 axis of two steps puts passive and controlled points on one chart;
  * `speed` (m/s) replaces the study's speed list.
  */
 export const StudyParameter = z.enum(studyParameters);
@@ -38,6 +49,12 @@ export const studyParameterRange: Record<StudyParameter, { min: number; max: num
   tyreRate: { min: 1000, max: 1e8 },
   unsprungMass: { min: 1, max: 1000 },
   gasForce: { min: 0, max: 1e5 },
+  mountRate: { min: 1e3, max: 1e9 },
+  frictionBreakaway: { min: 0, max: 1e4 },
+  skyGain: { min: 0, max: 1e6 },
+  groundGain: { min: 0, max: 1e6 },
+  controlBlend: { min: 0, max: 1 },
+  controlOn: { min: 0, max: 1 },
   speed: { min: 0.5, max: 100 },
 };
 

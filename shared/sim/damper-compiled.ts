@@ -108,3 +108,24 @@ export function compileGasChange(gas: GasCharge | undefined): ((x: number) => nu
     return (2 * u3 - 3 * u2 + 1) * fv[i] + (u3 - 2 * u2 + u) * h * dv[i] + (-2 * u3 + 3 * u2) * fv[i + 1] + (u3 - u2) * h * dv[i + 1];
   };
 }
+
+/** Slope lookup on a compiled table (the segment `compiledLookup` would use). */
+function compiledSlope(t: CompiledTable): (x: number) => number {
+  const { v, s } = t;
+  const last = v.length - 1;
+  return (x) => {
+    let i = 0;
+    while (i < last && x > v[i]) i++;
+    return s[i];
+  };
+}
+
+/**
+ * Slope dF/dv of the compiled damper law at a signed velocity (the slope of the segment the
+ * force is read from), for the top-mount solve, which needs the force's derivative.
+ */
+export function compileDamperSlope(damper: Pick<Damper, 'compression' | 'rebound'>): (velocity: number) => number {
+  const c = compiledSlope(compileTable(damper.compression));
+  const r = compiledSlope(compileTable(damper.rebound));
+  return (velocity) => (velocity >= 0 ? c(velocity) : r(-velocity));
+}

@@ -104,12 +104,18 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
   const wheelVelocity = (p: number, zRoad: number) => (p + c * zRoad) / mu;
 
   let evals = 0;
-  const dy = [0, 0, 0, 0];
+  // A top mount or a lagging control adds states after the four (corner-parts.ts).
+  const nx = model.extraStates ?? 0;
+  const n = 4 + nx;
+  const evx = model.evaluateExtra;
+  const scratch = new Array<number>(n).fill(0);
+  const dy = new Array<number>(n).fill(0);
   const rhs = (t: number, y: number[]): number[] => {
     evals++;
     road.sample(t, rb);
     const vu = wheelVelocity(y[3], rb[0]);
-    model.evaluate(y[0], y[1], y[2], vu, rb[0], rb[1], forces);
+    if (nx > 0) evx!(y[0], y[1], y[2], vu, rb[0], rb[1], y, dy, forces);
+    else model.evaluate(y[0], y[1], y[2], vu, rb[0], rb[1], forces);
     dy[0] = y[1];
     dy[1] = forces.bodyAccel;
     dy[2] = vu;
@@ -118,10 +124,12 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
   };
 
   let next = 0;
+  const extraAt = new Array<number>(n).fill(0);
   const write = (t: number, zs: number, vs: number, zu: number, p: number) => {
     road.sample(t, rb);
     const vu = wheelVelocity(p, rb[0]);
-    model.evaluate(zs, vs, zu, vu, rb[0], rb[1], forces);
+    if (nx > 0) evx!(zs, vs, zu, vu, rb[0], rb[1], extraAt, scratch, forces);
+    else model.evaluate(zs, vs, zu, vu, rb[0], rb[1], forces);
     const i = next++;
     writeSample(trace, i, forces, rb[0]);
     if (states) {
@@ -139,7 +147,7 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
     return sw;
   };
 
-  const restart: RestartPoint = { t: 0, y: [0, 0, 0, 0], lastStep: 0 };
+  const restart: RestartPoint = { t: 0, y: new Array<number>(n).fill(0), lastStep: 0 };
   // Set before each solve; the output callback raises it when the solver's step collapses.
   let stalled: boolean;
 
@@ -148,10 +156,11 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
   const slack = dt * 1e-9;
   const solOut = (_nr: number, xOld: number, x: number, y: number[], dense?: (c: number, x: number) => number) => {
     if (!dense) {
+      for (let i = 4; i < n; i++) extraAt[i] = y[i];
       if (next === 0 && x <= slack) write(0, y[0], y[1], y[2], y[3]);
       tracker.start(switchesAt(x, y[0], y[1], y[2], y[3]));
       restart.t = x;
-      for (let i = 0; i < 4; i++) restart.y[i] = y[i];
+      for (let i = 0; i < n; i++) restart.y[i] = y[i];
       return;
     }
     if (x - xOld <= STALL_STEP * Math.max(1, x)) {
@@ -165,17 +174,18 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
     tracker.accept(switchesAt(x, y[0], y[1], y[2], y[3]));
     while (next < nOut && next * dt <= x + slack) {
       const t = next * dt;
+      for (let i = 4; i < n; i++) extraAt[i] = dense(i, t);
       write(t, dense(0, t), dense(1, t), dense(2, t), dense(3, t));
     }
     restart.lastStep = x - xOld;
     restart.t = x;
-    for (let i = 0; i < 4; i++) restart.y[i] = y[i];
+    for (let i = 0; i < n; i++) restart.y[i] = y[i];
   };
 
-  const solver = new Solver(4);
+  const solver = new Solver(n);
   solver.denseOutput = true;
   solver.relativeTolerance = tol;
-  solver.absoluteTolerance = [tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE, tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE * mu];
+  solver.absoluteTolerance = [tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE, tol * DISPLACEMENT_SCALE, tol * VELOCITY_SCALE * mu, ...(model.extraScales ?? []).map((x) => tol * x)];
   const hMax = MAX_STEP_HOP_PERIODS / wheelHopHz(model);
   solver.maxStepSize = hMax;
   solver.maxSteps = Math.ceil(MAX_STEPS_PER_SECOND * T) + 100;
@@ -186,7 +196,7 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
   road.sample(0, rb);
   model.switches(zs0, vs0, zu0, vu0, rb[0], rb[1], sw);
   c = ct > 0 && sw[0] > 0 ? ct : 0;
-  let y = [zs0, vs0, zu0, mu * vu0 - c * rb[0]];
+  let y = [zs0, vs0, zu0, mu * vu0 - c * rb[0], ...new Array<number>(nx).fill(0)];
   let steps = 0;
   let rejected = 0;
   let segments = 0;
@@ -243,6 +253,7 @@ export function integrateOdex(model: CornerModel, road: RoadExcitation, opts: In
     }
   }
   // The last grid time can sit a rounding error past the end of the run.
+  for (let i = 4; i < n; i++) extraAt[i] = y[i];
   while (next < nOut) write(next * dt, y[0], y[1], y[2], y[3]);
 
   return {

@@ -65,6 +65,6 @@ describe('default integrator (RK4, located switches) against odex at 1e-8', () =
     const runner = createStudyRunner({ base: Setup.parse(pipit), roads: [road as never], duration: 10 });
     const study = runner.run({ pointIndex: 0, values: {}, roadIndex: 0, speed: 20 });
     const single = run({ setup: pipit, road, speed: 20, duration: 10 });
-    expect(study.run.figures).toEqual(figuresFromMetrics(single.metrics, single.statics));
+    expect(study.run.figures).toEqual(figuresFromMetrics(single.metrics, single.statics, Setup.parse(pipit)));
   });
 });

@@ -67,21 +67,43 @@ export function integrateRk4(model: CornerModel, road: RoadExcitation, opts: Int
   const slack = dtOut * 1e-9;
 
   // State and derivative at the start (y0, d0) and end (y1, d1) of the current piece:
-  // [zs, vs, zu, vu] and [vs, body accel, vu, wheel accel].
-  const y0 = new Float64Array(4);
-  const d0 = new Float64Array(4);
-  const y1 = new Float64Array(4);
-  const d1 = new Float64Array(4);
-  const yi = new Float64Array(4);
+  // [zs, vs, zu, vu] and [vs, body accel, vu, wheel accel], then the model's extra states
+  // (a top mount's deflection, a lagging control's setting) and their rates.
+  const nx = model.extraStates ?? 0;
+  const n = 4 + nx;
+  const y0 = new Float64Array(n);
+  const d0 = new Float64Array(n);
+  const y1 = new Float64Array(n);
+  const d1 = new Float64Array(n);
+  const yi = new Float64Array(n);
   let evals = 0;
 
+  // With extra states every evaluation goes through `full`: state vector in, rates out.
+  const xs = new Float64Array(n);
+  const xd = new Float64Array(n);
+  const evx = model.evaluateExtra;
+  const full = (y: Float64Array, zr: number, vr: number, d: Float64Array, forces: typeof f) => {
+    evx!(y[0], y[1], y[2], y[3], zr, vr, y, d, forces);
+    d[0] = y[1];
+    d[1] = forces.bodyAccel;
+    d[2] = y[3];
+    d[3] = forces.wheelAccel;
+  };
+  const ka = new Float64Array(n);
+  const kb = new Float64Array(n);
+  const kc = new Float64Array(n);
+
   if (opts.initial) y0.set(opts.initial);
-  ev(y0[0], y0[1], y0[2], y0[3], rz[0], rv[0], f);
+  if (nx > 0) {
+    full(y0, rz[0], rv[0], d0, f);
+  } else {
+    ev(y0[0], y0[1], y0[2], y0[3], rz[0], rv[0], f);
+    d0[0] = y0[1];
+    d0[1] = f.bodyAccel;
+    d0[2] = y0[3];
+    d0[3] = f.wheelAccel;
+  }
   evals++;
-  d0[0] = y0[1];
-  d0[1] = f.bodyAccel;
-  d0[2] = y0[3];
-  d0[3] = f.wheelAccel;
   const put = (i: number, y: Float64Array, forces: typeof f, zRoad: number) => {
     writeSample(trace, i, forces, zRoad);
     if (states) {
@@ -100,6 +122,10 @@ export function integrateRk4(model: CornerModel, road: RoadExcitation, opts: Int
    * (y1, d1); leaves the forces at the end in `f`.
    */
   const step = (H: number, zm: number, vm: number, ze: number, ve: number) => {
+    if (nx > 0) {
+      stepFull(H, zm, vm, ze, ve);
+      return;
+    }
     const H2 = H / 2;
     const zs = y0[0];
     const vs = y0[1];
@@ -133,6 +159,21 @@ export function integrateRk4(model: CornerModel, road: RoadExcitation, opts: Int
     evals += 4;
   };
 
+  /** The same RK4 step over every state, extra ones included. */
+  const stepFull = (H: number, zm: number, vm: number, ze: number, ve: number) => {
+    const H2 = H / 2;
+    for (let c = 0; c < n; c++) xs[c] = y0[c] + H2 * d0[c];
+    full(xs, zm, vm, ka, f);
+    for (let c = 0; c < n; c++) xs[c] = y0[c] + H2 * ka[c];
+    full(xs, zm, vm, kb, f);
+    for (let c = 0; c < n; c++) xs[c] = y0[c] + H * kb[c];
+    full(xs, ze, ve, kc, f);
+    const H6 = H / 6;
+    for (let c = 0; c < n; c++) y1[c] = y0[c] + H6 * (d0[c] + 2 * ka[c] + 2 * kb[c] + kc[c]);
+    full(y1, ze, ve, d1, f);
+    evals += 4;
+  };
+
   /** The piece's cubic Hermite interpolant at share u of its length H, into yi. */
   const hermite = (u: number, H: number) => {
     const u2 = u * u;
@@ -141,7 +182,7 @@ export function integrateRk4(model: CornerModel, road: RoadExcitation, opts: Int
     const h10 = (u3 - 2 * u2 + u) * H;
     const h01 = 1 - h00;
     const h11 = (u3 - u2) * H;
-    for (let c = 0; c < 4; c++) yi[c] = h00 * y0[c] + h10 * d0[c] + h01 * y1[c] + h11 * d1[c];
+    for (let c = 0; c < n; c++) yi[c] = h00 * y0[c] + h10 * d0[c] + h01 * y1[c] + h11 * d1[c];
   };
 
   /** Switch k on the current piece (from ta, length H) at time t. */
@@ -170,7 +211,8 @@ export function integrateRk4(model: CornerModel, road: RoadExcitation, opts: Int
       } else {
         road.sample(t, rb);
       }
-      ev(yi[0], yi[1], yi[2], yi[3], rb[0], rb[1], fOut);
+      if (nx > 0) full(yi, rb[0], rb[1], xd, fOut);
+      else ev(yi[0], yi[1], yi[2], yi[3], rb[0], rb[1], fOut);
       put(next++, yi, fOut, rb[0]);
     }
     if (next < nOut && next * dtOut <= tb + slack) put(next++, y1, f, zEnd);

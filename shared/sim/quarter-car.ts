@@ -1,5 +1,6 @@
 import type { Setup } from '../schemas/setup.ts';
 import type { LinearCorner } from './linear/linear-corner.ts';
+import { cornerModelWithParts, hasStrutParts } from './corner-parts.ts';
 import { compileDamperForce, compileGasChange } from './damper-compiled.ts';
 import { type EquivalentDamping, equivalentDampingLeastSquares } from './damper-equivalent.ts';
 import { staticGasForce } from './damper-gas.ts';
@@ -121,10 +122,23 @@ export interface CornerModel {
    * end (m)]. An absent stop or stroke reads −1 everywhere, so it never switches.
    */
   switches(zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, out: Float64Array): void;
+  /**
+   * States beyond the four of the bare corner: a top mount's deflection, a lagging control's
+   * setting (corner-parts.ts). Absent or 0 for a corner without them; `evaluate` then is all.
+   */
+  extraStates?: number;
+  /** Typical size of each extra state (for the integrators' absolute tolerances). */
+  extraScales?: readonly number[];
+  /**
+   * `evaluate` with the extra states read from the full state vector `x` (they follow the four
+   * at index 4, 5, …) and their rates written at the same places of `dx`.
+   */
+  evaluateExtra?(zs: number, vs: number, zu: number, vu: number, zRoad: number, vRoad: number, x: ArrayLike<number>, dx: { [i: number]: number }, out: CornerForces): void;
 }
 
 /** Compiles a setup into its equations of motion (after `staticEquilibrium` succeeded). */
 export function cornerModel(setup: Setup, statics: StaticState): CornerModel {
+  if (hasStrutParts(setup)) return cornerModelWithParts(setup, statics, endOfStrokeRate(setup));
   const ms = setup.sprungMass;
   const mu = setup.unsprungMass;
   const mr = setup.motionRatio;
@@ -197,6 +211,10 @@ export function gasRateAtWheel(setup: Setup): number {
  * The corner reduced to linear elements at the wheel for the modal and frequency-response
  * analysis: ks = springRate·MR² (plus the gas rate at static), c = c_eq·MR² with c_eq from the
  * damper curves (least squares over 0–0.3 m/s unless another definition is passed in).
+ * Optional parts: a top mount enters as its rate and damping × MR² in series with the damper;
+ * a controlled damper as its soft tables plus the law's gains acting without bounds or delay
+ * (skyhook on the body, groundhook on the wheel, each × MR², weighted by the blend); friction is
+ * left out (a Coulomb force has no linear equivalent that holds at every amplitude).
  */
 export function linearCorner(setup: Setup, equivalent: EquivalentDamping = equivalentDampingLeastSquares(setup.damper)): LinearCorner {
   const mr2 = setup.motionRatio ** 2;
@@ -207,5 +225,23 @@ export function linearCorner(setup: Setup, equivalent: EquivalentDamping = equiv
     wheelDamping: equivalent.coefficient * mr2,
     tyreRate: setup.tyreRate,
     tyreDamping: setup.tyreDamping,
+    ...linearParts(setup),
   };
+}
+
+function linearParts(setup: Setup): Partial<LinearCorner> {
+  const mr2 = setup.motionRatio ** 2;
+  const out: Partial<LinearCorner> = {};
+  if (setup.topMount) {
+    out.mountRate = setup.topMount.rate * mr2;
+    out.mountDamping = setup.topMount.damping * mr2;
+  }
+  const law = setup.damper.control?.law;
+  if (law) {
+    const sky = law.kind === 'skyhook' ? law.gain : law.kind === 'blend' ? law.blend * law.skyGain : 0;
+    const ground = law.kind === 'groundhook' ? law.gain : law.kind === 'blend' ? (1 - law.blend) * law.groundGain : 0;
+    out.skyDamping = sky * mr2;
+    out.groundDamping = ground * mr2;
+  }
+  return out;
 }

@@ -50,4 +50,24 @@ describe('applyPoint', () => {
     const r = applyPoint(pipit, { unsprungMass: 2000 });
     expect(r).toMatchObject({ ok: false, message: expect.stringMatching(/^unsprungMass: /) });
   });
+
+  it('sets the strut parts: adds a mount or friction, and the gains of a controlled damper the base has', () => {
+    const s = ok(applyPoint(pipit, { mountRate: 1.2e6, frictionBreakaway: 120 }));
+    expect(s.topMount).toEqual({ rate: 1.2e6, damping: 0 });
+    expect(s.friction).toEqual({ breakaway: 120, smoothingSpeed: 0.005 });
+    expect(ok(applyPoint({ ...pipit, friction: s.friction }, { frictionBreakaway: 0 })).friction).toBeUndefined();
+    expect(applyPoint(pipit, { skyGain: 2000 })).toMatchObject({ ok: false, message: expect.stringMatching(/^damper\.control: /) });
+    const blend = Setup.parse({
+      ...pipit,
+      damper: { ...pipit.damper, control: { firm: { compression: pipit.damper.rebound, rebound: pipit.damper.rebound }, law: { kind: 'blend', skyGain: 1000, groundGain: 500, blend: 0.5 } } },
+    });
+    const b = ok(applyPoint(blend, { skyGain: 3000, controlBlend: 0.8 }));
+    expect(b.damper.control?.law).toEqual({ kind: 'blend', mode: 'continuous', skyGain: 3000, groundGain: 500, blend: 0.8 });
+    // A 0–1 axis of `controlOn` puts the same corner passive (soft tables) and controlled on one chart.
+    expect(ok(applyPoint(blend, { controlOn: 0, skyGain: 3000 })).damper.control).toBeUndefined();
+    expect(ok(applyPoint(blend, { controlOn: 1 })).damper.control).toEqual(blend.damper.control);
+    // The firm bound scales with the soft one, so "damper ×" keeps the valve's range in proportion.
+    const scaledBlend = ok(applyPoint(blend, { damperScale: 2, skyGain: 3000 }));
+    expect(scaledBlend.damper.control?.firm.rebound[0][1]).toBeCloseTo(2 * blend.damper.control!.firm.rebound[0][1], 9);
+  });
 });

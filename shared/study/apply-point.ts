@@ -29,10 +29,13 @@ export function classicBodyDampingRatio(setup: Setup, choice?: EquivalentDamping
  *    `gasForce` sets the static gas force (a charge given by pressure keeps its rod area and
  *    stiffening, its pressure set to force/area; 0 removes the charge).
  * 2. `damperScale` multiplies every force of both curves; `compressionScale` and `reboundScale`
- *    multiply one direction's forces (speeds unchanged).
+ *    multiply one direction's forces (speeds unchanged); a controlled damper's firm tables
+ *    scale with its soft ones (here and in step 3).
  * 3. `targetBodyDampingRatio` then scales both curves by one factor so the classic estimate
  *    (`classicBodyDampingRatio`) equals it; the curve shapes and the compression/rebound split
  *    are kept. The equivalent coefficient is linear in force, so one factor reaches it exactly.
+ * 4. `mountRate`, `frictionBreakaway`, `skyGain`, `groundGain`, `controlBlend` set the strut
+ *    parts (applyParts); the gains and the blend need the base's controlled damper.
  * `speed` belongs to the run, not the setup, and is ignored here. The result is parsed by the
  * setup schema, so a value it refuses comes back as a failure naming the field.
  */
@@ -53,6 +56,9 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
   const r = both * (values.reboundScale ?? 1);
   next.damper.compression = scaleCurve(base.damper.compression, c);
   next.damper.rebound = scaleCurve(base.damper.rebound, r);
+  if (base.damper.control) next.damper.control = { ...base.damper.control, firm: { compression: scaleCurve(base.damper.control.firm.compression, c), rebound: scaleCurve(base.damper.control.firm.rebound, r) } };
+  const parts = applyParts(next, base, values);
+  if (parts) return { ok: false, message: parts };
 
   let parsed = Setup.safeParse(next);
   if (!parsed.success) return failure(parsed.error);
@@ -62,6 +68,8 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
     const s = values.targetBodyDampingRatio / now;
     next.damper.compression = scaleCurve(parsed.data.damper.compression, s);
     next.damper.rebound = scaleCurve(parsed.data.damper.rebound, s);
+    const ctl = parsed.data.damper.control;
+    if (ctl) next.damper.control = { ...ctl, firm: { compression: scaleCurve(ctl.firm.compression, s), rebound: scaleCurve(ctl.firm.rebound, s) } };
     notes.push(`curves scaled ×${s.toFixed(3)} to reach body damping ratio ${values.targetBodyDampingRatio}`);
     parsed = Setup.safeParse(next);
     if (!parsed.success) return failure(parsed.error);
@@ -72,4 +80,36 @@ export function applyPoint(base: Setup, values: StudyPointValues, opts: { equiva
 function failure(error: { issues: { path: PropertyKey[]; message: string }[] }): ApplyPointResult {
   const i = error.issues[0];
   return { ok: false, message: `${i.path.map(String).join('.')}: ${i.message}` };
+}
+
+/** Friction smoothing speed used when a sweep adds friction to a setup without it, m/s. */
+const ADDED_FRICTION_SMOOTHING = 0.005;
+
+/** Applies the strut-part values; returns why it cannot, or undefined. */
+function applyParts(next: SetupInput, base: Setup, values: StudyPointValues): string | undefined {
+  if (values.mountRate !== undefined) next.topMount = { ...(base.topMount ?? {}), rate: values.mountRate };
+  if (values.frictionBreakaway !== undefined) {
+    next.friction = values.frictionBreakaway === 0 ? undefined : { smoothingSpeed: base.friction?.smoothingSpeed ?? ADDED_FRICTION_SMOOTHING, breakaway: values.frictionBreakaway };
+  }
+  const { skyGain, groundGain, controlBlend, controlOn } = values;
+  if (controlOn !== undefined && controlOn < 0.5) {
+    next.damper.control = undefined;
+    return undefined;
+  }
+  if (skyGain === undefined && groundGain === undefined && controlBlend === undefined && controlOn === undefined) return undefined;
+  const control = base.damper.control;
+  if (!control) return 'damper.control: the base setup has no controlled damper to set gains on';
+  const law = { ...control.law };
+  if (law.kind === 'blend') {
+    if (skyGain !== undefined) law.skyGain = skyGain as typeof law.skyGain;
+    if (groundGain !== undefined) law.groundGain = groundGain as typeof law.groundGain;
+    if (controlBlend !== undefined) law.blend = controlBlend;
+  } else {
+    if (controlBlend !== undefined) return 'damper.control.law: a skyhook share needs the blend law';
+    const own = law.kind === 'skyhook' ? skyGain : groundGain;
+    if ((law.kind === 'skyhook' ? groundGain : skyGain) !== undefined) return `damper.control.law: a ${law.kind} law has no ${law.kind === 'skyhook' ? 'groundhook' : 'skyhook'} gain`;
+    if (own !== undefined) law.gain = own as typeof law.gain;
+  }
+  next.damper.control = { ...(next.damper.control ?? control), law };
+  return undefined;
 }

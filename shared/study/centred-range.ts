@@ -23,6 +23,12 @@ const spread: Record<Exclude<StudyParameter, 'speed'>, number> = {
   tyreRate: 0.2,
   unsprungMass: 0.2,
   gasForce: 1,
+  mountRate: 0.5,
+  frictionBreakaway: 1,
+  skyGain: 0.5,
+  groundGain: 0.5,
+  controlBlend: 0.5,
+  controlOn: 1,
 };
 
 /** One significant figure, so the steps read cleanly and the centre stays exactly the base value. */
@@ -45,6 +51,16 @@ export function baseValue(parameter: Exclude<StudyParameter, 'speed'>, base: Set
       return base.unsprungMass;
     case 'gasForce':
       return staticGasForce(base.damper.gas);
+    case 'mountRate':
+      return base.topMount?.rate ?? 0;
+    case 'frictionBreakaway':
+      return base.friction?.breakaway ?? 0;
+    case 'skyGain':
+    case 'groundGain':
+    case 'controlBlend':
+      return controlValue(parameter, base);
+    case 'controlOn':
+      return base.damper.control ? 1 : 0;
   }
 }
 
@@ -58,6 +74,25 @@ export function centredRange(parameter: StudyParameter, base: Setup): CentredRan
   const limits = studyParameterRange[parameter];
   const centre = baseValue(parameter, base);
   if (parameter === 'gasForce' && centre === 0) return { from: 0, to: 400, steps: 5 };
+  if (centre === 0 && startWhenAbsent[parameter]) return startWhenAbsent[parameter];
+  if (parameter === 'controlBlend') return { from: 0, to: 1, steps: 5 };
+  if (parameter === 'controlOn') return { from: 0, to: 1, steps: 2 };
   const half = roundHalf(spread[parameter] * centre);
   return { from: Math.max(limits.min, centre - half), to: Math.min(limits.max, centre + half), steps: 5 };
+}
+
+/** Where a sweep starts when the base has none of the part (SI). */
+const startWhenAbsent: Partial<Record<StudyParameter, CentredRange>> = {
+  mountRate: { from: 5e5, to: 3e6, steps: 6 },
+  frictionBreakaway: { from: 0, to: 200, steps: 5 },
+  skyGain: { from: 0, to: 4000, steps: 5 },
+  groundGain: { from: 0, to: 4000, steps: 5 },
+};
+
+function controlValue(parameter: 'skyGain' | 'groundGain' | 'controlBlend', base: Setup): number {
+  const law = base.damper.control?.law;
+  if (!law) return 0;
+  if (parameter === 'controlBlend') return law.kind === 'blend' ? law.blend : law.kind === 'skyhook' ? 1 : 0;
+  if (law.kind === 'blend') return parameter === 'skyGain' ? law.skyGain : law.groundGain;
+  return (parameter === 'skyGain') === (law.kind === 'skyhook') ? law.gain : 0;
 }

@@ -11,6 +11,12 @@ export const studyParameterInfo: Record<StudyParameter, { label: string; unit: s
   tyreRate: { label: 'tyre rate', unit: 'N/m', format: (x) => `tyre rate ${group(x)} N/m` },
   unsprungMass: { label: 'unsprung mass', unit: 'kg', format: (x) => `unsprung mass ${group(x)} kg` },
   gasForce: { label: 'gas force', unit: 'N', format: (x) => `gas force ${group(x)} N` },
+  mountRate: { label: 'top mount rate', unit: 'N/m', format: (x) => `top mount ${group(x)} N/m` },
+  frictionBreakaway: { label: 'strut friction', unit: 'N', format: (x) => `friction ${group(x)} N` },
+  skyGain: { label: 'skyhook gain', unit: 'N·s/m', format: (x) => `skyhook ${group(x)} N·s/m` },
+  groundGain: { label: 'groundhook gain', unit: 'N·s/m', format: (x) => `groundhook ${group(x)} N·s/m` },
+  controlBlend: { label: 'skyhook share', unit: '', format: (x) => `skyhook share ${x.toFixed(2)}` },
+  controlOn: { label: 'control (0 passive, 1 on)', unit: '', format: (x) => (x >= 0.5 ? 'controlled' : 'passive') },
   speed: { label: 'speed', unit: 'm/s', format: (x) => `speed ${group(x)} m/s` },
 };
 

@@ -117,7 +117,7 @@ describe('config, outbox and the client', () => {
     expect(cfg.demoUsers.map((u) => u.role).sort()).toEqual(['admin', 'engineer', 'lead', 'viewer']);
     const plain = await createTestApp({ demoMode: false, outboxEnabled: false });
     try {
-      expect(AppConfig.parse((await request(plain.url).get('/api/config').expect(200)).body)).toEqual({ demoMode: false, demoUsers: [], signUpOpen: true });
+      expect(AppConfig.parse((await request(plain.url).get('/api/config').expect(200)).body)).toEqual({ demoMode: false, demoUsers: [], signUpOpen: true, teamWorkers: false });
       const ws = await createWorkspace(plain.db);
       const u = await createUser(plain.db);
       await addMember(plain.db, ws, u.id, 'admin');

@@ -4,12 +4,13 @@ import { allEntries } from './matrix/all-entries.ts';
 import { expectedFor, sendAs } from './helpers/route-matrix.ts';
 import { callers, createRoleWorld } from './helpers/role-world.ts';
 import { createTestApp } from './helpers/test-app.ts';
+import { memoryFleetQueue } from './helpers/memory-fleet-queue.ts';
 
 // Walks every route the app mounts × every kind of caller and checks the status the route's
 // declared access implies: 401 signed out, 404 for a member of another workspace, 403 for a
 // role too low, and the route's success status otherwise.
 
-const t = await createTestApp();
+const t = await createTestApp({ fleet: memoryFleetQueue() });
 const world = await createRoleWorld(t);
 afterAll(() => t.close());
 

@@ -32,12 +32,32 @@ export function complexGains(c: LinearCorner, fHz: number): ComplexGains {
   const { sprungMass: ms, unsprungMass: mu, wheelRate: ks, wheelDamping: cs, tyreRate: kt, tyreDamping: ct } = c;
   const w = 2 * Math.PI * fHz;
   // Dynamic stiffness matrix [[a, b], [b, d]] (complex, symmetric).
-  const ar = ks - ms * w * w;
-  const ai = cs * w;
-  const br = -ks;
-  const bi = -cs * w;
-  const dr = ks + kt - mu * w * w;
-  const di = (cs + ct) * w;
+  let ar = ks - ms * w * w;
+  let ai = cs * w;
+  let br = -ks;
+  let bi = -cs * w;
+  let dr = ks + kt - mu * w * w;
+  let di = (cs + ct) * w;
+  if (c.mountRate !== undefined || c.skyDamping !== undefined || c.groundDamping !== undefined) {
+    // The damper branch as one complex stiffness: jωc in series with the mount km + jωcm
+    // (a Maxwell element when cm = 0); skyhook adds jω·csky to the body alone, groundhook
+    // jω·cgnd to the wheel alone.
+    let kdr = 0;
+    let kdi = cs * w;
+    if (c.mountRate !== undefined) {
+      const mr = c.mountRate;
+      const mi = (c.mountDamping ?? 0) * w;
+      [kdr, kdi] = cdiv(-kdi * mi, kdi * mr, mr, mi + kdi);
+    }
+    const sky = (c.skyDamping ?? 0) * w;
+    const ground = (c.groundDamping ?? 0) * w;
+    ar = ks + kdr - ms * w * w;
+    ai = kdi + sky;
+    br = -ks - kdr;
+    bi = -kdi;
+    dr = ks + kdr + kt - mu * w * w;
+    di = kdi + ct * w + ground;
+  }
   const fr = kt;
   const fi = ct * w;
   // det = a·d − b²

@@ -14,5 +14,13 @@ export const LinearCorner = z.object({
   wheelDamping: z.number().nonnegative(),
   tyreRate: z.number().positive(),
   tyreDamping: z.number().nonnegative(),
+  /** Top mount in series with the damper, at the wheel (rate × MR²), N/m; absent: rigid. */
+  mountRate: z.number().positive().optional(),
+  /** Damping in parallel with the mount's rate, at the wheel, N·s/m. */
+  mountDamping: z.number().nonnegative().optional(),
+  /** Damping from the body to a fixed point (skyhook gain × MR²), N·s/m. */
+  skyDamping: z.number().nonnegative().optional(),
+  /** Damping from the wheel to the ground (groundhook gain × MR²), N·s/m. */
+  groundDamping: z.number().nonnegative().optional(),
 });
 export type LinearCorner = z.infer<typeof LinearCorner>;

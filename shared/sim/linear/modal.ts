@@ -65,6 +65,8 @@ function figuresOf(a: Eigenvalue, b: Eigenvalue): ModeFigures {
 function pairModes(lambdas: Eigenvalue[]): [ModeFigures, ModeFigures] {
   const complex = lambdas.filter((l) => l.im > 0);
   const real = lambdas.filter((l) => l.im === 0).sort((x, y) => Math.abs(x.re) - Math.abs(y.re));
+  // A top mount adds one real root, the mount relaxing through the damper: the fastest one.
+  if (real.length % 2 === 1) real.pop();
   const modes: ModeFigures[] = complex.map((l) => figuresOf(l, { re: l.re, im: -l.im }));
   for (let i = 0; i + 1 < real.length; i += 2) modes.push(figuresOf(real[i], real[i + 1]));
   if (modes.length !== 2) throw new Error(`modalAnalysis: expected two modes, got ${modes.length}`);

@@ -39,6 +39,7 @@ import { useWorkspace } from '../../lib/workspace-context.tsx';
 
 // below the fold, with the CSV parser: loads after the bench itself so the first view stays light
 const DynoPanel = lazy(async () => ({ default: (await import('../../features/dyno/components/dyno-panel.tsx')).DynoPanel }));
+const DriveFitPanel = lazy(async () => ({ default: (await import('../../features/drives/components/drive-fit-panel.tsx')).DriveFitPanel }));
 
 /** `/w/:workspaceId/corners/:setupId`: the setup bench. */
 export function CornerBenchRoute() {
@@ -69,7 +70,7 @@ export function CornerBenchRoute() {
 }
 
 /** The tabs of the page, kept in the address (`?part=dyno`) so a reload or a link opens the same one. */
-const parts = ['bench', 'dyno', 'revisions', 'links'] as const;
+const parts = ['bench', 'dyno', 'drive', 'revisions', 'links'] as const;
 type Part = (typeof parts)[number];
 
 function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraft?: StudyPointDraft; studyId?: string }) {
@@ -295,6 +296,23 @@ function Bench({ detail, studyDraft, studyId }: { detail: SetupDetail; studyDraf
                 gasForceHint={staticGasForce(detail.revision.document.damper.gas)}
                 onApplied={(n) => toast.show(`Saved the fitted dyno curve as revision ${n}.`)}
               />
+              </Suspense>
+            ),
+          },
+          {
+            key: 'drive',
+            label: 'Drive fit',
+            panel: (
+              <Suspense fallback={<Loading what="drives" />}>
+                <DriveFitPanel
+                  workspaceId={workspace.id}
+                  setupId={detail.id}
+                  setup={detail.revision.document}
+                  latestRevision={detail.latestRevision}
+                  readOnly={!canWrite}
+                  draftHasChanges={canWrite && draft.hasChanges}
+                  onApplied={(n) => toast.show(`Saved the corner fitted to the drive as revision ${n}.`)}
+                />
               </Suspense>
             ),
           },

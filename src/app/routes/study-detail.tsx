@@ -10,6 +10,10 @@ import { PageHeader } from '../../components/ui/page-header.tsx';
 import { ResultsCaution } from '../../components/ui/results-caution.tsx';
 import { Tag } from '../../components/ui/tag.tsx';
 import { RunPanel } from '../../features/studies/components/run-panel.tsx';
+import { FleetPanel } from '../../features/studies/components/fleet-panel.tsx';
+import { useCancelFleetRun, useFleetRun, useStartFleetRun } from '../../features/studies/api/fleet-run.ts';
+import { useConfig } from '../../features/auth/api/get-config.ts';
+import { FLEET_DEFAULT_FROM_RUNS } from '../../../shared/schemas/fleet.ts';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
 import { savedPointName, useStudyDisplay } from '../../features/studies/model/display.ts';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
@@ -34,6 +38,11 @@ export function StudyDetailRoute() {
   const isLead = workspace.can('lead');
   const { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart } = useStudyPage({ workspaceId: workspace.id, studyId, canSave });
   const [sharing, setSharing] = useState(false);
+  const teamWorkers = useConfig().data?.teamWorkers ?? false;
+  const fleet = useFleetRun(workspace.id, studyId);
+  const startFleet = useStartFleetRun(workspace.id, studyId);
+  const cancelFleet = useCancelFleetRun(workspace.id, studyId);
+  const [place, setPlace] = useState<'browser' | 'workers' | null>(null);
   useRunWhenAsked(params.get('run') === '1', canStart, run, () => setParams({}, { replace: true }));
 
   return (
@@ -41,6 +50,11 @@ export function StudyDetailRoute() {
       {(s) => {
         const status = statusWords[s.status];
         const hasSaved = s.points.length > 0;
+        const fleetRun = fleet.data?.run ?? null;
+        const onWorkers = fleetRun?.state === 'running' || fleetRun?.state === 'finishing';
+        // the team's workers are offered to those who save, when the server has them; big studies go there unless asked
+        const offerWorkers = teamWorkers && canSave;
+        const where = offerWorkers ? (place ?? (s.plannedRuns > FLEET_DEFAULT_FROM_RUNS ? 'workers' : 'browser')) : 'browser';
 
         const pointActions = (index: number) => (
           <>
@@ -102,7 +116,21 @@ export function StudyDetailRoute() {
               }
               actions={
                 <>
-                  {!running && (
+                  {!running && !onWorkers && offerWorkers && (
+                    <label className="flex items-center gap-2 text-sm text-ink-soft">
+                      Run in
+                      <select className="rounded border border-rule bg-paper px-2 py-1 text-sm text-ink" value={where} onChange={(e) => setPlace(e.target.value as 'browser' | 'workers')}>
+                        <option value="browser">this browser</option>
+                        <option value="workers">the team’s workers</option>
+                      </select>
+                    </label>
+                  )}
+                  {!running && !onWorkers && where === 'workers' && (
+                    <Button variant="primary" busy={startFleet.isPending} onClick={() => startFleet.mutate()}>
+                      {s.status === 'partial' ? 'Run the rest on the workers' : 'Run on the workers'}
+                    </Button>
+                  )}
+                  {!running && !onWorkers && where === 'browser' && (
                     <Button variant={canSave ? 'primary' : 'secondary'} onClick={run} title={canSave ? undefined : 'Viewers can watch a run here; the results stay in this browser and are not saved.'}>
                       {canSave ? (hasSaved ? 'Run again and save' : 'Run and save') : 'Preview a run (not saved)'}
                     </Button>
@@ -148,6 +176,9 @@ export function StudyDetailRoute() {
                 )
               )}
               {baseline.error && <Notice tone="danger">{baseline.error.message}</Notice>}
+              {startFleet.error && <Notice tone="danger">{startFleet.error.message}</Notice>}
+              {cancelFleet.error && <Notice tone="danger">{cancelFleet.error.message}</Notice>}
+              {fleetRun && state.phase === 'idle' && <FleetPanel run={fleetRun} canStop={canSave} stopping={cancelFleet.isPending} onStop={() => cancelFleet.mutate()} />}
               <RunPanel state={state} onCancel={cancel} />
               {s.status === 'partial' && state.phase === 'idle' && (
                 <Notice tone="signal">Partial results: the last run was stopped after {s.results?.savedPoints} of {s.plannedPoints} points. Figures and the best compromise cover only those.</Notice>
@@ -162,7 +193,11 @@ export function StudyDetailRoute() {
                   pointActions={state.phase === 'idle' || state.phase === 'finished' ? pointActions : undefined}
                 />
               ) : (
-                <Notice>This study has not been run yet. {canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}</Notice>
+                <Notice>
+                  {onWorkers
+                    ? 'The results appear here when the workers have run every point.'
+                    : `This study has not been run yet. ${canSave ? 'Run it to see the trade-off.' : 'An engineer runs and saves it; you can preview a run here.'}`}
+                </Notice>
               )}
             </div>
             <ResultsCaution />

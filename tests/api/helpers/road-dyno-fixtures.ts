@@ -1,6 +1,8 @@
 import { readFileSync } from 'node:fs';
 import type { Db } from '../../../server/db/database.ts';
 import { uploadDynoFile } from '../../../server/dyno/dyno-files.service.ts';
+import { uploadDrive } from '../../../server/drives/drives.service.ts';
+import type { DriveItem } from '../../../shared/schemas/drive.ts';
 import { createRoad } from '../../../server/roads/roads.service.ts';
 import type { DynoFileItem } from '../../../shared/schemas/dyno-file.ts';
 import type { RoadDetail } from '../../../shared/schemas/road-record.ts';
@@ -35,4 +37,14 @@ export function measuredCsv(rows = 800): string {
     lines.push(`${x},${(3 * Math.sin(x / 3) + 1.2 * Math.sin(x * 1.7 + 1) + 0.4 * Math.sin(x * 7.3)).toFixed(3)}`);
   }
   return `${lines.join('\n')}\n`;
+}
+
+/** The first two seconds of the example drive (examples/drive/pipit-front-lane-drive.csv). */
+export const driveCsv = readFileSync(new URL('../../../examples/drive/pipit-front-lane-drive.csv', import.meta.url), 'utf8').split('\n').slice(0, 403).join('\n');
+
+/** A drive kept against a setup, made through the service. */
+export async function freshDrive(db: Db, workspaceId: string, setupId: string, author: TestUser): Promise<DriveItem> {
+  const outcome = await uploadDrive(db, { workspaceId }, author, setupId, { text: driveCsv, filename: `drive-${++counter}.csv`, bytes: driveCsv.length }, {}, new Date());
+  if (!outcome.ok) throw new Error(`fixture drive refused: ${outcome.message}`);
+  return outcome.value;
 }

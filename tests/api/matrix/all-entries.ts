@@ -1,5 +1,7 @@
 import type { MatrixEntries } from '../helpers/route-matrix.ts';
 import { apiTokensEntries } from './api-tokens-entries.ts';
+import { fleetEntries } from './fleet-entries.ts';
+import { drivesEntries } from './drives-entries.ts';
 import { platformEntries } from './platform-entries.ts';
 import { roadsDynoEntries } from './roads-dyno-entries.ts';
 import { runsEntries } from './runs-entries.ts';
@@ -17,6 +19,8 @@ export const allEntries: MatrixEntries = {
   ...roadsDynoEntries,
   ...setupsEntries,
   ...studiesEntries,
+  ...fleetEntries,
   ...targetSheetsEntries,
   ...apiTokensEntries,
+  ...drivesEntries,
 };

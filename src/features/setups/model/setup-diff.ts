@@ -36,6 +36,18 @@ const scalarFields: Array<[string, string, DisplayUnit | QuantityKind | undefine
   ['damper.gas.rodArea', 'Rod diameter', rodDiameter],
   ['damper.gas.polytropic.volume', 'Gas volume', units.cm3],
   ['damper.gas.polytropic.exponent', 'Polytropic exponent', units.ratio],
+  ['damper.control.law.kind', 'Control law', undefined],
+  ['damper.control.law.mode', 'Control mode', undefined],
+  ['damper.control.law.gain', 'Control gain', units.Nspm],
+  ['damper.control.law.skyGain', 'Skyhook gain', units.Nspm],
+  ['damper.control.law.groundGain', 'Groundhook gain', units.Nspm],
+  ['damper.control.law.blend', 'Skyhook share', units.ratio],
+  ['damper.control.responseTime', 'Valve response time', units.ms],
+  ['damper.control.bounds', 'Control bounds', undefined],
+  ['topMount.rate', 'Top mount rate', 'rate'],
+  ['topMount.damping', 'Top mount damping', units.Nspm],
+  ['friction.breakaway', 'Strut friction breakaway', units.N],
+  ['friction.smoothingSpeed', 'Friction smoothing speed', 'damperVelocity'],
   ['bumpStop.clearance', 'Bump stop clearance', 'length'],
   ['bumpStop.law.kind', 'Bump stop law', undefined],
   ['reboundStop.clearance', 'Rebound stop clearance', 'length'],
@@ -64,6 +76,14 @@ export function describePath(path: string, u: ChosenUnits = defaultUnits): Descr
     // curves sit between the gas and the stops, compression first
     const order = orderOf('damper.gas.force') - 500 + (dir === 'rebound' ? 250 : 0) + i * 2 + Number(m[3]);
     return m[3] === '0' ? { label: `${directionWord[dir]} point ${i + 1}, speed`, unit: u.damperVelocity, order } : { label: `${directionWord[dir]} point ${i + 1}, force`, unit: units.N, order };
+  }
+  m = /^damper\.control\.firm\.(compression|rebound)\.(\d+)\.([01])$/.exec(path);
+  if (m) {
+    const dir = m[1] as keyof typeof directionWord;
+    const i = Number(m[2]);
+    const order = orderOf('damper.control.law.kind') - 500 + (dir === 'rebound' ? 250 : 0) + i * 2 + Number(m[3]);
+    const what = `Firm ${directionWord[dir].toLowerCase()} point ${i + 1}`;
+    return m[3] === '0' ? { label: `${what}, speed`, unit: u.damperVelocity, order } : { label: `${what}, force`, unit: units.N, order };
   }
   m = /^(bumpStop|reboundStop)\.law\.points\.(\d+)\.([01])$/.exec(path);
   if (m) {

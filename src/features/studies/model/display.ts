@@ -53,6 +53,12 @@ const parameterUnitOf: Record<StudyParameter, StudyUnit> = {
   tyreRate: 'rate',
   unsprungMass: 'kg',
   gasForce: 'N',
+  mountRate: 'rate',
+  frictionBreakaway: 'N',
+  skyGain: 'Nspm',
+  groundGain: 'Nspm',
+  controlBlend: 'ratio',
+  controlOn: 'ratio',
   speed: 'speed',
 };
 

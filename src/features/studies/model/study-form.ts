@@ -58,6 +58,12 @@ const parameterDefaults: Record<StudyParameter, { from: number; to: number; step
   tyreRate: { from: 160000, to: 280000, steps: 5 },
   unsprungMass: { from: 28, to: 48, steps: 5 },
   gasForce: { from: 0, to: 400, steps: 5 },
+  mountRate: { from: 500000, to: 3000000, steps: 6 },
+  frictionBreakaway: { from: 0, to: 200, steps: 5 },
+  skyGain: { from: 0, to: 4000, steps: 5 },
+  groundGain: { from: 0, to: 4000, steps: 5 },
+  controlBlend: { from: 0, to: 1, steps: 5 },
+  controlOn: { from: 0, to: 1, steps: 2 },
   speed: { from: 10, to: 35, steps: 6 },
 };
 

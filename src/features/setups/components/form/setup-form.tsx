@@ -7,6 +7,7 @@ import { useUnits } from '../../../../lib/units/use-units.tsx';
 import type { SetupForm as Form } from '../../model/use-setup-draft.ts';
 import { DerivedRow, FormBlock, QuantityRow } from './quantity-row.tsx';
 import { StopFields } from './stop-fields.tsx';
+import { ControlFields, MountFrictionFields } from './strut-part-fields.tsx';
 import { ToggleRow } from './toggle-row.tsx';
 
 function WheelRate({ form, unit }: { form: Form; unit: DisplayUnit }) {
@@ -94,6 +95,10 @@ export function SetupForm({ form }: { form: Form }) {
         <QuantityRow control={control} name="tyreDamping" label="Damping" unit={units.Nspm} />
         <QuantityRow control={control} name="tyreFootprint" label="Footprint length" unit={length} optional hint="blank: point contact" />
         <QuantityRow control={control} name="tyreRadius" label="Rolling radius (event roads)" unit={length} optional hint="blank: point contact over bumps, potholes and kerbs" />
+      </FormBlock>
+      <FormBlock title="Strut parts (at the damper)">
+        <MountFrictionFields form={form} />
+        <ControlFields form={form} />
       </FormBlock>
       <FormBlock title="End stops (at the wheel)">
         <StopFields form={form} which="bumpStop" />
