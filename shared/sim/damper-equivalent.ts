@@ -23,6 +23,15 @@ export interface EquivalentDamping {
   definition: string;
 }
 
+/** Upper piston speed of the least-squares fit when none is chosen, m/s. */
+export const DEFAULT_FIT_MAX_SPEED = 0.3;
+
+/**
+ * The sentence defining the least-squares coefficient; `upTo` is the fit's upper piston speed as
+ * the reader sees it ("0.3 m/s", "300 mm/s"), so a page can say it in the reader's unit.
+ */
+export const leastSquaresWords = (upTo: string) => `least-squares slope through the origin of each curve over 0–${upTo} piston speed, mean of compression and rebound`;
+
 /**
  * Least-squares slope through the origin of one table over speeds 0…vMax, treating the table
  * as a continuous curve: c = ∫F·v dv / ∫v² dv. Exact for the piecewise-linear law (each segment
@@ -51,14 +60,14 @@ export function leastSquaresSlope(table: ForceTable, vMax: number): number {
  * two directions matches the energy a symmetric oscillation dissipates per cycle.
  */
 export function equivalentDampingLeastSquares(damper: Damper, range: LeastSquaresRange = {}): EquivalentDamping {
-  const vMax = range.maxSpeed ?? 0.3;
+  const vMax = range.maxSpeed ?? DEFAULT_FIT_MAX_SPEED;
   const compression = leastSquaresSlope(damper.compression, vMax);
   const rebound = leastSquaresSlope(damper.rebound, vMax);
   return {
     coefficient: (compression + rebound) / 2,
     compression,
     rebound,
-    definition: `least-squares slope through the origin of each curve over 0–${vMax} m/s piston speed, mean of compression and rebound`,
+    definition: leastSquaresWords(`${vMax} m/s`),
   };
 }
 

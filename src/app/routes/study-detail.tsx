@@ -15,6 +15,7 @@ import { useCancelFleetRun, useFleetRun, useStartFleetRun } from '../../features
 import { useConfig } from '../../features/auth/api/get-config.ts';
 import { FLEET_DEFAULT_FROM_RUNS } from '../../../shared/schemas/fleet.ts';
 import { statusWords, sweepWords } from '../../features/studies/components/study-list.tsx';
+import { savedPointName, useStudyDisplay } from '../../features/studies/model/display.ts';
 import { StudyResults } from '../../features/studies/components/study-results.tsx';
 import { useRunWhenAsked, useStudyPage } from '../../features/studies/run/use-study-page.ts';
 import { formatDateTime, formatSig } from '../../lib/format.ts';
@@ -29,6 +30,7 @@ import { NotFoundRoute } from './not-found.tsx';
 export function StudyDetailRoute() {
   const workspace = useWorkspace();
   const speedUnit = useUnits().speed;
+  const display = useStudyDisplay();
   const { studyId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
@@ -93,7 +95,7 @@ export function StudyDetailRoute() {
                     ) : (
                       'a setup that no longer exists'
                     )}{' '}
-                    <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
+                    <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes, display)} · {roadNames.join(', ')}
                     {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>} · <span className="figures">{s.definition.duration}</span> s runs
                     {s.definition.seeds > 1 && (
                       <>
@@ -112,7 +114,7 @@ export function StudyDetailRoute() {
                     )}
                     {s.baseline && (
                       <Tag tone="accent">
-                        baseline: {s.baseline.label} (by {s.baseline.chosenBy.name})
+                        baseline: {savedPointName(display, s.definition.axes, s.baseline)} (by {s.baseline.chosenBy.name})
                       </Tag>
                     )}
                   </p>

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { convertShown, siFromShown, unitTable, type QuantityKind } from './unit-table.ts';
+import { DEFAULT_FIT_MAX_SPEED, leastSquaresWords } from '../../../shared/sim/damper-equivalent.ts';
+import { convertShown, listText, siFromShown, speedsInWords, unitTable, type QuantityKind } from './unit-table.ts';
 
 describe('display unit table', () => {
   it('gives the exact defining factors (NIST SP 811, appendix B.8): 1 in = 0.0254 m, 1 mph = 0.44704 m/s, 1 lbf/in = 175.126835 N/m', () => {
@@ -50,5 +51,20 @@ describe('siFromShown', () => {
     expect(siFromShown(inPerS, shown)).toBe(0.05);
     expect(siFromShown(unitTable.damperVelocity['mm/s'], 123.4567)).toBeCloseTo(0.1234567, 12);
     expect(siFromShown(unitTable.damperVelocity['mm/s'], 50)).toBe(0.05);
+  });
+});
+
+describe('the equivalent-damping range in words', () => {
+  it('says the fit range in the reader\'s damper-velocity unit: 0.3 m/s = 300 mm/s = 11.81 in/s (0.3 / 0.0254, NIST SP 811)', () => {
+    expect(leastSquaresWords(listText([DEFAULT_FIT_MAX_SPEED], unitTable.damperVelocity['m/s']))).toContain('over 0–0.3 m/s piston speed');
+    expect(leastSquaresWords(listText([DEFAULT_FIT_MAX_SPEED], unitTable.damperVelocity['mm/s']))).toContain('over 0–300 mm/s piston speed');
+    expect(leastSquaresWords(listText([DEFAULT_FIT_MAX_SPEED], unitTable.damperVelocity['in/s']))).toContain('over 0–11.81 in/s piston speed');
+  });
+
+  it('re-says the speeds of a stored SI sentence in the chosen unit and leaves other words alone', () => {
+    const stored = 'secant force/speed at 0.1 m/s piston speed, mean of compression and rebound';
+    expect(speedsInWords(stored, unitTable.damperVelocity['mm/s'])).toBe('secant force/speed at 100 mm/s piston speed, mean of compression and rebound');
+    expect(speedsInWords(leastSquaresWords('0.3 m/s'), unitTable.damperVelocity['in/s'])).toContain('over 0–11.81 in/s piston speed');
+    expect(speedsInWords('2.5 m/s² body acceleration', unitTable.damperVelocity['mm/s'])).toBe('2.5 m/s² body acceleration');
   });
 });

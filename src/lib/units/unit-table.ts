@@ -90,6 +90,14 @@ export function siFromShown(unit: DisplayUnit, shown: number): number {
   return si;
 }
 
+/**
+ * A sentence written in SI ("over 0–0.3 m/s piston speed", "secant at 0.1 m/s") with each
+ * "<number> m/s" said in `unit` instead: for stored words a page shows in the reader's unit.
+ */
+export function speedsInWords(text: string, unit: DisplayUnit): string {
+  return text.replace(/(\d+(?:\.\d+)?(?:e-?\d+)?) m\/s(?=[\s,.;:)]|$)/g, (_, n: string) => listText([Number(n)], unit));
+}
+
 /** A list of SI values in `unit`, to 4 significant figures, with the symbol once: "50, 80 km/h". */
 export function listText(values: readonly number[], unit: DisplayUnit): string {
   return `${values.map((v) => String(Number(unit.fromSI(v).toPrecision(4)))).join(', ')} ${unit.symbol}`;

@@ -1,4 +1,7 @@
+import { DEFAULT_FIT_MAX_SPEED, leastSquaresWords } from '../../../../shared/sim/damper-equivalent.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
+import { listText } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { DampingFigures } from '../model/figures.ts';
 
 function Row({ label, children, note }: { label: string; children: React.ReactNode; note?: string }) {
@@ -15,10 +18,11 @@ function Row({ label, children, note }: { label: string; children: React.ReactNo
 
 /** The figures that follow the curve as it is edited. */
 export function DampingFiguresPanel({ figures, motionRatio }: { figures: DampingFigures; motionRatio: number }) {
+  const vu = useUnits().damperVelocity;
   return (
     <section aria-label="Damping figures" className="@container min-w-0 rounded border border-rule bg-paper-raised px-3 py-2">
       <h3 className="text-sm font-semibold text-ink">Equivalent damping</h3>
-      <p className="mb-1 text-2xs text-ink-faint">Linear coefficient: {figures.definition}.</p>
+      <p className="mb-1 text-2xs text-ink-faint">Linear coefficient: {leastSquaresWords(listText([DEFAULT_FIT_MAX_SPEED], vu))}.</p>
       <dl className="grid gap-x-8 @3xl:grid-cols-2">
         <Row label="At the damper">
           <Figure value={figures.atDamper} unit="Nspm" label="equivalent coefficient at the damper" />

@@ -27,13 +27,12 @@ export interface DampingFigures {
   classicZeta: number;
   /** Body-mode ζ from the eigenvalues of the linear two-mass corner, when the tyre is known. */
   exactZeta: number | null;
-  definition: string;
 }
 
 /**
  * Live figures of a damper on a corner. The equivalent coefficient is the one the simulation
- * core uses for the linear corner (`equivalentDampingLeastSquares`), so these match the modal
- * figures of a run.
+ * core uses for the linear corner (`equivalentDampingLeastSquares` over its default range,
+ * DEFAULT_FIT_MAX_SPEED), so these match the modal figures of a run.
  */
 export function dampingFigures(damper: Damper, corner: CornerContext): DampingFigures {
   const eq = equivalentDampingLeastSquares(damper);
@@ -62,6 +61,5 @@ export function dampingFigures(damper: Damper, corner: CornerContext): DampingFi
     atWheel,
     classicZeta,
     exactZeta,
-    definition: eq.definition,
   };
 }

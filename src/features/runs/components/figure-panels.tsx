@@ -1,6 +1,8 @@
 import type { RunResult } from '../../../../shared/schemas/run.ts';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
+import { DEFAULT_FIT_MAX_SPEED } from '../../../../shared/sim/damper-equivalent.ts';
 import { formatQuantityText } from '../../../lib/format.ts';
+import { listText } from '../../../lib/units/unit-table.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 import { STROKE_WARNING_SHARE } from '../model/warnings.ts';
 import { rideJudgement } from '../../../../shared/sim/metrics/rms-method.ts';
@@ -96,8 +98,8 @@ export function FigurePanels({ result, setup, roadName }: { result: RunResult; s
             { name: 'power', label: 'Mean power dissipated', value: m.damperPowerMean, unit: 'W' },
             { name: 'energy', label: 'Energy dissipated', value: m.damperEnergy, unit: 'J' },
             { name: 'eqRoad', label: 'Equivalent damping on this road (ΣF·v / Σv²)', value: m.damperEquivalentOnRoad, unit: 'Nspm' },
-            { name: 'eqFit', label: 'Equivalent damping the modes use (least squares, 0–0.3 m/s)', value: result.modal.equivalentDamping.wheelDamping / setup.motionRatio ** 2, unit: 'Nspm' },
-            { name: 'travelMean', label: 'Mean travel (shift from static, + compression)', value: m.travelMean, unit: 'mm' },
+            { name: 'eqFit', label: `Equivalent damping the modes use (least squares, 0–${listText([DEFAULT_FIT_MAX_SPEED], vu)})`, value: result.modal.equivalentDamping.wheelDamping / setup.motionRatio ** 2, unit: 'Nspm' },
+            { name: 'travelMean', label: 'Mean travel (shift from static, + compression)', value: m.travelMean, unit: length },
           ]}
         />
         <p className="mt-1.5 text-2xs leading-snug text-ink-faint">

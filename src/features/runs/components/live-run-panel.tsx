@@ -116,7 +116,7 @@ export function LiveRunPanel({ setup, road, speed, duration = 20, seed, hideTitl
 
   const m = shown?.result.metrics;
   const judged = shown ? rideJudgement(shown.result.road.kind, shown.result.metrics) : null;
-  const warnings = m ? runWarnings(m) : [];
+  const warnings = m ? runWarnings(m, units.damperVelocity) : [];
   const strokeUsed = m ? Math.max(m.strokeUsedCompression ?? 0, m.strokeUsedExtension ?? 0) : 0;
   const stale = Boolean(failure) || pending;
 

@@ -1,5 +1,7 @@
 import type { ModalResult } from '../../../../shared/schemas/modal.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
+import { speedsInWords } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 
 /**
  * Modes of the linearised corner: the exact figures from the eigenvalues beside the classic
@@ -7,6 +9,7 @@ import { Figure } from '../../../components/ui/figure.tsx';
  */
 export function ModalTable({ modal }: { modal: ModalResult }) {
   const cell = 'px-2 py-1 text-right';
+  const vu = useUnits().damperVelocity;
   return (
     <div>
       <table className="w-full text-sm" aria-label="Modes of the linearised corner">
@@ -50,7 +53,7 @@ export function ModalTable({ modal }: { modal: ModalResult }) {
       </table>
       <p className="mt-2 text-xs leading-snug text-ink-soft">
         Linearised at static equilibrium. The damper curves enter as one coefficient at the wheel,{' '}
-        <Figure value={modal.equivalentDamping.wheelDamping} unit="Nspm" label="equivalent wheel damping" />: {modal.equivalentDamping.definition}. Classic estimates: f = √(k_ride/ms)/2π with
+        <Figure value={modal.equivalentDamping.wheelDamping} unit="Nspm" label="equivalent wheel damping" />: {speedsInWords(modal.equivalentDamping.definition, vu)}. Classic estimates: f = √(k_ride/ms)/2π with
         k_ride = ks·kt/(ks+kt), f_wheel = √((ks+kt)/mu)/2π, ζ = c/(2√(ks·ms)).
       </p>
     </div>

@@ -1,9 +1,10 @@
 import type { Metrics } from '../../../../shared/schemas/metrics.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { runWarnings } from '../model/warnings.ts';
 
 /** Lift-off, stop contact and near-full stroke, in the signal colour; nothing when all is clear. */
 export function RunWarnings({ metrics }: { metrics: Metrics }) {
-  const warnings = runWarnings(metrics);
+  const warnings = runWarnings(metrics, useUnits().damperVelocity);
   if (warnings.length === 0) return null;
   return (
     <ul aria-label="Warnings" className="mb-4 flex flex-wrap gap-x-5 gap-y-1 rounded border border-signal/35 bg-signal-wash px-3 py-2 text-sm text-signal-ink">

@@ -1,8 +1,7 @@
 import type { Metrics } from '../../../../shared/schemas/metrics.ts';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
-import { formatSig } from '../../../lib/format.ts';
-
-const mToMmLabel = (m: number) => `${formatSig(m * 1000)} mm`;
+import { formatQuantityText } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 
 /**
  * Travel against the stroke the package allows: extension to the left of the static position,
@@ -10,7 +9,9 @@ const mToMmLabel = (m: number) => `${formatSig(m * 1000)} mm`;
  * setup states its stroke.
  */
 export function StrokeGauge({ metrics, setup }: { metrics: Metrics; setup: Setup }) {
+  const { length } = useUnits();
   const stroke = setup.stroke;
+  const text = (m: number) => formatQuantityText(m, length);
   if (!stroke) return <p className="mt-1 text-xs text-ink-faint">No stroke given in the setup: stroke use is not known.</p>;
   const total = stroke.compression + stroke.extension;
   const pos = (travel: number) => (100 * (stroke.extension + travel)) / total;
@@ -28,12 +29,12 @@ export function StrokeGauge({ metrics, setup }: { metrics: Metrics; setup: Setup
         {setup.reboundStop && <div className="absolute -inset-y-1 w-0 border-l border-dashed border-signal" style={{ left: `${pos(-setup.reboundStop.clearance)}%` }} title="rebound stop touches" />}
       </div>
       <div className="mt-0.5 flex justify-between text-2xs text-ink-faint">
-        <span className="figures">−{mToMmLabel(stroke.extension)} ext.</span>
+        <span className="figures">−{text(stroke.extension)} ext.</span>
         <span>static</span>
-        <span className="figures">comp. {mToMmLabel(stroke.compression)}</span>
+        <span className="figures">comp. {text(stroke.compression)}</span>
       </div>
       <figcaption className="sr-only">
-        Extension used {formatSig(metrics.travelMaxExtension * 1000)} mm of {formatSig(stroke.extension * 1000)} mm; compression used {formatSig(metrics.travelMaxCompression * 1000)} mm of {formatSig(stroke.compression * 1000)} mm.
+        Extension used {text(metrics.travelMaxExtension)} of {text(stroke.extension)}; compression used {text(metrics.travelMaxCompression)} of {text(stroke.compression)}.
       </figcaption>
     </figure>
   );

@@ -1,5 +1,5 @@
 import type { Metrics } from '../../../../shared/schemas/metrics.ts';
-import { formatQuantityText } from '../../../lib/format.ts';
+import { type DisplayUnit, formatQuantityText, units } from '../../../lib/format.ts';
 
 /** Stroke use above this share of the available travel is flagged (common practice margin, not a standard). */
 export const STROKE_WARNING_SHARE = 0.9;
@@ -9,8 +9,8 @@ export interface RunWarning {
   text: string;
 }
 
-/** Things an engineer must not miss in a run, each in one plain sentence. */
-export function runWarnings(m: Metrics): RunWarning[] {
+/** Things an engineer must not miss in a run, each in one plain sentence; damper speeds in `vu`. */
+export function runWarnings(m: Metrics, vu: DisplayUnit = units.mps): RunWarning[] {
   const out: RunWarning[] = [];
   if (m.liftOffFraction > 0) {
     out.push({ key: 'lift-off', text: `The wheel left the road for ${formatQuantityText(m.liftOffFraction, 'percent')} of the analysed time.` });
@@ -38,13 +38,13 @@ export function runWarnings(m: Metrics): RunWarning[] {
   if (beyond(m.damperSpeedPeakCompression, m.damperTableEndCompression)) {
     out.push({
       key: 'beyond-table-compression',
-      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakCompression ?? 0, 'mps')} in compression; the table ends at ${formatQuantityText(m.damperTableEndCompression ?? 0, 'mps')}, so forces above it are extrapolated.`,
+      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakCompression ?? 0, vu)} in compression; the table ends at ${formatQuantityText(m.damperTableEndCompression ?? 0, vu)}, so forces above it are extrapolated.`,
     });
   }
   if (beyond(m.damperSpeedPeakRebound, m.damperTableEndRebound)) {
     out.push({
       key: 'beyond-table-rebound',
-      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakRebound ?? 0, 'mps')} in rebound; the table ends at ${formatQuantityText(m.damperTableEndRebound ?? 0, 'mps')}, so forces above it are extrapolated.`,
+      text: `Damper speed reached ${formatQuantityText(m.damperSpeedPeakRebound ?? 0, vu)} in rebound; the table ends at ${formatQuantityText(m.damperTableEndRebound ?? 0, vu)}, so forces above it are extrapolated.`,
     });
   }
   return out;

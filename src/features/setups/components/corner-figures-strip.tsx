@@ -1,5 +1,7 @@
 import type { ModalResult } from '../../../../shared/schemas/modal.ts';
+import { DEFAULT_FIT_MAX_SPEED, leastSquaresWords } from '../../../../shared/sim/damper-equivalent.ts';
 import { GRAVITY } from '../../../../shared/sim/quarter-car.ts';
+import { listText } from '../../../lib/units/unit-table.ts';
 import { Figure } from '../../../components/ui/figure.tsx';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 
@@ -27,7 +29,7 @@ function Cell({ label, children, note }: { label: string; children: React.ReactN
  * and the static sag. From the simulation core's modal analysis of the setup as shown.
  */
 export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false }: CornerFiguresStripProps) {
-  const { length, rate } = useUnits();
+  const { length, rate, damperVelocity } = useUnits();
   const sag = (sprungMass * GRAVITY) / wheelRate;
   return (
     <section aria-label="Corner figures" className={`rounded border border-rule bg-paper-raised ${stale ? 'opacity-60' : ''}`}>
@@ -52,7 +54,7 @@ export function CornerFiguresStrip({ modal, wheelRate, sprungMass, stale = false
         </Cell>
       </dl>
       <p className="border-t border-rule px-3 py-1 text-2xs text-ink-faint">
-        {stale ? 'Showing the last valid state: fix the marked fields to update. ' : ''}Linear analysis at static; damping as the {modal.equivalentDamping.definition}.
+        {stale ? 'Showing the last valid state: fix the marked fields to update. ' : ''}Linear analysis at static; damping as the {leastSquaresWords(listText([DEFAULT_FIT_MAX_SPEED], damperVelocity))}.
       </p>
     </section>
   );

@@ -1,5 +1,6 @@
 import type { SetupRevision } from '../../../../shared/schemas/setup-record.ts';
 import { formatSig } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { type DiffRow, diffSetups } from '../model/setup-diff.ts';
 
 function Value({ row, value }: { row: DiffRow; value: number | string | undefined }) {
@@ -24,7 +25,7 @@ function Change({ row }: { row: DiffRow }) {
 
 /** Field-by-field difference from revision A to revision B, every changed value with its unit. */
 export function RevisionDiff({ a, b }: { a: SetupRevision; b: SetupRevision }) {
-  const rows = diffSetups(a.document, b.document);
+  const rows = diffSetups(a.document, b.document, useUnits());
   return (
     <div className="overflow-x-auto rounded border border-rule bg-paper-raised">
       <table className="w-full text-sm" aria-label={`Differences from revision ${a.number} to revision ${b.number}`}>

@@ -1,6 +1,7 @@
 import { type ReactNode, useEffect, useId, useMemo, useRef, useState } from 'react';
 import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { Button } from '../../../components/ui/button.tsx';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { setupProblems } from '../model/setup-problems.ts';
 import type { SetupDraft } from '../model/use-setup-draft.ts';
 
@@ -19,11 +20,12 @@ export interface SaveBarProps {
 /** Problems of the draft in words: table cells that do not read yet first, then the schema's. */
 function useProblems(draft: SetupDraft) {
   const { values, tableProblems } = draft;
+  const units = useUnits();
   return useMemo(() => {
     // while a table does not read, the form still holds the last valid curve: its issues would be stale
-    const fromForm = setupProblems(values).filter((p) => !(tableProblems.length > 0 && p.path.startsWith('damper.')));
+    const fromForm = setupProblems(values, units).filter((p) => !(tableProblems.length > 0 && p.path.startsWith('damper.')));
     return [...tableProblems, ...fromForm];
-  }, [values, tableProblems]);
+  }, [values, tableProblems, units]);
 }
 
 function statusText(draft: SetupDraft, problemCount: number): string {

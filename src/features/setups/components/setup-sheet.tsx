@@ -1,10 +1,11 @@
 import type { Setup } from '../../../../shared/schemas/setup.ts';
 import { formatSig } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { sheetRows } from '../model/setup-diff.ts';
 
 /** The setup's values as a read-only spec sheet (viewers, shared links); curves are shown by the damper panel. */
 export function SetupSheet({ setup }: { setup: Setup }) {
-  const rows = sheetRows(setup);
+  const rows = sheetRows(setup, useUnits());
   return (
     <div role="group" aria-label="Setup values (read-only)">
       <table className="w-full text-sm">

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Setup } from '../../../../shared/schemas/setup.ts';
+import { chosenUnits } from '../../../lib/units/unit-table.ts';
+import { setupProblems } from './setup-problems.ts';
 import { diffSetups, flatten } from './setup-diff.ts';
 
 const base = Setup.parse({
@@ -43,6 +45,26 @@ describe('diffSetups', () => {
     ]);
     expect(rows[0].unit?.symbol).toBe('N/mm');
     expect(rows[2].unit?.fromSI(0.05)).toBeCloseTo(50, 12);
+  });
+
+  it('gives each row the unit the person chose: rates in lbf/in, lengths in in, damper speeds in mm/s; masses and forces stay SI', () => {
+    const u = chosenUnits({ damperVelocity: 'mm/s', rate: 'lbf/in', speed: 'mph', length: 'in' });
+    const next = Setup.parse({ ...base, sprungMass: 320, springRate: 21500, damper: { ...base.damper, compression: [[0.06, 115], [0.3, 291]] }, bumpStop: { ...base.bumpStop, clearance: 0.05 } });
+    const unitOf = Object.fromEntries(diffSetups(base, next, u).map((r) => [r.label, r.unit]));
+    // 1 lbf/in = 175.126835 N/m and 1 in = 0.0254 m (NIST SP 811, B.8)
+    expect(unitOf['Spring rate']?.symbol).toBe('lbf/in');
+    expect(unitOf['Spring rate']?.fromSI(21500)).toBeCloseTo(122.7682, 4);
+    expect(unitOf['Bump stop clearance']?.symbol).toBe('in');
+    expect(unitOf['Bump stop clearance']?.fromSI(0.0508)).toBeCloseTo(2, 12);
+    expect(unitOf['Compression point 1, speed']?.symbol).toBe('mm/s');
+    expect(unitOf['Compression point 1, force']?.symbol).toBe('N');
+    expect(unitOf['Sprung mass']?.symbol).toBe('kg');
+  });
+
+  it('names a damper cell by its speed in the chosen unit in a validation message', () => {
+    const u = chosenUnits({ damperVelocity: 'mm/s', rate: 'N/mm', speed: 'km/h', length: 'mm' });
+    const bad = { ...base, damper: { ...base.damper, rebound: [[0.05, 220], [0.52, -5]] } };
+    expect(setupProblems(bad, u).map((p) => p.message)).toContain('Rebound force at 520 mm/s must be 0 N or more');
   });
 
   it('shows fields that appear or disappear, such as an added curve point or a removed stop', () => {

@@ -1,5 +1,7 @@
 import type { Setup } from '../../../../shared/schemas/setup.ts';
+import { DEFAULT_UNIT_PREFERENCES } from '../../../../shared/schemas/unit-preferences.ts';
 import { type DisplayUnit, units } from '../../../lib/format.ts';
+import { chosenUnits, type ChosenUnits, type QuantityKind } from '../../../lib/units/unit-table.ts';
 import { rodDiameter, stopCoefficient } from './setup-units.ts';
 
 /** One difference between two revisions, in the order the setup page lists fields. */
@@ -18,17 +20,17 @@ export interface Described {
   order: number;
 }
 
-/** Scalar fields in page order, with their display units. */
-const scalarFields: Array<[string, string, DisplayUnit | undefined]> = [
+/** Scalar fields in page order, with their display units: fixed, or the kind whose unit the person chooses. */
+const scalarFields: Array<[string, string, DisplayUnit | QuantityKind | undefined]> = [
   ['name', 'Name', undefined],
   ['sprungMass', 'Sprung mass', units.kg],
   ['unsprungMass', 'Unsprung mass', units.kg],
-  ['springRate', 'Spring rate', units.Npermm],
+  ['springRate', 'Spring rate', 'rate'],
   ['motionRatio', 'Motion ratio', units.ratio],
-  ['tyreRate', 'Tyre rate', units.Npermm],
+  ['tyreRate', 'Tyre rate', 'rate'],
   ['tyreDamping', 'Tyre damping', units.Nspm],
-  ['tyreFootprint', 'Tyre footprint', units.mm],
-  ['tyreRadius', 'Tyre rolling radius', units.mm],
+  ['tyreFootprint', 'Tyre footprint', 'length'],
+  ['tyreRadius', 'Tyre rolling radius', 'length'],
   ['damper.gas.force', 'Gas force', units.N],
   ['damper.gas.pressure', 'Gas pressure', units.bar],
   ['damper.gas.rodArea', 'Rod diameter', rodDiameter],
@@ -42,16 +44,16 @@ const scalarFields: Array<[string, string, DisplayUnit | undefined]> = [
   ['damper.control.law.blend', 'Skyhook share', units.ratio],
   ['damper.control.responseTime', 'Valve response time', units.ms],
   ['damper.control.bounds', 'Control bounds', undefined],
-  ['topMount.rate', 'Top mount rate', units.Npermm],
+  ['topMount.rate', 'Top mount rate', 'rate'],
   ['topMount.damping', 'Top mount damping', units.Nspm],
   ['friction.breakaway', 'Strut friction breakaway', units.N],
-  ['friction.smoothingSpeed', 'Friction smoothing speed', units.mmps],
-  ['bumpStop.clearance', 'Bump stop clearance', units.mm],
+  ['friction.smoothingSpeed', 'Friction smoothing speed', 'damperVelocity'],
+  ['bumpStop.clearance', 'Bump stop clearance', 'length'],
   ['bumpStop.law.kind', 'Bump stop law', undefined],
-  ['reboundStop.clearance', 'Rebound stop clearance', units.mm],
+  ['reboundStop.clearance', 'Rebound stop clearance', 'length'],
   ['reboundStop.law.kind', 'Rebound stop law', undefined],
-  ['stroke.compression', 'Stroke, compression', units.mm],
-  ['stroke.extension', 'Stroke, extension', units.mm],
+  ['stroke.compression', 'Stroke, compression', 'length'],
+  ['stroke.extension', 'Stroke, extension', 'length'],
   ['notes', 'Notes', undefined],
 ];
 const scalarIndex = new Map(scalarFields.map(([path, label, unit], i) => [path, { label, unit, order: i * 1000 }]));
@@ -60,17 +62,20 @@ const orderOf = (path: string) => scalarIndex.get(path)?.order ?? Number.MAX_SAF
 const directionWord = { compression: 'Compression', rebound: 'Rebound' } as const;
 const stopWord = { bumpStop: 'Bump stop', reboundStop: 'Rebound stop' } as const;
 
-/** Label, display unit and page position of any leaf path of a setup document. */
-export function describePath(path: string): Described {
+/** The units of the default preference, for callers outside a person's choice. */
+const defaultUnits = chosenUnits({ ...DEFAULT_UNIT_PREFERENCES });
+
+/** Label, display unit (in the person's units `u`) and page position of any leaf path of a setup document. */
+export function describePath(path: string, u: ChosenUnits = defaultUnits): Described {
   const scalar = scalarIndex.get(path);
-  if (scalar) return scalar;
+  if (scalar) return { ...scalar, unit: typeof scalar.unit === 'string' ? u[scalar.unit] : scalar.unit };
   let m = /^damper\.(compression|rebound)\.(\d+)\.([01])$/.exec(path);
   if (m) {
     const dir = m[1] as keyof typeof directionWord;
     const i = Number(m[2]);
     // curves sit between the gas and the stops, compression first
     const order = orderOf('damper.gas.force') - 500 + (dir === 'rebound' ? 250 : 0) + i * 2 + Number(m[3]);
-    return m[3] === '0' ? { label: `${directionWord[dir]} point ${i + 1}, speed`, unit: units.mps, order } : { label: `${directionWord[dir]} point ${i + 1}, force`, unit: units.N, order };
+    return m[3] === '0' ? { label: `${directionWord[dir]} point ${i + 1}, speed`, unit: u.damperVelocity, order } : { label: `${directionWord[dir]} point ${i + 1}, force`, unit: units.N, order };
   }
   m = /^damper\.control\.firm\.(compression|rebound)\.(\d+)\.([01])$/.exec(path);
   if (m) {
@@ -78,13 +83,13 @@ export function describePath(path: string): Described {
     const i = Number(m[2]);
     const order = orderOf('damper.control.law.kind') - 500 + (dir === 'rebound' ? 250 : 0) + i * 2 + Number(m[3]);
     const what = `Firm ${directionWord[dir].toLowerCase()} point ${i + 1}`;
-    return m[3] === '0' ? { label: `${what}, speed`, unit: units.mps, order } : { label: `${what}, force`, unit: units.N, order };
+    return m[3] === '0' ? { label: `${what}, speed`, unit: u.damperVelocity, order } : { label: `${what}, force`, unit: units.N, order };
   }
   m = /^(bumpStop|reboundStop)\.law\.points\.(\d+)\.([01])$/.exec(path);
   if (m) {
     const stop = m[1] as keyof typeof stopWord;
     const order = orderOf(`${stop}.law.kind`) + 10 + Number(m[2]) * 2 + Number(m[3]);
-    return m[3] === '0' ? { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, deflection`, unit: units.mm, order } : { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, force`, unit: units.N, order };
+    return m[3] === '0' ? { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, deflection`, unit: u.length, order } : { label: `${stopWord[stop]} point ${Number(m[2]) + 1}, force`, unit: units.N, order };
   }
   m = /^(bumpStop|reboundStop)\.law\.coefficients\.(\d+)$/.exec(path);
   if (m) {
@@ -104,23 +109,24 @@ export function flatten(value: unknown, prefix = '', out = new Map<string, numbe
 
 /**
  * Field-by-field difference from revision A to revision B: a row for every leaf that differs,
- * appears or disappears (a curve point added, a stop removed), in page order.
+ * appears or disappears (a curve point added, a stop removed), in page order, each with the unit
+ * the person reads it in.
  */
-export function diffSetups(a: Setup, b: Setup): DiffRow[] {
+export function diffSetups(a: Setup, b: Setup, u: ChosenUnits = defaultUnits): DiffRow[] {
   const fa = flatten(a);
   const fb = flatten(b);
   const paths = [...new Set([...fa.keys(), ...fb.keys()])].filter((p) => fa.get(p) !== fb.get(p));
   return paths
-    .map((path) => ({ path, ...describePath(path), before: fa.get(path), after: fb.get(path) }))
+    .map((path) => ({ path, ...describePath(path, u), before: fa.get(path), after: fb.get(path) }))
     .sort((x, y) => x.order - y.order || x.path.localeCompare(y.path))
     .map(({ order: _order, ...row }) => row);
 }
 
 /** A document as labelled rows in page order (for read-only sheets), curve points left out. */
-export function sheetRows(setup: Setup): Array<{ path: string; label: string; unit?: DisplayUnit; value: number | string }> {
+export function sheetRows(setup: Setup, u: ChosenUnits = defaultUnits): Array<{ path: string; label: string; unit?: DisplayUnit; value: number | string }> {
   return [...flatten(setup)]
     .filter(([path]) => path !== 'name' && path !== 'notes' && !/^damper\.(compression|rebound)\./.test(path))
-    .map(([path, value]) => ({ path, ...describePath(path), value }))
+    .map(([path, value]) => ({ path, ...describePath(path, u), value }))
     .sort((x, y) => x.order - y.order || x.path.localeCompare(y.path))
     .map(({ order: _order, ...row }) => row);
 }

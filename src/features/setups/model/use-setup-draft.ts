@@ -1,25 +1,29 @@
 import { toNestErrors } from '@hookform/resolvers';
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { type FieldError, type Resolver, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import type { SetupRevision } from '../../../../shared/schemas/setup-record.ts';
 import { type Damper, Setup, type SetupInput } from '../../../../shared/schemas/setup.ts';
 
 import type { Problem } from '../../../lib/plain-issue.ts';
+import type { ChosenUnits } from '../../../lib/units/unit-table.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { setupIssueMessage } from './setup-problems.ts';
 
 export type SetupForm = UseFormReturn<SetupInput, unknown, Setup>;
 
-/** Validates the form with the shared schema, every message in page words (one per field). */
-const setupResolver: Resolver<SetupInput, unknown, Setup> = (values, _context, options) => {
-  const parsed = Setup.safeParse(values);
-  if (parsed.success) return { values: parsed.data, errors: {} };
-  const errors: Record<string, FieldError> = {};
-  for (const issue of parsed.error.issues) {
-    const path = issue.path.map(String).join('.');
-    errors[path] ??= { type: issue.code, message: setupIssueMessage(issue, values) };
-  }
-  return { values: {}, errors: toNestErrors(errors, options) };
-};
+/** Validates the form with the shared schema, every message in page words and the units `units()` gives (one per field). */
+const setupResolver =
+  (units: () => ChosenUnits): Resolver<SetupInput, unknown, Setup> =>
+  (values, _context, options) => {
+    const parsed = Setup.safeParse(values);
+    if (parsed.success) return { values: parsed.data, errors: {} };
+    const errors: Record<string, FieldError> = {};
+    for (const issue of parsed.error.issues) {
+      const path = issue.path.map(String).join('.');
+      errors[path] ??= { type: issue.code, message: setupIssueMessage(issue, values, units()) };
+    }
+    return { values: {}, errors: toNestErrors(errors, options) };
+  };
 
 /** The bench's working copy of a setup: the form, its current values, and the parsed setup when valid. */
 export interface SetupDraft {
@@ -68,7 +72,12 @@ function withAllKeys(document: SetupInput): SetupInput {
  * page shows numbers in engineers' units but the form holds SI, converted by each input.
  */
 export function useSetupDraft(revision: Pick<SetupRevision, 'number' | 'document'>): SetupDraft {
-  const form = useForm<SetupInput, unknown, Setup>({ resolver: setupResolver, defaultValues: withAllKeys(revision.document), mode: 'onChange' });
+  const chosen = useUnits();
+  // read when validating, so a resolver made once follows a change of units
+  const unitsRef = useRef(chosen);
+  unitsRef.current = chosen;
+  const [resolver] = useState(() => setupResolver(() => unitsRef.current));
+  const form = useForm<SetupInput, unknown, Setup>({ resolver, defaultValues: withAllKeys(revision.document), mode: 'onChange' });
   const [baseRevision, setBaseRevision] = useState(revision.number);
   const [tableProblems, setTableProblemsState] = useState<Problem[]>([]);
   const [generation, setGeneration] = useState(0);

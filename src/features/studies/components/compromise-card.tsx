@@ -2,8 +2,7 @@ import type { ReactNode } from 'react';
 import { baseVerdict } from '../../../../shared/study/base-verdict.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
 import { gridEdges } from '../../../../shared/study/grid-edge.ts';
-import { units } from '../../../lib/format.ts';
-import { figureText, figureLabel, figureUnit, parameterText, parameterUnit } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 /**
@@ -11,6 +10,7 @@ import type { StudyView } from '../model/study-view.ts';
  * points within the limits) and what it gives up against its neighbours on the front.
  */
 export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (index: number) => ReactNode }) {
+  const d = useStudyDisplay();
   const c = view.compromise;
   if (!c) return null;
   if (!c.ok) {
@@ -29,12 +29,9 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
   const neighbourSentences = new Set(c.neighbours.map((n) => n.sentence));
   const why = c.explanation.filter((s) => !neighbourSentences.has(s));
   const def = view.definition;
-  const withUnit = (key: Parameters<typeof figureText>[0], si: number) => {
-    const symbol = units[figureUnit[key]].symbol;
-    return `${figureText(key, si)}${symbol ? `\u2009${symbol}` : ''}`;
-  };
-  const base = baseVerdict(def, view.points, view.base, c, withUnit);
-  const edges = gridEdges(def.axes, winner.values, Object.fromEntries(def.axes.map((a) => [a.parameter, (x: number) => (a.parameter.endsWith('Scale') ? `×${parameterText(a.parameter, x)}` : `${parameterText(a.parameter, x)}\u2009${units[parameterUnit[a.parameter]].symbol}`.trim())])));
+  const { figureLabel, figureText } = d;
+  const base = baseVerdict(def, view.points, view.base, c, d.figureWithUnit);
+  const edges = gridEdges(def.axes, winner.values, Object.fromEntries(def.axes.map((a) => [a.parameter, (x: number) => d.parameterWithUnit(a.parameter, x)])));
   return (
     <section aria-label="Best compromise" className="rounded border-2 border-comfort/50 bg-paper-raised px-4 py-3 shadow-lift">
       {base?.beatsBestOnBoth && (
@@ -44,7 +41,7 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
       )}
       <p className="text-xs font-medium tracking-wide text-comfort uppercase">{base?.beatsBestOnBoth ? 'Best compromise among the swept points' : 'Best compromise'}</p>
       <h2 className="text-lg font-semibold" data-testid="best-compromise-point">
-        {describePoint(def.axes, winner.values)}
+        {describePoint(def.axes, winner.values, d.parameterWords)}
       </h2>
       <dl className="mt-1 flex flex-wrap gap-x-5 gap-y-1 text-sm">
         {[def.comfortFigure, def.gripFigure].map((k) => (
@@ -67,7 +64,7 @@ export function CompromiseCard({ view, actions }: { view: StudyView; actions?: (
           {[def.comfortFigure, def.gripFigure]
             .flatMap((k) => {
               const r = winner.spread?.[k];
-              return r ? [`${figureLabel(k, false)} runs from ${withUnit(k, r.min)} to ${withUnit(k, r.max)} (standard deviation ${withUnit(k, r.sd)})`] : [];
+              return r ? [`${d.figureLabel(k, false)} runs from ${d.figureWithUnit(k, r.min)} to ${d.figureWithUnit(k, r.max)} (standard deviation ${d.figureWithUnit(k, r.sd)})`] : [];
             })
             .join(', and ')}
           .

@@ -4,11 +4,10 @@ import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { linearX } from '../../../components/charts/axes.ts';
 import { seriesColor, themedAxis, themedSeries } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
-import { units } from '../../../lib/format.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
 import { studyParameterInfo } from '../../../../shared/study/describe-point.ts';
 import { figureLines, type FigureLines } from '../model/chart-data.ts';
-import { figureUnit, parameterUnit } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 /** Fills each line's ±1 sd band under the plot's clip, in the line's own colour. */
@@ -54,14 +53,15 @@ function drawBands(u: uPlot, lines: FigureLines, colour: (i: number) => string) 
  */
 export function FigureLinesChart({ view, figure, along, holdAt, roadNames }: { view: StudyView; figure: StudyFigureKey; along: number; holdAt: readonly number[]; roadNames: readonly string[] }) {
   const theme = useChartTheme();
-  const lines = useMemo(() => figureLines(view, figure, along, holdAt, roadNames), [view, figure, along, holdAt, roadNames]);
+  const d = useStudyDisplay();
+  const lines = useMemo(() => figureLines(view, figure, along, holdAt, roadNames, d), [view, figure, along, holdAt, roadNames, d]);
   const linesRef = useRef(lines);
   linesRef.current = lines;
   const parameter = (view.definition.axes[along] ?? view.definition.axes[0]).parameter;
   const labels = lines.lines.map((l) => l.label).join('|');
   const options = useMemo<ChartOptions>(() => {
-    const fUnit = units[figureUnit[figure]].symbol;
-    const pUnit = parameter.endsWith('Scale') ? '×' : units[parameterUnit[parameter]].symbol;
+    const fUnit = d.figureSymbol(figure);
+    const pUnit = d.parameterSymbol(parameter);
     return {
       height: 260,
       scales: { x: linearX },
@@ -69,7 +69,7 @@ export function FigureLinesChart({ view, figure, along, holdAt, roadNames }: { v
       series: [{ label: studyParameterInfo[parameter].label }, ...labels.split('|').filter(Boolean).map((label, i) => themedSeries({ label, unit: fUnit, color: seriesColor(theme, i), points: true, width: 1.5 }))],
       hooks: { drawSeries: [(u, i) => i === 1 && drawBands(u, linesRef.current, (k) => seriesColor(theme, k))] },
     };
-  }, [theme, figure, parameter, labels]);
+  }, [theme, figure, parameter, labels, d]);
   // The y scale must take the bands in: hidden min and max columns would show in the legend, so widen through the data instead.
   const data = useMemo<uPlot.AlignedData>(() => [lines.x, ...lines.lines.map((l) => l.y)], [lines]);
   const banded = useMemo<ChartOptions>(() => {

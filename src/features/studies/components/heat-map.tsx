@@ -3,7 +3,7 @@ import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { readChartTheme } from '../../../components/charts/chart-theme.ts';
 import { formatSig } from '../../../lib/format.ts';
 import { heatGrid, type StudySlice } from '../model/chart-data.ts';
-import { figureLabel, figureSymbol, parameterLabel } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { positionOf, type StudyView } from '../model/study-view.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
 import { useChartExport } from '../../../components/charts/export-context.tsx';
@@ -44,7 +44,9 @@ export interface HeatMapProps {
  * Drawn on a canvas (a grid of cells is not what a line-chart library is for).
  */
 export function HeatMap({ view, figure, baselineIndex, selected, onSelect, slice }: HeatMapProps) {
-  const grid = useMemo(() => heatGrid(view, figure, slice), [view, figure, slice]);
+  const d = useStudyDisplay();
+  const { figureLabel, figureSymbol, parameterLabel } = d;
+  const grid = useMemo(() => heatGrid(view, figure, slice, d), [view, figure, slice, d]);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const hostRef = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(640);

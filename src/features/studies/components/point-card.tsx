@@ -2,13 +2,15 @@ import type { ReactNode } from 'react';
 import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
-import { figureLabel, figureText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 /** The point picked on a chart or in the table: its values, whether it meets the limits (and why not), its main figures. */
 export function PointCard({ view, index, actions }: { view: StudyView; index: number; actions?: ReactNode }) {
   const point = index === -1 ? view.base : view.points.find((p) => p.index === index);
+  const d = useStudyDisplay();
   if (!point) return null;
+  const { figureLabel, figureText } = d;
   const def = view.definition;
   const sweepsDampingRatio = def.axes.some((a) => a.parameter === 'targetBodyDampingRatio');
   const keys: StudyFigureKey[] = [
@@ -25,7 +27,7 @@ export function PointCard({ view, index, actions }: { view: StudyView; index: nu
   return (
     <section aria-label="Picked point" className="rounded border border-rule bg-paper-raised px-4 py-3">
       <p className="text-xs font-medium tracking-wide text-ink-faint uppercase">Picked point {index >= 0 ? `#${index}` : ''}</p>
-      <h2 className="text-base font-semibold">{index === -1 ? 'The base setup, unchanged' : describePoint(def.axes, point.values)}</h2>
+      <h2 className="text-base font-semibold">{index === -1 ? 'The base setup, unchanged' : describePoint(def.axes, point.values, d.parameterWords)}</h2>
       <p className="mt-1 text-sm">{point.feasible ? <span className="text-ok">Meets every limit.</span> : <Tag tone="signal">breaks a limit</Tag>}</p>
       {!point.feasible && (
         <ul className="mt-1 list-disc pl-5 text-sm text-signal-ink">
@@ -37,7 +39,7 @@ export function PointCard({ view, index, actions }: { view: StudyView; index: nu
       )}
       {pastEnd > 0 && (
         <p className="mt-1 text-sm text-signal-ink">
-          Reaches the end of the stroke: travel went {figureText('endOfStrokeDepth', pastEnd)} past it into the hard limit on at least one road. Figures
+          Reaches the end of the stroke: travel went {d.figureWithUnit('endOfStrokeDepth', pastEnd)} past it into the hard limit on at least one road. Figures
           past that point depend on the limit's assumed stiffness.
         </p>
       )}

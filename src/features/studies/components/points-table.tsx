@@ -17,7 +17,7 @@ import { Input } from '../../../components/ui/field.tsx';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
 import { formatSig } from '../../../lib/format.ts';
-import { figureLabel, figureText, parameterLabel, parameterText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 interface Row {
@@ -37,6 +37,8 @@ const PAGE = 25;
  */
 export function PointsTable({ view, selected, onSelect }: { view: StudyView; selected: number | null; onSelect: (index: number) => void }) {
   const def = view.definition;
+  const d = useStudyDisplay();
+  const { figureLabel, figureText, parameterLabel, parameterText } = d;
   const [sorting, setSorting] = useState<SortingState>([]);
   const [filter, setFilter] = useState('');
   const [only, setOnly] = useState<'all' | 'feasible' | 'front'>('all');
@@ -46,9 +48,9 @@ export function PointsTable({ view, selected, onSelect }: { view: StudyView; sel
     const front = new Set(view.tradeOff?.front ?? []);
     const best = view.compromise?.ok ? view.compromise.winner : -1;
     return view.points
-      .map((point, pos) => ({ point, label: describePoint(def.axes, point.values), score: scores?.[pos] ?? null, front: front.has(pos), best: pos === best }))
+      .map((point, pos) => ({ point, label: describePoint(def.axes, point.values, d.parameterWords), score: scores?.[pos] ?? null, front: front.has(pos), best: pos === best }))
       .filter((r) => (only === 'feasible' ? r.point.feasible : only === 'front' ? r.front : true));
-  }, [view, def.axes, only]);
+  }, [view, def.axes, only, d]);
 
   const figures = useMemo(() => {
     const keys: StudyFigureKey[] = [def.comfortFigure, def.gripFigure, ...def.objectives.map((o) => o.figure), 'strokeUsed', 'liftOffFraction', 'tyreLoadMin'];

@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Field, FormError, Input } from '../../../components/ui/field.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
 import { formatQuantityText } from '../../../lib/format.ts';
-import { figureLabel, figureText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { runOverSeeds, type SeedRepeatResult } from '../run/run-over-seeds.ts';
 
 const HEADLINE: StudyFigureKey[] = ['bodyAccelWkRms', 'vdv', 'bodyAccelPeak', 'tyreLoadRatio', 'tyreLoadMin', 'travelRms', 'strokeUsed', 'damperVelocityRms'];
@@ -29,6 +29,7 @@ export interface SeedRepeatPanelProps {
  * changes with the seed; for any other road the panel says so and offers nothing to run.
  */
 export function SeedRepeatPanel({ setup, road, speed, duration, settleTime, seed }: SeedRepeatPanelProps) {
+  const { figureLabel, figureText } = useStudyDisplay();
   const [seeds, setSeeds] = useState(10);
   const [busy, setBusy] = useState(false);
   const [result, setResult] = useState<SeedRepeatResult | null>(null);

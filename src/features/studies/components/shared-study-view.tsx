@@ -9,6 +9,7 @@ import { Tag } from '../../../components/ui/tag.tsx';
 import { formatDateTime } from '../../../lib/format.ts';
 import { studyView } from '../model/study-view.ts';
 import { statusWords, sweepWords } from './study-list.tsx';
+import { savedPointName, useStudyDisplay } from '../model/display.ts';
 import { StudyResults } from './study-results.tsx';
 
 /**
@@ -19,7 +20,8 @@ import { StudyResults } from './study-results.tsx';
 export function SharedStudyView({ shared, copyAction }: { shared: SharedStudy; copyAction?: React.ReactNode }) {
   const s = shared.study;
   const speedUnit = useUnits().speed;
-  const view = useMemo(() => studyView(s.definition, s.points, s.basePoint, true), [s]);
+  const d = useStudyDisplay();
+  const view = useMemo(() => studyView(s.definition, s.points, s.basePoint, true, d), [s, d]);
   const roadNames = useMemo(() => studyRoadNames(s.definition, s.roads), [s]);
   const status = statusWords[s.status];
   return (
@@ -28,14 +30,14 @@ export function SharedStudyView({ shared, copyAction }: { shared: SharedStudy; c
         <p className="text-xs font-medium tracking-wide text-ink-faint uppercase">Study shared read-only from {shared.workspaceName}</p>
         <h1 className="text-xl font-semibold">{s.name}</h1>
         <p className="mt-0.5 text-sm text-ink-soft">
-          From {s.base.setupName ?? 'a setup'} <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes)} · {roadNames.join(', ')}
+          From {s.base.setupName ?? 'a setup'} <span className="figures">r{s.base.revisionNumber}</span> · {sweepWords(s.axes, d)} · {roadNames.join(', ')}
           {s.speeds.length > 0 && <span className="figures"> at {listText(s.speeds, speedUnit)}</span>}
         </p>
         <p className="mt-1 flex flex-wrap items-center gap-2 text-xs text-ink-faint">
           <Tag tone={status.tone}>{status.text}</Tag>
           Shared by {shared.sharedBy} on {formatDateTime(shared.sharedAt)}
           {shared.expiresAt ? `, until ${formatDateTime(shared.expiresAt)}` : ''}
-          {s.baseline && <Tag tone="accent">baseline: {s.baseline.label}</Tag>}
+          {s.baseline && <Tag tone="accent">baseline: {savedPointName(d, s.definition.axes, s.baseline)}</Tag>}
         </p>
         {copyAction && <div className="mt-2">{copyAction}</div>}
       </header>

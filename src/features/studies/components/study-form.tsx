@@ -14,6 +14,7 @@ import { latestRevisionsQueryOptions, revisionQueryOptions } from '../../../lib/
 import { staticEquilibrium } from '../../../../shared/sim/quarter-car.ts';
 import { roadsQueryOptions } from '../../../lib/queries/roads.ts';
 import { setupsQueryOptions } from '../../../lib/queries/setups.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { defaultFormValues, fieldOfIssue, formToDefinition, startingRange, type StudyFormValues, sweptAxisCount } from '../model/study-form.ts';
 import { AxisFieldset } from './study-form/axis-fieldset.tsx';
 import { BaseFields } from './study-form/base-fields.tsx';
@@ -61,10 +62,11 @@ function StudyFormBody({
   firstRoad,
 }: StudyFormProps & { setups: SetupSummary[]; libraryRoads: RoadListItem[]; firstRoad: string }) {
   const revisionIds = useRef<(n: number) => string | undefined>(() => undefined);
+  const d = useStudyDisplay();
 
   const resolver: Resolver<StudyFormValues, unknown, StudyDefinition> = useMemo(
     () => async (values, _ctx, options) => {
-      const parsed = StudyDefinition.safeParse(formToDefinition(values, revisionIds.current));
+      const parsed = StudyDefinition.safeParse(formToDefinition(values, revisionIds.current, d));
       if (parsed.success) return { values: parsed.data, errors: {} };
       const flat: Record<string, { type: string; message: string }> = {};
       for (const issue of parsed.error.issues) {
@@ -73,11 +75,11 @@ function StudyFormBody({
       }
       return { values: {}, errors: toNestErrors(flat as FieldErrors, options) };
     },
-    [],
+    [d],
   );
 
   const form = useForm<StudyFormValues, unknown, StudyDefinition>({
-    defaultValues: { ...defaultFormValues(firstRoad), setupId: live[0].id, revision: String(live[0].latestRevision) },
+    defaultValues: { ...defaultFormValues(firstRoad, d), setupId: live[0].id, revision: String(live[0].latestRevision) },
     resolver,
   });
   const { register, control, handleSubmit, setValue, setError, getValues, getFieldState } = form;
@@ -103,12 +105,12 @@ function StudyFormBody({
       const touched = (['from', 'to', 'steps'] as const).some((k) => getFieldState(`axes.${i}.${k}`).isDirty);
       const parameter = getValues(`axes.${i}.parameter`);
       if (touched || !parameter) continue;
-      const r = startingRange(parameter, baseSetup);
+      const r = startingRange(parameter, baseSetup, d);
       setValue(`axes.${i}.from`, r.from);
       setValue(`axes.${i}.to`, r.to);
       setValue(`axes.${i}.steps`, r.steps);
     }
-  }, [baseSetup, getFieldState, getValues, setValue]);
+  }, [baseSetup, getFieldState, getValues, setValue, d]);
 
   useEffect(() => {
     if (chosen && !watched.revision) setValue('revision', String(chosen.latestRevision));
@@ -120,9 +122,9 @@ function StudyFormBody({
   const twoAxes = watched.twoAxes ?? true;
   const axisCount = sweptAxisCount({ twoAxes, moreAxes: watched.moreAxes ?? 0 });
   const counts = useMemo(() => {
-    const r = StudyDefinition.safeParse(formToDefinition(watched as StudyFormValues, () => 'x'));
+    const r = StudyDefinition.safeParse(formToDefinition(watched as StudyFormValues, () => 'x', d));
     return r.success ? plannedCounts(r.data) : null;
-  }, [watched]);
+  }, [watched, d]);
   const sweptSpeed = (watched.axes ?? []).slice(0, axisCount).some((a) => a?.parameter === 'speed');
 
   return (

@@ -4,8 +4,8 @@ import { useUnits } from '../../../lib/units/use-units.tsx';
 import type { StudySummary } from '../../../../shared/schemas/study-record.ts';
 import { Tag } from '../../../components/ui/tag.tsx';
 import { TBody, THead, Table, Td, Th, Tr } from '../../../components/ui/table.tsx';
-import { formatDateTime, units } from '../../../lib/format.ts';
-import { parameterLabel, parameterText, parameterUnit } from '../model/display.ts';
+import { formatDateTime } from '../../../lib/format.ts';
+import { savedPointName, type StudyDisplay, useStudyDisplay } from '../model/display.ts';
 
 export const statusWords: Record<StudySummary['status'], { text: string; tone: 'plain' | 'accent' | 'signal' }> = {
   draft: { text: 'not run yet', tone: 'plain' },
@@ -14,13 +14,13 @@ export const statusWords: Record<StudySummary['status'], { text: string; tone: '
 };
 
 /** "rebound scale ×0.700–1.60 (4 steps) by spring rate 24.0–40.0 N/mm (4 steps)". */
-export function sweepWords(axes: StudySummary['axes']): string {
+export function sweepWords(axes: StudySummary['axes'], d: StudyDisplay): string {
   return axes
     .map((a) => {
-      const range = `${parameterText(a.parameter, a.from)}–${parameterText(a.parameter, a.to)}`;
-      const symbol = units[parameterUnit[a.parameter]].symbol;
+      const range = `${d.parameterText(a.parameter, a.from)}–${d.parameterText(a.parameter, a.to)}`;
+      const symbol = d.parameterUnit(a.parameter).symbol;
       const shown = a.parameter.endsWith('Scale') ? `×${range}` : symbol ? `${range} ${symbol}` : range;
-      return `${parameterLabel(a.parameter, false)} ${shown} (${a.steps} steps)`;
+      return `${d.parameterLabel(a.parameter, false)} ${shown} (${a.steps} steps)`;
     })
     .join(' by ');
 }
@@ -28,6 +28,7 @@ export function sweepWords(axes: StudySummary['axes']): string {
 /** Saved studies of the workspace, most recently changed first. */
 export function StudyList({ workspaceId, studies }: { workspaceId: string; studies: StudySummary[] }) {
   const speedUnit = useUnits().speed;
+  const d = useStudyDisplay();
   return (
     <Table caption="Studies">
       <THead>
@@ -44,7 +45,7 @@ export function StudyList({ workspaceId, studies }: { workspaceId: string; studi
       <TBody>
         {studies.map((s) => {
           const status = statusWords[s.status];
-          const verdict = s.results?.best?.label ?? null;
+          const verdict = s.results?.best ? savedPointName(d, s.axes, s.results.best) : null;
           return (
             <Tr key={s.id}>
               <Td>
@@ -55,7 +56,7 @@ export function StudyList({ workspaceId, studies }: { workspaceId: string; studi
               <Td className="whitespace-nowrap">
                 {s.base.setupName ?? <span className="text-ink-faint">setup deleted</span>} <span className="figures text-ink-soft">r{s.base.revisionNumber}</span>
               </Td>
-              <Td className="text-ink-soft">{sweepWords(s.axes)}</Td>
+              <Td className="text-ink-soft">{sweepWords(s.axes, d)}</Td>
               <Td className="text-ink-soft">
                 {s.roadNames.join(', ')}
                 {s.speeds.length > 0 && <span className="figures"> · {listText(s.speeds, speedUnit)}</span>}

@@ -8,7 +8,7 @@ import { sweepValues } from '../../../../shared/study/expand.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, Select } from '../../../components/ui/field.tsx';
 import { Section } from '../../../components/ui/page-header.tsx';
-import { figureLabel, parameterLabel, parameterText } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { pointsCsv } from '../model/points-csv.ts';
 import { downloadText } from '../../../lib/download.ts';
 import type { StudyView } from '../model/study-view.ts';
@@ -42,6 +42,8 @@ export interface StudyResultsProps {
  */
 export function StudyResults({ view, roadNames, baselineIndex, pointActions, running = false, base }: StudyResultsProps) {
   const def = view.definition;
+  const d = useStudyDisplay();
+  const { figureLabel, parameterLabel } = d;
   const about = studyExportInfo(def.name, roadNames, def.speeds, base);
   const [selected, setSelected] = useState<number | null>(null);
   const present = useMemo(() => studyFigureKeys.filter((k) => view.points.some((p) => p.figures[k] !== undefined)), [view.points]);
@@ -53,7 +55,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
   const seeded = (def.seeds ?? 1) > 1;
   const c = view.compromise;
   const noFront = c && !c.ok && c.reason === 'no-feasible-point' ? c.explanation.slice(0, 2).join(' ') : null;
-  const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}));
+  const describe = (index: number) => (index === -1 ? 'the base setup' : describePoint(def.axes, view.points.find((p) => p.index === index)?.values ?? {}, d.parameterWords));
 
   return (
     <ChartExportProvider value={about}>
@@ -171,7 +173,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
           <Section
             title="All points"
             actions={
-              <Button size="sm" onClick={() => downloadText(pointsCsv(view), exportFileName(about.stem, 'points', 'csv'))}>
+              <Button size="sm" onClick={() => downloadText(pointsCsv(view, d), exportFileName(about.stem, 'points', 'csv'))}>
                 Export CSV
               </Button>
             }
@@ -187,6 +189,7 @@ export function StudyResults({ view, roadNames, baselineIndex, pointActions, run
 
 /** The value each swept parameter not on a chart is held at (a slice of the sweep). */
 function HoldFields({ axes, skip, holdAt, onHold }: { axes: StudyView['definition']['axes']; skip: readonly number[]; holdAt: readonly number[]; onHold: (axis: number, at: number) => void }) {
+  const { parameterLabel, parameterText } = useStudyDisplay();
   return (
     <>
       {axes.map((a, i) =>

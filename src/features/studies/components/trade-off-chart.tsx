@@ -3,10 +3,9 @@ import type uPlot from 'uplot';
 import { linearX } from '../../../components/charts/axes.ts';
 import { themedAxis } from '../../../components/charts/chart-theme.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../components/charts/uplot-chart.tsx';
-import { units } from '../../../lib/format.ts';
 import { studyFigureInfo } from '../../../../shared/study/figures.ts';
 import { tradeOffColumns } from '../model/chart-data.ts';
-import { figureUnit } from '../model/display.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import type { StudyView } from '../model/study-view.ts';
 
 export interface TradeOffChartProps {
@@ -29,7 +28,8 @@ const dot = (size: number, stroke: string, fill: string, width = 1.5): uPlot.Ser
  */
 export function TradeOffChart({ view, baselineIndex, selected, onSelect, describe }: TradeOffChartProps) {
   const theme = useChartTheme();
-  const cols = useMemo(() => tradeOffColumns(view, baselineIndex), [view, baselineIndex]);
+  const d = useStudyDisplay();
+  const cols = useMemo(() => tradeOffColumns(view, baselineIndex, d), [view, baselineIndex, d]);
   const colsRef = useRef(cols);
   colsRef.current = cols;
   const onSelectRef = useRef(onSelect);
@@ -39,8 +39,8 @@ export function TradeOffChart({ view, baselineIndex, selected, onSelect, describ
 
   const options = useMemo<ChartOptions>(() => {
     const noLine = () => null;
-    const cfUnit = units[figureUnit[cf]].symbol;
-    const gfUnit = units[figureUnit[gf]].symbol;
+    const cfUnit = d.figureSymbol(cf);
+    const gfUnit = d.figureSymbol(gf);
     const axisX = { ...themedAxis(theme, { label: `Comfort: ${studyFigureInfo[cf].label}`, unit: cfUnit }), stroke: theme.comfort };
     const axisY = { ...themedAxis(theme, { label: `Grip: ${studyFigureInfo[gf].label}`, unit: gfUnit, size: 60 }), stroke: theme.grip };
     /** Index of the point nearest the mouse, in pixels, within 24 px. */
@@ -127,7 +127,7 @@ export function TradeOffChart({ view, baselineIndex, selected, onSelect, describ
         ],
       },
     };
-  }, [theme, cf, gf]);
+  }, [theme, cf, gf, d]);
 
   const selectedCol = useMemo(() => cols.pointAt.map((p, i) => (p === selected ? (cols.feasible[i] ?? cols.infeasible[i] ?? cols.base[i]) : null)), [cols, selected]);
   const data = useMemo<uPlot.AlignedData>(() => [cols.x, cols.feasible, cols.infeasible, cols.front, cols.base, cols.best, cols.baseline, selectedCol], [cols, selectedCol]);

@@ -5,6 +5,8 @@ import type { StudyPointResult } from '../../../../shared/schemas/study-result.t
 import { evaluatePoint } from '../../../../shared/study/evaluate-point.ts';
 import { expandStudy, pointIndexOf } from '../../../../shared/study/expand.ts';
 import { figureLines, heatGrid, tradeOffColumns } from './chart-data.ts';
+import { chosenUnits } from '../../../lib/units/unit-table.ts';
+import { savedPointName, studyDisplay } from './display.ts';
 import { pointsCsv } from './points-csv.ts';
 import { studyView } from './study-view.ts';
 
@@ -86,7 +88,7 @@ describe('study chart data', () => {
   it('figure lines: one line per road and speed from the runs, the other axis held', () => {
     const l = figureLines(studyView(def, points, base, true), 'bodyAccelWkRms', 0, [0, 1], ['Class C lane']);
     expect(l.x).toEqual([0.5, 1, 1.5]);
-    expect(l.lines.map((x) => x.label)).toEqual(['Class C lane · 20 m/s', 'Class C lane · 30 m/s']);
+    expect(l.lines.map((x) => x.label)).toEqual(['Class C lane · 72 km/h', 'Class C lane · 108 km/h']);
     expect(l.lines[1].y[2]).toBeCloseTo((0.5 + 0.45 + 0.12) * 1.2, 12);
   });
 
@@ -97,7 +99,7 @@ describe('study chart data', () => {
     expect(rows[0]).toContain('time off the road [%]');
     expect(rows).toHaveLength(1 + 7);
     expect(rows[1][0]).toBe('base');
-    expect(rows[7].slice(0, 6)).toEqual(['5', 'damper ×1.50, spring rate 30 000 N/m', '1.5', '30', 'no', 'uses 95.0 % of the stroke on road 1 at 30 m/s (limit 90.0 %)']);
+    expect(rows[7].slice(0, 6)).toEqual(['5', 'damper ×1.50, spring rate 30.0\u2009N/mm', '1.5', '30', 'no', 'uses 95.0 % of the stroke on road 1 at 30 m/s (limit 90.0 %)']);
     const lift = rows[0].indexOf('time off the road [%]');
     expect(Number(rows[2][lift])).toBeCloseTo(0.1, 12);
     expect(rows.slice(2).filter((r) => r[rows[0].indexOf('best compromise')] === 'yes')).toHaveLength(1);
@@ -147,5 +149,43 @@ describe('study chart data', () => {
       expect(rows[0].slice(at + 1, at + 4)).toEqual(['Wk-weighted body acceleration, sd over seeds [m/s²]', 'Wk-weighted body acceleration, min over seeds [m/s²]', 'Wk-weighted body acceleration, max over seeds [m/s²]']);
       expect(rows[1].slice(at, at + 4).map(Number).map((x) => +x.toFixed(9))).toEqual([1.6, 0.1, 1.5, 1.7]);
     });
+  });
+
+  // 1 lbf/in = 4.4482216152605 N / 0.0254 m = 175.126835 N/m, 1 in = 0.0254 m, 1 mph = 0.44704 m/s (NIST SP 811, B.8)
+  const imperial = studyDisplay(chosenUnits({ damperVelocity: 'mm/s', rate: 'lbf/in', speed: 'mph', length: 'in' }));
+
+  it('in the chosen units: rates in lbf/in, travel and sag in in, damper speed in mm/s, road speed in mph; others unchanged', () => {
+    expect(imperial.parameterLabel('springRate')).toBe('spring rate [lbf/in]');
+    expect(imperial.parameterToDisplay('springRate', 17512.6835)).toBeCloseTo(100, 5);
+    expect(imperial.parameterToSI('tyreRate', 1000)).toBeCloseTo(175126.835, 2);
+    expect(imperial.parameterLabel('speed')).toBe('speed [mph]');
+    expect(imperial.parameterText('speed', 26.8224)).toBe('60.0');
+    expect(imperial.figureLabel('travelRms')).toBe('suspension travel RMS [in]');
+    expect(imperial.figureText('staticSag', 0.127)).toBe('5.00');
+    expect(imperial.figureLabel('damperVelocityRms')).toBe('damper speed RMS [mm/s]');
+    expect(imperial.figureToDisplay('damperVelocityRms', 0.25)).toBe(250);
+    expect(imperial.figureLabel('tyreLoadMin')).toBe('minimum tyre load [N]');
+    expect(imperial.parameterLabel('damperScale')).toBe('damper scale [×]');
+    expect(imperial.parameterWithUnit('reboundScale', 1.2)).toBe('×1.20');
+  });
+
+  it('names points, chart lines, heat-map axes and CSV headers in the chosen units, from the same SI results', () => {
+    const view = studyView(def, points, base, true, imperial);
+    const rows = Papa.parse<string[]>(pointsCsv(view, imperial).trim()).data;
+    expect(rows[0].slice(0, 4)).toEqual(['point', 'description', 'damper scale [×]', 'spring rate [lbf/in]']);
+    // 30 000 N/m ÷ 175.126835 N/m per lbf/in = 171.304 lbf/in
+    expect(rows[7][1]).toBe('damper ×1.50, spring rate 171\u2009lbf/in');
+    expect(Number(rows[7][3])).toBeCloseTo(171.30441, 4);
+    const grid = heatGrid(view, 'bodyAccelWkRms', undefined, imperial)!;
+    expect(grid.ys.map((y) => Number(y.toFixed(3)))).toEqual([114.203, 171.304]);
+    // 20 m/s ÷ 0.44704 = 44.7387 mph
+    expect(figureLines(view, 'bodyAccelWkRms', 0, [0, 1], ['Class C lane'], imperial).lines.map((l) => l.label)).toEqual(['Class C lane · 44.7 mph', 'Class C lane · 67.1 mph']);
+    expect(view.compromise?.ok && view.compromise.explanation.join(' ')).toMatch(/lbf\/in/);
+  });
+
+  it('names a saved point (baseline, best) from its sweep index in the chosen units, the stored words when the index is unknown', () => {
+    // point 5 of the 3 × 2 grid: damper ×1.50, spring 30 000 N/m
+    expect(savedPointName(imperial, def.axes, { pointIndex: 5, label: 'damper ×1.50, spring rate 30 000 N/m' })).toBe('damper ×1.50, spring rate 171\u2009lbf/in');
+    expect(savedPointName(imperial, def.axes, { pointIndex: 99, label: 'as stored' })).toBe('as stored');
   });
 });

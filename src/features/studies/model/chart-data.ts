@@ -2,7 +2,7 @@ import type { StudyFigureKey } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
 import { pointIndexOf, sweepValues } from '../../../../shared/study/expand.ts';
 import { meanAndSpread } from '../../../../shared/study/ensemble.ts';
-import { figureToDisplay, parameterToDisplay } from './display.ts';
+import { defaultStudyDisplay, type StudyDisplay } from './display.ts';
 import type { StudyView } from './study-view.ts';
 
 /**
@@ -32,7 +32,8 @@ export interface TradeOffColumns {
   range?: { xLo: (number | null)[]; xHi: (number | null)[]; yLo: (number | null)[]; yHi: (number | null)[] };
 }
 
-export function tradeOffColumns(view: StudyView, baselineIndex: number | null): TradeOffColumns {
+export function tradeOffColumns(view: StudyView, baselineIndex: number | null, d: StudyDisplay = defaultStudyDisplay): TradeOffColumns {
+  const { figureToDisplay } = d;
   const { comfortFigure: cf, gripFigure: gf } = view.definition;
   const frontIdx = new Set((view.tradeOff?.front ?? []).map((pos) => view.points[pos]?.index));
   const bestIdx = view.compromise?.ok ? view.points[view.compromise.winner]?.index : undefined;
@@ -59,11 +60,11 @@ export function tradeOffColumns(view: StudyView, baselineIndex: number | null): 
     best: pick((e) => e.p !== null && e.index === bestIdx),
     baseline: pick((e) => e.p !== null && e.index === baselineIndex),
     pointAt: entries.map((e) => e.index),
-    ...((view.definition.seeds ?? 1) > 1 ? { range: seedRanges(entries, cf, gf) } : {}),
+    ...((view.definition.seeds ?? 1) > 1 ? { range: seedRanges(entries, cf, gf, figureToDisplay) } : {}),
   };
 }
 
-function seedRanges(entries: readonly { of: StudyPointResult }[], cf: StudyFigureKey, gf: StudyFigureKey): NonNullable<TradeOffColumns['range']> {
+function seedRanges(entries: readonly { of: StudyPointResult }[], cf: StudyFigureKey, gf: StudyFigureKey, figureToDisplay: StudyDisplay['figureToDisplay']): NonNullable<TradeOffColumns['range']> {
   const side = (f: StudyFigureKey, sign: 1 | -1) =>
     entries.map(({ of }) => {
       const mean = of.figures[f];
@@ -100,7 +101,8 @@ export interface StudySlice {
 
 export const defaultSlice = (axisCount: number): StudySlice => ({ mapAxes: [0, Math.min(1, axisCount - 1)], along: 0, holdAt: Array.from({ length: axisCount }, () => 0) });
 
-export function heatGrid(view: StudyView, figure: StudyFigureKey, slice: StudySlice = defaultSlice(view.definition.axes.length)): HeatGrid | null {
+export function heatGrid(view: StudyView, figure: StudyFigureKey, slice: StudySlice = defaultSlice(view.definition.axes.length), d: StudyDisplay = defaultStudyDisplay): HeatGrid | null {
+  const { figureToDisplay, parameterToDisplay } = d;
   const axes = view.definition.axes;
   const [ax, ay] = slice.mapAxes;
   if (axes.length < 2 || ax === ay || !axes[ax] || !axes[ay]) return null;
@@ -147,7 +149,9 @@ export interface FigureLines {
   lines: { label: string; roadIndex: number; speed: number; y: (number | null)[]; lo?: (number | null)[]; hi?: (number | null)[] }[];
 }
 
-export function figureLines(view: StudyView, figure: StudyFigureKey, along: number, holdAt: readonly number[], roadNames: readonly string[]): FigureLines {
+export function figureLines(view: StudyView, figure: StudyFigureKey, along: number, holdAt: readonly number[], roadNames: readonly string[], d: StudyDisplay = defaultStudyDisplay): FigureLines {
+  const { figureToDisplay, parameterToDisplay } = d;
+  const speedUnit = d.units.speed;
   const axes = view.definition.axes;
   const alongAxis = axes[along] ? along : 0;
   const axis = axes[alongAxis];
@@ -163,7 +167,7 @@ export function figureLines(view: StudyView, figure: StudyFigureKey, along: numb
       const key = `${run.roadIndex}|${run.speed}`;
       let line = combos.get(key);
       if (!line) {
-        line = { label: `${roadNames[run.roadIndex] ?? `road ${run.roadIndex + 1}`} · ${+run.speed.toPrecision(3)} m/s`, roadIndex: run.roadIndex, speed: run.speed, y: values.map(() => null), samples: values.map(() => []) };
+        line = { label: `${roadNames[run.roadIndex] ?? `road ${run.roadIndex + 1}`} · ${+speedUnit.fromSI(run.speed).toPrecision(3)} ${speedUnit.symbol}`, roadIndex: run.roadIndex, speed: run.speed, y: values.map(() => null), samples: values.map(() => []) };
         combos.set(key, line);
       }
       const v = run.figures?.[figure];

@@ -3,7 +3,7 @@ import { writeCsv } from '../../../../shared/csv/write-csv.ts';
 import { studyFigureKeys } from '../../../../shared/schemas/study.ts';
 import type { StudyPointResult } from '../../../../shared/schemas/study-result.ts';
 import { describePoint } from '../../../../shared/study/describe-point.ts';
-import { figureLabel, figureToDisplay, parameterLabel, parameterToDisplay } from './display.ts';
+import { defaultStudyDisplay, type StudyDisplay } from './display.ts';
 import type { StudyView } from './study-view.ts';
 
 /**
@@ -13,7 +13,8 @@ import type { StudyView } from './study-view.ts';
  * numbers, full precision, so a spreadsheet can redo any sum. Over several road seeds each
  * figure (the mean over the seeds) is followed by its standard deviation, least and greatest.
  */
-export function pointsCsv(view: StudyView): string {
+export function pointsCsv(view: StudyView, d: StudyDisplay = defaultStudyDisplay): string {
+  const { figureLabel, figureToDisplay, parameterLabel, parameterToDisplay } = d;
   const { definition: def } = view;
   const present = studyFigureKeys.filter((k) => [view.base, ...view.points].some((p) => p?.figures[k] !== undefined));
   const scores = view.compromise?.ok ? view.compromise.scores : null;
@@ -41,8 +42,8 @@ export function pointsCsv(view: StudyView): string {
   };
   const row = (p: StudyPointResult, pos: number | null) => [
     p.index === -1 ? 'base' : p.index,
-    describePoint(def.axes, p.values),
-    ...def.axes.map((a) => (p.values[a.parameter] === undefined ? '' : parameterToDisplay(a.parameter, p.values[a.parameter]!))),
+    describePoint(def.axes, p.values, d.parameterWords),
+    ...def.axes.map((a) => (p.values[a.parameter] === undefined ? '' : Number(parameterToDisplay(a.parameter, p.values[a.parameter]!).toPrecision(12)))),
     p.feasible ? 'yes' : 'no',
     p.violations.map((v) => v.message).join('; '),
     pos !== null && scores?.[pos] != null ? csvNumber(scores[pos], FIGURE_DIGITS) : '',

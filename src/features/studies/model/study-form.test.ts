@@ -22,8 +22,8 @@ describe('study form', () => {
     expect(d.constraints.minTyreLoad).toBeUndefined();
   });
 
-  it('one axis when the second is off; speeds from a list; library roads with a seed', () => {
-    const v = { ...defaultFormValues('library:road-9'), setupId: 's', revision: '3', twoAxes: false, speeds: '15, 25 30', roads: [{ choice: 'library:road-9', seed: '42' }] };
+  it('one axis when the second is off; speeds from a list in km/h (1 km/h = 1/3.6 m/s, SI brochure); library roads with a seed', () => {
+    const v = { ...defaultFormValues('library:road-9'), setupId: 's', revision: '3', twoAxes: false, speeds: '54, 90 108', roads: [{ choice: 'library:road-9', seed: '42' }] };
     const d = StudyDefinition.parse(formToDefinition(v, ids));
     expect(d.axes).toHaveLength(1);
     expect(d.speeds).toEqual([15, 25, 30]);

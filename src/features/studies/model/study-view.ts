@@ -4,6 +4,7 @@ import type { StudyDefinition } from '../../../../shared/schemas/study.ts';
 type ViewedDefinition = Omit<StudyDefinition, 'base' | 'roads'> & { roads: ReadonlyArray<Pick<StudyDefinition['roads'][number], 'name' | 'seed' | 'source'>> };
 import type { StudyCompromise, StudyPointResult, StudyTradeOff } from '../../../../shared/schemas/study-result.ts';
 import { studyBestCompromise, studyTradeOff } from '../../../../shared/study/study-compromise.ts';
+import { defaultStudyDisplay, type StudyDisplay } from './display.ts';
 
 /**
  * What the study views draw: the points in sweep order and, once a run is over, the best
@@ -19,13 +20,14 @@ export interface StudyView {
   tradeOff: StudyTradeOff | null;
 }
 
-export function studyView(definition: ViewedDefinition, points: readonly StudyPointResult[], base: StudyPointResult | null, final: boolean): StudyView {
+/** `d` names the points in the compromise's sentences in the reader's units. */
+export function studyView(definition: ViewedDefinition, points: readonly StudyPointResult[], base: StudyPointResult | null, final: boolean, d: StudyDisplay = defaultStudyDisplay): StudyView {
   const sorted = [...points].sort((a, b) => a.index - b.index);
   return {
     definition,
     points: sorted,
     base,
-    compromise: final && sorted.length > 0 ? studyBestCompromise(definition, sorted, undefined, base) : null,
+    compromise: final && sorted.length > 0 ? studyBestCompromise(definition, sorted, d.parameterWords, base) : null,
     tradeOff: final ? studyTradeOff(definition, sorted, base) : null,
   };
 }

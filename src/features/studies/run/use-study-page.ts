@@ -6,6 +6,7 @@ import { useStudy } from '../api/get-study.ts';
 import { rememberStudy } from '../api/query-keys.ts';
 import { useSetStudyBaseline } from '../api/set-study-baseline.ts';
 import { useShareStudy } from '../api/share-study.ts';
+import { useStudyDisplay } from '../model/display.ts';
 import { studyView } from '../model/study-view.ts';
 import { prewarmStudyPool } from './study-pool.ts';
 import { useStudyRun } from './use-study-run.ts';
@@ -34,11 +35,12 @@ export function useStudyPage(opts: { workspaceId: string; studyId: string; canSa
   const running = state.phase === 'running' || state.phase === 'saving';
   const run = () => detail && start({ definition: detail.definition, baseSetup: detail.baseSetup, roads: detail.roads });
 
+  const display = useStudyDisplay();
   const view = useMemo(() => {
     if (!detail) return null;
-    if (state.phase !== 'idle') return studyView(detail.definition, state.points, state.base, state.phase === 'finished' || state.phase === 'saving');
-    return studyView(detail.definition, detail.points, detail.basePoint, true);
-  }, [detail, state.phase, state.points, state.base]);
+    if (state.phase !== 'idle') return studyView(detail.definition, state.points, state.base, state.phase === 'finished' || state.phase === 'saving', display);
+    return studyView(detail.definition, detail.points, detail.basePoint, true, display);
+  }, [detail, state.phase, state.points, state.base, display]);
   const roadNames = useMemo(() => (detail ? studyRoadNames(detail.definition, detail.roads) : []), [detail]);
 
   return { study, state, cancel, run, running, view, roadNames, baseline, share, remove, canStart: Boolean(detail) && canSave && state.phase === 'idle' };

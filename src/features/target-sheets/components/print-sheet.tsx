@@ -1,6 +1,7 @@
 import type { TargetSheet } from '../../../../shared/schemas/target-sheet.ts';
 import { sheetCautions } from '../../../../shared/target-sheet/cautions.ts';
 import { formatDateTime } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { BandPlot } from './band-plot.tsx';
 import { SheetIdentity } from './sheet-identity.tsx';
 import { TargetTable } from './target-table.tsx';
@@ -12,6 +13,7 @@ import './sheet-print.css';
  */
 export function PrintSheet({ sheet, workspaceId, printedAt }: { sheet: TargetSheet; workspaceId: string; printedAt: Date }) {
   const draft = sheet.status !== 'released';
+  const speedUnit = useUnits().damperVelocity;
   return (
     <article className="rw-sheet-paper" aria-label={`Printable sheet ${sheet.number}`}>
       <header className="mb-3 flex items-end justify-between gap-4 border-b-2 border-ink pb-2">
@@ -29,7 +31,7 @@ export function PrintSheet({ sheet, workspaceId, printedAt }: { sheet: TargetShe
       </div>
 
       <p className="rw-print-block mb-2">
-        Gas force <strong className="figures">{sheet.gasForce} N</strong> (static, at the ride position). Target forces exclude it. Piston speeds in m/s,
+        Gas force <strong className="figures">{sheet.gasForce} N</strong> (static, at the ride position). Target forces exclude it. Piston speeds in {speedUnit.symbol},
         forces in N; band = target ± max(tolerance × target, floor).
       </p>
 

@@ -1,21 +1,22 @@
 import { Link } from 'react-router';
 import type { TargetSheet } from '../../../../shared/schemas/target-sheet.ts';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
-import { formatDateTime } from '../../../lib/format.ts';
+import { type DisplayUnit, formatDateTime } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
 import { directionDifference, type PointDifference } from '../model/sheet-difference.ts';
 import { speedText } from './target-table.tsx';
 
 const n = (v: number) => String(Math.round(v * 10) / 10);
 const band = (s: PointDifference['before']) => (s ? `${n(s.lower)} – ${n(s.upper)}` : '—');
 
-function Direction({ title, rows, inForce, next }: { title: string; rows: PointDifference[]; inForce: string; next: string }) {
+function Direction({ title, rows, inForce, next, speedUnit }: { title: string; rows: PointDifference[]; inForce: string; next: string; speedUnit: DisplayUnit }) {
   return (
     <div className="min-w-0">
       <h4 className="mb-1 text-sm font-semibold">{title}</h4>
       <Table caption={`${title}: ${inForce} against ${next}`}>
         <THead>
           <tr>
-            <Th numeric>Speed [m/s]</Th>
+            <Th numeric>Speed [{speedUnit.symbol}]</Th>
             <Th numeric>In force [N]</Th>
             <Th numeric>Band in force [N]</Th>
             <Th numeric>This sheet [N]</Th>
@@ -26,7 +27,7 @@ function Direction({ title, rows, inForce, next }: { title: string; rows: PointD
         <TBody>
           {rows.map((r) => (
             <Tr key={r.velocity} className={r.changed ? 'font-semibold' : 'text-ink-soft'}>
-              <Td numeric>{speedText(r.velocity)}</Td>
+              <Td numeric>{speedText(r.velocity, speedUnit)}</Td>
               <Td numeric>{r.before ? n(r.before.force) : '—'}</Td>
               <Td numeric>{band(r.before)}</Td>
               <Td numeric>{r.after ? n(r.after.force) : '—'}</Td>
@@ -50,6 +51,7 @@ export function ReplacementDifference({ sheet, inForce, workspaceId }: { sheet: 
   const compression = directionDifference(inForce.compression, sheet.compression);
   const rebound = directionDifference(inForce.rebound, sheet.rebound);
   const changed = [...compression, ...rebound].filter((r) => r.changed).length;
+  const speedUnit = useUnits().damperVelocity;
   return (
     <section aria-label="Against the sheet in force" className="space-y-3">
       <p className="text-sm text-ink-soft">
@@ -68,8 +70,8 @@ export function ReplacementDifference({ sheet, inForce, workspaceId }: { sheet: 
         )}
       </p>
       <div className="grid gap-5 2xl:grid-cols-2">
-        <Direction title="Compression" rows={compression} inForce={inForce.number} next={sheet.number} />
-        <Direction title="Rebound" rows={rebound} inForce={inForce.number} next={sheet.number} />
+        <Direction title="Compression" rows={compression} inForce={inForce.number} next={sheet.number} speedUnit={speedUnit} />
+        <Direction title="Rebound" rows={rebound} inForce={inForce.number} next={sheet.number} speedUnit={speedUnit} />
       </div>
     </section>
   );

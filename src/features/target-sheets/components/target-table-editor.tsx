@@ -1,6 +1,6 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
-import { type Control, type FieldErrors, type Path, type UseFormRegister, useFieldArray, useForm, useWatch } from 'react-hook-form';
+import { toNestErrors } from '@hookform/resolvers';
+import { useMemo, useState } from 'react';
+import { type Control, type FieldErrors, type Path, type Resolver, type UseFormRegister, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { TargetSheetContent, type TargetPoint } from '../../../../shared/schemas/target-sheet.ts';
 import { sheetCautions } from '../../../../shared/target-sheet/cautions.ts';
 import { toleranceBand } from '../../../../shared/target-sheet/band.ts';
@@ -9,6 +9,9 @@ import { Field, FormError, Input, Textarea } from '../../../components/ui/field.
 import { Caution } from '../../../components/ui/notice.tsx';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
+import type { DisplayUnit } from '../../../lib/format.ts';
+import { useUnits } from '../../../lib/units/use-units.tsx';
+import { nextSpeedShown, sheetContentShown, sheetContentToSI, sheetIssueMessage } from '../model/sheet-units.ts';
 
 type Direction = 'compression' | 'rebound';
 const cell = 'h-7 px-1.5 text-sm figures text-right';
@@ -32,7 +35,8 @@ function messagesOf(errors: FieldErrors<TargetSheetContent>, direction: Directio
   if (Array.isArray(list)) {
     list.forEach((row, i) => {
       if (!row) return;
-      for (const [field, e] of Object.entries(row)) if (e && typeof e === 'object' && 'message' in e && e.message) out.push(`point ${i + 1}, ${field}: ${String(e.message)}`);
+      // the editor's own messages name their point; the server's are given one
+      for (const [field, e] of Object.entries(row)) if (e && typeof e === 'object' && 'message' in e && e.message) out.push(/ point \d+: /.test(String(e.message)) ? String(e.message) : `point ${i + 1}, ${field}: ${String(e.message)}`);
     });
   }
   return out;
@@ -43,11 +47,13 @@ function DirectionEditor({
   control,
   register,
   errors,
+  speedUnit,
 }: {
   direction: Direction;
   control: Control<TargetSheetContent>;
   register: UseFormRegister<TargetSheetContent>;
   errors: FieldErrors<TargetSheetContent>;
+  speedUnit: DisplayUnit;
 }) {
   const { fields, append, remove } = useFieldArray({ control, name: direction });
   const title = direction === 'compression' ? 'Compression' : 'Rebound';
@@ -70,7 +76,7 @@ function DirectionEditor({
       <Table caption={`${title} targets (editable)`}>
         <THead>
           <tr>
-            <Th numeric>Speed [m/s]</Th>
+            <Th numeric>Speed [{speedUnit.symbol}]</Th>
             <Th numeric>Target [N]</Th>
             <Th numeric>± [%]</Th>
             <Th numeric>Floor [N]</Th>
@@ -112,8 +118,7 @@ function DirectionEditor({
         className="mt-1"
         onClick={() => {
           const tail = last?.[last.length - 1];
-          const v = tail && Number.isFinite(tail.velocity) ? Math.round(tail.velocity * 1.5 * 1000) / 1000 : 0.1;
-          append({ velocity: v, force: tail?.force ?? 0, tolPct: tail?.tolPct ?? 10, floorN: tail?.floorN ?? 20 });
+          append({ velocity: nextSpeedShown(tail?.velocity, speedUnit), force: tail?.force ?? 0, tolPct: tail?.tolPct ?? 10, floorN: tail?.floorN ?? 20 });
         }}
       >
         Add a {title.toLowerCase()} point
@@ -132,11 +137,24 @@ export interface TargetTableEditorProps {
 
 /**
  * The editable target table: per direction the reference speeds, forces, ± % and floor of every
- * point (the band they give shown live), plus the gas force and notes. Checked with the shared
- * schema before it is sent; the server's field problems land on the same rows.
+ * point (the band they give shown live), plus the gas force and notes. Speeds are typed in the
+ * person's damper-velocity unit and sent in m/s. Checked with the shared schema before it is
+ * sent; the server's field problems land on the same rows.
  */
 export function TargetTableEditor({ initial, saving, onSave, reopens = false }: TargetTableEditorProps) {
   const [formError, setFormError] = useState('');
+  const speedUnit = useUnits().damperVelocity;
+  // The form holds speeds as shown; what reaches onSave is the SI body the schema accepted.
+  const resolver = useMemo<Resolver<TargetSheetContent>>(
+    () => async (values, _ctx, options) => {
+      const parsed = TargetSheetContent.safeParse(sheetContentToSI(values, speedUnit));
+      if (parsed.success) return { values: parsed.data, errors: {} };
+      const flat: Record<string, { type: string; message: string }> = {};
+      for (const issue of parsed.error.issues) flat[issue.path.map(String).join('.')] ??= { type: issue.code, message: sheetIssueMessage(issue, speedUnit) };
+      return { values: {}, errors: toNestErrors(flat as FieldErrors, options) };
+    },
+    [speedUnit],
+  );
   const {
     control,
     register,
@@ -144,13 +162,13 @@ export function TargetTableEditor({ initial, saving, onSave, reopens = false }: 
     setError,
     reset,
     formState: { errors, isDirty },
-  } = useForm<TargetSheetContent>({ resolver: zodResolver(TargetSheetContent), defaultValues: initial });
+  } = useForm<TargetSheetContent>({ resolver, defaultValues: sheetContentShown(initial, speedUnit) });
 
   const submit = handleSubmit(async (values) => {
     setFormError('');
     try {
       await onSave(values);
-      reset(values);
+      reset(sheetContentShown(values, speedUnit));
     } catch (e) {
       if (!isApiError(e)) return setFormError('Something went wrong. Try again.');
       for (const f of e.fields) setError(f.path as Path<TargetSheetContent>, { type: 'server', message: f.message });
@@ -161,8 +179,8 @@ export function TargetTableEditor({ initial, saving, onSave, reopens = false }: 
   return (
     <form onSubmit={submit} noValidate aria-label="Edit targets" className="space-y-4">
       <div className="grid gap-5 lg:grid-cols-2">
-        <DirectionEditor direction="compression" control={control} register={register} errors={errors} />
-        <DirectionEditor direction="rebound" control={control} register={register} errors={errors} />
+        <DirectionEditor direction="compression" control={control} register={register} errors={errors} speedUnit={speedUnit} />
+        <DirectionEditor direction="rebound" control={control} register={register} errors={errors} speedUnit={speedUnit} />
       </div>
       <div className="grid gap-4 md:grid-cols-[14rem_1fr]">
         <div>

@@ -1,10 +1,10 @@
 import type { TargetPoint } from '../../../../shared/schemas/target-sheet.ts';
 import { toleranceBand } from '../../../../shared/target-sheet/band.ts';
 import { Table, TBody, Td, Th, THead, Tr } from '../../../components/ui/table.tsx';
-import { type DisplayUnit, units } from '../../../lib/format.ts';
+import type { DisplayUnit } from '../../../lib/format.ts';
 import { useUnits } from '../../../lib/units/use-units.tsx';
 /** A piston speed as the team typed it (0.025, not 0.0250), in `unit`. */
-export const speedText = (v: number, unit: DisplayUnit = units.mps) => String(Number(unit.fromSI(v).toPrecision(4)));
+export const speedText = (v: number, unit: DisplayUnit) => String(Number(unit.fromSI(v).toPrecision(4)));
 
 /**
  * One direction's reference points, read-only: speed, target, tolerance, floor and the band

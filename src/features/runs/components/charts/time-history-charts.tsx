@@ -5,6 +5,8 @@ import { themedAxis, themedSeries } from '../../../../components/charts/chart-th
 import { syncedCursor } from '../../../../components/charts/sync.ts';
 import { type ChartOptions, UChart, useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
 import type { Setup } from '../../../../../shared/schemas/setup.ts';
+import type { DisplayUnit } from '../../../../lib/format.ts';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import type { DrawnTraces } from '../../model/run-view.ts';
 import { ChartCard } from './chart-card.tsx';
 import { refLinesHook, type RefLine } from './draw-hooks.ts';
@@ -19,17 +21,18 @@ interface Lane {
   refs: (setup: Setup, staticLoad: number, t: ReturnType<typeof useChartTheme>) => RefLine[];
 }
 
-const lanes: Lane[] = [
+/** The four lanes, travel and road in the person's length unit (`length`). */
+const lanesIn = (length: DisplayUnit): Lane[] => [
   { key: 'bodyAccel', title: 'Body acceleration', unit: 'm/s²', scale: 1, colorOf: (t) => t.comfort, refs: () => [] },
   {
     key: 'travel',
     title: 'Travel',
-    unit: 'mm',
-    scale: 1000,
+    unit: length.symbol,
+    scale: length.fromSI(1),
     colorOf: (t) => t.ink,
     refs: (s, _l, t) => [
-      ...(s.bumpStop ? [{ axis: 'y' as const, value: s.bumpStop.clearance * 1000, color: t.signal }] : []),
-      ...(s.reboundStop ? [{ axis: 'y' as const, value: -s.reboundStop.clearance * 1000, color: t.signal }] : []),
+      ...(s.bumpStop ? [{ axis: 'y' as const, value: length.fromSI(s.bumpStop.clearance), color: t.signal }] : []),
+      ...(s.reboundStop ? [{ axis: 'y' as const, value: -length.fromSI(s.reboundStop.clearance), color: t.signal }] : []),
     ],
   },
   {
@@ -43,7 +46,7 @@ const lanes: Lane[] = [
       { axis: 'y', value: 0, color: t.signal },
     ],
   },
-  { key: 'road', title: 'Road', unit: 'mm', scale: 1000, colorOf: (t) => t.inkSoft, refs: () => [] },
+  { key: 'road', title: 'Road', unit: length.symbol, scale: length.fromSI(1), colorOf: (t) => t.inkSoft, refs: () => [] },
 ];
 
 /**
@@ -53,6 +56,8 @@ const lanes: Lane[] = [
  */
 export function TimeHistoryCharts({ traces, setup, staticLoad, settleTime, syncKey = 'rw-run-time' }: { traces: DrawnTraces; setup: Setup; staticLoad: number; settleTime: number; syncKey?: string }) {
   const theme = useChartTheme();
+  const length = useUnits().length;
+  const lanes = useMemo(() => lanesIn(length), [length]);
   const charts = useRef<(uPlot | null)[]>([]);
   const syncing = useRef(false);
 
@@ -81,10 +86,10 @@ export function TimeHistoryCharts({ traces, setup, staticLoad, settleTime, syncK
           },
         };
       }),
-    [theme, setup, staticLoad, settleTime, syncKey],
+    [theme, setup, staticLoad, settleTime, syncKey, lanes],
   );
 
-  const data = useMemo(() => lanes.map((lane): uPlot.AlignedData => [traces.time, lane.scale === 1 ? traces[lane.key] : traces[lane.key].map((v) => v * lane.scale)]), [traces]);
+  const data = useMemo(() => lanes.map((lane): uPlot.AlignedData => [traces.time, lane.scale === 1 ? traces[lane.key] : traces[lane.key].map((v) => v * lane.scale)]), [traces, lanes]);
 
   useEffect(() => () => void (charts.current = []), []);
 

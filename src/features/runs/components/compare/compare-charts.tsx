@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import { seriesColor } from '../../../../components/charts/chart-theme.ts';
 import { useChartTheme } from '../../../../components/charts/uplot-chart.tsx';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import type { ComparedRun } from '../../model/compare.ts';
 import { ChartCard } from '../charts/chart-card.tsx';
 import { DamperOperatingChart } from '../charts/damper-operating-chart.tsx';
@@ -13,14 +14,15 @@ const scaled = (x: Float64Array, k: number) => (k === 1 ? x : x.map((v) => v * k
 /** Damper curves, responses, time histories and spectra of every compared run, one colour each. */
 export function CompareCharts({ runs }: { runs: ComparedRun[] }) {
   const theme = useChartTheme();
+  const length = useUnits().length;
   const curves = useMemo(() => runs.map((r) => ({ label: r.label, color: seriesColor(theme, r.slot), damper: r.view.setup.damper })), [runs, theme]);
   const responses = useMemo(() => runs.map((r) => ({ label: r.label, color: seriesColor(theme, r.slot), response: r.view.response })), [runs, theme]);
   const vMax = useMemo(() => Math.max(0.3, ...runs.map((r) => r.view.traces.damperVelocity.reduce((a, v) => Math.max(a, Math.abs(v)), 0) * 1.15)), [runs]);
 
   const lanes = useMemo(() => {
     const lane = (key: 'bodyAccel' | 'travel' | 'tyreLoad', k: number): OverlayLine[] => runs.map((r) => ({ label: r.label, slot: r.slot, x: r.view.traces.time, y: scaled(r.view.traces[key], k) }));
-    return { accel: lane('bodyAccel', 1), travel: lane('travel', 1000), load: lane('tyreLoad', 1) };
-  }, [runs]);
+    return { accel: lane('bodyAccel', 1), travel: lane('travel', length.fromSI(1)), load: lane('tyreLoad', 1) };
+  }, [runs, length]);
   const spectra = useMemo(() => {
     const psd = (key: 'bodyAccel' | 'tyreLoad'): OverlayLine[] =>
       runs.flatMap((r) => {
@@ -42,7 +44,7 @@ export function CompareCharts({ runs }: { runs: ComparedRun[] }) {
       </div>
       <ChartCard title="Time histories" detail="Drag to zoom; the cursor is shared. Dashed: each run minus the reference (the first run), so zero means no change. Saved runs show their stored (thinned) traces.">
         <OverlayChart lines={lanes.accel} xLabel="Time" xUnit="s" yLabel="Body acceleration" yUnit="m/s²" syncKey="rw-compare-time" difference exportName="compare-body-accel" />
-        <OverlayChart lines={lanes.travel} xLabel="Time" xUnit="s" yLabel="Travel (+ compression)" yUnit="mm" syncKey="rw-compare-time" difference exportName="compare-travel" />
+        <OverlayChart lines={lanes.travel} xLabel="Time" xUnit="s" yLabel="Travel (+ compression)" yUnit={length.symbol} syncKey="rw-compare-time" difference exportName="compare-travel" />
         <OverlayChart lines={lanes.load} xLabel="Time" xUnit="s" yLabel="Tyre load" yUnit="N" syncKey="rw-compare-time" difference exportName="compare-tyre-load" />
       </ChartCard>
       <ChartCard title="Spectra" detail="Welch PSD of the analysed part, log axes.">

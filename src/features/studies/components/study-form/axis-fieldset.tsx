@@ -1,6 +1,6 @@
 import { studyParameters, type StudyParameter } from '../../../../../shared/schemas/study.ts';
 import { Field, Input, Select } from '../../../../components/ui/field.tsx';
-import { parameterLabel } from '../../model/display.ts';
+import { useStudyDisplay } from '../../model/display.ts';
 import type { Setup } from '../../../../../shared/schemas/setup.ts';
 import { startingRange } from '../../model/study-form.ts';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
@@ -11,6 +11,7 @@ const ordinal = ['First', 'Second', 'Third', 'Fourth'];
 export function AxisFieldset({ index: i, base }: { index: number; base: Setup | undefined }) {
   const { register, setValue } = useStudyFormContext();
   const e = useFieldError();
+  const display = useStudyDisplay();
   return (
     <fieldset className="rounded border border-rule p-3" aria-label={`${ordinal[i]} swept parameter`}>
       <legend className="px-1 text-sm font-semibold">{i === 0 ? 'Swept parameter' : `${ordinal[i]} swept parameter`}</legend>
@@ -18,7 +19,7 @@ export function AxisFieldset({ index: i, base }: { index: number; base: Setup | 
         <Select
           {...register(`axes.${i}.parameter`, {
             onChange: (ev: React.ChangeEvent<HTMLSelectElement>) => {
-              const d = startingRange(ev.target.value as StudyParameter, base);
+              const d = startingRange(ev.target.value as StudyParameter, base, display);
               setValue(`axes.${i}.from`, d.from);
               setValue(`axes.${i}.to`, d.to);
               setValue(`axes.${i}.steps`, d.steps);
@@ -27,7 +28,7 @@ export function AxisFieldset({ index: i, base }: { index: number; base: Setup | 
         >
           {studyParameters.map((p) => (
             <option key={p} value={p}>
-              {parameterLabel(p)}
+              {display.parameterLabel(p)}
             </option>
           ))}
         </Select>

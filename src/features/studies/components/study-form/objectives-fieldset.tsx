@@ -3,7 +3,7 @@ import { studyFigureKeys, type StudyFigureKey } from '../../../../../shared/sche
 import { studyFigureInfo } from '../../../../../shared/study/figures.ts';
 import { Button } from '../../../../components/ui/button.tsx';
 import { Field, FormError, Input, Select } from '../../../../components/ui/field.tsx';
-import { figureLabel } from '../../model/display.ts';
+import { useStudyDisplay } from '../../model/display.ts';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
 
 const comfortChoices = studyFigureKeys.filter((k) => studyFigureInfo[k].family === 'comfort');
@@ -18,6 +18,7 @@ export function ObjectivesFieldset({ taken }: { taken: (StudyFigureKey | undefin
   const { register, control } = useStudyFormContext();
   const objectives = useFieldArray({ control, name: 'objectives' });
   const e = useFieldError();
+  const { figureLabel } = useStudyDisplay();
   return (
     <fieldset className="rounded border border-rule p-3" aria-label="Judge by">
       <legend className="px-1 text-sm font-semibold">Judge by</legend>

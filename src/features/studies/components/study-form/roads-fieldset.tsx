@@ -3,6 +3,7 @@ import type { RoadListItem } from '../../../../../shared/schemas/road-record.ts'
 import { isoClasses } from '../../../../../shared/schemas/road.ts';
 import { Button } from '../../../../components/ui/button.tsx';
 import { Field, Input, Select } from '../../../../components/ui/field.tsx';
+import { useUnits } from '../../../../lib/units/use-units.tsx';
 import { useFieldError, useStudyFormContext } from './field-error.ts';
 
 /** Roads from the library or generated, their seeds, the speeds, run length and how they combine. */
@@ -10,6 +11,7 @@ export function RoadsFieldset({ libraryRoads, firstRoad, sweptSpeed }: { library
   const { register, control } = useStudyFormContext();
   const roadRows = useFieldArray({ control, name: 'roads' });
   const e = useFieldError();
+  const speed = useUnits().speed;
   return (
     <fieldset className="rounded border border-rule p-3" aria-label="Roads and speeds">
       <legend className="px-1 text-sm font-semibold">Roads and speeds</legend>
@@ -53,7 +55,7 @@ export function RoadsFieldset({ libraryRoads, firstRoad, sweptSpeed }: { library
         )}
       </div>
       <div className="mt-3 flex flex-wrap gap-3">
-        <Field label="Speeds [m/s]" hint={sweptSpeed ? 'speed is swept' : '20 m/s = 72 km/h; separate several with commas'} error={e('speeds')} className="w-64">
+        <Field label={`Speeds [${speed.symbol}]`} hint={sweptSpeed ? 'speed is swept' : 'separate several with commas'} error={e('speeds')} className="w-64">
           <Input {...register('speeds')} disabled={sweptSpeed} />
         </Field>
         <Field label="Run length [s]" error={e('duration')} className="w-32">
