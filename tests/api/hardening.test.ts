@@ -14,6 +14,7 @@ import { peaksCsv } from './helpers/road-dyno-fixtures.ts';
 import { sendAs } from './helpers/route-matrix.ts';
 import { createRoleWorld } from './helpers/role-world.ts';
 import { cornerDocument, freshSetup } from './helpers/setup-fixtures.ts';
+import { memoryFleetQueue } from './helpers/memory-fleet-queue.ts';
 import { createTestApp, type TestApp } from './helpers/test-app.ts';
 import { allEntries } from './matrix/all-entries.ts';
 
@@ -21,7 +22,8 @@ import { allEntries } from './matrix/all-entries.ts';
 // (read from the route registry, so a route added later is covered or fails here).
 
 async function withApp<T>(overrides: Parameters<typeof createTestApp>[0], body: (t: TestApp) => Promise<T>): Promise<T> {
-  const t = await createTestApp(overrides);
+  // the team-workers routes answer as they would with Redis (the real queue is tested in tests/fleet/)
+  const t = await createTestApp({ fleet: memoryFleetQueue(), ...overrides });
   try {
     return await body(t);
   } finally {

@@ -10,6 +10,7 @@ import { migrateToLatest } from '../../../server/db/migrator.ts';
 import type { AppOptions } from '../../../server/deps.ts';
 import type { Mailer } from '../../../server/mail/mailer.ts';
 import { type TestApp, testClock } from '../../api/helpers/test-app.ts';
+import { memoryFleetQueue } from '../../api/helpers/memory-fleet-queue.ts';
 
 /** The app under fuzzing, with the raw SQLite handle for checksums. */
 export interface FuzzApp extends TestApp {
@@ -50,6 +51,8 @@ export async function createFuzzApp(overrides: Partial<AppOptions> = {}): Promis
     // Fuzzing sends hundreds of uploads as one person; the per-person limits have their own tests.
     heavyJobs: { atOnce: 0, perWindow: 0 },
     openSignUp: true,
+    // the team-workers routes answer as they would with Redis (the real queue is tested in tests/fleet/)
+    fleet: memoryFleetQueue(),
     ...overrides,
   });
   const server: Server = await new Promise((resolve) => {
