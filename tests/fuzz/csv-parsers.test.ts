@@ -7,6 +7,7 @@ import { parseDynoCsv } from '../../shared/dyno/parse-dyno-csv.ts';
 import { summariseDyno } from '../../shared/dyno-upload/summarise-dyno.ts';
 import { DynoParseResult } from '../../shared/schemas/dyno.ts';
 import { parseMeasuredCsv } from '../../shared/sim/roads/measured-csv.ts';
+import { parseDriveCsv } from '../../shared/drive/parse-drive-csv.ts';
 import { fuzzSeed, fuzzTally } from './helpers/fuzz-record.ts';
 import { csvGarbage, dressed, type Dressing, dressings, textOfBytes } from './helpers/csv-text.ts';
 
@@ -22,7 +23,7 @@ afterAll(() => tally.write({ seed }));
 
 const root = join(import.meta.dirname, '../..');
 /** The files fuzzed here; a CSV reader added elsewhere fails the first test until it is listed. */
-const covered = ['shared/dyno/csv-rows.ts', 'shared/dyno/parse-dyno-csv.ts', 'shared/sim/roads/measured-csv.ts'];
+const covered = ['shared/dyno/csv-rows.ts', 'shared/dyno/parse-dyno-csv.ts', 'shared/sim/roads/measured-csv.ts', 'shared/drive/parse-drive-csv.ts'];
 
 function sourceFiles(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {
@@ -71,6 +72,14 @@ const readers: Reader[] = [
       const r = parseMeasuredCsv(text, { maxRows: 20_000 });
       if (!r.ok) return { ok: false, lines: r.issues.map((i) => (i.path.startsWith('line ') ? Number(i.path.slice(5)) : undefined)), messages: [r.reason], numbers: [] };
       return { ok: true, lines: [], messages: [], numbers: r.profile.points.flat().concat([r.profile.length, r.profile.medianSpacing]) };
+    },
+  },
+  {
+    name: 'parseDriveCsv',
+    read: (text) => {
+      const r = parseDriveCsv(text, 20_000);
+      if (!r.ok) return { ok: false, lines: r.errors.map((e) => e.line), messages: r.errors.map((e) => e.message), numbers: [] };
+      return { ok: true, lines: [], messages: [], numbers: [r.data.dt, ...r.data.speed, ...Object.values(r.data.channels).flat()] };
     },
   },
 ];
@@ -162,6 +171,29 @@ describe('CSV readers', () => {
         expect(other.ok, JSON.stringify(dress)).toBe(true);
         if (plain.ok && other.ok) expect(other.profile.points).toEqual(plain.profile.points);
         tally.add('parseMeasuredCsv dressed');
+      }),
+      { numRuns: RUNS, seed },
+    );
+  });
+
+  /** A valid drive log: time rising at a steady rate, speed and body acceleration in their units. */
+  const driveFile = fc
+    .record({ rate: fc.constantFrom(100, 200, 500), n: fc.integer({ min: 20, max: 200 }), v: fc.double({ min: 1, max: 40, noNaN: true }) })
+    .map(({ rate, n, v }) => ['time [s],speed [m/s],body acceleration [m/s^2]', ...Array.from({ length: n }, (_, i) => `${(i / rate).toFixed(4)},${v.toFixed(3)},${Math.sin(i / 5).toFixed(4)}`)]);
+
+  it('drive logs: a spoiled number is reported at its line', () => {
+    fc.assert(
+      fc.property(driveFile, fc.nat(), fc.constantFrom('abc', '1..2', '--5', '1e999', 'NaN', '0x1F'), (lines, pick, bad) => {
+        expect(parseDriveCsv(`${lines.join('\n')}\n`).ok).toBe(true);
+        const row = 1 + (pick % (lines.length - 1));
+        const cells = lines[row].split(',');
+        cells[2] = bad;
+        const spoiled = [...lines];
+        spoiled[row] = cells.join(',');
+        const r = parseDriveCsv(`${spoiled.join('\n')}\n`);
+        expect(r.ok).toBe(false);
+        if (!r.ok) expect(r.errors.map((e) => e.line)).toContain(row + 1);
+        tally.add('parseDriveCsv spoiled line');
       }),
       { numRuns: RUNS, seed },
     );
