@@ -21,7 +21,8 @@ afterAll(async () => {
 async function openBench(page: Page, name: string) {
   await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
   await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Corners' }).click();
-  await page.getByRole('table', { name: 'Corner setups' }).getByRole('link', { name, exact: true }).click();
+  // other files on this worker's database may have made a setup of the same name: any one will do
+  await page.getByRole('table', { name: 'Corner setups' }).getByRole('link', { name, exact: true }).first().click();
   await page.waitForURL(/\/corners\/[0-9a-f-]{36}$/);
   await page.getByTestId('damper-curve-editor').waitFor();
   return new URL(page.url()).pathname;
