@@ -35,8 +35,11 @@ describe('drive fit', () => {
     await signIn(page, (await demoUser(baseUrl, 'engineer')).email);
     const workspaceId = new URL(page.url()).pathname.split('/')[2];
     const ws = `/api/workspaces/${workspaceId}`;
-    // The example corner (the drawing) and the invented lane the example drive was made over.
-    const setup = SetupDetail.parse(await (await apiWrite(session, 'POST', `${ws}/setups`, { setup: JSON.parse(example('pipit-front.setup.json').toString()) })).json());
+    // The example corner (the drawing) under a name of its own, so tests that pick the demo's
+    // "Brume Pipit front, baseline" by name never meet this copy, and the invented lane the
+    // example drive was made over.
+    const corner = { ...JSON.parse(example('pipit-front.setup.json').toString()), name: 'Pipit front for the drive fit' };
+    const setup = SetupDetail.parse(await (await apiWrite(session, 'POST', `${ws}/setups`, { setup: corner })).json());
     const road = await page.request.post(`${ws}/roads/measured`, {
       headers: { 'x-csrf-token': await csrfToken(context) },
       multipart: { name: 'Tallis test lane', distanceUnit: 'm', elevationUnit: 'mm', file: { name: 'tallis-lane.csv', mimeType: 'text/csv', buffer: example('tallis-lane.csv') } },

@@ -37,7 +37,8 @@ describe('seed ensembles in the browser', () => {
     await form.getByRole('button', { name: 'Sweep a third parameter' }).click();
     await axis('Third swept parameter', 'tyreRate', '180', '260');
     await form.getByLabel('Road 1').selectOption('iso:C');
-    await form.getByLabel('Speeds [m/s]').fill('20');
+    // the form shows speeds in the person's unit, km/h by default: 72 km/h = 20 m/s
+    await form.getByLabel('Speeds [km/h]').fill('72');
     await form.getByLabel('Run length [s]').fill('10');
     await form.getByLabel('Road seeds per point').fill('3');
     // 8 points × 3 seeds, and the base setup's 3 runs.
