@@ -28,25 +28,40 @@ export type EquivalentDampingChoice = z.infer<typeof EquivalentDampingChoice>;
 export const IntegratorName = z.enum(['rk4', 'odex']);
 export type IntegratorName = z.infer<typeof IntegratorName>;
 
+/** What every run drives: a road at a speed for a time (a corner run and a vehicle run alike). */
+export const runScenarioFields = {
+  road: Road,
+  /** Vehicle speed, m/s. */
+  speed: metersPerSecond.positive().max(100),
+  /** Simulated time, s. */
+  duration: seconds.positive().max(600),
+  /** Replaces the seed of an ISO 8608 road (ignored by other roads). */
+  seed: z.number().int().min(0).max(4294967295).optional(),
+  /**
+   * Start of the analysed part, s. Default: 2 s (at most a quarter of the run) for random,
+   * sine and measured roads, which start with a transient; 0 for events and sweeps, which
+   * start from rest on a flat road.
+   */
+  settleTime: seconds.nonnegative().optional(),
+  /** Output sample rate, Hz; default 500 (Wk weighting reaches 80 Hz). */
+  outputRate: hertz.min(200).max(5000).optional(),
+};
+
+/** The checks across the scenario's fields: the analysed part inside the run, a bounded output. */
+export function checkRunScenario(r: { settleTime?: number; duration: number; outputRate?: number }, ctx: z.RefinementCtx): void {
+  if (r.settleTime !== undefined && r.settleTime >= r.duration) {
+    ctx.addIssue({ code: 'custom', path: ['settleTime'], message: 'settleTime must be shorter than the run' });
+  }
+  if (r.duration * (r.outputRate ?? 500) > 2_000_000) {
+    ctx.addIssue({ code: 'custom', path: ['duration'], message: 'at most 2 000 000 output samples per run (duration × outputRate)' });
+  }
+}
+
 /** One simulation: a setup driven over a road at a speed. */
 export const RunRequest = z
   .strictObject({
     setup: Setup,
-    road: Road,
-    /** Vehicle speed, m/s. */
-    speed: metersPerSecond.positive().max(100),
-    /** Simulated time, s. */
-    duration: seconds.positive().max(600),
-    /** Replaces the seed of an ISO 8608 road (ignored by other roads). */
-    seed: z.number().int().min(0).max(4294967295).optional(),
-    /**
-     * Start of the analysed part, s. Default: 2 s (at most a quarter of the run) for random,
-     * sine and measured roads, which start with a transient; 0 for events and sweeps, which
-     * start from rest on a flat road.
-     */
-    settleTime: seconds.nonnegative().optional(),
-    /** Output sample rate, Hz; default 500 (Wk weighting reaches 80 Hz). */
-    outputRate: hertz.min(200).max(5000).optional(),
+    ...runScenarioFields,
     /** Integration method; default `rk4`. */
     integrator: IntegratorName.optional(),
     /** odex's relative tolerance; default 1e-4 (absolute tolerances scale with it). */
@@ -59,14 +74,9 @@ export const RunRequest = z
     histogramBins: z.number().int().min(4).max(400).optional(),
   })
   .superRefine((r, ctx) => {
-    if (r.settleTime !== undefined && r.settleTime >= r.duration) {
-      ctx.addIssue({ code: 'custom', path: ['settleTime'], message: 'settleTime must be shorter than the run' });
-    }
+    checkRunScenario(r, ctx);
     if (r.velocityBands && r.velocityBands.low >= r.velocityBands.high) {
       ctx.addIssue({ code: 'custom', path: ['velocityBands', 'high'], message: 'the high band edge must be above the low one' });
-    }
-    if (r.duration * (r.outputRate ?? 500) > 2_000_000) {
-      ctx.addIssue({ code: 'custom', path: ['duration'], message: 'at most 2 000 000 output samples per run (duration × outputRate)' });
     }
   });
 export type RunRequest = z.infer<typeof RunRequest>;

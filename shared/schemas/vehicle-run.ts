@@ -1,32 +1,11 @@
 import { z } from 'zod';
-import { hertz, metersPerSecond, seconds } from '../units.ts';
 import { ComfortGrading } from './metrics.ts';
 import { ModeFigures } from './modal.ts';
-import { Road } from './road.ts';
-import { RoadSummary, RunTiming } from './run.ts';
+import { checkRunScenario, RoadSummary, RunTiming, runScenarioFields } from './run.ts';
 import { VehicleSetup } from './vehicle-setup.ts';
 
 /** One run of the pitch-plane vehicle over a road at a speed (rk4, the corner's default method). */
-export const VehicleRunRequest = z
-  .strictObject({
-    vehicle: VehicleSetup,
-    road: Road,
-    speed: metersPerSecond.positive().max(100),
-    duration: seconds.positive().max(600),
-    /** Replaces the seed of an ISO 8608 road. */
-    seed: z.number().int().min(0).max(4294967295).optional(),
-    /** Start of the analysed part, s; default as for a corner run (2 s, at most a quarter, on random, sine and measured roads; 0 on events). */
-    settleTime: seconds.nonnegative().optional(),
-    outputRate: hertz.min(200).max(5000).optional(),
-  })
-  .superRefine((r, ctx) => {
-    if (r.settleTime !== undefined && r.settleTime >= r.duration) {
-      ctx.addIssue({ code: 'custom', path: ['settleTime'], message: 'settleTime must be shorter than the run' });
-    }
-    if (r.duration * (r.outputRate ?? 500) > 2_000_000) {
-      ctx.addIssue({ code: 'custom', path: ['duration'], message: 'at most 2 000 000 output samples per run (duration × outputRate)' });
-    }
-  });
+export const VehicleRunRequest = z.strictObject({ vehicle: VehicleSetup, ...runScenarioFields }).superRefine(checkRunScenario);
 export type VehicleRunRequest = z.infer<typeof VehicleRunRequest>;
 export type VehicleRunRequestInput = z.input<typeof VehicleRunRequest>;
 
