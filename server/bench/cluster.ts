@@ -20,7 +20,7 @@ import { openFleetQueue } from '../fleet/index.ts';
 import { startFleetRun } from '../fleet/fleet.service.ts';
 import { createStudy } from '../studies/studies.service.ts';
 import { Setup } from '../../shared/schemas/setup.ts';
-import { startRedis, startWorker, type WorkerProcess } from './fleet-processes.ts';
+import { demoEngineerRevision, startRedis, startWorker, type WorkerProcess } from './fleet-processes.ts';
 
 const arg = (name: string, fallback: number) => {
   const i = process.argv.indexOf(name);
@@ -42,15 +42,7 @@ try {
   const migrated = await migrateToLatest(db);
   if (migrated.error) throw migrated.error;
   await seedDemo(db);
-  const rev = await db
-    .selectFrom('setup_revision as r')
-    .innerJoin('setup as s', 's.id', 'r.setup_id')
-    .innerJoin('membership as m', 'm.workspace_id', 's.workspace_id')
-    .innerJoin('user as u', 'u.id', 'm.user_id')
-    .select(['r.id as revisionId', 'r.setup_id as setupId', 'r.document', 's.workspace_id as workspaceId', 'u.id as userId', 'u.name as userName'])
-    .where('m.role', '=', 'engineer')
-    .orderBy('r.created_at')
-    .executeTakeFirstOrThrow();
+  const rev = await demoEngineerRevision(db);
   const side = Math.round(Math.sqrt(POINTS));
   const def = (name: string) =>
     StudyDefinition.parse({

@@ -16,7 +16,7 @@ import { seedDemo } from '../db/seed/seed-demo.ts';
 import { openFleetQueue } from '../fleet/index.ts';
 import { cancelFleetRun, startFleetRun } from '../fleet/fleet.service.ts';
 import { createStudy, getStudyJson } from '../studies/studies.service.ts';
-import { startRedis, startWorker, type WorkerProcess } from './fleet-processes.ts';
+import { demoEngineerRevision, startRedis, startWorker, type WorkerProcess } from './fleet-processes.ts';
 
 const arg = (name: string, fallback: number) => {
   const i = process.argv.indexOf(name);
@@ -39,15 +39,7 @@ try {
   const migrated = await migrateToLatest(db);
   if (migrated.error) throw migrated.error;
   await seedDemo(db);
-  const rev = await db
-    .selectFrom('setup_revision as r')
-    .innerJoin('setup as s', 's.id', 'r.setup_id')
-    .innerJoin('membership as m', 'm.workspace_id', 's.workspace_id')
-    .innerJoin('user as u', 'u.id', 'm.user_id')
-    .select(['r.id as revisionId', 'r.setup_id as setupId', 's.workspace_id as workspaceId', 'u.id as userId', 'u.name as userName'])
-    .where('m.role', '=', 'engineer')
-    .orderBy('r.created_at')
-    .executeTakeFirstOrThrow();
+  const rev = await demoEngineerRevision(db);
   const ws = { workspaceId: rev.workspaceId };
   const actor = { id: rev.userId, name: rev.userName };
   const across = Math.round(Math.sqrt(POINTS * 1.25));

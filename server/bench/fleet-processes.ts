@@ -1,6 +1,7 @@
 import { type ChildProcess, spawn } from 'node:child_process';
 import { createServer } from 'node:net';
 import { fileURLToPath } from 'node:url';
+import type { Queryable } from '../db/database.ts';
 
 /** A free TCP port on loopback (asked of the OS, then released). */
 export function freePort(): Promise<number> {
@@ -101,4 +102,20 @@ export async function startWorker(env: Record<string, string>): Promise<WorkerPr
       await exited(child);
     },
   };
+}
+
+/**
+ * The demo's first setup revision, its workspace and an engineer of it: what the fleet benches
+ * make their study from, on a database just seeded with the demo.
+ */
+export function demoEngineerRevision(db: Queryable) {
+  return db
+    .selectFrom('setup_revision as r')
+    .innerJoin('setup as s', 's.id', 'r.setup_id')
+    .innerJoin('membership as m', 'm.workspace_id', 's.workspace_id')
+    .innerJoin('user as u', 'u.id', 'm.user_id')
+    .select(['r.id as revisionId', 'r.setup_id as setupId', 'r.document', 's.workspace_id as workspaceId', 'u.id as userId', 'u.name as userName'])
+    .where('m.role', '=', 'engineer')
+    .orderBy('r.created_at')
+    .executeTakeFirstOrThrow();
 }
