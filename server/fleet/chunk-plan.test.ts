@@ -36,9 +36,10 @@ describe('fleet chunk plan', () => {
 
   it('queues again only chunks with a point not stored, and counts the runs of the stored ones', () => {
     const plan = fleetPlan(def(60), 50);
-    const stored = new Set(plan.units.filter((u) => !chunkUnitsOf(plan, 1).includes(u) || u === chunkUnitsOf(plan, 1)[0]));
+    const units = Array.from({ length: plan.chunks }, (_, k) => chunkUnitsOf(plan, k)).flat();
+    const stored = new Set(units.filter((u) => !chunkUnitsOf(plan, 1).includes(u) || u === chunkUnitsOf(plan, 1)[0]));
     expect(missingChunks(plan, stored)).toEqual([1]);
-    expect(missingChunks(plan, new Set(plan.units))).toEqual([]);
+    expect(missingChunks(plan, new Set(units))).toEqual([]);
     expect(storedRuns(plan, [-1, 0, 1])).toBe(3);
   });
 });

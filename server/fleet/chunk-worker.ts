@@ -66,7 +66,7 @@ function pointsOf(ctx: StudyContext, units: number[], outcomes: StudyJobOutcome[
     byUnit.set(o.pointIndex, entry);
   }
   return units.map((index) => {
-    const judged = judgeUploadedPoint(ctx.def, ctx.plan.expanded, ctx.plan.jobsOf, { index, ...(byUnit.get(index) ?? { runs: [] }) }, ctx.roadNames, `point ${index}`);
+    const judged = judgeUploadedPoint(ctx.def, ctx.plan.plan, undefined, { index, ...(byUnit.get(index) ?? { runs: [] }) }, ctx.roadNames, `point ${index}`);
     if (!judged.ok) throw new UnrecoverableError(`Point ${index} came back incomplete: ${judged.issues[0].message}`);
     return judged.point;
   });
@@ -79,9 +79,9 @@ export async function processChunk(deps: ChunkDeps, job: ChunkJob): Promise<Chun
   const run = await findFleetRun(deps.db, job.studyId);
   if (!run || run.generation !== job.generation || run.state !== 'running') return { outcome: 'stopped', threadMs: 0 };
   const ctx = await contextOf(deps.db, job);
-  const units = chunkUnitsOf({ units: ctx.plan.units, chunkUnits: run.chunk_units }, job.chunk);
+  const units = chunkUnitsOf({ ...ctx.plan, chunkUnits: run.chunk_units }, job.chunk);
   const jobs: StudyRunJob[] = units.flatMap((u) =>
-    (ctx.plan.jobsOf.get(u) ?? []).map((j) => ({ pointIndex: u, values: u === -1 ? {} : ctx.plan.expanded.points[u].values, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}), ...(j.seedIndex !== undefined ? { seedIndex: j.seedIndex } : {}) })),
+    (ctx.plan.plan.jobsOf(u) ?? []).map((j) => ({ pointIndex: u, values: ctx.plan.plan.valuesOf(u) ?? {}, roadIndex: j.roadIndex, speed: j.speed, ...(j.seed !== undefined ? { seed: j.seed } : {}), ...(j.seedIndex !== undefined ? { seedIndex: j.seedIndex } : {}) })),
   );
   const input: ChunkTaskInput = { key: `${job.studyId}.${job.generation}`, context: ctx.run, jobs };
   const { outcomes, threadMs } = (await deps.pool.run(input, { name: 'runChunk' })) as { outcomes: StudyJobOutcome[]; threadMs: number };
@@ -90,7 +90,7 @@ export async function processChunk(deps: ChunkDeps, job: ChunkJob): Promise<Chun
     const at = deps.now().toISOString();
     if (!(await claimRunningRun(trx, job.studyId, job.generation, at))) return null;
     const inserted = await insertStudyPointsOnce(trx, rows);
-    const runs = inserted.reduce((n, u) => n + (ctx.plan.jobsOf.get(u)?.length ?? 0), 0);
+    const runs = inserted.length * ctx.plan.runsPerUnit;
     await addDone(trx, job.studyId, inserted.length, runs);
     const after = await findFleetRun(trx, job.studyId);
     return after !== undefined && after.units_done >= after.units_total && (await moveFleetRun(trx, job.studyId, job.generation, ['running'], 'finishing', at));

@@ -4,7 +4,7 @@ import { fail, ok, type Outcome } from '../core/outcome.ts';
 import type { Db } from '../db/database.ts';
 import { recordAudit } from '../audit/index.ts';
 import { definitionOf, findStudy, finishStudyRun, listStudyPointIndices } from '../studies/index.ts';
-import { chunkTargetMs, fleetPlan, missingChunks, storedRuns } from './chunk-plan.ts';
+import { chunkTargetMs, fleetPlan, missingChunks, storedRuns, storedUnits } from './chunk-plan.ts';
 import type { ChunkJob, FleetQueue } from './fleet-queue.ts';
 import { progressOf, type RunsSample } from './fleet-progress.ts';
 import { findFleetRun, moveFleetRun, putFleetRun } from './fleet.repository.ts';
@@ -48,8 +48,8 @@ export async function startFleetRun(db: Db, queue: FleetQueue | null, ws: Worksp
       state: 'running',
       chunk_units: plan.chunkUnits,
       chunks: plan.chunks,
-      units_total: plan.units.length,
-      units_done: plan.units.filter((u) => stored.has(u)).length,
+      units_total: plan.unitCount,
+      units_done: storedUnits(plan, stored),
       runs_total: plan.runsTotal,
       runs_done: runsDone,
       runs_at_start: runsDone,
