@@ -7,5 +7,5 @@ export function Tag({ children, tone = 'plain' }: { children: ReactNode; tone?: 
     accent: 'border-accent/40 text-accent-strong bg-accent-wash/60',
     signal: 'border-signal/40 text-signal-ink bg-signal-wash',
   }[tone];
-  return <span className={`inline-flex h-5 items-center rounded-sm border px-1.5 text-xs font-medium ${look}`}>{children}</span>;
+  return <span className={`inline-flex h-5 items-center rounded-sm border px-1.5 text-xs font-medium whitespace-nowrap ${look}`}>{children}</span>;
 }
