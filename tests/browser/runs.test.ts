@@ -38,6 +38,11 @@ async function openRunsAs(role: 'engineer' | 'viewer') {
   await form.waitFor();
   // the setup list and the revision's document have loaded once Run is enabled
   await form.getByRole('button', { name: 'Run', exact: true }).and(session.page.locator(':enabled')).waitFor();
+  // the demo's Pipit front at its seeded revision: other files on this worker's database add
+  // setups and revisions, and the list puts the last one changed first
+  await form.getByLabel('Setup').selectOption({ label: 'Brume Pipit front, baseline' });
+  await form.getByLabel('Revision').selectOption('3');
+  await form.getByRole('button', { name: 'Run', exact: true }).and(session.page.locator(':enabled')).waitFor();
   return { ...session, workspaceId, form };
 }
 
